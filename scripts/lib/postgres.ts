@@ -1,0 +1,174 @@
+// A project-local PostgreSQL cluster from Debian's packages, on loopback.
+// Used by `npm start` (a kept cluster under .data/) and by `npm test` (a throwaway one).
+import { execFileSync, spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
+import fs from 'node:fs';
+import net from 'node:net';
+import path from 'node:path';
+
+const isRoot = process.getuid?.() === 0;
+
+export function findPgBin(): string {
+  const candidates: string[] = [];
+  try {
+    candidates.push(execFileSync('pg_config', ['--bindir'], { encoding: 'utf8' }).trim());
+  } catch {
+    /* pg_config is absent: look for the server under /usr/lib/postgresql */
+  }
+  if (fs.existsSync('/usr/lib/postgresql')) {
+    const versions = fs
+      .readdirSync('/usr/lib/postgresql')
+      .filter((v) => /^\d+$/.test(v))
+      .sort((a, b) => Number(b) - Number(a));
+    for (const v of versions) candidates.push(`/usr/lib/postgresql/${v}/bin`);
+  }
+  return candidates.find((dir) => fs.existsSync(path.join(dir, 'initdb')) && fs.existsSync(path.join(dir, 'postgres'))) ?? '';
+}
+
+/** Finds the server binaries, installing Debian's `postgresql` package when root may. */
+export function ensurePostgres(log: (line: string) => void = console.log): string {
+  let bin = findPgBin();
+  if (bin) return bin;
+  const hasApt = spawnSync('which', ['apt-get']).status === 0;
+  if (!isRoot || !hasApt) {
+    throw new Error(
+      'PostgreSQL server binaries were not found. Install them with `sudo apt-get install postgresql` ' +
+        '(Debian/Ubuntu), or set DATABASE_URL to a server you already run.',
+    );
+  }
+  log('PostgreSQL is missing: installing Debian\'s postgresql package (apt-get)…');
+  const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
+  for (const args of [['update'], ['install', '-y', '--no-install-recommends', 'postgresql']]) {
+    const r = spawnSync('apt-get', args, { stdio: 'inherit', env });
+    if (r.status !== 0) throw new Error(`apt-get ${args.join(' ')} failed with exit code ${r.status}`);
+  }
+  bin = findPgBin();
+  if (!bin) throw new Error('apt-get installed postgresql but initdb was not found under /usr/lib/postgresql');
+  return bin;
+}
+
+/** Runs a PostgreSQL program; as root, through `runuser -u postgres`, since the server refuses root. */
+function runPg(bin: string, program: string, args: string[], opts: { quiet?: boolean } = {}) {
+  const exe = path.join(bin, program);
+  const [cmd, full] = isRoot ? ['runuser', ['-u', 'postgres', '--', exe, ...args]] : [exe, args];
+  const r = spawnSync(cmd, full, { encoding: 'utf8' });
+  if (r.status !== 0) {
+    const out = `${r.stdout ?? ''}${r.stderr ?? ''}`.trim();
+    throw new Error(`${program} ${args.join(' ')} failed (exit ${r.status}):\n${out}`);
+  }
+  if (!opts.quiet && r.stdout?.trim()) return r.stdout;
+  return '';
+}
+
+function postgresCanEnter(dir: string): boolean {
+  if (!isRoot) return true;
+  return spawnSync('runuser', ['-u', 'postgres', '--', 'test', '-x', dir, '-a', '-w', dir]).status === 0;
+}
+
+function chownToPostgres(dir: string) {
+  if (isRoot) spawnSync('chown', ['-R', 'postgres:postgres', dir]);
+}
+
+export async function freePort(preferred?: number): Promise<number> {
+  const tryPort = (port: number) =>
+    new Promise<number>((resolve, reject) => {
+      const srv = net.createServer();
+      srv.once('error', reject);
+      srv.listen(port, '127.0.0.1', () => {
+        const addr = srv.address();
+        srv.close(() => resolve(typeof addr === 'object' && addr ? addr.port : port));
+      });
+    });
+  if (preferred) {
+    try {
+      return await tryPort(preferred);
+    } catch {
+      /* taken: fall through to any free port */
+    }
+  }
+  return tryPort(0);
+}
+
+export interface Cluster {
+  dataDir: string;
+  port: number;
+  url: (database: string) => string;
+  stop: () => void;
+}
+
+export interface ClusterOptions {
+  /** Where the cluster keeps its data. Moved under /tmp when the postgres user cannot enter it. */
+  dataDir: string;
+  port?: number;
+  /** For throwaway test clusters only: fsync off and no durable commits. */
+  fast?: boolean;
+  log?: (line: string) => void;
+}
+
+/** Creates the cluster when missing, starts it on 127.0.0.1 and returns how to reach it. */
+export async function startCluster(options: ClusterOptions): Promise<Cluster> {
+  const log = options.log ?? console.log;
+  const bin = ensurePostgres(log);
+  let dataDir = path.resolve(options.dataDir);
+  fs.mkdirSync(path.dirname(dataDir), { recursive: true });
+  if (!postgresCanEnter(path.dirname(dataDir))) {
+    const tag = createHash('sha1').update(dataDir).digest('hex').slice(0, 10);
+    dataDir = path.join('/tmp', `gridkeep-pg-${tag}`, path.basename(dataDir));
+    log(`The postgres user cannot enter the project folder; keeping the cluster at ${dataDir}`);
+  }
+  const tag = createHash('sha1').update(dataDir).digest('hex').slice(0, 10);
+  const socketDir = path.join('/tmp', `gridkeep-sock-${tag}`);
+  fs.mkdirSync(socketDir, { recursive: true });
+  chownToPostgres(socketDir);
+
+  if (!fs.existsSync(path.join(dataDir, 'PG_VERSION'))) {
+    fs.mkdirSync(dataDir, { recursive: true });
+    chownToPostgres(path.dirname(dataDir));
+    fs.chmodSync(dataDir, 0o700);
+    runPg(bin, 'initdb', ['-D', dataDir, '-U', 'postgres', '--auth=trust', '--encoding=UTF8', '--locale=C.UTF-8'], {
+      quiet: true,
+    });
+  }
+
+  // A cluster left running by an earlier run that did not stop cleanly: stop it first.
+  if (fs.existsSync(path.join(dataDir, 'postmaster.pid'))) {
+    try {
+      runPg(bin, 'pg_ctl', ['-D', dataDir, '-m', 'fast', '-w', 'stop'], { quiet: true });
+    } catch {
+      /* a stale pid file: the server is not running and pg_ctl start will clear it */
+    }
+  }
+
+  const port = await freePort(options.port);
+  const serverOpts = [`-c listen_addresses=127.0.0.1`, `-p ${port}`, `-k ${socketDir}`];
+  if (options.fast) serverOpts.push('-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off');
+  const logFile = path.join(dataDir, 'server.log');
+  runPg(bin, 'pg_ctl', ['-D', dataDir, '-l', logFile, '-w', '-t', '60', 'start', '-o', serverOpts.join(' ')], {
+    quiet: true,
+  });
+
+  let stopped = false;
+  const stop = () => {
+    if (stopped) return;
+    stopped = true;
+    try {
+      runPg(bin, 'pg_ctl', ['-D', dataDir, '-m', 'fast', '-w', 'stop'], { quiet: true });
+    } catch (err) {
+      log(`Could not stop PostgreSQL cleanly: ${(err as Error).message}`);
+    }
+  };
+  return { dataDir, port, url: (db) => `postgres://postgres@127.0.0.1:${port}/${db}`, stop };
+}
+
+/** Creates a database when it does not exist yet. */
+export async function ensureDatabase(adminUrl: string, name: string) {
+  const { default: pg } = await import('pg');
+  const client = new pg.Client({ connectionString: adminUrl });
+  await client.connect();
+  try {
+    const found = await client.query('select 1 from pg_database where datname = $1', [name]);
+    if (found.rowCount === 0) await client.query(`create database "${name.replace(/"/g, '""')}"`);
+  } finally {
+    await client.end();
+  }
+}

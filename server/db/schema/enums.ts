@@ -1,0 +1,26 @@
+import { pgEnum } from 'drizzle-orm/pg-core';
+import * as v from '../../../shared/schemas/enums.js';
+
+export const roleEnum = pgEnum('role', v.roles);
+export const mountingEnum = pgEnum('mounting', v.mountings);
+export const environmentEnum = pgEnum('environment', v.environments);
+export const cabinetStatusEnum = pgEnum('cabinet_status', v.cabinetStatuses);
+export const cabinetEventKindEnum = pgEnum('cabinet_event_kind', v.cabinetEventKinds);
+export const ticketPriorityEnum = pgEnum('ticket_priority', v.ticketPriorities);
+export const ticketStatusEnum = pgEnum('ticket_status', v.ticketStatuses);
+export const ticketScopeEnum = pgEnum('ticket_scope', v.ticketScopes);
+export const commentVisibilityEnum = pgEnum('comment_visibility', v.commentVisibilities);
+export const clockModeEnum = pgEnum('clock_mode', v.clockModes);
+export const visitKindEnum = pgEnum('visit_kind', v.visitKinds);
+export const visitStatusEnum = pgEnum('visit_status', v.visitStatuses);
+export const repairComponentEnum = pgEnum('repair_component', v.repairComponents);
+export const repairFaultEnum = pgEnum('repair_fault', v.repairFaults);
+export const repairActionEnum = pgEnum('repair_action', v.repairActions);
+export const removedPartFateEnum = pgEnum('removed_part_fate', v.removedPartFates);
+export const partKindEnum = pgEnum('part_kind', v.partKinds);
+export const stockLocationKindEnum = pgEnum('stock_location_kind', v.stockLocationKinds);
+export const stockMovementKindEnum = pgEnum('stock_movement_kind', v.stockMovementKinds);
+export const vendorReturnOutcomeEnum = pgEnum('vendor_return_outcome', v.vendorReturnOutcomes);
+export const mailStatusEnum = pgEnum('mail_status', v.mailStatuses);
+export const authTokenKindEnum = pgEnum('auth_token_kind', v.authTokenKinds);
+export const attachmentKindEnum = pgEnum('attachment_kind', v.attachmentKinds);

@@ -1,0 +1,102 @@
+import { z } from 'zod';
+import { email, text } from './common.js';
+import { roles, type Role } from './enums.js';
+
+/** The header every state-changing API request must carry (CSRF defence). */
+export const csrfHeader = { name: 'X-Requested-With', value: 'gridkeep' } as const;
+
+export const passwordMinLength = 8;
+export const passwordMaxLength = 128;
+/** Length rules only; the server also refuses common passwords (OWASP ASVS 5.0 6.2.4). */
+export const newPassword = z
+  .string()
+  .min(passwordMinLength, `Use at least ${passwordMinLength} characters.`)
+  .max(passwordMaxLength, `Use at most ${passwordMaxLength} characters.`);
+
+export const loginInput = z.object({
+  email,
+  password: z.string().min(1, 'Enter your password.').max(passwordMaxLength),
+});
+export type LoginInput = z.infer<typeof loginInput>;
+
+export interface SessionUser {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  clientId: string | null;
+  clientName?: string | null;
+}
+
+export const changePasswordInput = z.object({
+  currentPassword: z.string().min(1, 'Enter your current password.').max(passwordMaxLength),
+  newPassword,
+});
+export type ChangePasswordInput = z.infer<typeof changePasswordInput>;
+
+export const forgotPasswordInput = z.object({ email });
+export type ForgotPasswordInput = z.infer<typeof forgotPasswordInput>;
+
+/** Completes an invite or a reset link: the token from the link and the new password. */
+export const redeemTokenInput = z.object({
+  token: z.string().min(20).max(200),
+  password: newPassword,
+});
+export type RedeemTokenInput = z.infer<typeof redeemTokenInput>;
+
+export const inviteUserInput = z
+  .object({
+    email,
+    name: z.string().trim().min(1, 'Required.').max(120),
+    role: z.enum(roles),
+    clientId: z.uuid().nullable().optional(),
+  })
+  .refine((v) => (v.role === 'client') === Boolean(v.clientId), {
+    message: 'A client user needs an organisation; staff have none.',
+    path: ['clientId'],
+  });
+export type InviteUserInput = z.infer<typeof inviteUserInput>;
+
+export const updateUserInput = z.object({
+  name: z.string().trim().min(1, 'Required.').max(120).optional(),
+  role: z.enum(roles).optional(),
+  clientId: z.uuid().nullable().optional(),
+  phone: text(40).optional(),
+  disabled: z.boolean().optional(),
+});
+export type UpdateUserInput = z.infer<typeof updateUserInput>;
+
+export interface UserSummary {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  clientId: string | null;
+  clientName: string | null;
+  phone: string;
+  disabled: boolean;
+  invitePending: boolean;
+  lastSignInAt: string | null;
+  createdAt: string;
+}
+
+export interface AuditEventView {
+  id: number;
+  actor: { id: string; name: string } | null;
+  entity: string;
+  entityId: string;
+  action: string;
+  before: unknown;
+  after: unknown;
+  createdAt: string;
+}
+
+export interface MailboxItem {
+  id: string;
+  to: string;
+  subject: string;
+  text: string;
+  html?: string | null;
+  date: string;
+  attachments: { filename: string; contentType: string }[];
+}
