@@ -7,6 +7,10 @@ export class AppError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: FieldErrors,
+    /** Extra response headers, e.g. Retry-After on a 429. */
+    readonly headers?: Record<string, string>,
+    /** Structured detail for the client, e.g. the rows an import refused. */
+    readonly details?: unknown,
   ) {
     super(message);
     this.name = 'AppError';
@@ -24,5 +28,6 @@ export const forbidden = (code = 'forbidden', message = 'You do not have permiss
 export const notFound = (what = 'Record') => new AppError(404, 'not_found', `${what} not found.`);
 export const conflict = (code: string, message: string, fields?: FieldErrors) =>
   new AppError(409, code, message, fields);
-export const tooManyRequests = (message: string) => new AppError(429, 'too_many_requests', message);
+export const tooManyRequests = (message: string, retryAfterSeconds: number) =>
+  new AppError(429, 'too_many_requests', message, undefined, { 'Retry-After': String(retryAfterSeconds) });
 export const serviceUnavailable = (code: string, message: string) => new AppError(503, code, message);

@@ -60,9 +60,10 @@ function runPg(bin: string, program: string, args: string[], opts: { quiet?: boo
   return '';
 }
 
+/** Whether the postgres user can reach `dir` (search permission on it and every folder above). */
 function postgresCanEnter(dir: string): boolean {
   if (!isRoot) return true;
-  return spawnSync('runuser', ['-u', 'postgres', '--', 'test', '-x', dir, '-a', '-w', dir]).status === 0;
+  return spawnSync('runuser', ['-u', 'postgres', '--', 'test', '-x', dir]).status === 0;
 }
 
 function chownToPostgres(dir: string) {
@@ -111,9 +112,11 @@ export async function startCluster(options: ClusterOptions): Promise<Cluster> {
   const bin = ensurePostgres(log);
   let dataDir = path.resolve(options.dataDir);
   fs.mkdirSync(path.dirname(dataDir), { recursive: true });
+  let relocated = false;
   if (!postgresCanEnter(path.dirname(dataDir))) {
     const tag = createHash('sha1').update(dataDir).digest('hex').slice(0, 10);
     dataDir = path.join('/tmp', `gridkeep-pg-${tag}`, path.basename(dataDir));
+    relocated = true;
     log(`The postgres user cannot enter the project folder; keeping the cluster at ${dataDir}`);
   }
   const tag = createHash('sha1').update(dataDir).digest('hex').slice(0, 10);
@@ -123,7 +126,9 @@ export async function startCluster(options: ClusterOptions): Promise<Cluster> {
 
   if (!fs.existsSync(path.join(dataDir, 'PG_VERSION'))) {
     fs.mkdirSync(dataDir, { recursive: true });
-    chownToPostgres(path.dirname(dataDir));
+    // Only the cluster's own folder changes owner (and, when relocated, the folder made for it):
+    // never the project folder around it.
+    chownToPostgres(relocated ? path.dirname(dataDir) : dataDir);
     fs.chmodSync(dataDir, 0o700);
     runPg(bin, 'initdb', ['-D', dataDir, '-U', 'postgres', '--auth=trust', '--encoding=UTF8', '--locale=C.UTF-8'], {
       quiet: true,

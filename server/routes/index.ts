@@ -1,7 +1,36 @@
 import type { Router } from 'express';
+import { authRouter } from './auth.js';
+import { calcRouter } from './calc.js';
+import { devRouter } from './dev.js';
 import { healthRouter } from './health.js';
+import {
+  cabinetModelsRouter,
+  cabinetsRouter,
+  clientsRouter,
+  contactsRouter,
+  controllersRouter,
+  searchRouter,
+  servicePlansRouter,
+  sitesRouter,
+  wallsRouter,
+} from './register.js';
+import { auditRouter, usersRouter } from './users.js';
 
 /** Mounts every API router under /api. Keep one line per domain. */
 export function apiRoutes(api: Router) {
   api.use('/health', healthRouter);
+  api.use('/dev', devRouter);
+  api.use('/auth', authRouter);
+  api.use('/calc', calcRouter);
+  api.use('/users', usersRouter);
+  api.use('/audit', auditRouter);
+  api.use('/clients', clientsRouter);
+  api.use('/service-plans', servicePlansRouter);
+  api.use('/contacts', contactsRouter);
+  api.use('/sites', sitesRouter);
+  api.use('/walls', wallsRouter);
+  api.use('/cabinets', cabinetsRouter);
+  api.use('/cabinet-models', cabinetModelsRouter);
+  api.use('/controllers', controllersRouter);
+  api.use('/search', searchRouter);
 }

@@ -1,0 +1,148 @@
+import { and, asc, eq, isNull } from 'drizzle-orm';
+import type { CabinetModelInput, CabinetModelPatch, ControllerInput, ControllerPatch } from '../../shared/schemas/register.js';
+import { db } from '../db/client.js';
+import { cabinetModels, controllers, walls } from '../db/schema/walls.js';
+import { badRequest } from '../errors.js';
+import type { Actor } from '../middleware/auth.js';
+import { recordAudit } from './audit.js';
+import { found, tenantWhere } from './scope.js';
+
+export function presentModel(m: typeof cabinetModels.$inferSelect) {
+  return {
+    id: m.id,
+    name: m.name,
+    maker: m.maker,
+    widthMm: m.widthMm,
+    heightMm: m.heightMm,
+    pixelPitchMm: m.pixelPitchMm,
+    pixelsWide: m.pixelsWide,
+    pixelsHigh: m.pixelsHigh,
+    modulesWide: m.modulesWide,
+    modulesHigh: m.modulesHigh,
+    maxPowerW: m.maxPowerW,
+    typicalPowerW: m.typicalPowerW,
+    weightKg: m.weightKg,
+    brightnessNits: m.brightnessNits,
+    voltageMin: m.voltageMin,
+    voltageMax: m.voltageMax,
+    environment: m.environment,
+    archived: m.archivedAt !== null,
+  };
+}
+
+export async function listCabinetModels(includeArchived = false) {
+  const rows = await db()
+    .select()
+    .from(cabinetModels)
+    .where(includeArchived ? undefined : isNull(cabinetModels.archivedAt))
+    .orderBy(asc(cabinetModels.name));
+  return { items: rows.map(presentModel), nextCursor: null };
+}
+
+export async function getCabinetModel(id: string) {
+  const [row] = await db().select().from(cabinetModels).where(eq(cabinetModels.id, id));
+  return presentModel(found(row, 'Cabinet model'));
+}
+
+export async function createCabinetModel(actor: Actor, input: CabinetModelInput) {
+  return db().transaction(async (tx) => {
+    const [row] = await tx.insert(cabinetModels).values(input).returning();
+    await recordAudit(tx, { actor, entity: 'cabinet_model', entityId: row.id, action: 'created', after: row });
+    return presentModel(row);
+  });
+}
+
+/** Only the name and maker change: the physical spec of walls already built must not drift. */
+export async function updateCabinetModel(actor: Actor, id: string, input: CabinetModelPatch) {
+  return db().transaction(async (tx) => {
+    const [before] = await tx.select().from(cabinetModels).where(eq(cabinetModels.id, id)).for('update');
+    found(before, 'Cabinet model');
+    const { archived, ...fields } = input;
+    const [after] = await tx
+      .update(cabinetModels)
+      .set({ ...fields, ...(archived === undefined ? {} : { archivedAt: archived ? (before.archivedAt ?? new Date()) : null }) })
+      .where(eq(cabinetModels.id, id))
+      .returning();
+    await recordAudit(tx, { actor, entity: 'cabinet_model', entityId: id, action: 'updated', before, after });
+    return presentModel(after);
+  });
+}
+
+// ---- controllers ----
+function presentController(c: typeof controllers.$inferSelect, wallName: string | null) {
+  return {
+    id: c.id,
+    wallId: c.wallId,
+    wallName,
+    model: c.model,
+    serial: c.serial,
+    firmware: c.firmware,
+    outputs: c.outputs,
+    outputsInUse: c.outputsInUse,
+    pixelsPerOutput: c.pixelsPerOutput,
+    notes: c.notes,
+    archived: c.archivedAt !== null,
+  };
+}
+
+export async function listControllers(actor: Actor, wallId?: string) {
+  const rows = await db()
+    .select({ c: controllers, wallName: walls.name })
+    .from(controllers)
+    .leftJoin(walls, eq(walls.id, controllers.wallId))
+    .where(
+      and(
+        isNull(controllers.archivedAt),
+        wallId ? eq(controllers.wallId, wallId) : undefined,
+        // Client users see only controllers on their own walls (the left join yields null otherwise).
+        actor.role === 'client' ? tenantWhere(actor, walls.clientId) : undefined,
+      ),
+    )
+    .orderBy(asc(controllers.serial));
+  return { items: rows.map((r) => presentController(r.c, r.wallName)), nextCursor: null };
+}
+
+export async function getController(actor: Actor, id: string) {
+  const [row] = await db()
+    .select({ c: controllers, wallName: walls.name })
+    .from(controllers)
+    .leftJoin(walls, eq(walls.id, controllers.wallId))
+    .where(and(eq(controllers.id, id), actor.role === 'client' ? tenantWhere(actor, walls.clientId) : undefined));
+  const r = found(row, 'Controller');
+  return presentController(r.c, r.wallName);
+}
+
+async function assertWall(wallId: string | null | undefined) {
+  if (!wallId) return;
+  const [wall] = await db().select({ id: walls.id }).from(walls).where(eq(walls.id, wallId));
+  if (!wall) throw badRequest('validation_failed', 'That wall does not exist.', { wallId: 'Unknown wall.' });
+}
+
+export async function createController(actor: Actor, input: ControllerInput) {
+  await assertWall(input.wallId);
+  const id = await db().transaction(async (tx) => {
+    const [row] = await tx.insert(controllers).values({ ...input, wallId: input.wallId ?? null }).returning();
+    await recordAudit(tx, { actor, entity: 'controller', entityId: row.id, action: 'created', after: row });
+    return row.id;
+  });
+  return getController(actor, id);
+}
+
+export async function updateController(actor: Actor, id: string, input: ControllerPatch) {
+  await assertWall(input.wallId);
+  await db().transaction(async (tx) => {
+    const [before] = await tx.select().from(controllers).where(eq(controllers.id, id)).for('update');
+    found(before, 'Controller');
+    const { archived, ...fields } = input;
+    if (fields.outputsInUse !== undefined && fields.outputsInUse > before.outputs) {
+      throw badRequest('validation_failed', 'Cannot use more outputs than the controller has.', { outputsInUse: `At most ${before.outputs}.` });
+    }
+    const [after] = await tx
+      .update(controllers)
+      .set({ ...fields, ...(archived === undefined ? {} : { archivedAt: archived ? (before.archivedAt ?? new Date()) : null }) })
+      .where(eq(controllers.id, id))
+      .returning();
+    await recordAudit(tx, { actor, entity: 'controller', entityId: id, action: 'updated', before, after });
+  });
+  return getController(actor, id);
+}

@@ -1,0 +1,218 @@
+import { and, asc, desc, eq, ilike, isNotNull, isNull, notInArray, sql, type SQL } from 'drizzle-orm';
+import type { AnyPgColumn } from 'drizzle-orm/pg-core';
+import type { ClientInput, ClientPatch, ContactInput, ContactPatch, ListClientsQuery } from '../../shared/schemas/register.js';
+import { db, type DbOrTx } from '../db/client.js';
+import { clients, contacts, servicePlans, sites } from '../db/schema/clients.js';
+import { tickets } from '../db/schema/tickets.js';
+import { walls } from '../db/schema/walls.js';
+import { badRequest } from '../errors.js';
+import type { Actor } from '../middleware/auth.js';
+import { recordAudit } from './audit.js';
+import { afterCursor, decodeCursor, pageOf } from './pagination.js';
+import { found, isStaff, tenantWhere } from './scope.js';
+
+export const likePattern = (q: string) => `%${q.replace(/[%_\\]/g, '\\$&')}%`;
+export const closedStatuses = ['resolved', 'closed'] as const;
+
+/** Sort column and direction for keyset pages; the id breaks ties. */
+export function orderFor(column: AnyPgColumn, id: AnyPgColumn, dir: 'asc' | 'desc') {
+  return dir === 'asc' ? [asc(column), asc(id)] : [desc(column), desc(id)];
+}
+
+export const cursorValue = (v: unknown) => (v instanceof Date ? v.toISOString() : v);
+
+const openTickets = (clientColumn: AnyPgColumn | SQL) =>
+  sql<number>`(select count(*)::int from ${tickets} where ${tickets.clientId} = ${clientColumn} and ${tickets.status} not in ('resolved','closed'))`;
+
+export async function listClients(actor: Actor, query: ListClientsQuery) {
+  const sortColumn = query.sort === 'createdAt' ? clients.createdAt : clients.name;
+  const rows = await db()
+    .select({
+      id: clients.id,
+      name: clients.name,
+      servicePlanId: clients.servicePlanId,
+      servicePlanName: servicePlans.name,
+      archivedAt: clients.archivedAt,
+      createdAt: clients.createdAt,
+      siteCount: sql<number>`(select count(*)::int from ${sites} where ${sites.clientId} = ${clients.id} and ${sites.archivedAt} is null)`,
+      wallCount: sql<number>`(select count(*)::int from ${walls} where ${walls.clientId} = ${clients.id} and ${walls.archivedAt} is null)`,
+      openTicketCount: openTickets(clients.id),
+    })
+    .from(clients)
+    .leftJoin(servicePlans, eq(servicePlans.id, clients.servicePlanId))
+    .where(
+      and(
+        tenantWhere(actor, clients.id),
+        query.archived ? isNotNull(clients.archivedAt) : isNull(clients.archivedAt),
+        query.q ? ilike(clients.name, likePattern(query.q)) : undefined,
+        afterCursor(sortColumn, clients.id, decodeCursor(query.cursor, 2), query.dir),
+      ),
+    )
+    .orderBy(...orderFor(sortColumn, clients.id, query.dir))
+    .limit(query.limit + 1);
+  const page = pageOf(rows, query.limit, (r) => [cursorValue(query.sort === 'createdAt' ? r.createdAt : r.name), r.id]);
+  return {
+    items: page.items.map((r) => ({
+      id: r.id,
+      name: r.name,
+      servicePlan: r.servicePlanId ? { id: r.servicePlanId, name: r.servicePlanName ?? '' } : null,
+      siteCount: r.siteCount,
+      wallCount: r.wallCount,
+      openTicketCount: r.openTicketCount,
+      archived: r.archivedAt !== null,
+      createdAt: r.createdAt.toISOString(),
+    })),
+    nextCursor: page.nextCursor,
+  };
+}
+
+function presentContact(c: typeof contacts.$inferSelect) {
+  return {
+    id: c.id,
+    clientId: c.clientId,
+    siteId: c.siteId,
+    name: c.name,
+    title: c.title,
+    email: c.email,
+    phone: c.phone,
+    receivesUpdates: c.receivesUpdates,
+  };
+}
+
+export async function getClient(actor: Actor, id: string) {
+  const [row] = await db()
+    .select({ client: clients, plan: servicePlans })
+    .from(clients)
+    .leftJoin(servicePlans, eq(servicePlans.id, clients.servicePlanId))
+    .where(and(eq(clients.id, id), tenantWhere(actor, clients.id)));
+  const { client, plan } = found(row, 'Client');
+  const contactRows = await db().select().from(contacts).where(eq(contacts.clientId, id)).orderBy(asc(contacts.name));
+  const siteRows = await db()
+    .select({
+      id: sites.id,
+      name: sites.name,
+      city: sites.city,
+      region: sites.region,
+      timeZone: sites.timeZone,
+      wallCount: sql<number>`(select count(*)::int from ${walls} where ${walls.siteId} = ${sites.id} and ${walls.archivedAt} is null)`,
+    })
+    .from(sites)
+    .where(and(eq(sites.clientId, id), isNull(sites.archivedAt)))
+    .orderBy(asc(sites.name));
+  return {
+    id: client.id,
+    name: client.name,
+    servicePlan: plan
+      ? { id: plan.id, name: plan.name, clockMode: plan.clockMode, businessDays: plan.businessDays, dayStart: plan.dayStart, dayEnd: plan.dayEnd, targets: plan.targets }
+      : null,
+    ...(isStaff(actor) ? { notes: client.notes } : {}),
+    archived: client.archivedAt !== null,
+    contacts: contactRows.map(presentContact),
+    sites: siteRows,
+    createdAt: client.createdAt.toISOString(),
+  };
+}
+
+async function assertPlan(tx: DbOrTx, id: string | null | undefined) {
+  if (!id) return;
+  const [plan] = await tx.select({ id: servicePlans.id }).from(servicePlans).where(eq(servicePlans.id, id));
+  if (!plan) throw badRequest('validation_failed', 'That service plan does not exist.', { servicePlanId: 'Unknown service plan.' });
+}
+
+export async function createClient(actor: Actor, input: ClientInput) {
+  const id = await db().transaction(async (tx) => {
+    await assertPlan(tx, input.servicePlanId);
+    const [row] = await tx.insert(clients).values({ name: input.name, servicePlanId: input.servicePlanId ?? null, notes: input.notes ?? '' }).returning();
+    await recordAudit(tx, { actor, entity: 'client', entityId: row.id, action: 'created', after: row });
+    return row.id;
+  });
+  return getClient(actor, id);
+}
+
+export async function updateClient(actor: Actor, id: string, input: ClientPatch) {
+  await db().transaction(async (tx) => {
+    const [before] = await tx.select().from(clients).where(eq(clients.id, id)).for('update');
+    found(before, 'Client');
+    await assertPlan(tx, input.servicePlanId);
+    const { archived, ...fields } = input;
+    const [after] = await tx
+      .update(clients)
+      .set({ ...fields, ...(archived === undefined ? {} : { archivedAt: archived ? (before.archivedAt ?? new Date()) : null }) })
+      .where(eq(clients.id, id))
+      .returning();
+    await recordAudit(tx, { actor, entity: 'client', entityId: id, action: archived ? 'archived' : 'updated', before, after });
+  });
+  return getClient(actor, id);
+}
+
+export async function listServicePlans() {
+  const rows = await db().select().from(servicePlans).orderBy(asc(servicePlans.name));
+  return {
+    items: rows.map((p) => ({
+      id: p.id,
+      name: p.name,
+      clockMode: p.clockMode,
+      businessDays: p.businessDays,
+      dayStart: p.dayStart,
+      dayEnd: p.dayEnd,
+      targets: p.targets,
+    })),
+  };
+}
+
+// ---- contacts ----
+async function assertSiteOfClient(tx: DbOrTx, siteId: string | null | undefined, clientId: string) {
+  if (!siteId) return;
+  const [site] = await tx.select({ id: sites.id }).from(sites).where(and(eq(sites.id, siteId), eq(sites.clientId, clientId)));
+  if (!site) throw badRequest('validation_failed', 'That site does not belong to this client.', { siteId: 'Not a site of this client.' });
+}
+
+export async function createContact(actor: Actor, input: ContactInput) {
+  return db().transaction(async (tx) => {
+    const [client] = await tx.select({ id: clients.id }).from(clients).where(eq(clients.id, input.clientId));
+    if (!client) throw badRequest('validation_failed', 'That client does not exist.', { clientId: 'Unknown client.' });
+    await assertSiteOfClient(tx, input.siteId, input.clientId);
+    const [row] = await tx
+      .insert(contacts)
+      .values({ ...input, siteId: input.siteId ?? null, email: input.email ?? null })
+      .returning();
+    await recordAudit(tx, { actor, entity: 'contact', entityId: row.id, action: 'created', after: row });
+    return presentContact(row);
+  });
+}
+
+export async function updateContact(actor: Actor, id: string, input: ContactPatch) {
+  return db().transaction(async (tx) => {
+    const [before] = await tx.select().from(contacts).where(eq(contacts.id, id)).for('update');
+    found(before, 'Contact');
+    await assertSiteOfClient(tx, input.siteId, before.clientId);
+    const [after] = await tx.update(contacts).set(input).where(eq(contacts.id, id)).returning();
+    await recordAudit(tx, { actor, entity: 'contact', entityId: id, action: 'updated', before, after });
+    return presentContact(after);
+  });
+}
+
+export async function deleteContact(actor: Actor, id: string) {
+  await db().transaction(async (tx) => {
+    const [before] = await tx.delete(contacts).where(eq(contacts.id, id)).returning();
+    found(before, 'Contact');
+    await recordAudit(tx, { actor, entity: 'contact', entityId: id, action: 'deleted', before });
+  });
+}
+
+/** E-mail addresses that receive updates about a site: its contacts and the organisation's. */
+export async function updateRecipients(tx: DbOrTx, clientId: string, siteId: string | null, exclude: string[] = []) {
+  const rows = await tx
+    .select({ email: contacts.email })
+    .from(contacts)
+    .where(
+      and(
+        eq(contacts.clientId, clientId),
+        eq(contacts.receivesUpdates, true),
+        isNotNull(contacts.email),
+        siteId ? sql`(${contacts.siteId} is null or ${contacts.siteId} = ${siteId})` : undefined,
+        exclude.length ? notInArray(contacts.email, exclude) : undefined,
+      ),
+    );
+  return [...new Set(rows.map((r) => r.email!))];
+}

@@ -1,0 +1,191 @@
+import { and, asc, eq, ilike, isNull, or, sql } from 'drizzle-orm';
+import type { ListWallsQuery, WallInput, WallPatch } from '../../shared/schemas/register.js';
+import { db, type DbOrTx } from '../db/client.js';
+import { clients, sites } from '../db/schema/clients.js';
+import { cabinetModels, cabinets, controllers, walls } from '../db/schema/walls.js';
+import { badRequest } from '../errors.js';
+import type { Actor } from '../middleware/auth.js';
+import { recordAudit } from './audit.js';
+import { presentModel } from './catalogue.js';
+import { cursorValue, likePattern, orderFor } from './clients.js';
+import { afterCursor, decodeCursor, pageOf } from './pagination.js';
+import { found, isStaff, tenantWhere } from './scope.js';
+
+const openTicketCount = sql<number>`(select count(*)::int from tickets t where t.wall_id = ${walls.id} and t.status not in ('resolved','closed'))`;
+
+export async function listWalls(actor: Actor, query: ListWallsQuery) {
+  const sortColumn = query.sort === 'createdAt' ? walls.createdAt : walls.name;
+  const pattern = query.q ? likePattern(query.q) : undefined;
+  const rows = await db()
+    .select({
+      id: walls.id,
+      name: walls.name,
+      clientId: walls.clientId,
+      clientName: clients.name,
+      siteId: walls.siteId,
+      siteName: sites.name,
+      columns: walls.columns,
+      rows: walls.rows,
+      mounting: walls.mounting,
+      installDate: walls.installDate,
+      warrantyEnd: walls.warrantyEnd,
+      cabinetModelId: cabinetModels.id,
+      cabinetModelName: cabinetModels.name,
+      pixelPitchMm: cabinetModels.pixelPitchMm,
+      createdAt: walls.createdAt,
+      openTicketCount,
+    })
+    .from(walls)
+    .innerJoin(sites, eq(sites.id, walls.siteId))
+    .innerJoin(clients, eq(clients.id, walls.clientId))
+    .innerJoin(cabinetModels, eq(cabinetModels.id, walls.cabinetModelId))
+    .where(
+      and(
+        tenantWhere(actor, walls.clientId),
+        isNull(walls.archivedAt),
+        query.clientId ? eq(walls.clientId, query.clientId) : undefined,
+        query.siteId ? eq(walls.siteId, query.siteId) : undefined,
+        query.cabinetModelId ? eq(walls.cabinetModelId, query.cabinetModelId) : undefined,
+        pattern ? or(ilike(walls.name, pattern), ilike(sites.name, pattern), ilike(clients.name, pattern)) : undefined,
+        afterCursor(sortColumn, walls.id, decodeCursor(query.cursor, 2), query.dir),
+      ),
+    )
+    .orderBy(...orderFor(sortColumn, walls.id, query.dir))
+    .limit(query.limit + 1);
+  const page = pageOf(rows, query.limit, (r) => [cursorValue(query.sort === 'name' ? r.name : r.createdAt), r.id]);
+  return {
+    items: page.items.map((r) => ({
+      id: r.id,
+      name: r.name,
+      clientId: r.clientId,
+      clientName: r.clientName,
+      siteId: r.siteId,
+      siteName: r.siteName,
+      columns: r.columns,
+      rows: r.rows,
+      cabinetCount: r.columns * r.rows,
+      mounting: r.mounting,
+      installDate: r.installDate,
+      warrantyEnd: r.warrantyEnd,
+      cabinetModel: { id: r.cabinetModelId, name: r.cabinetModelName, pixelPitchMm: r.pixelPitchMm },
+      openTicketCount: r.openTicketCount,
+    })),
+    nextCursor: page.nextCursor,
+  };
+}
+
+/** The wall a caller may see, or 404. */
+export async function visibleWall(tx: DbOrTx, actor: Actor, id: string) {
+  const [wall] = await tx.select().from(walls).where(and(eq(walls.id, id), tenantWhere(actor, walls.clientId)));
+  return found(wall, 'Wall');
+}
+
+export async function getWall(actor: Actor, id: string) {
+  const [row] = await db()
+    .select({ wall: walls, model: cabinetModels, siteName: sites.name, siteTimeZone: sites.timeZone, clientName: clients.name })
+    .from(walls)
+    .innerJoin(cabinetModels, eq(cabinetModels.id, walls.cabinetModelId))
+    .innerJoin(sites, eq(sites.id, walls.siteId))
+    .innerJoin(clients, eq(clients.id, walls.clientId))
+    .where(and(eq(walls.id, id), tenantWhere(actor, walls.clientId)));
+  const { wall, model, siteName, siteTimeZone, clientName } = found(row, 'Wall');
+  const wallControllers = await db()
+    .select()
+    .from(controllers)
+    .where(and(eq(controllers.wallId, id), isNull(controllers.archivedAt)))
+    .orderBy(asc(controllers.model));
+  const [counts] = await db()
+    .select({
+      installed: sql<number>`count(*)::int`,
+      openTickets: sql<number>`(select count(*)::int from tickets t where t.wall_id = ${id} and t.status not in ('resolved','closed'))`,
+    })
+    .from(cabinets)
+    .where(eq(cabinets.wallId, id));
+  return {
+    id: wall.id,
+    name: wall.name,
+    clientId: wall.clientId,
+    clientName,
+    siteId: wall.siteId,
+    siteName,
+    siteTimeZone,
+    columns: wall.columns,
+    rows: wall.rows,
+    mounting: wall.mounting,
+    installDate: wall.installDate,
+    warrantyEnd: wall.warrantyEnd,
+    calibrationDate: wall.calibrationDate,
+    inputNotes: wall.inputNotes,
+    ...(isStaff(actor) ? { internalNotes: wall.internalNotes } : {}),
+    cabinetModel: presentModel(model),
+    controllers: wallControllers.map((c) => ({
+      id: c.id,
+      model: c.model,
+      serial: c.serial,
+      firmware: c.firmware,
+      outputs: c.outputs,
+      outputsInUse: c.outputsInUse,
+      pixelsPerOutput: c.pixelsPerOutput,
+    })),
+    planSettings: wall.planSettings,
+    dataRuns: wall.dataRuns,
+    powerRuns: wall.powerRuns,
+    installedCabinets: counts?.installed ?? 0,
+    openTicketCount: counts?.openTickets ?? 0,
+    archived: wall.archivedAt !== null,
+  };
+}
+
+async function assertModel(tx: DbOrTx, id: string | undefined) {
+  if (!id) return;
+  const [model] = await tx.select({ id: cabinetModels.id }).from(cabinetModels).where(eq(cabinetModels.id, id));
+  if (!model) throw badRequest('validation_failed', 'That cabinet model is not in the catalogue.', { cabinetModelId: 'Unknown model.' });
+}
+
+export async function createWall(actor: Actor, input: WallInput) {
+  const id = await db().transaction(async (tx) => {
+    const [site] = await tx.select({ clientId: sites.clientId }).from(sites).where(eq(sites.id, input.siteId));
+    if (!site) throw badRequest('validation_failed', 'That site does not exist.', { siteId: 'Unknown site.' });
+    await assertModel(tx, input.cabinetModelId);
+    const [row] = await tx.insert(walls).values({ ...input, clientId: site.clientId }).returning();
+    await recordAudit(tx, { actor, entity: 'wall', entityId: row.id, action: 'created', after: row });
+    return row.id;
+  });
+  return getWall(actor, id);
+}
+
+export async function updateWall(actor: Actor, id: string, input: WallPatch) {
+  await db().transaction(async (tx) => {
+    const [before] = await tx.select().from(walls).where(eq(walls.id, id)).for('update');
+    found(before, 'Wall');
+    await assertModel(tx, input.cabinetModelId);
+    const { archived, ...fields } = input;
+    const [after] = await tx
+      .update(walls)
+      .set({ ...fields, ...(archived === undefined ? {} : { archivedAt: archived ? (before.archivedAt ?? new Date()) : null }) })
+      .where(eq(walls.id, id))
+      .returning();
+    await recordAudit(tx, { actor, entity: 'wall', entityId: id, action: archived ? 'archived' : 'updated', before, after });
+  });
+  return getWall(actor, id);
+}
+
+/** Every cabinet on the wall, for the wall map. */
+export async function wallCabinets(actor: Actor, id: string) {
+  await visibleWall(db(), actor, id);
+  const rows = await db()
+    .select({
+      id: cabinets.id,
+      serial: cabinets.serial,
+      column: cabinets.column,
+      row: cabinets.row,
+      batch: cabinets.batch,
+      status: cabinets.status,
+      installedOn: cabinets.installedOn,
+      openTickets: sql<number>`(select count(*)::int from tickets t where t.wall_id = ${cabinets.wallId} and t.status not in ('resolved','closed') and t.cells @> jsonb_build_array(jsonb_build_object('column', ${cabinets.column}, 'row', ${cabinets.row})))`,
+    })
+    .from(cabinets)
+    .where(eq(cabinets.wallId, id))
+    .orderBy(asc(cabinets.row), asc(cabinets.column));
+  return { items: rows.map((r) => ({ ...r, column: r.column!, row: r.row! })) };
+}

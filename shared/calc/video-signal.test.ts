@@ -1,0 +1,60 @@
+import { describe, expect, it } from 'vitest';
+import { DEFAULT_OUTPUT_CAPACITY_PIXELS, fitInput, GIGABIT_USABLE_BPS, INPUT_FORMATS, pixelsPerOutput } from './video-signal.js';
+
+describe('output capacity', () => {
+  it('carries about 650,000 pixels per 1 Gbit/s output: 936 Mbit/s ÷ (24 bit × 60 Hz) (common practice)', () => {
+    expect(GIGABIT_USABLE_BPS).toBe(936e6);
+    expect(pixelsPerOutput(936e6, 24, 60)).toBe(650_000);
+    expect(DEFAULT_OUTPUT_CAPACITY_PIXELS).toBe(650_000);
+  });
+
+  it('halves at twice the refresh rate and drops at deeper colour (same formula)', () => {
+    expect(pixelsPerOutput(936e6, 24, 120)).toBe(325_000);
+    expect(pixelsPerOutput(936e6, 30, 60)).toBe(520_000);
+  });
+});
+
+describe('input formats', () => {
+  it('knows HD as 1920 × 1080 (SMPTE ST 274) and UHD as 3840 × 2160 (SMPTE ST 2036-1), both 16:9', () => {
+    expect(INPUT_FORMATS.hd).toEqual({ width: 1920, height: 1080 });
+    expect(INPUT_FORMATS.uhd).toEqual({ width: 3840, height: 2160 });
+    expect(INPUT_FORMATS.hd.width / INPUT_FORMATS.hd.height).toBeCloseTo(16 / 9, 12);
+    expect(INPUT_FORMATS.uhd.width / INPUT_FORMATS.uhd.height).toBeCloseTo(16 / 9, 12);
+  });
+});
+
+describe('fitInput', () => {
+  // Expected values worked by hand: scale = min(wall w ÷ input w, wall h ÷ input h).
+  it('pillarboxes 1920 × 1080 (SMPTE ST 274) on a 2:1 wall of 2304 × 1152: scale 1152/1080, 2048 × 1152', () => {
+    const fit = fitInput(INPUT_FORMATS.hd, { width: 2304, height: 1152 });
+    expect(fit.scale).toBeCloseTo(1152 / 1080, 12);
+    expect(fit.scaledWidth).toBe(2048);
+    expect(fit.scaledHeight).toBe(1152);
+    expect(fit.bars).toBe('left-right');
+  });
+
+  it('scales 3840 × 2160 (SMPTE ST 2036-1) down to the same 2048 × 1152 on that wall', () => {
+    const fit = fitInput(INPUT_FORMATS.uhd, { width: 2304, height: 1152 });
+    expect(fit.scale).toBeCloseTo(1152 / 2160, 12);
+    expect([fit.scaledWidth, fit.scaledHeight, fit.bars]).toEqual([2048, 1152, 'left-right']);
+  });
+
+  it('fills a 3840 × 2160 wall with HD at scale 2 and UHD at scale 1, without bars', () => {
+    expect(fitInput(INPUT_FORMATS.hd, { width: 3840, height: 2160 })).toEqual({ scale: 2, scaledWidth: 3840, scaledHeight: 2160, bars: 'none' });
+    expect(fitInput(INPUT_FORMATS.uhd, { width: 3840, height: 2160 })).toEqual({ scale: 1, scaledWidth: 3840, scaledHeight: 2160, bars: 'none' });
+  });
+
+  it('letterboxes HD on a square wall: 1920 × 1920 → 1920 × 1080, bars top and bottom', () => {
+    expect(fitInput(INPUT_FORMATS.hd, { width: 1920, height: 1920 })).toEqual({ scale: 1, scaledWidth: 1920, scaledHeight: 1080, bars: 'top-bottom' });
+  });
+
+  it('counts a leftover under one pixel as no bars', () => {
+    // 1920 × 1080 on 1921 × 1080: width to spare is 1 px → bars; on 1920.5 it would be none.
+    expect(fitInput(INPUT_FORMATS.hd, { width: 1921, height: 1080 }).bars).toBe('left-right');
+    expect(fitInput(INPUT_FORMATS.hd, { width: 1920.5, height: 1080 }).bars).toBe('none');
+  });
+
+  it('refuses empty sizes', () => {
+    expect(() => fitInput({ width: 0, height: 1080 }, { width: 100, height: 100 })).toThrow(RangeError);
+  });
+});

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { RedeemTokenInput, SessionUser } from '@shared/schemas/auth';
+import { api } from '@/lib/api-client';
+import { authKeys } from '@/features/auth/api/keys';
+
+/** Sets the password from an invite or reset link; the person is signed in by the answer. */
+export const redeemToken = (input: RedeemTokenInput) => api.post<{ user: SessionUser }>('/api/auth/redeem', input);
+
+export function useRedeemToken() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: redeemToken,
+    onSuccess: ({ user }) => {
+      queryClient.removeQueries();
+      queryClient.setQueryData(authKeys.me(), user);
+    },
+  });
+}

@@ -1,0 +1,213 @@
+import type { UserSummary } from '@shared/schemas/auth';
+import { createColumnHelper } from '@tanstack/react-table';
+import { Ellipsis, History, Mail, UserCheck, UserX, Users } from 'lucide-react';
+import { useMemo, useState } from 'react';
+import { Link } from 'react-router-dom';
+import { Badge } from '@/components/ui/badge';
+import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { DataTable } from '@/components/ui/data-table';
+import { EmptyState } from '@/components/ui/empty-state';
+import { FilterSearch, FilterSelect } from '@/components/ui/filters';
+import { Popover, popoverItemClasses } from '@/components/ui/popover';
+import { useToast } from '@/components/ui/toast';
+import { paths } from '@/config/paths';
+import { useUsers } from '@/features/users/api/get-users';
+import type { UserFilters } from '@/features/users/api/keys';
+import { useResendInvite } from '@/features/users/api/resend-invite';
+import { useUpdateUser } from '@/features/users/api/update-user';
+import { EditUserDialog } from '@/features/users/components/edit-user-dialog';
+import { roleDescriptions, roleOptions } from '@/features/users/components/role-options';
+import { UserStatus, userStatusText } from '@/features/users/components/user-status';
+import { errorMessage } from '@/lib/errors';
+import { formatAgo, formatDate, formatDateTime } from '@/lib/format';
+import { useUser } from '@/lib/session';
+
+const column = createColumnHelper<UserSummary>();
+
+interface UsersTableProps {
+  filters: UserFilters;
+  onFiltersChange: (filters: UserFilters) => void;
+}
+
+export function UsersTable({ filters, onFiltersChange }: UsersTableProps) {
+  const me = useUser();
+  const toast = useToast();
+  const query = useUsers(filters);
+  const resend = useResendInvite();
+  const update = useUpdateUser();
+  const [editing, setEditing] = useState<UserSummary | null>(null);
+  const [toggling, setToggling] = useState<UserSummary | null>(null);
+  const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
+
+  const columns = useMemo(
+    () => [
+      column.accessor('name', {
+        header: 'Name',
+        meta: { alwaysVisible: true, className: 'min-w-[10rem]' },
+        cell: (c) => (
+          <span className="font-medium text-ink-950">
+            {c.getValue()}
+            {c.row.original.id === me.id ? <span className="ml-1.5 text-xs font-normal text-stone-500">(you)</span> : null}
+          </span>
+        ),
+      }),
+      column.accessor('email', { header: 'E-mail', cell: (c) => <span className="text-stone-700">{c.getValue()}</span> }),
+      column.accessor('role', {
+        header: 'Role',
+        meta: { csv: (u) => roleDescriptions[u.role].label },
+        cell: (c) => <Badge tone={c.getValue() === 'client' ? 'neutral' : 'ink'}>{roleDescriptions[c.getValue()].label}</Badge>,
+      }),
+      column.accessor('clientName', {
+        header: 'Organisation',
+        cell: (c) => c.getValue() ?? <span className="text-stone-400">—</span>,
+      }),
+      column.accessor('phone', { header: 'Phone', meta: { hiddenByDefault: true }, cell: (c) => c.getValue() || '—' }),
+      column.display({
+        id: 'status',
+        header: 'Status',
+        meta: { csv: (u) => userStatusText(u) },
+        cell: (c) => <UserStatus user={c.row.original} />,
+      }),
+      column.accessor('lastSignInAt', {
+        header: 'Last sign-in',
+        meta: { csv: (u) => u.lastSignInAt ?? '' },
+        cell: (c) => <span title={formatDateTime(c.getValue())}>{c.getValue() ? formatAgo(c.getValue()) : 'Never'}</span>,
+      }),
+      column.accessor('createdAt', {
+        header: 'Added',
+        meta: { hiddenByDefault: true },
+        cell: (c) => formatDate(c.getValue()),
+      }),
+      column.display({
+        id: 'actions',
+        header: () => <span className="sr-only">Actions</span>,
+        meta: { noCsv: true, alwaysVisible: true, align: 'right', className: 'w-px whitespace-nowrap' },
+        cell: ({ row: { original: user } }) => (
+          <div className="flex items-center justify-end gap-1">
+            <Button size="sm" variant="ghost" onClick={() => setEditing(user)} aria-label={`Edit ${user.name}`}>
+              Edit
+            </Button>
+            <Popover
+              trigger={(props) => (
+                <Button {...props} size="sm" variant="ghost" aria-label={`More actions for ${user.name}`}>
+                  <Ellipsis className="h-4 w-4" aria-hidden="true" />
+                </Button>
+              )}
+            >
+              {(close) => (
+                <>
+                  {user.invitePending && !user.disabled ? (
+                    <button
+                      type="button"
+                      className={popoverItemClasses}
+                      onClick={async () => {
+                        close();
+                        try {
+                          await resend.mutateAsync(user.id);
+                          toast(`Invitation sent again to ${user.email}.`);
+                        } catch (error) {
+                          toast(errorMessage(error), 'danger');
+                        }
+                      }}
+                    >
+                      <Mail className="h-4 w-4 text-stone-500" aria-hidden="true" /> Re-send invite
+                    </button>
+                  ) : null}
+                  {user.id !== me.id ? (
+                    <button
+                      type="button"
+                      className={popoverItemClasses}
+                      onClick={() => {
+                        close();
+                        setToggling(user);
+                      }}
+                    >
+                      {user.disabled ? (
+                        <UserCheck className="h-4 w-4 text-stone-500" aria-hidden="true" />
+                      ) : (
+                        <UserX className="h-4 w-4 text-stone-500" aria-hidden="true" />
+                      )}
+                      {user.disabled ? 'Enable account' : 'Disable account'}
+                    </button>
+                  ) : null}
+                  <Link
+                    to={paths.admin.audit.getHref({ entity: 'user', entityId: user.id })}
+                    className={popoverItemClasses}
+                    onClick={close}
+                  >
+                    <History className="h-4 w-4 text-stone-500" aria-hidden="true" /> Account history
+                  </Link>
+                </>
+              )}
+            </Popover>
+          </div>
+        ),
+      }),
+    ],
+    [me.id, resend, toast],
+  );
+
+  const filtered = Boolean(filters.q || filters.role);
+
+  return (
+    <>
+      <DataTable
+        tableId="users"
+        label="People with a Gridkeep account"
+        columns={columns}
+        data={rows}
+        getRowId={(u) => u.id}
+        isLoading={query.isPending}
+        error={query.error}
+        onRetry={() => query.refetch()}
+        hasNextPage={query.hasNextPage}
+        onLoadMore={() => query.fetchNextPage()}
+        isLoadingMore={query.isFetchingNextPage}
+        toolbar={
+          <>
+            <FilterSearch
+              label="Search"
+              placeholder="Name or e-mail"
+              value={filters.q ?? ''}
+              onChange={(q) => onFiltersChange({ ...filters, q: q || undefined })}
+            />
+            <FilterSelect
+              label="Role"
+              anyLabel="All roles"
+              options={roleOptions}
+              value={filters.role ?? ''}
+              onChange={(role) => onFiltersChange({ ...filters, role: (role || undefined) as UserFilters['role'] })}
+            />
+          </>
+        }
+        empty={
+          <EmptyState
+            icon={Users}
+            title={filtered ? 'No one matches these filters' : 'No accounts yet'}
+            description={filtered ? 'Try another name, or clear the filters.' : 'Invite the first person with the button above.'}
+          />
+        }
+      />
+      <EditUserDialog user={editing} onClose={() => setEditing(null)} />
+      <ConfirmDialog
+        open={toggling !== null}
+        onClose={() => setToggling(null)}
+        title={toggling?.disabled ? `Enable ${toggling?.name}?` : `Disable ${toggling?.name}?`}
+        confirmLabel={toggling?.disabled ? 'Enable account' : 'Disable account'}
+        tone={toggling?.disabled ? 'primary' : 'danger'}
+        onConfirm={async () => {
+          if (!toggling) return;
+          await update.mutateAsync({ id: toggling.id, disabled: !toggling.disabled });
+          toast(toggling.disabled ? `${toggling.name} can sign in again.` : `${toggling.name} can no longer sign in.`);
+        }}
+      >
+        {toggling?.disabled ? (
+          <p>They can sign in again with their existing password.</p>
+        ) : (
+          <p>They are signed out everywhere at once and cannot sign in until the account is enabled again. Their history stays.</p>
+        )}
+      </ConfirmDialog>
+    </>
+  );
+}
