@@ -1,4 +1,5 @@
 import type { Router } from 'express';
+import { attachmentsRouter, wallDocumentsRouter } from './attachments.js';
 import { authRouter } from './auth.js';
 import { calcRouter } from './calc.js';
 import { devRouter } from './dev.js';
@@ -28,7 +29,9 @@ export function apiRoutes(api: Router) {
   api.use('/service-plans', servicePlansRouter);
   api.use('/contacts', contactsRouter);
   api.use('/sites', sitesRouter);
+  api.use('/walls/:id/documents', wallDocumentsRouter);
   api.use('/walls', wallsRouter);
+  api.use('/attachments', attachmentsRouter);
   api.use('/cabinets', cabinetsRouter);
   api.use('/cabinet-models', cabinetModelsRouter);
   api.use('/controllers', controllersRouter);
