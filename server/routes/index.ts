@@ -15,6 +15,7 @@ import {
   sitesRouter,
   wallsRouter,
 } from './register.js';
+import { ticketsRouter, ticketViewsRouter } from './tickets.js';
 import { auditRouter, usersRouter } from './users.js';
 
 /** Mounts every API router under /api. Keep one line per domain. */
@@ -36,4 +37,6 @@ export function apiRoutes(api: Router) {
   api.use('/cabinet-models', cabinetModelsRouter);
   api.use('/controllers', controllersRouter);
   api.use('/search', searchRouter);
+  api.use('/tickets', ticketsRouter);
+  api.use('/ticket-views', ticketViewsRouter);
 }

@@ -2,8 +2,13 @@
 // means: every term is taken relative to the most likely count (the mode) by the recurrence
 // p(k+1) = p(k) · λ ÷ (k+1), so nothing underflows, even where e^-λ does (λ > 745).
 
-/** Terms below this share of the total are dropped; they cannot move a double-precision sum. */
+/** Upper-tail terms below this share of the total are dropped: they cannot move the sum. */
 const NEGLIGIBLE = 1e-20;
+/**
+ * Lower-tail terms are kept down to this weight (relative to the mode), near the smallest
+ * normal double, so that P(X ≤ k) far below the mean keeps its relative accuracy.
+ */
+const SMALLEST_WEIGHT = 1e-300;
 
 /** The distribution as weights relative to its mode: weight k = p(k) ÷ p(mode), for k ≥ `first`. */
 interface Weights {
@@ -21,7 +26,7 @@ function weights(lambda: number): Weights {
   let w = 1;
   for (let k = mode; k > 0; k--) {
     w *= k / lambda;
-    if (w < NEGLIGIBLE * total) break;
+    if (w < SMALLEST_WEIGHT) break;
     below.push(w);
     total += w;
   }

@@ -48,10 +48,11 @@ describe('fitInput', () => {
     expect(fitInput(INPUT_FORMATS.hd, { width: 1920, height: 1920 })).toEqual({ scale: 1, scaledWidth: 1920, scaledHeight: 1080, bars: 'top-bottom' });
   });
 
-  it('counts a leftover under one pixel as no bars', () => {
-    // 1920 × 1080 on 1921 × 1080: width to spare is 1 px → bars; on 1920.5 it would be none.
+  it('counts a leftover of a whole pixel as bars, and less than that as none', () => {
+    // 1920 × 1080 on 1921 × 1080: 1 px to spare. 1280 × 720 on 1366 × 768: height is the
+    // tighter side, scale 768/720 = 1.0667, 1365.33 px wide, 0.67 px to spare → none.
     expect(fitInput(INPUT_FORMATS.hd, { width: 1921, height: 1080 }).bars).toBe('left-right');
-    expect(fitInput(INPUT_FORMATS.hd, { width: 1920.5, height: 1080 }).bars).toBe('none');
+    expect(fitInput({ width: 1280, height: 720 }, { width: 1366, height: 768 }).bars).toBe('none');
   });
 
   it('refuses empty sizes', () => {

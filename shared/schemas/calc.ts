@@ -19,6 +19,12 @@ const positiveInt = (label: string, max: number) => positive(label, max).int(`${
 const share = (label: string) =>
   z.number({ error: `${label} must be a number.` }).gt(0, `${label} must be more than 0.`).max(1, `${label} must be at most 1.`);
 
+/**
+ * Cross-field rules that compute with several fields run only once every field is valid on
+ * its own (zod would otherwise run them after a failed `positive()` and divide by a negative).
+ */
+const whenFieldsValid = { when: (payload: { issues: readonly unknown[] }) => payload.issues.length === 0 };
+
 const columns = positiveInt('Columns', 500);
 const rows = positiveInt('Rows', 500);
 
@@ -37,6 +43,7 @@ export const cabinetSpecInput = z
   .refine((c) => c.typicalPowerW <= c.maxPowerW, {
     path: ['typicalPowerW'],
     message: 'Typical power cannot exceed maximum power.',
+    ...whenFieldsValid,
   });
 
 export const supplyInput = z.object({
@@ -75,7 +82,7 @@ export const wallPlanRequest = z
         message: `One cabinet (${count.format(v.cabinet.maxPowerW)} W) is over the circuit's continuous capacity (${count.format(capacityW)} W).`,
       });
     }
-  });
+  }, whenFieldsValid);
 export type WallPlanRequest = z.input<typeof wallPlanRequest>;
 export type WallPlanResponse = WallPlan;
 
@@ -112,11 +119,14 @@ function limitsOf(v: LimitFields): RunLimits | null {
     : { kind: 'power', cabinetMaxPowerW: v.cabinetMaxPowerW, chainCapacityW: v.chainCapacityW };
 }
 
-function checkLimits(v: LimitFields, ctx: z.RefinementCtx) {
+function checkRequired(v: LimitFields, ctx: z.RefinementCtx) {
   const required = v.kind === 'data' ? (['cabinetPixels'] as const) : (['cabinetMaxPowerW', 'chainCapacityW'] as const);
   for (const field of required) {
     if (v[field] === undefined) ctx.addIssue({ code: 'custom', path: [field], message: `Required for ${v.kind} runs.` });
   }
+}
+
+function checkCapacity(v: LimitFields, ctx: z.RefinementCtx) {
   const limits = limitsOf(v);
   if (!limits || cabinetsPerRun(limits) >= 1) return;
   ctx.addIssue(
@@ -128,7 +138,8 @@ function checkLimits(v: LimitFields, ctx: z.RefinementCtx) {
 
 export const runsRequest = z
   .object({ ...runLimitFields, pattern: z.enum(runPatterns, { error: 'Pattern must be rows, columns or serpentine.' }) })
-  .superRefine(checkLimits)
+  .superRefine(checkRequired)
+  .superRefine(checkCapacity, whenFieldsValid)
   .transform((v) => ({ columns: v.columns, rows: v.rows, pattern: v.pattern as RunPattern, limits: limitsOf(v) as RunLimits }));
 export type RunsRequest = z.input<typeof runsRequest>;
 export interface RunsResponse {
@@ -153,7 +164,8 @@ export const runsValidateRequest = z
       )
       .max(250_000, 'Too many runs.'),
   })
-  .superRefine(checkLimits)
+  .superRefine(checkRequired)
+  .superRefine(checkCapacity, whenFieldsValid)
   .transform((v) => ({ columns: v.columns, rows: v.rows, runs: v.runs, limits: limitsOf(v) as RunLimits }));
 export type RunsValidateRequest = z.input<typeof runsValidateRequest>;
 export interface RunsValidateResponse {
@@ -204,7 +216,7 @@ export const businessCalendarInput = z
     start: z.string().regex(clockTime, 'Use a time such as 08:00.'),
     end: z.string().regex(clockTime, 'Use a time such as 18:00.').or(z.literal('24:00')),
   })
-  .refine((c) => minutes(c.end) > minutes(c.start), { path: ['end'], message: 'The day must end after it starts.' });
+  .refine((c) => minutes(c.end) > minutes(c.start), { path: ['end'], message: 'The day must end after it starts.', ...whenFieldsValid });
 
 /** Ten years: the longest span a due time may reach, which also bounds the day-by-day count. */
 const MAX_CLOCK_WEEKS = 520;
@@ -227,7 +239,7 @@ export const dueRequest = z
       const weeklyHours = v.mode === 'business' ? (v.calendar.days.length * (minutes(v.calendar.end) - minutes(v.calendar.start))) / 60 : 168;
       return v.hours / weeklyHours <= MAX_CLOCK_WEEKS;
     },
-    { path: ['hours'], message: 'That is more than ten years of clock time.' },
+    { path: ['hours'], message: 'That is more than ten years of clock time.', ...whenFieldsValid },
   );
 export type DueRequest = z.input<typeof dueRequest>;
 export interface DueResponse {

@@ -25,6 +25,9 @@ export const tickets = pgTable('tickets', {
   mergedIntoId: uuid().references((): AnyPgColumn => tickets.id, { onDelete: 'set null' }),
   responseDueAt: at(),
   resolutionDueAt: at(),
+  /** When less than a quarter of the allowed clock time is left (shared/calc/service-clock). */
+  responseAtRiskAt: at(),
+  resolutionAtRiskAt: at(),
   /** When the resolution clock was paused (status waiting_client); null while it runs. */
   pausedAt: at(),
   /** Time spent paused so far, added to the resolution due time. */
@@ -46,6 +49,7 @@ export const tickets = pgTable('tickets', {
   index('tickets_assignee_idx').on(t.assigneeId),
   index('tickets_reporter_idx').on(t.reporterId),
   index('tickets_merged_into_idx').on(t.mergedIntoId),
+  index('tickets_resolution_due_idx').on(t.resolutionDueAt),
   check('tickets_title_present', sql`length(trim(${t.title})) > 0`),
   check('tickets_paused_seconds', sql`${t.pausedSeconds} >= 0`),
 ]);

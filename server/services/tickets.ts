@@ -1,0 +1,434 @@
+import { aliasedTable, and, asc, eq, ilike, inArray, isNull, or, sql } from 'drizzle-orm';
+import type { Role } from '../../shared/schemas/enums.js';
+import {
+  allowedNextStatuses,
+  openStatuses,
+  ticketRef,
+  type CommentInput,
+  type CreateTicketInput,
+  type ListTicketsQuery,
+  type SavedViewInput,
+  type TicketClockState,
+  type UpdateTicketInput,
+} from '../../shared/schemas/tickets.js';
+import { positionLabel } from '../../shared/schemas/register.js';
+import { db, type DbOrTx, type Tx } from '../db/client.js';
+import { users } from '../db/schema/accounts.js';
+import { clients, servicePlans, sites } from '../db/schema/clients.js';
+import { savedViews, ticketComments, tickets } from '../db/schema/tickets.js';
+import { visits, visitTechnicians } from '../db/schema/visits.js';
+import { walls } from '../db/schema/walls.js';
+import { badRequest, conflict, forbidden } from '../errors.js';
+import type { Actor } from '../middleware/auth.js';
+import { recordAudit } from './audit.js';
+import { cursorValue, likePattern, orderFor } from './clients.js';
+import { afterCursor, decodeCursor, pageOf } from './pagination.js';
+import { found, isStaff, tenantWhere } from './scope.js';
+import { clockStateOf, pausedClockMs, planClock, ticketDueTimes, worstState } from './ticket-clock.js';
+import { mailClientUpdate, mailOfficeNewTicket, type TicketForMail } from './ticket-mail.js';
+
+const assignee = aliasedTable(users, 'assignee');
+const reporter = aliasedTable(users, 'reporter');
+
+/**
+ * The state of a ticket's running clocks, in SQL so lists can filter on it. The same rules as
+ * clockStateOf/worstState in ticket-clock.ts (tests hold the two together).
+ */
+const clockStateSql = sql<TicketClockState | null>`case
+  when ${tickets.resolutionDueAt} is null then null
+  when ${tickets.resolvedAt} is not null then case when ${tickets.resolvedAt} <= ${tickets.resolutionDueAt} then 'met' else 'missed' end
+  when (${tickets.pausedAt} is null and ${tickets.resolutionDueAt} < now()) or (${tickets.acknowledgedAt} is null and ${tickets.responseDueAt} < now()) then 'breached'
+  when (${tickets.pausedAt} is null and ${tickets.resolutionAtRiskAt} <= now()) or (${tickets.acknowledgedAt} is null and ${tickets.responseAtRiskAt} <= now()) then 'at_risk'
+  when ${tickets.pausedAt} is not null then 'paused'
+  else 'on_track' end`;
+
+const listColumns = {
+  id: tickets.id,
+  number: tickets.number,
+  title: tickets.title,
+  status: tickets.status,
+  priority: tickets.priority,
+  scope: tickets.scope,
+  cells: tickets.cells,
+  clientId: tickets.clientId,
+  clientName: clients.name,
+  siteId: tickets.siteId,
+  siteName: sites.name,
+  wallId: tickets.wallId,
+  wallName: walls.name,
+  assigneeId: tickets.assigneeId,
+  assigneeName: assignee.name,
+  reporterName: reporter.name,
+  responseDueAt: tickets.responseDueAt,
+  resolutionDueAt: tickets.resolutionDueAt,
+  createdAt: tickets.createdAt,
+  updatedAt: tickets.updatedAt,
+  clockState: clockStateSql,
+};
+
+function baseQuery(tx: DbOrTx) {
+  return tx
+    .select(listColumns)
+    .from(tickets)
+    .innerJoin(clients, eq(clients.id, tickets.clientId))
+    .innerJoin(sites, eq(sites.id, tickets.siteId))
+    .leftJoin(walls, eq(walls.id, tickets.wallId))
+    .leftJoin(assignee, eq(assignee.id, tickets.assigneeId))
+    .leftJoin(reporter, eq(reporter.id, tickets.reporterId));
+}
+
+const iso = (d: Date | null) => d?.toISOString() ?? null;
+
+function presentListRow(r: Awaited<ReturnType<ReturnType<typeof baseQuery>['execute']>>[number]) {
+  return {
+    id: r.id,
+    number: r.number,
+    ref: ticketRef(r.number),
+    title: r.title,
+    status: r.status,
+    priority: r.priority,
+    scope: r.scope,
+    cellCount: r.cells.length,
+    client: { id: r.clientId, name: r.clientName },
+    site: { id: r.siteId, name: r.siteName },
+    wall: r.wallId ? { id: r.wallId, name: r.wallName ?? '' } : null,
+    assignee: r.assigneeId ? { id: r.assigneeId, name: r.assigneeName ?? '' } : null,
+    reporterName: r.reporterName,
+    responseDueAt: iso(r.responseDueAt),
+    resolutionDueAt: iso(r.resolutionDueAt),
+    clockState: r.clockState,
+    createdAt: r.createdAt.toISOString(),
+    updatedAt: r.updatedAt.toISOString(),
+  };
+}
+
+export async function listTickets(actor: Actor, query: ListTicketsQuery) {
+  const sortColumn = query.sort === 'resolutionDueAt' ? tickets.resolutionDueAt : query.sort === 'updatedAt' ? tickets.updatedAt : tickets.createdAt;
+  const pattern = query.q ? likePattern(query.q) : undefined;
+  const number = query.q?.match(/^(?:gk-?)?(\d{1,9})$/i)?.[1];
+  const assigneeFilter =
+    query.assigneeId === 'none' ? isNull(tickets.assigneeId) : query.assigneeId === 'me' ? eq(tickets.assigneeId, actor.userId) : query.assigneeId ? eq(tickets.assigneeId, query.assigneeId) : undefined;
+  const rows = await baseQuery(db())
+    .where(
+      and(
+        tenantWhere(actor, tickets.clientId),
+        query.status ? inArray(tickets.status, query.status) : undefined,
+        query.open === 'true' ? inArray(tickets.status, openStatuses) : query.open === 'false' ? inArray(tickets.status, ['resolved', 'closed']) : undefined,
+        query.priority ? inArray(tickets.priority, query.priority) : undefined,
+        query.clock ? inArray(clockStateSql, query.clock) : undefined,
+        query.clientId ? eq(tickets.clientId, query.clientId) : undefined,
+        query.siteId ? eq(tickets.siteId, query.siteId) : undefined,
+        query.wallId ? eq(tickets.wallId, query.wallId) : undefined,
+        isStaff(actor) ? assigneeFilter : undefined,
+        pattern ? or(ilike(tickets.title, pattern), ilike(tickets.description, pattern), number ? eq(tickets.number, Number(number)) : undefined) : undefined,
+        afterCursor(sortColumn, tickets.id, decodeCursor(query.cursor, 2), query.dir),
+      ),
+    )
+    .orderBy(...orderFor(sortColumn, tickets.id, query.dir))
+    .limit(query.limit + 1);
+  const key = (r: (typeof rows)[number]) => [cursorValue(query.sort === 'resolutionDueAt' ? r.resolutionDueAt : query.sort === 'updatedAt' ? r.updatedAt : r.createdAt), r.id];
+  const page = pageOf(rows, query.limit, key);
+  return { items: page.items.map(presentListRow), nextCursor: page.nextCursor };
+}
+
+/** The ticket row the caller may see, or 404. */
+async function visibleTicket(tx: DbOrTx, actor: Actor, id: string, lock = false) {
+  const q = tx.select().from(tickets).where(and(eq(tickets.id, id), tenantWhere(actor, tickets.clientId)));
+  const [row] = lock ? await q.for('update') : await q;
+  return found(row, 'Ticket');
+}
+
+async function clockFor(tx: DbOrTx, siteId: string) {
+  const [row] = await tx
+    .select({ timeZone: sites.timeZone, plan: servicePlans })
+    .from(sites)
+    .innerJoin(clients, eq(clients.id, sites.clientId))
+    .leftJoin(servicePlans, eq(servicePlans.id, clients.servicePlanId))
+    .where(eq(sites.id, siteId));
+  return planClock(row.plan, row.timeZone);
+}
+
+export async function getTicket(actor: Actor, id: string) {
+  const t = await visibleTicket(db(), actor, id);
+  const [row] = await baseQuery(db()).where(eq(tickets.id, id));
+  const wall = t.wallId
+    ? (await db().select({ id: walls.id, name: walls.name, columns: walls.columns, rows: walls.rows }).from(walls).where(eq(walls.id, t.wallId)))[0]
+    : null;
+  const ticketVisits = await db()
+    .select({ id: visits.id, status: visits.status, windowStart: visits.windowStart, windowEnd: visits.windowEnd, kind: visits.kind })
+    .from(visits)
+    .where(eq(visits.ticketId, id))
+    .orderBy(asc(visits.windowStart));
+  const merged = t.mergedIntoId ? (await db().select({ id: tickets.id, number: tickets.number }).from(tickets).where(eq(tickets.id, t.mergedIntoId)))[0] : null;
+  const now = new Date();
+  const response = clockStateOf(now, { dueAt: t.responseDueAt, atRiskAt: t.responseAtRiskAt, doneAt: t.acknowledgedAt });
+  const resolution = clockStateOf(now, { dueAt: t.resolutionDueAt, atRiskAt: t.resolutionAtRiskAt, doneAt: t.resolvedAt, paused: t.pausedAt !== null });
+  return {
+    ...presentListRow(row),
+    description: t.description,
+    cells: t.cells,
+    cellLabels: t.cells.map(positionLabel),
+    wall,
+    mergedInto: merged ? { id: merged.id, ref: ticketRef(merged.number) } : null,
+    acknowledgedAt: iso(t.acknowledgedAt),
+    resolvedAt: iso(t.resolvedAt),
+    closedAt: iso(t.closedAt),
+    pausedAt: iso(t.pausedAt),
+    clocks: { response, resolution },
+    clockState: worstState(response, resolution),
+    visits: ticketVisits.map((v) => ({ ...v, windowStart: v.windowStart.toISOString(), windowEnd: v.windowEnd.toISOString() })),
+    nextStatuses: actor.role === 'client' ? (t.status === 'resolved' ? ['closed'] : []) : allowedNextStatuses(t.status),
+  };
+}
+
+async function forMail(tx: DbOrTx, id: string): Promise<TicketForMail> {
+  const [r] = await tx
+    .select({
+      t: tickets,
+      siteName: sites.name,
+      wallName: walls.name,
+      clientName: clients.name,
+    })
+    .from(tickets)
+    .innerJoin(sites, eq(sites.id, tickets.siteId))
+    .innerJoin(clients, eq(clients.id, tickets.clientId))
+    .leftJoin(walls, eq(walls.id, tickets.wallId))
+    .where(eq(tickets.id, id));
+  return { ...r.t, siteName: r.siteName, wallName: r.wallName, clientName: r.clientName };
+}
+
+export async function createTicket(actor: Actor, input: CreateTicketInput) {
+  const id = await db().transaction(async (tx) => {
+    const [site] = await tx
+      .select({ id: sites.id, clientId: sites.clientId })
+      .from(sites)
+      .where(and(eq(sites.id, input.siteId), tenantWhere(actor, sites.clientId)));
+    if (!site) throw badRequest('validation_failed', 'Choose one of your sites.', { siteId: 'Unknown site.' });
+    let cells = input.cells ?? [];
+    if (input.wallId) {
+      const [wall] = await tx.select().from(walls).where(and(eq(walls.id, input.wallId), eq(walls.siteId, site.id)));
+      if (!wall) throw badRequest('validation_failed', 'That wall is not at this site.', { wallId: 'Not a wall of this site.' });
+      const outside = cells.filter((c) => c.column > wall.columns || c.row > wall.rows);
+      if (outside.length) {
+        throw badRequest('validation_failed', `${outside.map(positionLabel).join(', ')} ${outside.length === 1 ? 'is' : 'are'} outside the wall.`, { cells: 'Outside the grid.' });
+      }
+      const unique = new Map(cells.map((c) => [`${c.column}:${c.row}`, c]));
+      cells = [...unique.values()].sort((a, b) => a.row - b.row || a.column - b.column);
+    }
+    const scope = input.scope ?? (input.wallId ? (cells.length ? 'cells' : 'whole_wall') : 'site');
+    const openedAt = new Date();
+    const clock = await clockFor(tx, site.id);
+    const [row] = await tx
+      .insert(tickets)
+      .values({
+        clientId: site.clientId,
+        siteId: site.id,
+        wallId: input.wallId ?? null,
+        scope,
+        cells,
+        title: input.title,
+        description: input.description ?? '',
+        priority: input.priority,
+        reporterId: actor.userId,
+        createdAt: openedAt,
+        ...ticketDueTimes(clock, input.priority, openedAt),
+      })
+      .returning();
+    await recordAudit(tx, { actor, entity: 'ticket', entityId: row.id, action: 'created', after: row });
+    await mailOfficeNewTicket(tx, await forMail(tx, row.id), actor.name);
+    return row.id;
+  });
+  return getTicket(actor, id);
+}
+
+/** What a role may change on a ticket it can see. */
+function assertMayUpdate(role: Role, current: typeof tickets.$inferSelect, input: UpdateTicketInput) {
+  if (role === 'client') {
+    const onlyClosing = input.status === 'closed' && Object.keys(input).every((k) => k === 'status');
+    if (!onlyClosing) throw forbidden('forbidden', 'You can close a resolved ticket; the service desk changes everything else.');
+    if (current.status !== 'resolved') throw conflict('bad_transition', 'Only a resolved ticket can be closed.', { status: 'Not resolved yet.' });
+  }
+  if (role === 'technician' && (input.priority || input.assigneeId !== undefined || input.schedule)) {
+    throw forbidden('forbidden', 'Priority, assignment and scheduling are set by the office.');
+  }
+}
+
+export async function updateTicket(actor: Actor, id: string, input: UpdateTicketInput) {
+  await db().transaction(async (tx) => {
+    const before = await visibleTicket(tx, actor, id, true);
+    assertMayUpdate(actor.role, before, input);
+    if (before.mergedIntoId) throw conflict('merged', 'This ticket was merged into another; work on that one.');
+    const now = new Date();
+    const clock = await clockFor(tx, before.siteId);
+    const changes: Partial<typeof tickets.$inferInsert> = {};
+    if (input.title !== undefined) changes.title = input.title;
+    if (input.description !== undefined) changes.description = input.description;
+    if (input.assigneeId !== undefined) changes.assigneeId = await assertAssignable(tx, input.assigneeId);
+    const status = input.status ?? before.status;
+    if (input.status && input.status !== before.status) {
+      if (!allowedNextStatuses(before.status).includes(input.status)) {
+        throw conflict('bad_transition', `A ${before.status.replace('_', ' ')} ticket cannot move to ${input.status.replace('_', ' ')}.`, { status: 'Not allowed from the current status.' });
+      }
+      changes.status = input.status;
+      if (before.status === 'new' && !before.acknowledgedAt) changes.acknowledgedAt = now;
+      // Waiting on the client pauses the resolution clock; leaving it resumes the clock.
+      let pausedSeconds = before.pausedSeconds;
+      if (input.status === 'waiting_client') changes.pausedAt = now;
+      if (before.status === 'waiting_client' && before.pausedAt) {
+        pausedSeconds += Math.round(pausedClockMs(clock, before.pausedAt, now) / 1000);
+        changes.pausedAt = null;
+        changes.pausedSeconds = pausedSeconds;
+      }
+      if (input.status === 'resolved') changes.resolvedAt = now;
+      if (input.status === 'closed') changes.closedAt = now;
+      if (before.status === 'resolved' && input.status === 'in_progress') {
+        changes.resolvedAt = null;
+      }
+      if (changes.pausedSeconds !== undefined || input.priority) {
+        Object.assign(changes, ticketDueTimes(clock, input.priority ?? before.priority, before.createdAt, pausedSeconds * 1000));
+      }
+    }
+    if (input.priority && input.priority !== before.priority) {
+      changes.priority = input.priority;
+      Object.assign(changes, ticketDueTimes(clock, input.priority, before.createdAt, (changes.pausedSeconds ?? before.pausedSeconds) * 1000));
+    }
+    let scheduled: { visitId: string; start: Date; end: Date; technicianNames: string[] } | undefined;
+    if (input.schedule) {
+      if (status !== 'scheduled') throw badRequest('validation_failed', 'A visit is planned with the status “scheduled”.', { status: 'Set to scheduled.' });
+      scheduled = await planVisit(tx, before, input.schedule);
+    }
+    const [after] = await tx.update(tickets).set(changes).where(eq(tickets.id, id)).returning();
+    await recordAudit(tx, { actor, entity: 'ticket', entityId: id, action: 'updated', before, after });
+
+    // Tell the client what they need to know.
+    if (after.status !== before.status || scheduled) {
+      const mail = await forMail(tx, id);
+      if (scheduled) await mailClientUpdate(tx, mail, { kind: 'scheduled', ...scheduled, timeZone: clock.timeZone });
+      else if (after.status === 'acknowledged') await mailClientUpdate(tx, mail, { kind: 'acknowledged' });
+      else if (after.status === 'resolved') await mailClientUpdate(tx, mail, { kind: 'resolved' });
+    }
+  });
+  return getTicket(actor, id);
+}
+
+async function assertAssignable(tx: Tx, userId: string | null) {
+  if (!userId) return null;
+  const [u] = await tx.select({ role: users.role, disabledAt: users.disabledAt }).from(users).where(eq(users.id, userId));
+  if (!u || u.role === 'client' || u.disabledAt) throw badRequest('validation_failed', 'Assign the ticket to an active staff member.', { assigneeId: 'Not a staff member.' });
+  return userId;
+}
+
+async function planVisit(tx: Tx, t: typeof tickets.$inferSelect, schedule: NonNullable<UpdateTicketInput['schedule']>) {
+  const techs = schedule.technicianIds.length
+    ? await tx.select({ id: users.id, name: users.name, role: users.role }).from(users).where(inArray(users.id, schedule.technicianIds))
+    : [];
+  if (techs.length !== schedule.technicianIds.length || techs.some((u) => u.role !== 'technician')) {
+    throw badRequest('validation_failed', 'Choose technicians from the team.', { 'schedule.technicianIds': 'Not a technician.' });
+  }
+  const start = new Date(schedule.start);
+  const end = new Date(schedule.end);
+  const [visit] = await tx
+    .insert(visits)
+    .values({ clientId: t.clientId, siteId: t.siteId, wallId: t.wallId, ticketId: t.id, kind: 'ticket', windowStart: start, windowEnd: end })
+    .returning({ id: visits.id });
+  if (techs.length) await tx.insert(visitTechnicians).values(techs.map((u) => ({ visitId: visit.id, userId: u.id })));
+  return { visitId: visit.id, start, end, technicianNames: techs.map((u) => u.name) };
+}
+
+/** Closes a duplicate into the ticket that carries on, leaving a note on both. */
+export async function mergeTicket(actor: Actor, id: string, intoId: string) {
+  if (id === intoId) throw badRequest('validation_failed', 'Choose another ticket to merge into.', { intoTicketId: 'The same ticket.' });
+  await db().transaction(async (tx) => {
+    const dup = await visibleTicket(tx, actor, id, true);
+    const into = await visibleTicket(tx, actor, intoId, true);
+    if (dup.clientId !== into.clientId) throw badRequest('validation_failed', 'Tickets of different clients cannot be merged.', { intoTicketId: 'Another client.' });
+    if (into.mergedIntoId || into.status === 'closed') throw conflict('bad_transition', 'Merge into an open ticket.', { intoTicketId: 'Closed or merged.' });
+    const now = new Date();
+    const [after] = await tx
+      .update(tickets)
+      .set({ status: 'closed', mergedIntoId: into.id, closedAt: now, pausedAt: null })
+      .where(eq(tickets.id, dup.id))
+      .returning();
+    const cells = new Map([...into.cells, ...dup.cells].map((c) => [`${c.column}:${c.row}`, c]));
+    if (dup.wallId && dup.wallId === into.wallId) await tx.update(tickets).set({ cells: [...cells.values()] }).where(eq(tickets.id, into.id));
+    await tx.insert(ticketComments).values([
+      { ticketId: dup.id, authorId: actor.userId, visibility: 'public', body: `Merged into ${ticketRef(into.number)}: the same fault is followed there.` },
+      { ticketId: into.id, authorId: actor.userId, visibility: 'internal', body: `${ticketRef(dup.number)} was merged into this ticket.` },
+    ]);
+    await recordAudit(tx, { actor, entity: 'ticket', entityId: dup.id, action: 'merged', before: dup, after });
+  });
+  return getTicket(actor, id);
+}
+
+// ---- comments ----
+export async function listComments(actor: Actor, ticketId: string) {
+  await visibleTicket(db(), actor, ticketId);
+  const rows = await db()
+    .select({ c: ticketComments, authorName: users.name, authorRole: users.role })
+    .from(ticketComments)
+    .leftJoin(users, eq(users.id, ticketComments.authorId))
+    .where(and(eq(ticketComments.ticketId, ticketId), isStaff(actor) ? undefined : eq(ticketComments.visibility, 'public')))
+    .orderBy(asc(ticketComments.createdAt));
+  return {
+    items: rows.map((r) => ({
+      id: r.c.id,
+      body: r.c.body,
+      visibility: r.c.visibility,
+      author: { name: r.authorName ?? 'Former user', role: r.authorRole, staff: r.authorRole !== 'client' },
+      createdAt: r.c.createdAt.toISOString(),
+    })),
+  };
+}
+
+export async function addComment(actor: Actor, ticketId: string, input: CommentInput) {
+  if (actor.role === 'client' && input.visibility === 'internal') {
+    throw forbidden('forbidden', 'Client comments are always visible to the service desk and to you.');
+  }
+  const id = await db().transaction(async (tx) => {
+    const t = await visibleTicket(tx, actor, ticketId);
+    const [row] = await tx.insert(ticketComments).values({ ticketId, authorId: actor.userId, body: input.body, visibility: input.visibility }).returning();
+    await tx.update(tickets).set({ updatedAt: new Date() }).where(eq(tickets.id, ticketId));
+    await recordAudit(tx, { actor, entity: 'ticket', entityId: ticketId, action: `comment_${input.visibility}`, after: { commentId: row.id } });
+    if (input.visibility === 'public') {
+      const mail = await forMail(tx, t.id);
+      await mailClientUpdate(tx, mail, { kind: 'comment', commentId: row.id, authorName: actor.name, body: input.body, excludeEmail: actor.email });
+    }
+    return row.id;
+  });
+  const { items } = await listComments(actor, ticketId);
+  return items.find((c) => c.id === id)!;
+}
+
+/** The ticket the caller may attach to, for the upload route (404 when not visible). */
+export const ticketForUpload = (actor: Actor, id: string) => visibleTicket(db(), actor, id);
+
+// ---- saved views ----
+export async function listViews(actor: Actor) {
+  const rows = await db().select().from(savedViews).where(eq(savedViews.userId, actor.userId)).orderBy(asc(savedViews.name));
+  return { items: rows.map((v) => ({ id: v.id, name: v.name, filters: v.filters })) };
+}
+
+export async function saveView(actor: Actor, input: SavedViewInput) {
+  const [row] = await db()
+    .insert(savedViews)
+    .values({ userId: actor.userId, name: input.name, filters: input.filters })
+    .onConflictDoUpdate({ target: [savedViews.userId, savedViews.name], set: { filters: input.filters, updatedAt: new Date() } })
+    .returning();
+  return { id: row.id, name: row.name, filters: row.filters };
+}
+
+export async function deleteView(actor: Actor, id: string) {
+  const [row] = await db().delete(savedViews).where(and(eq(savedViews.id, id), eq(savedViews.userId, actor.userId))).returning();
+  found(row, 'Saved view');
+}
+
+/** For the office board: counts of open tickets by clock state. */
+export async function clockCounts(actor: Actor): Promise<Record<string, number>> {
+  const rows = await db()
+    .select({ state: clockStateSql, n: sql<number>`count(*)::int` })
+    .from(tickets)
+    .where(and(tenantWhere(actor, tickets.clientId), inArray(tickets.status, openStatuses)))
+    .groupBy(clockStateSql);
+  return Object.fromEntries(rows.map((r) => [r.state ?? 'none', r.n]));
+}
+

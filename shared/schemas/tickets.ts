@@ -1,0 +1,113 @@
+import { z } from 'zod';
+import { pageQuery, requiredText, text } from './common.js';
+import { commentVisibilities, ticketPriorities, ticketScopes, ticketStatuses, type TicketPriority, type TicketStatus } from './enums.js';
+import { position } from './register.js';
+
+export const ticketClockStates = ['on_track', 'at_risk', 'breached', 'paused', 'met', 'missed'] as const;
+export type TicketClockState = (typeof ticketClockStates)[number];
+
+/** Plain-language guidance a client reads when choosing how bad it is. */
+export const priorityGuidance: Record<TicketPriority, { label: string; help: string }> = {
+  critical: { label: 'Critical', help: 'The wall is dark or cannot be used, and you need it for an event or service.' },
+  high: { label: 'High', help: 'A fault people can see in the main viewing area: a dark cabinet, a flickering block, wrong colours.' },
+  normal: { label: 'Normal', help: 'A minor fault: a few dead pixels, a module slightly off in colour, a fault at the edge.' },
+  low: { label: 'Low', help: 'Cosmetic, a question, or something to look at on the next visit.' },
+};
+
+export const statusLabels: Record<TicketStatus, string> = {
+  new: 'New',
+  acknowledged: 'Acknowledged',
+  scheduled: 'Scheduled',
+  in_progress: 'In progress',
+  waiting_parts: 'Waiting for parts',
+  waiting_client: 'Waiting for you',
+  resolved: 'Resolved',
+  closed: 'Closed',
+};
+
+export const openStatuses: TicketStatus[] = ['new', 'acknowledged', 'scheduled', 'in_progress', 'waiting_parts', 'waiting_client'];
+
+/**
+ * Where a ticket may go next. Open tickets move freely among the working statuses (never back
+ * to `new`); a resolved ticket is closed or reopened; a closed ticket is final.
+ */
+export function allowedNextStatuses(from: TicketStatus): TicketStatus[] {
+  if (from === 'closed') return [];
+  if (from === 'resolved') return ['closed', 'in_progress'];
+  return [...openStatuses.filter((s) => s !== 'new' && s !== from), 'resolved'];
+}
+
+export const createTicketInput = z
+  .object({
+    siteId: z.uuid(),
+    wallId: z.uuid().nullable().optional(),
+    scope: z.enum(ticketScopes).optional(),
+    cells: z.array(position).max(2000).optional(),
+    title: requiredText(160),
+    description: text(10_000).optional(),
+    priority: z.enum(ticketPriorities),
+  })
+  .refine((t) => !(t.cells?.length && !t.wallId), { path: ['cells'], message: 'Pick the wall the cells are on.' })
+  .refine((t) => !((t.scope === 'cells' || t.scope === 'whole_wall' || t.scope === 'controller') && !t.wallId), {
+    path: ['wallId'],
+    message: 'Pick the wall.',
+  });
+export type CreateTicketInput = z.infer<typeof createTicketInput>;
+
+export const scheduleInput = z
+  .object({
+    start: z.iso.datetime({ offset: true }),
+    end: z.iso.datetime({ offset: true }),
+    technicianIds: z.array(z.uuid()).max(10).default([]),
+  })
+  .refine((s) => new Date(s.end) > new Date(s.start), { path: ['end'], message: 'The visit must end after it starts.' });
+
+export const updateTicketInput = z.object({
+  status: z.enum(ticketStatuses).optional(),
+  priority: z.enum(ticketPriorities).optional(),
+  assigneeId: z.uuid().nullable().optional(),
+  title: requiredText(160).optional(),
+  description: text(10_000).optional(),
+  /** With status `scheduled`: plan the visit and send the client an invitation. */
+  schedule: scheduleInput.optional(),
+});
+export type UpdateTicketInput = z.infer<typeof updateTicketInput>;
+
+export const mergeTicketInput = z.object({ intoTicketId: z.uuid() });
+
+export const commentInput = z.object({
+  body: requiredText(10_000),
+  visibility: z.enum(commentVisibilities).default('public'),
+});
+export type CommentInput = z.infer<typeof commentInput>;
+
+const csv = <T extends readonly [string, ...string[]]>(values: T) =>
+  z
+    .string()
+    .optional()
+    .transform((s) => (s ? s.split(',').filter(Boolean) : undefined))
+    .pipe(z.array(z.enum(values)).optional());
+
+export const listTicketsQuery = pageQuery.extend({
+  status: csv(ticketStatuses),
+  priority: csv(ticketPriorities),
+  clock: csv(ticketClockStates),
+  open: z.enum(['true', 'false']).optional(),
+  clientId: z.uuid().optional(),
+  siteId: z.uuid().optional(),
+  wallId: z.uuid().optional(),
+  assigneeId: z.union([z.uuid(), z.literal('none'), z.literal('me')]).optional(),
+  q: z.string().trim().max(100).optional(),
+  sort: z.enum(['createdAt', 'resolutionDueAt', 'updatedAt']).default('createdAt'),
+  dir: z.enum(['asc', 'desc']).default('desc'),
+});
+export type ListTicketsQuery = z.infer<typeof listTicketsQuery>;
+
+export const savedViewInput = z.object({
+  name: requiredText(60),
+  filters: z.record(z.string(), z.string().max(500)),
+});
+export type SavedViewInput = z.infer<typeof savedViewInput>;
+
+/** GK-1042: the number people say on the phone. */
+export const ticketRef = (n: number) => `GK-${n}`;

@@ -1,0 +1,269 @@
+import { eq, sql } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { dueAt } from '../../shared/calc/service-clock.js';
+import { closeDb, db } from '../../server/db/client.js';
+import { contacts } from '../../server/db/schema/clients.js';
+import { outboundMail } from '../../server/db/schema/mail.js';
+import { tickets } from '../../server/db/schema/tickets.js';
+import { closeMail, processMailOnce } from '../../server/integrations/mail.js';
+import { createOrganisation, createServicePlan, createUser, signIn, signedIn, type Session } from '../factories/index.js';
+import { createIsolatedDatabase } from '../setup/isolated-database.js';
+import { setEnv, startTestSmtp, type TestSmtp } from '../setup/fakes.js';
+
+// This file sends real mail through the outbox to the SMTP fake, so it has a database of its own.
+let smtp: TestSmtp;
+let database: Awaited<ReturnType<typeof createIsolatedDatabase>>;
+let restoreEnv: () => void;
+let office: Session;
+let tech: Session;
+let org: Awaited<ReturnType<typeof createOrganisation>>;
+let clientUser: Session;
+
+const HOUR = 3_600_000;
+
+beforeAll(async () => {
+  [smtp, database] = await Promise.all([startTestSmtp(), createIsolatedDatabase('gridkeep_tickets')]);
+  restoreEnv = setEnv({ DATABASE_URL: database.url, ...smtp.env, OFFICE_EMAIL: 'desk@integrator.test' });
+  org = await createOrganisation({ withWall: true });
+  // A round-the-clock plan makes the due times exact to check.
+  const plan = await createServicePlan({ clockMode: 'round_the_clock' });
+  await db().execute(sql`update clients set service_plan_id = ${plan.id} where id = ${org.client.id}`);
+  await db().insert(contacts).values([
+    { clientId: org.client.id, siteId: org.site.id, name: 'Site manager', email: 'site.manager@client.test' },
+    { clientId: org.client.id, name: 'Quiet person', email: 'quiet@client.test', receivesUpdates: false },
+  ]);
+  office = await signedIn('coordinator');
+  tech = await signedIn('technician');
+  clientUser = await signedIn('client', org.client.id);
+});
+
+afterAll(async () => {
+  closeMail();
+  await closeDb();
+  await smtp.dispose();
+  restoreEnv();
+  await database.drop();
+});
+
+async function open(session: Session, overrides: object = {}) {
+  const res = await session.post('/api/tickets', {
+    siteId: org.site.id,
+    wallId: org.wall!.id,
+    cells: [{ column: 4, row: 2 }, { column: 5, row: 2 }],
+    title: 'Dead module at C4·R2',
+    description: 'Black square lower left of centre',
+    priority: 'high',
+    ...overrides,
+  });
+  expect(res.status).toBe(201);
+  return res.body;
+}
+
+async function deliver() {
+  for (let i = 0; i < 5; i++) {
+    const round = await processMailOnce({ backoffBaseMs: 10, backoffMaxMs: 20 });
+    if (round.claimed === 0) break;
+  }
+  return smtp.parsed();
+}
+
+describe('opening a ticket', () => {
+  it('a client user opens a ticket on their wall with tapped cells; due times come from the plan', async () => {
+    const before = Date.now();
+    const t = await open(clientUser);
+    expect(t).toMatchObject({ status: 'new', priority: 'high', scope: 'cells', cellLabels: ['C4·R2', 'C5·R2'], wall: { id: org.wall!.id } });
+    expect(t.ref).toMatch(/^GK-\d+$/);
+    // Factory plan, high priority: respond in 4 h, resolve in 24 h, round the clock.
+    const created = new Date(t.createdAt).getTime();
+    expect(created).toBeGreaterThanOrEqual(before - 1000);
+    expect(new Date(t.responseDueAt).getTime() - created).toBe(4 * HOUR);
+    expect(new Date(t.resolutionDueAt).getTime() - created).toBe(24 * HOUR);
+    expect(t.clockState).toBe('on_track');
+  });
+
+  it('refuses cells outside the wall and a site of another organisation', async () => {
+    const outside = await clientUser.post('/api/tickets', { siteId: org.site.id, wallId: org.wall!.id, cells: [{ column: 13, row: 1 }], title: 'x', priority: 'low' });
+    expect(outside.status).toBe(400);
+    expect(outside.body.error.fields).toHaveProperty('cells');
+    const other = await createOrganisation({ withWall: true });
+    const foreign = await clientUser.post('/api/tickets', { siteId: other.site.id, title: 'x', priority: 'low' });
+    expect(foreign.status).toBe(400);
+    expect(foreign.body.error.fields).toHaveProperty('siteId');
+    const noTitle = await clientUser.post('/api/tickets', { siteId: org.site.id, title: '  ', priority: 'urgent' });
+    expect(noTitle.status).toBe(400);
+    expect(Object.keys(noTitle.body.error.fields).sort()).toEqual(['priority', 'title']);
+  });
+
+  it('counts business hours in the site’s time zone when the plan says so', async () => {
+    const bOrg = await createOrganisation({ timeZone: 'America/New_York' });
+    const plan = await createServicePlan({ clockMode: 'business', businessDays: [1, 2, 3, 4, 5], dayStart: '08:00', dayEnd: '18:00' });
+    await db().execute(sql`update clients set service_plan_id = ${plan.id} where id = ${bOrg.client.id}`);
+    const res = await office.post('/api/tickets', { siteId: bOrg.site.id, title: 'Controller fan noise', priority: 'normal' });
+    const calendar = { days: [1, 2, 3, 4, 5], start: '08:00', end: '18:00' };
+    const created = new Date(res.body.createdAt);
+    // The clock itself is checked against hand-worked examples in shared/calc/service-clock.test.ts.
+    expect(res.body.responseDueAt).toBe(dueAt({ start: created, hours: 8, mode: 'business', timeZone: 'America/New_York', calendar }).toISOString());
+    expect(res.body.resolutionDueAt).toBe(dueAt({ start: created, hours: 72, mode: 'business', timeZone: 'America/New_York', calendar }).toISOString());
+  });
+});
+
+describe('triage and the clock', () => {
+  it('moves through the statuses; acknowledging meets the response clock', async () => {
+    const t = await open(clientUser);
+    const ack = await office.patch(`/api/tickets/${t.id}`, { status: 'acknowledged', assigneeId: tech.user.id });
+    expect(ack.status).toBe(200);
+    expect(ack.body).toMatchObject({ status: 'acknowledged', assignee: { id: tech.user.id }, clocks: { response: 'met', resolution: 'on_track' } });
+    const back = await office.patch(`/api/tickets/${t.id}`, { status: 'new' });
+    expect(back.status).toBe(409);
+    expect(back.body.error.code).toBe('bad_transition');
+    for (const status of ['in_progress', 'waiting_parts', 'in_progress', 'resolved', 'closed']) {
+      const res = await office.patch(`/api/tickets/${t.id}`, { status });
+      expect(res.status).toBe(200);
+      expect(res.body.status).toBe(status);
+    }
+    expect((await office.patch(`/api/tickets/${t.id}`, { status: 'in_progress' })).status).toBe(409);
+  });
+
+  it('waiting on the client pauses the resolution clock and resuming pushes the due time out', async () => {
+    const t = await open(clientUser, { priority: 'critical' });
+    const due0 = new Date(t.resolutionDueAt).getTime();
+    const paused = await office.patch(`/api/tickets/${t.id}`, { status: 'waiting_client' });
+    expect(paused.body.clocks.resolution).toBe('paused');
+    // Two hours pass while the client is away: move the pause back in time.
+    await db().update(tickets).set({ pausedAt: new Date(Date.now() - 2 * HOUR) }).where(eq(tickets.id, t.id));
+    const resumed = await office.patch(`/api/tickets/${t.id}`, { status: 'in_progress' });
+    const due1 = new Date(resumed.body.resolutionDueAt).getTime();
+    expect(due1 - due0).toBeGreaterThanOrEqual(2 * HOUR - 1000);
+    expect(due1 - due0).toBeLessThanOrEqual(2 * HOUR + 5000);
+    expect(resumed.body.clocks.resolution).toBe('on_track');
+    expect(resumed.body.pausedAt).toBeNull();
+  });
+
+  it('shows at-risk and breached states and filters the list by them', async () => {
+    const risky = await open(clientUser, { title: 'at risk one' });
+    const late = await open(clientUser, { title: 'breached one' });
+    // High: 24 h to resolve; at risk when under 6 h are left.
+    await db().update(tickets).set({ resolutionAtRiskAt: new Date(Date.now() - 1000), acknowledgedAt: new Date() }).where(eq(tickets.id, risky.id));
+    await db().update(tickets).set({ resolutionDueAt: new Date(Date.now() - 1000), acknowledgedAt: new Date() }).where(eq(tickets.id, late.id));
+    expect((await office.get(`/api/tickets/${risky.id}`)).body.clockState).toBe('at_risk');
+    expect((await office.get(`/api/tickets/${late.id}`)).body.clockState).toBe('breached');
+    const atRisk = await office.get(`/api/tickets?clock=at_risk&clientId=${org.client.id}&limit=100`);
+    expect(atRisk.body.items.map((i: { id: string }) => i.id)).toContain(risky.id);
+    expect(atRisk.body.items.map((i: { id: string }) => i.id)).not.toContain(late.id);
+    const breached = await office.get(`/api/tickets?clock=breached&clientId=${org.client.id}&limit=100`);
+    expect(breached.body.items.every((i: { clockState: string }) => i.clockState === 'breached')).toBe(true);
+    expect(breached.body.items.map((i: { id: string }) => i.id)).toContain(late.id);
+  });
+
+  it('recomputes due times when the priority changes', async () => {
+    const t = await open(clientUser, { priority: 'low' });
+    const res = await office.patch(`/api/tickets/${t.id}`, { priority: 'critical' });
+    expect(new Date(res.body.resolutionDueAt).getTime() - new Date(t.createdAt).getTime()).toBe(8 * HOUR);
+  });
+
+  it('lets a client close only their own resolved ticket, and nothing else', async () => {
+    const t = await open(clientUser);
+    expect((await clientUser.patch(`/api/tickets/${t.id}`, { status: 'closed' })).status).toBe(409);
+    expect((await clientUser.patch(`/api/tickets/${t.id}`, { assigneeId: tech.user.id })).status).toBe(403);
+    expect((await clientUser.patch(`/api/tickets/${t.id}`, { status: 'in_progress' })).status).toBe(403);
+    await office.patch(`/api/tickets/${t.id}`, { status: 'resolved' });
+    const closed = await clientUser.patch(`/api/tickets/${t.id}`, { status: 'closed' });
+    expect(closed.status).toBe(200);
+    expect(closed.body.status).toBe('closed');
+  });
+
+  it('merges a duplicate into the ticket that carries on', async () => {
+    const a = await open(clientUser, { cells: [{ column: 1, row: 1 }] });
+    const b = await open(clientUser, { cells: [{ column: 2, row: 1 }] });
+    const res = await office.post(`/api/tickets/${b.id}/merge`, { intoTicketId: a.id });
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ status: 'closed', mergedInto: { id: a.id } });
+    const into = await office.get(`/api/tickets/${a.id}`);
+    expect(into.body.cellLabels).toEqual(['C1·R1', 'C2·R1']);
+    expect((await clientUser.post(`/api/tickets/${b.id}/merge`, { intoTicketId: a.id })).status).toBe(404);
+  });
+});
+
+describe('comments', () => {
+  it('hides internal comments from the client, and refuses internal comments from them', async () => {
+    const t = await open(clientUser);
+    expect((await office.post(`/api/tickets/${t.id}/comments`, { body: 'Parts cost us a fortune', visibility: 'internal' })).status).toBe(201);
+    expect((await office.post(`/api/tickets/${t.id}/comments`, { body: 'We will bring a module from batch B7.', visibility: 'public' })).status).toBe(201);
+    expect((await clientUser.post(`/api/tickets/${t.id}/comments`, { body: 'Thanks!', visibility: 'public' })).status).toBe(201);
+    expect((await clientUser.post(`/api/tickets/${t.id}/comments`, { body: 'sneaky', visibility: 'internal' })).status).toBe(403);
+    const theirs = await clientUser.get(`/api/tickets/${t.id}/comments`);
+    expect(theirs.body.items.map((c: { body: string }) => c.body)).toEqual(['We will bring a module from batch B7.', 'Thanks!']);
+    const staff = await office.get(`/api/tickets/${t.id}/comments`);
+    expect(staff.body.items).toHaveLength(3);
+  });
+});
+
+describe('the tenant boundary on ticket routes', () => {
+  it('answers 404 to another organisation’s user on every ticket route', async () => {
+    const t = await open(clientUser);
+    const other = await createOrganisation();
+    const stranger = await signedIn('client', other.client.id);
+    expect((await stranger.get(`/api/tickets/${t.id}`)).status).toBe(404);
+    expect((await stranger.patch(`/api/tickets/${t.id}`, { status: 'closed' })).status).toBe(404);
+    expect((await stranger.get(`/api/tickets/${t.id}/comments`)).status).toBe(404);
+    expect((await stranger.post(`/api/tickets/${t.id}/comments`, { body: 'hi' })).status).toBe(404);
+    expect((await stranger.get(`/api/tickets/${t.id}/attachments`)).status).toBe(404);
+    const upload = await stranger.agent.post(`/api/tickets/${t.id}/attachments`).set('X-Requested-With', 'gridkeep').attach('file', Buffer.from('%PDF-1.4\n'), 'x.pdf');
+    expect(upload.status).toBe(404);
+    const list = await stranger.get(`/api/tickets?clientId=${org.client.id}`);
+    expect(list.body.items).toEqual([]);
+    const search = await stranger.get(`/api/tickets?q=${encodeURIComponent(t.ref)}`);
+    expect(search.body.items).toEqual([]);
+  });
+});
+
+describe('e-mail', () => {
+  it('tells the office about a new ticket and the client about public changes, never internal ones', async () => {
+    const reporter = await createUser({ role: 'client', clientId: org.client.id });
+    const session = await signIn(reporter);
+    const t = await open(session, { title: 'Flicker on the bottom row' });
+    await office.patch(`/api/tickets/${t.id}`, { status: 'acknowledged' });
+    await office.post(`/api/tickets/${t.id}/comments`, { body: 'INTERNAL: supplier is slow', visibility: 'internal' });
+    await office.post(`/api/tickets/${t.id}/comments`, { body: 'Module ships tomorrow.', visibility: 'public' });
+    await office.patch(`/api/tickets/${t.id}`, {
+      status: 'scheduled',
+      schedule: { start: '2026-12-10T15:00:00Z', end: '2026-12-10T17:00:00Z', technicianIds: [tech.user.id] },
+    });
+    await office.patch(`/api/tickets/${t.id}`, { status: 'resolved' });
+
+    const mail = (await deliver()).filter((m) => m.mail.subject?.includes(t.ref) || m.mail.text?.includes(t.ref));
+    const bySubject = (re: RegExp) => mail.filter((m) => re.test(m.mail.subject ?? ''));
+    const toOf = (m: (typeof mail)[number]) => m.received.envelope.to.slice().sort();
+
+    const opened = bySubject(/^New high ticket/);
+    expect(opened).toHaveLength(1);
+    expect(toOf(opened[0])).toEqual(['desk@integrator.test']);
+
+    const clientPeople = [reporter.email, 'site.manager@client.test'].sort();
+    for (const re of [/^We are on it/, /^New reply/, /^Visit scheduled/, /^Resolved/]) {
+      const found = bySubject(re);
+      expect(found, String(re)).toHaveLength(1);
+      expect(toOf(found[0])).toEqual(clientPeople);
+    }
+    expect(mail.some((m) => (m.mail.text ?? '').includes('INTERNAL'))).toBe(false);
+    const invite = bySubject(/^Visit scheduled/)[0].mail.attachments.find((a) => a.contentType.startsWith('text/calendar'));
+    expect(invite).toBeDefined();
+    // RFC 5545: a VEVENT with the visit window in UTC.
+    const ics = invite!.content.toString();
+    expect(ics).toMatch(/BEGIN:VEVENT/);
+    expect(ics).toMatch(/DTSTART:20261210T150000Z/);
+    expect(ics).toMatch(/DTEND:20261210T170000Z/);
+    expect(ics).toMatch(/METHOD:REQUEST/);
+    const rows = await db().select().from(outboundMail).where(eq(outboundMail.status, 'sent'));
+    expect(rows.length).toBeGreaterThanOrEqual(5);
+  });
+
+  it('does not mail a client user their own comment', async () => {
+    const t = await open(clientUser, { title: 'Own comment check' });
+    await clientUser.post(`/api/tickets/${t.id}/comments`, { body: 'Any news?', visibility: 'public' });
+    const mail = (await deliver()).filter((m) => (m.mail.subject ?? '').startsWith('New reply') && (m.mail.subject ?? '').includes(t.ref));
+    expect(mail).toHaveLength(1);
+    expect(mail[0].received.envelope.to).not.toContain(clientUser.user.email);
+    expect(mail[0].received.envelope.to).toContain('site.manager@client.test');
+  });
+});
