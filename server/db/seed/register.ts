@@ -330,6 +330,8 @@ export interface WallSpec {
   warrantyYears: number;
   /** How many production batches the original cabinets came from. */
   batches: 2 | 3;
+  /** Walls installed together share the production batches of the first one. */
+  sharesBatchesWith?: WallKey;
   /** Cabinets swapped at commissioning for units of a later batch. */
   commissioningSwaps: number;
   controller: keyof typeof controllerModels;
@@ -347,13 +349,13 @@ export const wallSpecs: Record<WallKey, WallSpec> = {
   },
   w02: {
     site: 'fMain', name: 'Main hall left side wall', model: 'hx26', columns: 4, rows: 6, mounting: 'flown',
-    installedDaysAgo: 790, warrantyYears: 5, batches: 2, commissioningSwaps: 1, controller: 'qp4', firmware: '4.2.17',
+    installedDaysAgo: 790, warrantyYears: 5, batches: 2, sharesBatchesWith: 'w01', commissioningSwaps: 1, controller: 'qp4', firmware: '4.2.17',
     inputNotes: 'Image-magnification feed 1920×1080 from the switcher aux 1, scaled to the wall\'s portrait canvas.',
     internalNotes: 'Flown from the house truss; the church\'s own rigger must lower it.',
   },
   w03: {
     site: 'fMain', name: 'Main hall right side wall', model: 'hx26', columns: 4, rows: 6, mounting: 'flown',
-    installedDaysAgo: 790, warrantyYears: 5, batches: 2, commissioningSwaps: 1, controller: 'qp4', firmware: '4.2.17',
+    installedDaysAgo: 790, warrantyYears: 5, batches: 2, sharesBatchesWith: 'w01', commissioningSwaps: 1, controller: 'qp4', firmware: '4.2.17',
     inputNotes: 'Image-magnification feed 1920×1080 from the switcher aux 2.',
     internalNotes: 'Bottom row runs warm: distro B circuit 6 shared with stage lighting until the church rewired it.',
   },
