@@ -79,13 +79,16 @@ async function main() {
   }
   const running = await startServer();
 
-  let signals = 0;
+  let firstSignalAt = 0;
   const shutdown = (signal: string) => {
-    signals += 1;
-    if (signals > 1) {
+    if (firstSignalAt) {
+      // Wrappers (tsx, npm, a terminal's process group) often deliver one Ctrl-C twice:
+      // only a later second signal means "stop now".
+      if (Date.now() - firstSignalAt < 2000) return;
       logger.warn('second signal: exiting now', { signal });
       process.exit(1);
     }
+    firstSignalAt = Date.now();
     logger.info('shutting down', { signal });
     running.stop().then(
       () => process.exit(0),

@@ -37,8 +37,28 @@ export async function buildClientIfStale(log: (line: string) => void = console.l
   log('Building the client (vite build)…');
   const started = Date.now();
   const { build } = await import('vite');
-  await build({ root, configFile: path.join(root, 'vite.config.ts'), logLevel: 'warn', mode: 'production' });
-  fs.writeFileSync(path.join(root, 'dist', stampName), new Date().toISOString() + '\n');
+  // Build beside dist/ and swap it in at the end: a server already running from dist/ (another
+  // `npm start`, the browser tests) never finds it half empty while Vite writes.
+  const dist = path.join(root, 'dist');
+  const scratch = path.join(root, 'node_modules/.cache/gridkeep');
+  fs.mkdirSync(scratch, { recursive: true });
+  const next = path.join(scratch, `dist-next-${process.pid}`);
+  const old = path.join(scratch, `dist-old-${process.pid}`);
+  try {
+    await build({
+      root,
+      configFile: path.join(root, 'vite.config.ts'),
+      logLevel: 'warn',
+      mode: 'production',
+      build: { outDir: next, emptyOutDir: true },
+    });
+    fs.writeFileSync(path.join(next, stampName), new Date().toISOString() + '\n');
+    if (fs.existsSync(dist)) fs.renameSync(dist, old);
+    fs.renameSync(next, dist);
+  } finally {
+    fs.rmSync(next, { recursive: true, force: true });
+    fs.rmSync(old, { recursive: true, force: true });
+  }
   log(`Client built in ${((Date.now() - started) / 1000).toFixed(1)} s.`);
   return true;
 }

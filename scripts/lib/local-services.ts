@@ -103,7 +103,7 @@ async function demoAccounts(): Promise<{ email: string; role: string }[]> {
   const { rows } = await getPool().query<{ email: string; role: string }>(
     `select email, role::text as role from users
       where disabled_at is null and (email = any($1::text[]) or role = 'client')
-      order by case role when 'admin' then 0 when 'coordinator' then 1 when 'technician' then 2 else 3 end, email`,
+      order by coalesce(array_position($1::text[], email), 1000), email`,
     [staff],
   );
   return rows;

@@ -1,6 +1,6 @@
 // A project-local PostgreSQL cluster from Debian's packages, on loopback.
 // Used by `npm start` (a kept cluster under .data/) and by `npm test` (a throwaway one).
-import { execFileSync, spawnSync } from 'node:child_process';
+import { execFileSync, spawn, spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import net from 'node:net';
@@ -135,12 +135,17 @@ export async function startCluster(options: ClusterOptions): Promise<Cluster> {
     });
   }
 
-  // A cluster left running by an earlier run that did not stop cleanly: stop it first.
+  // A pid file left by a run that did not stop cleanly is cleared by pg_ctl start. A server that
+  // is really running belongs to another process (a second `npm start` on the same folder): stopping
+  // it would pull the database from under that one, so say so instead.
   if (fs.existsSync(path.join(dataDir, 'postmaster.pid'))) {
-    try {
-      runPg(bin, 'pg_ctl', ['-D', dataDir, '-m', 'fast', '-w', 'stop'], { quiet: true });
-    } catch {
-      /* a stale pid file: the server is not running and pg_ctl start will clear it */
+    const exe = path.join(bin, 'pg_ctl');
+    const [cmd, full] = isRoot ? ['runuser', ['-u', 'postgres', '--', exe, '-D', dataDir, 'status']] : [exe, ['-D', dataDir, 'status']];
+    if (spawnSync(cmd, full).status === 0) {
+      throw new Error(
+        `PostgreSQL for ${dataDir} is already running, started by another process (is \`npm start\` running ` +
+          `elsewhere?). Stop that one first, or use another DATA_DIR.`,
+      );
     }
   }
 
@@ -152,17 +157,57 @@ export async function startCluster(options: ClusterOptions): Promise<Cluster> {
     quiet: true,
   });
 
+  const guard = guardCluster(dataDir, options.fast && relocated ? path.dirname(dataDir) : undefined, options.fast ? socketDir : undefined);
+
   let stopped = false;
   const stop = () => {
     if (stopped) return;
     stopped = true;
+    guard?.kill();
     try {
       runPg(bin, 'pg_ctl', ['-D', dataDir, '-m', 'fast', '-w', 'stop'], { quiet: true });
     } catch (err) {
       log(`Could not stop PostgreSQL cleanly: ${(err as Error).message}`);
+      return;
     }
+    // A throwaway cluster moved under /tmp lives outside the caller's folder, so the caller
+    // cannot remove it: remove it here (and its socket folder) once it has stopped.
+    if (options.fast && relocated) fs.rmSync(path.dirname(dataDir), { recursive: true, force: true });
+    if (options.fast) fs.rmSync(socketDir, { recursive: true, force: true });
   };
   return { dataDir, port, url: (db) => `postgres://postgres@127.0.0.1:${port}/${db}`, stop };
+}
+
+/**
+ * A small watcher that stops the cluster (SIGINT to the postmaster: PostgreSQL's fast shutdown,
+ * what `pg_ctl stop -m fast` sends) if this process dies without stopping it, e.g. killed
+ * with SIGKILL. It acts only on the postmaster this process started, and is ended by stop().
+ */
+function guardCluster(dataDir: string, removeDir?: string, socketDir?: string) {
+  let postmasterPid: string;
+  try {
+    postmasterPid = fs.readFileSync(path.join(dataDir, 'postmaster.pid'), 'utf8').split('\n')[0].trim();
+  } catch {
+    return undefined;
+  }
+  if (!/^\d+$/.test(postmasterPid)) return undefined;
+  const script = [
+    'while kill -0 "$1" 2>/dev/null; do sleep 1; done',
+    '[ -f "$3" ] && [ "$(head -n 1 "$3")" = "$2" ] || exit 0',
+    'kill -INT "$2" 2>/dev/null',
+    'while kill -0 "$2" 2>/dev/null; do sleep 0.2; done',
+    '[ -n "$4" ] && rm -rf "$4"',
+    '[ -n "$5" ] && rm -rf "$5"',
+    'exit 0',
+  ].join('\n');
+  const child = spawn(
+    'sh',
+    ['-c', script, 'gridkeep-pg-guard', String(process.pid), postmasterPid, path.join(dataDir, 'postmaster.pid'), removeDir ?? '', socketDir ?? ''],
+    { detached: true, stdio: 'ignore' },
+  );
+  child.on('error', () => {});
+  child.unref();
+  return child;
 }
 
 /** Creates a database when it does not exist yet. */

@@ -60,6 +60,8 @@ export function sanitiseHeaderValue(value: string): string {
     .trim();
 }
 
+const singleAddress = /^[^\s@<>()[\]\\,;:"]+@[^\s@<>()[\]\\,;:"]+\.[^\s@<>()[\]\\,;:"]+$/;
+
 /** A file name for a Content-Disposition header: one line, no path, no quotes. */
 function sanitiseFileName(name: string): string {
   const base = sanitiseHeaderValue(name).replace(/["\\/]+/g, '_');
@@ -78,6 +80,10 @@ function messageIdDomain(): string {
 export async function queueMail(tx: DbOrTx, input: QueueMailInput): Promise<number | null> {
   const to = [...new Set(input.to.map(sanitiseHeaderValue).filter(Boolean))];
   if (to.length === 0) throw new Error('queueMail: no recipient');
+  for (const address of to) {
+    // One plain address per entry: a display name, a list or a line break in it is a caller bug.
+    if (!singleAddress.test(address)) throw new Error(`queueMail: not a single e-mail address: ${JSON.stringify(address)}`);
+  }
   const attachments = (input.attachments ?? []).map((a) => ({
     fileName: sanitiseFileName(a.fileName),
     contentType: sanitiseHeaderValue(a.contentType) || 'application/octet-stream',
@@ -296,7 +302,7 @@ export function startMailWorker(options: MailWorkerOptions = {}): MailWorker {
       if (stopped) return;
       logger.warn('mail worker lost its LISTEN connection; reconnecting', { err: err?.message, inMs: reconnectDelay });
       reconnectTimer = setTimeout(() => void listen(), reconnectDelay);
-      reconnectDelay = Math.min(reconnectDelay * 2, 30_000);
+      reconnectDelay = Math.min(reconnectDelay * 2, 5000);
     };
     client.on('error', onLost);
     client.on('end', () => onLost());

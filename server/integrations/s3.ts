@@ -54,9 +54,10 @@ function isMissing(err: unknown) {
 export function newStorageKey(prefix: string): string {
   const clean = prefix
     .toLowerCase()
-    .replace(/[^a-z0-9/_-]+/g, '-')
     .split('/')
-    .filter((part) => part && part !== '.' && part !== '..')
+    .filter((part) => part !== '.' && part !== '..')
+    .map((part) => part.replace(/[^a-z0-9_-]+/g, '-').replace(/^-+|-+$/g, ''))
+    .filter(Boolean)
     .join('/');
   return clean ? `${clean}/${randomUUID()}` : randomUUID();
 }

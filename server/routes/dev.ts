@@ -64,6 +64,8 @@ function toItem(id: string, mail: ParsedMail, fallbackDate: Date): MailboxItem {
   };
 }
 
+// Not there at all unless the local SMTP fake is in use; then for admins only.
+devRouter.use((_req, _res, next) => next(config().DEV_MAILBOX_DIR ? undefined : notFound('Endpoint')));
 devRouter.use(requireRole('admin'));
 
 /** Newest first. */

@@ -14,6 +14,8 @@ export default async function setup(project: TestProject) {
   let url = process.env.TEST_DATABASE_URL;
   if (!url) {
     tmpDir = fs.mkdtempSync(path.join(os.tmpdir(), 'gridkeep-vitest-'));
+    // The postgres user must be able to enter the folder (mkdtemp makes it private).
+    fs.chmodSync(tmpDir, 0o755);
     cluster = await startCluster({ dataDir: path.join(tmpDir, 'pg'), fast: true, log: () => {} });
     url = cluster.url('postgres');
     await ensureDatabase(url, 'gridkeep_test');
