@@ -3,37 +3,28 @@
 import { randomUUID } from 'node:crypto';
 import { eq, inArray, sql } from 'drizzle-orm';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { ensureDatabase } from '../../scripts/lib/postgres.js';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app.js';
 import { closeDb, db } from '../../server/db/client.js';
-import { runMigrations } from '../../server/db/migrate.js';
 import { outboundMail } from '../../server/db/schema/mail.js';
 import { closeMail, processMailOnce, queueMail, retryDelayMs, startMailWorker } from '../../server/integrations/mail.js';
 import { closeStorage, ensureBucket, newStorageKey, putObject } from '../../server/integrations/s3.js';
 import { signedIn } from '../factories/index.js';
+import { createIsolatedDatabase } from '../setup/isolated-database.js';
 import { setEnv, startTestS3, startTestSmtp, type TestS3, type TestSmtp } from '../setup/fakes.js';
 
 let smtp: TestSmtp;
 let s3: TestS3;
 let restoreEnv: () => void;
-let adminUrl: string;
-const dbName = `gridkeep_mail_${randomUUID().slice(0, 8)}`;
+let database: Awaited<ReturnType<typeof createIsolatedDatabase>>;
 
 /** Quick retries so an outage test takes seconds, not the production minutes. */
 const fast = { backoffBaseMs: 20, backoffMaxMs: 80 };
 
 beforeAll(async () => {
-  [smtp, s3] = await Promise.all([startTestSmtp(), startTestS3(`gridkeep-mail-${Date.now()}`)]);
-  const shared = new URL(inject('databaseUrl'));
-  shared.pathname = '/postgres';
-  adminUrl = shared.toString();
-  await ensureDatabase(adminUrl, dbName);
-  const url = new URL(adminUrl);
-  url.pathname = `/${dbName}`;
-  await runMigrations(url.toString());
+  [smtp, s3, database] = await Promise.all([startTestSmtp(), startTestS3(`gridkeep-mail-${Date.now()}`), createIsolatedDatabase('gridkeep_mail')]);
   // The server reads its settings once, on first use: everything points at the fakes before that.
-  restoreEnv = setEnv({ DATABASE_URL: url.toString(), ...smtp.env, ...s3.env, MAIL_FROM: 'Gridkeep <service@gridkeep.test>' });
+  restoreEnv = setEnv({ DATABASE_URL: database.url, ...smtp.env, ...s3.env, MAIL_FROM: 'Gridkeep <service@gridkeep.test>' });
   await ensureBucket();
 });
 
@@ -43,13 +34,7 @@ afterAll(async () => {
   await closeDb();
   await Promise.all([smtp?.dispose(), s3?.dispose()]);
   restoreEnv?.();
-  if (adminUrl) {
-    const { default: pg } = await import('pg');
-    const admin = new pg.Client({ connectionString: adminUrl });
-    await admin.connect();
-    await admin.query(`drop database if exists "${dbName}" with (force)`);
-    await admin.end();
-  }
+  await database?.drop();
 });
 
 async function queue(input: Parameters<typeof queueMail>[1]) {

@@ -1,0 +1,181 @@
+// Signing in and out as each kind of person, and the shell each one sees. Runs against the
+// real app with the demo data (server/db/seed/register.ts: every demo account uses the
+// password below).
+import { expect, test, type Page } from '@playwright/test';
+
+const demoPassword = 'gridkeep-demo';
+const csrf = { 'X-Requested-With': 'gridkeep' };
+
+interface Me {
+  id: string;
+  email: string;
+  name: string;
+  role: string;
+  clientName?: string | null;
+}
+
+async function signIn(page: Page, email: string, password = demoPassword) {
+  if (!page.url().includes('/sign-in')) await page.goto('/sign-in');
+  await page.getByLabel('E-mail address').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+/** The signed-in person as the server sees them (the page's cookie is shared with page.request). */
+async function whoAmI(page: Page): Promise<Me> {
+  const res = await page.request.get('/api/auth/me');
+  expect(res.status()).toBe(200);
+  return ((await res.json()) as { user: Me }).user;
+}
+
+async function signOutFromUserMenu(page: Page, me: Me) {
+  await page.getByRole('button', { name: `Account menu for ${me.name}` }).click();
+  await page.getByRole('group', { name: 'Account menu' }).getByRole('button', { name: 'Sign out' }).click();
+  await expect(page).toHaveURL(/\/sign-in$/);
+  await expect(page.getByRole('heading', { name: 'Sign in to Gridkeep' })).toBeVisible();
+  // The session is really over, not just hidden.
+  expect((await page.request.get('/api/auth/me')).status()).toBe(401);
+}
+
+const firstName = (name: string) => name.trim().split(/\s+/)[0];
+
+test.describe('office staff', () => {
+  test('an admin signs in to the office shell with the administration links, and signs out', async ({ page }) => {
+    await signIn(page, 'admin@gridkeep.test');
+    await expect(page).toHaveURL(/\/$/);
+    const me = await whoAmI(page);
+    expect(me.role).toBe('admin');
+
+    await expect(page.getByRole('heading', { level: 1, name: new RegExp(`${firstName(me.name)}$`) })).toBeVisible();
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    for (const label of ['Today', 'Clients', 'Walls', 'Tickets', 'Schedule', 'Stock', 'Reports', 'Planner', 'Users', 'Audit log', 'Mailbox']) {
+      await expect(nav.getByRole('link', { name: label, exact: true })).toBeVisible();
+    }
+    await expect(page.getByRole('searchbox', { name: 'Search Gridkeep' })).toBeVisible();
+
+    // The search box leads to the results route.
+    await page.getByRole('searchbox', { name: 'Search Gridkeep' }).fill('cabinet 42');
+    await page.getByRole('searchbox', { name: 'Search Gridkeep' }).press('Enter');
+    await expect(page).toHaveURL(/\/search\?q=cabinet(\+|%20)42$/);
+
+    await signOutFromUserMenu(page, me);
+  });
+
+  test('a coordinator gets the office shell without the administration links', async ({ page }) => {
+    await signIn(page, 'office@gridkeep.test');
+    await expect(page).toHaveURL(/\/$/);
+    const me = await whoAmI(page);
+    expect(me.role).toBe('coordinator');
+
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await expect(nav.getByRole('link', { name: 'Tickets', exact: true })).toBeVisible();
+    await expect(nav.getByRole('link', { name: 'Schedule', exact: true })).toBeVisible();
+    await expect(nav.getByRole('link', { name: 'Users', exact: true })).toHaveCount(0);
+    await expect(nav.getByRole('link', { name: 'Audit log', exact: true })).toHaveCount(0);
+
+    // The admin screens answer "not found" to a coordinator, as the API does.
+    await page.goto('/admin/users');
+    await expect(page.getByText('We could not find that page')).toBeVisible();
+
+    await signOutFromUserMenu(page, me);
+  });
+});
+
+test.describe('technician on a phone', () => {
+  test.use({ viewport: { width: 390, height: 844 }, hasTouch: true });
+
+  test('a technician gets the bottom navigation with large targets, and signs out', async ({ page }) => {
+    await signIn(page, 'tech@gridkeep.test');
+    await expect(page).toHaveURL(/\/$/);
+    const me = await whoAmI(page);
+    expect(me.role).toBe('technician');
+
+    await expect(page.getByRole('heading', { level: 1, name: new RegExp(`${firstName(me.name)}$`) })).toBeVisible();
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    const viewport = page.viewportSize()!;
+    for (const label of ['Today', 'Walls', 'Van stock', 'Scan', 'Me']) {
+      const link = nav.getByRole('link', { name: label, exact: true });
+      await expect(link).toBeVisible();
+      const box = (await link.boundingBox())!;
+      // At the bottom of the screen, and at least 44 × 44 CSS px (WCAG 2.2, SC 2.5.5).
+      expect(box.y + box.height).toBeGreaterThan(viewport.height - 100);
+      expect(box.height).toBeGreaterThanOrEqual(44);
+      expect(box.width).toBeGreaterThanOrEqual(44);
+    }
+    // Office-only parts are not in this shell.
+    await expect(page.getByRole('searchbox')).toHaveCount(0);
+    await expect(page.getByRole('link', { name: 'Clients', exact: true })).toHaveCount(0);
+
+    // "Me" is the account page.
+    await nav.getByRole('link', { name: 'Me', exact: true }).click();
+    await expect(page.getByRole('heading', { level: 1, name: 'Your account' })).toBeVisible();
+    await expect(page.getByText(me.email)).toBeVisible();
+
+    await signOutFromUserMenu(page, me);
+  });
+});
+
+test.describe('client portal', () => {
+  test("a client contact sees their organisation's portal, and signs out", async ({ page }) => {
+    // The demo has one client contact per organisation: take the first from the admin's list.
+    const login = await page.request.post('/api/auth/login', {
+      data: { email: 'admin@gridkeep.test', password: demoPassword },
+      headers: csrf,
+    });
+    expect(login.status()).toBe(200);
+    const list = await page.request.get('/api/users?role=client&limit=1');
+    expect(list.status()).toBe(200);
+    const [contact] = ((await list.json()) as { items: { email: string; clientName: string | null }[] }).items;
+    expect(contact?.clientName).toBeTruthy();
+    expect((await page.request.post('/api/auth/logout', { headers: csrf })).status()).toBe(204);
+    await page.context().clearCookies();
+
+    await signIn(page, contact.email);
+    await expect(page).toHaveURL(/\/$/);
+    const me = await whoAmI(page);
+    expect(me.role).toBe('client');
+    expect(me.clientName).toBe(contact.clientName);
+
+    await expect(page.getByRole('banner').getByText(contact.clientName!, { exact: true })).toBeVisible();
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    for (const label of ['Overview', 'Walls', 'Tickets', 'Visits']) {
+      await expect(nav.getByRole('link', { name: label, exact: true })).toBeVisible();
+    }
+    await expect(page.getByRole('link', { name: 'Stock', exact: true })).toHaveCount(0);
+    await expect(page.getByRole('searchbox')).toHaveCount(0);
+
+    await signOutFromUserMenu(page, me);
+  });
+});
+
+test.describe('signing in', () => {
+  test('a wrong password shows the error and stays on sign-in', async ({ page }) => {
+    await signIn(page, 'admin@gridkeep.test', 'not-the-demo-password');
+    await expect(page.getByRole('alert')).toContainText('That e-mail address and password do not match an account');
+    await expect(page).toHaveURL(/\/sign-in$/);
+    await expect(page.getByLabel('Password', { exact: true })).toHaveValue('');
+    expect((await page.request.get('/api/auth/me')).status()).toBe(401);
+  });
+
+  test("a QR label's address survives the sign-in redirect", async ({ page }) => {
+    await page.goto('/c/GK-0042-TEST');
+    await expect(page).toHaveURL(/\/sign-in\?next=%2Fc%2FGK-0042-TEST$/);
+    await signIn(page, 'tech@gridkeep.test');
+    await expect(page).toHaveURL(/\/c\/GK-0042-TEST$/);
+    // The cabinet screen for that serial (whether or not such a cabinet is registered).
+    await expect(page.getByRole('main')).toContainText('GK-0042-TEST');
+  });
+
+  test('a session that ends while the app is open sends the person to sign-in and back', async ({ page }) => {
+    await signIn(page, 'admin@gridkeep.test');
+    await expect(page).toHaveURL(/\/$/);
+    // Another tab signs out: the cookie is gone, but this page still believes it is signed in.
+    await page.context().clearCookies();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Audit log' }).click();
+    await expect(page).toHaveURL(/\/sign-in\?next=%2Fadmin%2Faudit$/);
+
+    await signIn(page, 'admin@gridkeep.test');
+    await expect(page).toHaveURL(/\/admin\/audit$/);
+    await expect(page.getByRole('heading', { level: 1, name: 'Audit log' })).toBeVisible();
+  });
+});
