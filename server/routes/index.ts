@@ -15,8 +15,10 @@ import {
   sitesRouter,
   wallsRouter,
 } from './register.js';
+import { staffRouter } from './staff.js';
 import { ticketsRouter, ticketViewsRouter } from './tickets.js';
 import { auditRouter, usersRouter } from './users.js';
+import { wallPlanRouter } from './wall-plan.js';
 
 /** Mounts every API router under /api. Keep one line per domain. */
 export function apiRoutes(api: Router) {
@@ -31,6 +33,7 @@ export function apiRoutes(api: Router) {
   api.use('/contacts', contactsRouter);
   api.use('/sites', sitesRouter);
   api.use('/walls/:id/documents', wallDocumentsRouter);
+  api.use('/walls/:id/plan', wallPlanRouter);
   api.use('/walls', wallsRouter);
   api.use('/attachments', attachmentsRouter);
   api.use('/cabinets', cabinetsRouter);
@@ -39,4 +42,5 @@ export function apiRoutes(api: Router) {
   api.use('/search', searchRouter);
   api.use('/tickets', ticketsRouter);
   api.use('/ticket-views', ticketViewsRouter);
+  api.use('/staff', staffRouter);
 }

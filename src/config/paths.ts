@@ -31,12 +31,47 @@ export const paths = {
 
   // Office and shared register
   clients: { path: '/clients', getHref: () => '/clients' },
-  walls: { path: '/walls', getHref: () => '/walls' },
-  tickets: { path: '/tickets', getHref: () => '/tickets' },
+  /** A client organisation: service plan, notes, contacts, sites. */
+  client: { path: '/clients/:id', getHref: (id: string) => `/clients/${encodeURIComponent(id)}` },
+  /** A site: address, time zone, access notes, contacts, walls. */
+  site: { path: '/sites/:id', getHref: (id: string) => `/sites/${encodeURIComponent(id)}` },
+  /** With list filters (clientId, siteId, cabinetModelId, q). */
+  walls: {
+    path: '/walls',
+    getHref: (filters: { clientId?: string; siteId?: string; cabinetModelId?: string; q?: string } = {}) => withParams('/walls', filters),
+  },
+  /** A wall's page: `tab` (map, documents, import), and a cell to open on the map (`col`, `row`). */
+  wall: {
+    path: '/walls/:id',
+    getHref: (id: string, options: { tab?: 'map' | 'documents' | 'import'; col?: number; row?: number; view?: 'front' | 'rear' } = {}) =>
+      withParams(`/walls/${encodeURIComponent(id)}`, {
+        tab: options.tab && options.tab !== 'map' ? options.tab : null,
+        col: options.col ? String(options.col) : null,
+        row: options.row ? String(options.row) : null,
+        view: options.view === 'rear' ? 'rear' : null,
+      }),
+  },
+  /** A printable sheet of QR labels, one per cabinet of the wall. */
+  wallLabels: { path: '/walls/:id/labels', getHref: (id: string) => `/walls/${encodeURIComponent(id)}/labels` },
+  /** Cabinet models and controllers. */
+  catalogue: { path: '/catalogue', getHref: (tab?: 'models' | 'controllers') => withParams('/catalogue', { tab }) },
+  tickets: {
+    path: '/tickets',
+    /** With list filters (the API's query parameters: status, open, clock, assigneeId…). */
+    getHref: (filters: Record<string, string | null | undefined> = {}) => withParams('/tickets', filters),
+  },
+  newTicket: { path: '/tickets/new', getHref: () => '/tickets/new' },
+  /** A ticket's page; the e-mails link here (`${APP_URL}/tickets/<id>`). */
+  ticket: { path: '/tickets/:id', getHref: (id: string) => `/tickets/${encodeURIComponent(id)}` },
   schedule: { path: '/schedule', getHref: () => '/schedule' },
   stock: { path: '/stock', getHref: () => '/stock' },
   reports: { path: '/reports', getHref: () => '/reports' },
-  planner: { path: '/planner', getHref: () => '/planner' },
+  /** `wall`: start from that wall's model, grid and settings. */
+  planner: { path: '/planner', getHref: (wall?: string) => withParams('/planner', { wall }) },
+  /** A wall's data and power runs (view, edit by hand, print). */
+  wallRuns: { path: '/walls/:id/runs', getHref: (id: string) => `/walls/${encodeURIComponent(id)}/runs` },
+  /** The runs as a sheet for the crew, outside the app's shell. */
+  wallRunsPrint: { path: '/walls/:id/runs/print', getHref: (id: string) => `/walls/${encodeURIComponent(id)}/runs/print` },
 
   // Technician
   vanStock: { path: '/van', getHref: () => '/van' },

@@ -52,6 +52,8 @@ for (const viewport of [
   { name: 'phone', width: 390, height: 844 },
 ]) {
   test(`plans a 12 × 6 wall, saves it onto the demo wall and shows its runs (${viewport.name})`, async ({ page }, testInfo) => {
+    // A long walk through four screens; the first visit also waits for the server's first answers.
+    test.setTimeout(120_000);
     const errors: string[] = [];
     page.on('pageerror', (err) => errors.push(err.message));
     await page.setViewportSize({ width: viewport.width, height: viewport.height });

@@ -190,10 +190,11 @@ export function DataTable<T>({
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <div className="flex min-w-0 flex-1 flex-wrap items-end gap-3">{toolbar}</div>
+        <div className="flex w-full min-w-0 flex-wrap items-end gap-3 sm:w-auto sm:flex-1">{toolbar}</div>
         <div className="flex items-center gap-2">
           {hideable.length > 0 ? (
             <Popover
+              label="Choose columns"
               trigger={(props) => (
                 <Button {...props} size="sm" icon={<Columns3 className="h-4 w-4" aria-hidden="true" />}>
                   Columns

@@ -1,21 +1,22 @@
 import clsx from 'clsx';
 import { CircleAlert } from 'lucide-react';
-import type { ReactNode } from 'react';
+import { useId, type ReactNode } from 'react';
 import { get, useFormContext, type FieldError } from 'react-hook-form';
 
 /** Ids and the error of a named field inside the surrounding <Form>. */
 export function useFieldState(name: string) {
   const { formState } = useFormContext();
   const error = get(formState.errors, name) as FieldError | undefined;
-  const id = `field-${name.replace(/[^\w-]/g, '-')}`;
+  // Unique per mounted field, even when two forms on a page share field names.
+  const id = `${useId()}${name.replace(/[^\w-]/g, '-')}`;
   return { id, hintId: `${id}-hint`, errorId: `${id}-error`, error: error?.message ? String(error.message) : undefined };
 }
 
 export const inputClasses = (invalid: boolean, className?: string) =>
   clsx(
-    'block w-full rounded border bg-white px-3 text-md text-stone-900 shadow-sm placeholder:text-stone-400',
+    'block w-full rounded border bg-white px-3 text-md text-stone-900 shadow-sm placeholder:text-stone-500',
     'min-h-touch md:min-h-10 disabled:bg-stone-100 disabled:text-stone-500',
-    invalid ? 'border-danger-600' : 'border-stone-300 hover:border-stone-400',
+    invalid ? 'border-danger-600' : 'border-stone-400 hover:border-stone-500',
     className,
   );
 

@@ -11,6 +11,8 @@ interface PopoverProps {
   }) => ReactNode;
   children: ReactNode | ((close: () => void) => ReactNode);
   align?: 'left' | 'right';
+  /** Names the panel for assistive technology (and tests): it becomes a labelled group. */
+  label?: string;
   /** Open upwards (for a trigger near the bottom of the screen). */
   side?: 'bottom' | 'top';
   className?: string;
@@ -20,7 +22,7 @@ interface PopoverProps {
  * A disclosure panel (a button that shows and hides a small panel). Closes on Escape, on a click
  * outside, and after a choice; focus goes back to the button.
  */
-export function Popover({ trigger, children, align = 'right', side = 'bottom', className }: PopoverProps) {
+export function Popover({ trigger, children, align = 'right', label, side = 'bottom', className }: PopoverProps) {
   const [open, setOpen] = useState(false);
   const id = useId();
   const rootRef = useRef<HTMLDivElement>(null);
@@ -55,6 +57,8 @@ export function Popover({ trigger, children, align = 'right', side = 'bottom', c
       {trigger({ 'aria-expanded': open, 'aria-controls': id, onClick: () => setOpen((v) => !v), ref: buttonRef })}
       <div
         id={id}
+        role={label ? 'group' : undefined}
+        aria-label={label}
         hidden={!open}
         className={clsx(
           'absolute z-40 min-w-[12rem] rounded-md border border-stone-200 bg-white p-1 text-stone-900 shadow-pop',

@@ -11,7 +11,10 @@ export function useRedeemToken() {
   return useMutation({
     mutationFn: redeemToken,
     onSuccess: ({ user }) => {
-      queryClient.removeQueries();
+      // Drop what a previous person may have left in memory, but keep the (now used) link's
+      // description: the page showing it would otherwise refetch it and flash "link used".
+      const linkTokens = authKeys.linkToken('')[1];
+      queryClient.removeQueries({ predicate: (q) => q.queryKey[1] !== linkTokens });
       queryClient.setQueryData(authKeys.me(), user);
     },
   });

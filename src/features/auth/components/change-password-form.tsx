@@ -22,7 +22,9 @@ export function ChangePasswordForm({ email }: { email: string }) {
         setDone(true);
       }}
     >
-      {done ? <Alert tone="success">Your password has been changed.</Alert> : null}
+      {done ? (
+        <Alert tone="success">Your password has been changed. Other browsers signed in with your account were signed out.</Alert>
+      ) : null}
       <input type="email" name="username" autoComplete="username" value={email} readOnly hidden />
       <TextField name="currentPassword" label="Current password" type="password" autoComplete="current-password" revealable />
       <TextField

@@ -44,7 +44,7 @@ export function UsersTable({ filters, onFiltersChange }: UsersTableProps) {
     () => [
       column.accessor('name', {
         header: 'Name',
-        meta: { alwaysVisible: true, className: 'min-w-[10rem]' },
+        meta: { alwaysVisible: true, className: 'whitespace-nowrap' },
         cell: (c) => (
           <span className="font-medium text-ink-950">
             {c.getValue()}
@@ -52,15 +52,16 @@ export function UsersTable({ filters, onFiltersChange }: UsersTableProps) {
           </span>
         ),
       }),
-      column.accessor('email', { header: 'E-mail', cell: (c) => <span className="text-stone-700">{c.getValue()}</span> }),
+      column.accessor('email', { header: 'E-mail', meta: { className: 'whitespace-nowrap' }, cell: (c) => <span className="text-stone-700">{c.getValue()}</span> }),
       column.accessor('role', {
         header: 'Role',
-        meta: { csv: (u) => roleDescriptions[u.role].label },
+        meta: { csv: (u) => roleDescriptions[u.role].label, className: 'whitespace-nowrap' },
         cell: (c) => <Badge tone={c.getValue() === 'client' ? 'neutral' : 'ink'}>{roleDescriptions[c.getValue()].label}</Badge>,
       }),
       column.accessor('clientName', {
         header: 'Organisation',
-        cell: (c) => c.getValue() ?? <span className="text-stone-400">—</span>,
+        meta: { className: 'min-w-[12rem]' },
+        cell: (c) => c.getValue() ?? <span className="text-stone-500">—</span>,
       }),
       column.accessor('phone', { header: 'Phone', meta: { hiddenByDefault: true }, cell: (c) => c.getValue() || '—' }),
       column.display({
@@ -71,7 +72,7 @@ export function UsersTable({ filters, onFiltersChange }: UsersTableProps) {
       }),
       column.accessor('lastSignInAt', {
         header: 'Last sign-in',
-        meta: { csv: (u) => u.lastSignInAt ?? '' },
+        meta: { csv: (u) => u.lastSignInAt ?? '', className: 'whitespace-nowrap' },
         cell: (c) => <span title={formatDateTime(c.getValue())}>{c.getValue() ? formatAgo(c.getValue()) : 'Never'}</span>,
       }),
       column.accessor('createdAt', {
@@ -84,11 +85,12 @@ export function UsersTable({ filters, onFiltersChange }: UsersTableProps) {
         header: () => <span className="sr-only">Actions</span>,
         meta: { noCsv: true, alwaysVisible: true, align: 'right', className: 'w-px whitespace-nowrap' },
         cell: ({ row: { original: user } }) => (
-          <div className="flex items-center justify-end gap-1">
+          <div className="-my-1 flex items-center justify-end gap-1">
             <Button size="sm" variant="ghost" onClick={() => setEditing(user)} aria-label={`Edit ${user.name}`}>
               Edit
             </Button>
             <Popover
+              label={`Actions for ${user.name}`}
               trigger={(props) => (
                 <Button {...props} size="sm" variant="ghost" aria-label={`More actions for ${user.name}`}>
                   <Ellipsis className="h-4 w-4" aria-hidden="true" />

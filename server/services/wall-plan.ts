@@ -1,0 +1,97 @@
+import { eq } from 'drizzle-orm';
+import type { z } from 'zod';
+import { cabinetsPerRun, runLoad, validateRuns, type Run, type RunLimits } from '../../shared/calc/runs.js';
+import {
+  runLimitsFor,
+  type PlanSettings,
+  type RunKind,
+  type saveWallPlanRequest,
+  type WallRunProblem,
+  type WallRunsInput,
+} from '../../shared/schemas/wall-plan.js';
+import { db } from '../db/client.js';
+import { cabinetModels, walls, type WallRuns } from '../db/schema/walls.js';
+import { AppError, validationFailed } from '../errors.js';
+import type { Actor } from '../middleware/auth.js';
+import { recordAudit } from './audit.js';
+import { found } from './scope.js';
+import { getWall, visibleWall } from './walls.js';
+
+type SaveWallPlan = z.output<typeof saveWallPlanRequest>;
+
+const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
+
+/** Runs as stored: each with its load (pixels or watts), and the limit they were laid against. */
+function storedRuns(input: Pick<WallRunsInput, 'pattern' | 'runs'>, limits: RunLimits): WallRuns {
+  return {
+    pattern: input.pattern,
+    runs: input.runs.map((r) => ({ index: r.index, cells: r.cells.map((c) => ({ column: c.column, row: c.row })), ...runLoad(limits, r.cells.length) })),
+    limit: limits.kind === 'data' ? limits.outputCapacityPixels : limits.chainCapacityW,
+  };
+}
+
+/**
+ * Stores the supply and capacities a wall is planned with and its data and power runs, after
+ * checking every run against the wall's grid and its cabinet model. Runs left out of the request
+ * stay as stored and are checked against the new settings too; `null` clears them.
+ */
+export async function saveWallPlan(actor: Actor, wallId: string, input: SaveWallPlan) {
+  await db().transaction(async (tx) => {
+    // Scoped first (another organisation's wall is simply not found), then locked.
+    await visibleWall(tx, actor, wallId);
+    const [before] = await tx.select().from(walls).where(eq(walls.id, wallId)).for('update');
+    const wall = found(before, 'Wall');
+    const [model] = await tx.select().from(cabinetModels).where(eq(cabinetModels.id, wall.cabinetModelId));
+    const cabinet = found(model, 'Cabinet model');
+    const settings: PlanSettings = input.settings;
+
+    const dataLimits = runLimitsFor('data', cabinet, settings);
+    const powerLimits = runLimitsFor('power', cabinet, settings);
+    const fields: Record<string, string> = {};
+    if (cabinetsPerRun(dataLimits) < 1) {
+      fields['settings.outputCapacityPixels'] = `One cabinet (${count.format(dataLimits.cabinetPixels)} pixels) is over the output capacity.`;
+    }
+    if (cabinetsPerRun(powerLimits) < 1) {
+      fields['settings.chainCapacityW'] = `One cabinet (${count.format(powerLimits.cabinetMaxPowerW)} W) is over the chain capacity.`;
+    }
+    if (Object.keys(fields).length) throw validationFailed(fields);
+
+    const dataInput = input.dataRuns === undefined ? wall.dataRuns : input.dataRuns;
+    const powerInput = input.powerRuns === undefined ? wall.powerRuns : input.powerRuns;
+    const problems: WallRunProblem[] = [];
+    const check = (kind: RunKind, runs: { pattern: string; runs: Run[] } | null, limits: RunLimits) => {
+      if (!runs) return;
+      for (const p of validateRuns(wall.columns, wall.rows, runs.runs, limits)) problems.push({ kind, ...p });
+    };
+    check('data', dataInput, dataLimits);
+    check('power', powerInput, powerLimits);
+    if (problems.length) {
+      const first = problems[0];
+      const message =
+        problems.length === 1
+          ? `The ${first.kind} runs do not fit the wall: ${first.message}`
+          : `The runs do not fit the wall (${problems.length} problems). First: ${first.kind} — ${first.message}`;
+      throw new AppError(400, 'runs_invalid', message, undefined, undefined, { problems });
+    }
+
+    const patternOf = (runs: { pattern: string }) => runs.pattern as WallRunsInput['pattern'];
+    const [after] = await tx
+      .update(walls)
+      .set({
+        planSettings: settings,
+        dataRuns: dataInput ? storedRuns({ pattern: patternOf(dataInput), runs: dataInput.runs }, dataLimits) : null,
+        powerRuns: powerInput ? storedRuns({ pattern: patternOf(powerInput), runs: powerInput.runs }, powerLimits) : null,
+      })
+      .where(eq(walls.id, wallId))
+      .returning();
+    await recordAudit(tx, {
+      actor,
+      entity: 'wall',
+      entityId: wallId,
+      action: 'plan_saved',
+      before: { planSettings: wall.planSettings, dataRuns: wall.dataRuns, powerRuns: wall.powerRuns },
+      after: { planSettings: after.planSettings, dataRuns: after.dataRuns, powerRuns: after.powerRuns },
+    });
+  });
+  return getWall(actor, wallId);
+}

@@ -1,0 +1,106 @@
+// The plan stored on a wall (PUT /api/walls/:id/plan): the supply and capacities it was planned
+// with, and its data and power runs. The planner, the runs page and the server share these.
+import { z } from 'zod';
+import { circuitCapacityW } from '../calc/electrical.js';
+import { runPatterns, type Run, type RunLimits, type RunProblem } from '../calc/runs.js';
+import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../calc/video-signal.js';
+import { supplyInput } from './calc.js';
+
+/** How a set of runs was laid: by one of the generator's patterns, or by hand. */
+export const storedRunPatterns = [...runPatterns, 'custom'] as const;
+export type StoredRunPattern = (typeof storedRunPatterns)[number];
+
+export const runKinds = ['data', 'power'] as const;
+export type RunKind = (typeof runKinds)[number];
+
+export const planSettingsInput = z.object({
+  supply: supplyInput,
+  outputCapacityPixels: z
+    .number({ error: 'Output capacity must be a number.' })
+    .int('Output capacity must be a whole number.')
+    .positive('Output capacity must be more than zero.')
+    .max(100_000_000, 'Output capacity must be at most 100,000,000.'),
+  chainCapacityW: z
+    .number({ error: 'Chain capacity must be a number.' })
+    .positive('Chain capacity must be more than zero.')
+    .max(1_000_000, 'Chain capacity must be at most 1,000,000 W.'),
+});
+export type PlanSettingsInput = z.input<typeof planSettingsInput>;
+export type PlanSettings = z.output<typeof planSettingsInput>;
+
+const cellInput = z.object({
+  column: z.number({ error: 'Column must be a number.' }).int('Column must be a whole number.'),
+  row: z.number({ error: 'Row must be a number.' }).int('Row must be a whole number.'),
+});
+
+export const wallRunsInput = z.object({
+  pattern: z.enum(storedRunPatterns, { error: 'Pattern must be rows, columns, serpentine or custom.' }),
+  runs: z
+    .array(
+      z.object({
+        index: z.number({ error: 'Run number must be a number.' }).int('Run number must be a whole number.').min(1, 'Run numbers start at 1.').max(1_000_000),
+        cells: z.array(cellInput).max(250_000, 'Too many cells in one run.'),
+      }),
+    )
+    .max(250_000, 'Too many runs.'),
+});
+export type WallRunsInput = z.infer<typeof wallRunsInput>;
+
+/**
+ * Saves a plan onto a wall. A set of runs left out stays as stored (and is checked again against
+ * the new settings); `null` clears it.
+ */
+export const saveWallPlanRequest = z.object({
+  settings: planSettingsInput,
+  dataRuns: wallRunsInput.nullable().optional(),
+  powerRuns: wallRunsInput.nullable().optional(),
+});
+export type SaveWallPlanRequest = z.input<typeof saveWallPlanRequest>;
+
+/** A problem of a saved plan: which set of runs it belongs to, and what is wrong. */
+export interface WallRunProblem extends RunProblem {
+  kind: RunKind;
+}
+
+/** As stored on the wall and returned by GET /api/walls/:id. */
+export interface StoredWallRuns {
+  pattern: string;
+  runs: Run[];
+  /** Pixels per output (data) or watts per chain (power) the runs were laid against. */
+  limit: number;
+}
+export interface StoredPlanSettings {
+  supply: { voltage: number; phases: 1 | 3; breakerAmps: number; continuousFactor: number; powerFactor: number };
+  outputCapacityPixels: number;
+  chainCapacityW: number;
+}
+
+/** What a run limit needs to know about the cabinet. */
+export interface RunCabinet {
+  pixelsWide: number;
+  pixelsHigh: number;
+  maxPowerW: number;
+}
+
+/** The limits of a data or a power run for this cabinet and these settings. */
+export function runLimitsFor<K extends RunKind>(
+  kind: K,
+  cabinet: RunCabinet,
+  settings: Pick<PlanSettings, 'outputCapacityPixels' | 'chainCapacityW'>,
+): Extract<RunLimits, { kind: K }> {
+  const limits: RunLimits =
+    kind === 'data'
+      ? { kind: 'data', cabinetPixels: cabinet.pixelsWide * cabinet.pixelsHigh, outputCapacityPixels: settings.outputCapacityPixels }
+      : { kind: 'power', cabinetMaxPowerW: cabinet.maxPowerW, chainCapacityW: settings.chainCapacityW };
+  return limits as Extract<RunLimits, { kind: K }>;
+}
+
+/**
+ * Settings a wall is planned with when none are stored: a 120 V, 20 A single-phase circuit
+ * loaded to 80 % (NEC 210.19(A)(1), 210.20(A)), one power chain per circuit, and 650,000 pixels
+ * per output (1 Gbit/s at 24 bit, 60 Hz).
+ */
+export function defaultPlanSettings(outputCapacityPixels = DEFAULT_OUTPUT_CAPACITY_PIXELS): PlanSettings {
+  const supply = { voltage: 120, phases: 1 as const, breakerAmps: 20, continuousFactor: 0.8, powerFactor: 1 };
+  return { supply, outputCapacityPixels, chainCapacityW: circuitCapacityW(supply) };
+}

@@ -1,0 +1,85 @@
+import clsx from 'clsx';
+import { Plus } from 'lucide-react';
+import { useMemo, useState } from 'react';
+import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Button } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
+import { cabinetModelsQueryOptions } from '@/features/catalogue/api/get-cabinet-models';
+import { controllersQueryOptions } from '@/features/catalogue/api/get-controllers';
+import { CreateCabinetModelDialog } from '@/features/catalogue/components/cabinet-model-form-dialog';
+import { CabinetModelsTable } from '@/features/catalogue/components/cabinet-models-table';
+import { CreateControllerDialog } from '@/features/catalogue/components/controller-form-dialog';
+import { ControllersTable } from '@/features/catalogue/components/controllers-table';
+import { useWallOptions } from '@/features/walls/api/get-wall-options';
+import { requireUser, staff } from '@/app/auth-guard';
+import { queryClient } from '@/lib/query-client';
+import { isOffice, useUser } from '@/lib/session';
+import { useDocumentTitle } from '@/lib/use-document-title';
+export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
+
+type Tab = 'models' | 'controllers';
+const tabFrom = (params: URLSearchParams): Tab => (params.get('tab') === 'controllers' ? 'controllers' : 'models');
+
+export async function loader({ request }: LoaderFunctionArgs) {
+  await requireUser(request, staff);
+  const tab = tabFrom(new URL(request.url).searchParams);
+  if (tab === 'models') await queryClient.prefetchQuery(cabinetModelsQueryOptions());
+  else await queryClient.prefetchQuery(controllersQueryOptions());
+  return null;
+}
+
+/** Cabinet models (what walls are built from) and controllers (what drives them). */
+export function Component() {
+  useDocumentTitle('Catalogue');
+  const user = useUser();
+  const canEdit = isOffice(user);
+  const [params] = useSearchParams();
+  const tab = tabFrom(params);
+  const [adding, setAdding] = useState(false);
+  const walls = useWallOptions(tab === 'controllers' && canEdit);
+  const wallOptions = useMemo(
+    () => (walls.data ?? []).map((w) => ({ value: w.id, label: `${w.name} (${w.siteName}, ${w.clientName})` })),
+    [walls.data],
+  );
+
+  return (
+    <>
+      <PageHeader
+        title="Catalogue"
+        description="Cabinet models with their data-sheet figures, and every controller with the wall it drives."
+        actions={
+          canEdit ? (
+            <Button variant="primary" onClick={() => setAdding(true)} icon={<Plus className="h-4 w-4" aria-hidden="true" />}>
+              {tab === 'models' ? 'Add cabinet model' : 'Add controller'}
+            </Button>
+          ) : null
+        }
+      />
+      <nav aria-label="Catalogue sections" className="-mt-2 mb-5 flex gap-1 border-b border-stone-200">
+        {(
+          [
+            ['models', 'Cabinet models'],
+            ['controllers', 'Controllers'],
+          ] as const
+        ).map(([key, label]) => (
+          <Link
+            key={key}
+            to={paths.catalogue.getHref(key === 'models' ? undefined : key)}
+            replace
+            aria-current={tab === key ? 'page' : undefined}
+            className={clsx(
+              '-mb-px flex min-h-touch items-center border-b-2 px-3.5 text-base font-medium md:min-h-10',
+              tab === key ? 'border-amber-500 text-ink-950' : 'border-transparent text-stone-600 hover:border-stone-300 hover:text-ink-900',
+            )}
+          >
+            {label}
+          </Link>
+        ))}
+      </nav>
+      {tab === 'models' ? <CabinetModelsTable canEdit={canEdit} /> : <ControllersTable canEdit={canEdit} wallOptions={wallOptions} />}
+      {canEdit && tab === 'models' ? <CreateCabinetModelDialog open={adding} onClose={() => setAdding(false)} /> : null}
+      {canEdit && tab === 'controllers' ? <CreateControllerDialog open={adding} onClose={() => setAdding(false)} wallOptions={wallOptions} /> : null}
+    </>
+  );
+}

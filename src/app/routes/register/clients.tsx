@@ -1,0 +1,70 @@
+import { Plus } from 'lucide-react';
+import { useState } from 'react';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Button } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { clientsInfiniteQueryOptions } from '@/features/clients/api/get-clients';
+import type { ClientFilters } from '@/features/clients/api/keys';
+import { CreateClientDialog } from '@/features/clients/components/client-form-dialog';
+import { ClientsTable } from '@/features/clients/components/clients-table';
+import { requireUser, staff } from '@/app/auth-guard';
+import { queryClient } from '@/lib/query-client';
+import { isOffice, useUser } from '@/lib/session';
+import { useDocumentTitle } from '@/lib/use-document-title';
+export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
+
+/** The filters live in the address, so a sorted, filtered list can be bookmarked. */
+function filtersFrom(params: URLSearchParams): ClientFilters {
+  return {
+    q: params.get('q')?.trim() || undefined,
+    sort: params.get('sort') === 'createdAt' ? 'createdAt' : undefined,
+    dir: params.get('dir') === 'desc' ? 'desc' : undefined,
+    archived: params.get('archived') === 'true' || undefined,
+  };
+}
+
+export async function loader({ request }: LoaderFunctionArgs) {
+  await requireUser(request, staff);
+  await queryClient.ensureInfiniteQueryData(clientsInfiniteQueryOptions(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined);
+  return null;
+}
+
+export function Component() {
+  useDocumentTitle('Clients');
+  const user = useUser();
+  const [params, setParams] = useSearchParams();
+  const [adding, setAdding] = useState(false);
+  const canEdit = isOffice(user);
+  const addButton = canEdit ? (
+    <Button variant="primary" onClick={() => setAdding(true)} icon={<Plus className="h-4 w-4" aria-hidden="true" />}>
+      Add client
+    </Button>
+  ) : null;
+
+  return (
+    <>
+      <PageHeader title="Clients" description="Every organisation whose walls you look after: service plan, contacts, sites and walls." actions={addButton} />
+      <ClientsTable
+        filters={filtersFrom(params)}
+        emptyAction={addButton}
+        onFiltersChange={(next) =>
+          setParams(
+            (prev) => {
+              const p = new URLSearchParams(prev);
+              for (const [key, value] of Object.entries(next)) {
+                if (value === undefined || value === '' || value === false) p.delete(key);
+                else p.set(key, String(value));
+              }
+              // Defaults stay out of the address.
+              if (p.get('sort') === 'name') p.delete('sort');
+              if (p.get('dir') === 'asc') p.delete('dir');
+              return p;
+            },
+            { replace: true },
+          )
+        }
+      />
+      {canEdit ? <CreateClientDialog open={adding} onClose={() => setAdding(false)} /> : null}
+    </>
+  );
+}

@@ -1,0 +1,28 @@
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { PageHeader } from '@/components/ui/page-header';
+import { searchQueryOptions } from '@/features/search/api/get-search';
+import { SearchResults } from '@/features/search/components/search-results';
+import { requireUser } from '@/app/auth-guard';
+import { queryClient } from '@/lib/query-client';
+import { useDocumentTitle } from '@/lib/use-document-title';
+export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
+
+export async function loader({ request }: LoaderFunctionArgs) {
+  await requireUser(request);
+  const q = new URL(request.url).searchParams.get('q')?.trim() ?? '';
+  if (q) await queryClient.prefetchQuery(searchQueryOptions(q));
+  return null;
+}
+
+/** The results of the top bar's search box: clients, sites, walls and cabinet serials. */
+export function Component() {
+  const [params] = useSearchParams();
+  const q = params.get('q')?.trim() ?? '';
+  useDocumentTitle(q ? `Search: ${q}` : 'Search');
+  return (
+    <>
+      <PageHeader title={q ? `Results for “${q}”` : 'Search'} description="Names match anywhere in the name; serials match from their first characters." />
+      <SearchResults q={q} />
+    </>
+  );
+}

@@ -1,0 +1,149 @@
+import { ArrowLeft, CircleCheck, GitMerge } from 'lucide-react';
+import { useState } from 'react';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { PageSpinner } from '@/components/ui/spinner';
+import { useToast } from '@/components/ui/toast';
+import { paths } from '@/config/paths';
+import { attachmentsQueryOptions } from '@/features/tickets/api/get-attachments';
+import { commentsQueryOptions } from '@/features/tickets/api/get-comments';
+import { useSiteTimeZone } from '@/features/tickets/api/get-site-time-zone';
+import { ticketQueryOptions, useTicket } from '@/features/tickets/api/get-ticket';
+import type { TicketDetail } from '@/features/tickets/api/types';
+import { useUpdateTicket } from '@/features/tickets/api/update-ticket';
+import { AttachmentsPanel } from '@/features/tickets/components/attachments-panel';
+import { Conversation } from '@/features/tickets/components/conversation';
+import { TicketClocks } from '@/features/tickets/components/ticket-clocks';
+import { TicketFacts, TicketVisits } from '@/features/tickets/components/ticket-facts';
+import { ClockBadge, PriorityBadge, TicketStatusBadge } from '@/features/tickets/components/ticket-status';
+import { TicketSummary } from '@/features/tickets/components/ticket-summary';
+import { TriagePanel } from '@/features/tickets/components/triage-panel';
+import { requireUser } from '@/app/auth-guard';
+import { errorMessage } from '@/lib/errors';
+import { queryClient } from '@/lib/query-client';
+import { audienceOf, isOffice, useUser } from '@/lib/session';
+import { useDocumentTitle } from '@/lib/use-document-title';
+export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
+
+export async function loader({ request, params }: LoaderFunctionArgs) {
+  await requireUser(request);
+  const id = params.id ?? '';
+  // The ticket itself must load (a 404 shows "not found"); the rest may load on the page.
+  await Promise.all([
+    queryClient.ensureQueryData(ticketQueryOptions(id)),
+    queryClient.prefetchQuery(commentsQueryOptions(id)),
+    queryClient.prefetchQuery(attachmentsQueryOptions(id)),
+  ]);
+  return null;
+}
+
+export function Component() {
+  const { id = '' } = useParams();
+  const ticket = useTicket(id);
+  useDocumentTitle(ticket.data ? `${ticket.data.ref} ${ticket.data.title}` : 'Ticket');
+  if (ticket.isPending) return <PageSpinner label="Loading the ticket" />;
+  if (ticket.isError) return <Alert tone="danger" title="The ticket could not be loaded.">{errorMessage(ticket.error)}</Alert>;
+  return <TicketPage ticket={ticket.data} />;
+}
+
+function TicketPage({ ticket }: { ticket: TicketDetail }) {
+  const user = useUser();
+  const audience = audienceOf(user);
+  const forClient = audience === 'client';
+  const office = isOffice(user);
+  const timeZone = useSiteTimeZone(ticket.site.id).data;
+  const closed = ticket.status === 'closed' || Boolean(ticket.mergedInto);
+
+  return (
+    <>
+      <PageHeader
+        eyebrow={
+          <Link to={paths.tickets.getHref()} className="inline-flex items-center gap-1 hover:underline">
+            <ArrowLeft className="h-4 w-4" aria-hidden="true" /> {audience === 'technician' ? 'My tickets' : 'Tickets'}
+          </Link>
+        }
+        title={
+          <>
+            <span className="mr-2 font-mono text-xl font-medium text-ink-600">{ticket.ref}</span>
+            {ticket.title}
+          </>
+        }
+        description={
+          <span className="mt-1 flex flex-wrap items-center gap-2">
+            <TicketStatusBadge status={ticket.status} forClient={forClient} size="md" />
+            <PriorityBadge priority={ticket.priority} size="md" />
+            {ticket.clockState && !closed ? <ClockBadge state={ticket.clockState} what="Service-plan clock" className="px-2.5 py-1 text-sm" /> : null}
+          </span>
+        }
+      />
+
+      {ticket.mergedInto ? (
+        <Alert tone="info" title={`Merged into ${ticket.mergedInto.ref}`} className="mb-4">
+          <p>
+            The same fault is followed on{' '}
+            <Link to={paths.ticket.getHref(ticket.mergedInto.id)} className="link">
+              {ticket.mergedInto.ref}
+            </Link>
+            .
+          </p>
+        </Alert>
+      ) : null}
+      {forClient && ticket.nextStatuses.includes('closed') ? <CloseTicketBanner ticket={ticket} /> : null}
+
+      <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_20rem]">
+        <div className="min-w-0 space-y-5">
+          <TicketClocks ticket={ticket} timeZone={timeZone} />
+          <TicketSummary ticket={ticket} />
+          <AttachmentsPanel ticketId={ticket.id} canUpload={!closed} />
+          <Conversation ticketId={ticket.id} staff={!forClient} closed={closed} />
+        </div>
+        <aside className="min-w-0 space-y-5" aria-label="Ticket details">
+          {forClient ? null : <TriagePanel ticket={ticket} office={office} timeZone={timeZone} />}
+          <TicketFacts ticket={ticket} forClient={forClient} />
+          <TicketVisits visits={ticket.visits} timeZone={timeZone} />
+          {ticket.mergedInto ? (
+            <p className="flex items-center gap-2 text-sm text-stone-600">
+              <GitMerge className="h-4 w-4" aria-hidden="true" /> Merged tickets take no more changes.
+            </p>
+          ) : null}
+        </aside>
+      </div>
+    </>
+  );
+}
+
+/** A resolved ticket: the client confirms the fix by closing it (or writes back if it is not fixed). */
+function CloseTicketBanner({ ticket }: { ticket: TicketDetail }) {
+  const update = useUpdateTicket();
+  const toast = useToast();
+  const [error, setError] = useState<unknown>(null);
+  return (
+    <div className="mb-5 flex flex-col gap-3 rounded-md border border-state-on-track/30 bg-state-on-track-bg px-4 py-3 sm:flex-row sm:items-center sm:justify-between">
+      <div className="flex gap-3">
+        <CircleCheck className="mt-0.5 h-5 w-5 shrink-0 text-state-on-track" aria-hidden="true" />
+        <div>
+          <p className="font-semibold text-state-on-track">We think this is fixed.</p>
+          <p className="text-sm text-stone-800">If the wall looks right, close the ticket. If not, write to us below and we carry on.</p>
+          {error ? <p className="mt-1 text-sm font-medium text-danger-700">{errorMessage(error)}</p> : null}
+        </div>
+      </div>
+      <Button
+        variant="primary"
+        loading={update.isPending}
+        onClick={async () => {
+          setError(null);
+          try {
+            await update.mutateAsync({ id: ticket.id, status: 'closed' });
+            toast(`${ticket.ref} is closed. Thank you.`);
+          } catch (e) {
+            setError(e);
+          }
+        }}
+      >
+        Close ticket
+      </Button>
+    </div>
+  );
+}

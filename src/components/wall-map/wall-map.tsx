@@ -1,0 +1,677 @@
+import clsx from 'clsx';
+import { Maximize2, Minus, Plus } from 'lucide-react';
+import {
+  memo,
+  useCallback,
+  useEffect,
+  useMemo,
+  useRef,
+  useState,
+  type KeyboardEvent as ReactKeyboardEvent,
+  type MouseEvent as ReactMouseEvent,
+  type PointerEvent as ReactPointerEvent,
+  type ReactNode,
+} from 'react';
+import {
+  maxScaleFor,
+  mirrorViewBox,
+  panBy,
+  revealRect,
+  rulerStep,
+  scaleOf,
+  stepFrom,
+  wallLayout,
+  zoomAt,
+  type GridPosition,
+  type Rect,
+  type WallLayout,
+  type WallView,
+} from '@/components/wall-map/wall-map-geometry';
+import { cellTones, toneStyles, type CellTone } from '@/components/wall-map/wall-map-tones';
+
+export type { GridPosition } from '@/components/wall-map/wall-map-geometry';
+export type { CellTone } from '@/components/wall-map/wall-map-tones';
+/** `C{column}·R{row}`: the one way positions are written (shared with the server). */
+export { positionLabel } from '@shared/schemas/register';
+
+export interface WallMapCell extends GridPosition {
+  /** Shown under the position label when the zoom allows. */
+  serial?: string;
+  /** Default 'installed' when a serial is given, else 'empty'. */
+  tone?: CellTone;
+  /** 0..1: repair heat (reports), drawn as a tint over the cell. */
+  heat?: number;
+}
+
+export interface WallMapGeometry {
+  /** In SVG user units, already mirrored for the rear view. */
+  cellRect: (p: GridPosition) => { x: number; y: number; width: number; height: number };
+  center: (p: GridPosition) => { x: number; y: number };
+}
+
+export interface WallMapProps {
+  columns: number;
+  rows: number;
+  cells?: WallMapCell[];
+  /** Controlled. The rear view mirrors left ↔ right; labels stay C{col}·R{row}. */
+  view?: WallView;
+  /** Drawn highlighted (e.g. reported or tapped cells). */
+  selected?: GridPosition[];
+  /** Click or tap, Enter or Space on a focused cell. */
+  onCellActivate?: (p: GridPosition) => void;
+  /**
+   * Drawn above the cells in the same SVG (run arrows…). It ignores the pointer so taps still
+   * reach the cells; give an element `pointerEvents="auto"` to make it clickable.
+   */
+  overlay?: (g: WallMapGeometry) => ReactNode;
+  ariaLabel: string;
+  /** Default true. */
+  showLegend?: boolean;
+  /** A cabinet's height ÷ width (e.g. 1 for 500 × 500 mm, 2 for 500 × 1000 mm). Default 1. */
+  cellAspect?: number;
+  className?: string;
+}
+
+const viewCaptions: Record<WallView, string> = {
+  front: 'Front view (as seen by the audience)',
+  rear: 'Rear view (as seen by the technician behind the wall)',
+};
+
+const keyOf = (p: GridPosition) => `${p.column}:${p.row}`;
+
+/** How much text a cell can carry at its size on screen. */
+type TextLevel = 'none' | 'label' | 'full';
+const textLevelFor = (cellPx: number): TextLevel => (cellPx >= 84 ? 'full' : cellPx >= 40 ? 'label' : 'none');
+
+function toneOf(cell: WallMapCell | undefined): CellTone {
+  if (!cell) return 'empty';
+  return cell.tone ?? (cell.serial ? 'installed' : 'empty');
+}
+
+/** The accessible name of a cell: "C4·R2, serial ABC123, installed". */
+export function cellName(p: GridPosition, cell: WallMapCell | undefined): string {
+  const tone = toneOf(cell);
+  const parts = [`C${p.column}·R${p.row}`];
+  if (cell?.serial) parts.push(`serial ${cell.serial}`);
+  parts.push(tone === 'empty' ? 'empty' : toneStyles[tone].label.toLowerCase());
+  if (cell?.heat && cell.heat > 0) parts.push(`repair heat ${Math.round(Math.min(1, cell.heat) * 100)} %`);
+  return parts.join(', ');
+}
+
+// ---------------------------------------------------------------------------------------------
+// One cell: plain SVG, memoised, no handlers of its own (the map listens once for all of them).
+// ---------------------------------------------------------------------------------------------
+interface MapCellProps {
+  column: number;
+  row: number;
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+  tone: CellTone;
+  serial?: string;
+  heat?: number;
+  selected: boolean;
+  tabbable: boolean;
+  textLevel: TextLevel;
+  name: string;
+  interactive: boolean;
+}
+
+const MapCell = memo(function MapCell({
+  column,
+  row,
+  x,
+  y,
+  width,
+  height,
+  tone,
+  serial,
+  heat,
+  selected,
+  tabbable,
+  textLevel,
+  name,
+  interactive,
+}: MapCellProps) {
+  const style = toneStyles[tone];
+  const size = Math.min(width, height);
+  const label = `C${column}·R${row}`;
+  const showSerial = textLevel === 'full' && serial;
+  const labelSize = size * 0.2;
+  // Long serials shrink to fit the cell (about 0.6 em per character in the UI font).
+  const serialSize = serial ? Math.min(size * 0.15, (width * 0.88) / (0.62 * serial.length)) : 0;
+  const cx = x + width / 2;
+  const cy = y + height / 2;
+  return (
+    <g
+      role="gridcell"
+      data-c={column}
+      data-r={row}
+      tabIndex={tabbable ? 0 : -1}
+      aria-label={name}
+      aria-selected={selected}
+      className={clsx('group outline-none', interactive && 'cursor-pointer')}
+    >
+      <rect
+        x={x}
+        y={y}
+        width={width}
+        height={height}
+        rx={4}
+        className={clsx(style.fill, style.stroke, interactive && 'group-hover:stroke-ink-800')}
+        strokeWidth={tone === 'empty' ? 2 : 2.5}
+        strokeDasharray={tone === 'empty' ? '7 5' : undefined}
+      />
+      {heat && heat > 0 ? (
+        <rect x={x} y={y} width={width} height={height} rx={4} className="fill-state-breached-dot" fillOpacity={0.12 + 0.6 * Math.min(1, heat)} />
+      ) : null}
+      {tone === 'open_ticket' ? (
+        // A mark as well as a colour: colour is never the only signal.
+        <path
+          d={`M ${x + width - size * 0.3} ${y + 2} L ${x + width - 2} ${y + 2} L ${x + width - 2} ${y + size * 0.3} Z`}
+          className="fill-state-open-ticket-dot"
+        />
+      ) : null}
+      {selected ? (
+        <rect
+          x={x + 5}
+          y={y + 5}
+          width={width - 10}
+          height={height - 10}
+          rx={3}
+          fill="none"
+          className="stroke-amber-500"
+          strokeWidth={7}
+        />
+      ) : null}
+      {textLevel !== 'none' ? (
+        <text
+          x={cx}
+          y={showSerial ? cy - labelSize * 0.25 : cy}
+          textAnchor="middle"
+          dominantBaseline="central"
+          fontSize={labelSize}
+          fontWeight={600}
+          className={clsx(style.text, 'pointer-events-none select-none')}
+        >
+          {label}
+        </text>
+      ) : null}
+      {showSerial ? (
+        <text
+          x={cx}
+          y={cy + labelSize * 0.95}
+          textAnchor="middle"
+          dominantBaseline="central"
+          fontSize={serialSize}
+          className={clsx(style.text, 'pointer-events-none select-none font-mono')}
+        >
+          {serial}
+        </text>
+      ) : null}
+    </g>
+  );
+});
+
+function Rulers({ layout, step }: { layout: WallLayout; step: number }) {
+  const numbers: ReactNode[] = [];
+  const fontSize = Math.min(22, layout.cellWidth * 0.22);
+  for (let c = 1; c <= layout.columns; c += 1) {
+    if (c !== 1 && c % step !== 0) continue;
+    numbers.push(
+      <text key={`c${c}`} x={layout.columnCenterX(c)} y={layout.grid.y / 2} textAnchor="middle" dominantBaseline="central" fontSize={fontSize}>
+        C{c}
+      </text>,
+    );
+  }
+  for (let r = 1; r <= layout.rows; r += 1) {
+    if (r !== 1 && r % step !== 0) continue;
+    numbers.push(
+      <text key={`r${r}`} x={layout.grid.x / 2} y={layout.rowCenterY(r)} textAnchor="middle" dominantBaseline="central" fontSize={fontSize}>
+        R{r}
+      </text>,
+    );
+  }
+  return (
+    <g aria-hidden="true" className="pointer-events-none select-none fill-stone-600 font-medium">
+      {numbers}
+    </g>
+  );
+}
+
+// ---------------------------------------------------------------------------------------------
+// The map
+// ---------------------------------------------------------------------------------------------
+interface ViewState {
+  key: string;
+  layout: WallLayout;
+  vb: Rect;
+}
+
+/**
+ * The wall's grid of cabinets as an SVG: front or rear view, zoom (wheel with Ctrl or when
+ * zoomed in, pinch, + − buttons) and pan (drag), one tab stop with arrow keys between cells.
+ * Pure presentation: the caller passes the cells and handles activation.
+ */
+export function WallMap({
+  columns,
+  rows,
+  cells,
+  view = 'front',
+  selected,
+  onCellActivate,
+  overlay,
+  ariaLabel,
+  showLegend = true,
+  cellAspect = 1,
+  className,
+}: WallMapProps) {
+  const svgRef = useRef<SVGSVGElement>(null);
+  const layout = useMemo(() => wallLayout(columns, rows, view, cellAspect), [columns, rows, view, cellAspect]);
+  const maxScale = maxScaleFor(columns, rows);
+  const shapeKey = `${columns}x${rows}x${cellAspect}`;
+
+  // The visible window follows the layout: a new grid starts whole; a view switch mirrors it.
+  const [viewState, setViewState] = useState<ViewState>({ key: `${shapeKey}:${view}`, layout, vb: layout.content });
+  let vb = viewState.vb;
+  if (viewState.key !== `${shapeKey}:${view}`) {
+    const sameShape = viewState.key.startsWith(`${shapeKey}:`);
+    vb = sameShape ? mirrorViewBox(viewState.vb, viewState.layout, layout, maxScale) : layout.content;
+    setViewState({ key: `${shapeKey}:${view}`, layout, vb });
+  }
+  const vbRef = useRef(vb);
+  vbRef.current = vb;
+  const setVb = useCallback(
+    (next: Rect | ((current: Rect) => Rect)) =>
+      setViewState((s) => ({ ...s, vb: typeof next === 'function' ? next(s.vb) : next })),
+    [],
+  );
+
+  // The map's size on screen decides how much text the cells can carry.
+  const [size, setSize] = useState({ width: 0, height: 0 });
+  useEffect(() => {
+    const svg = svgRef.current;
+    if (!svg || typeof ResizeObserver === 'undefined') return;
+    const observer = new ResizeObserver(([entry]) => {
+      const { width, height } = entry.contentRect;
+      setSize((s) => (s.width === width && s.height === height ? s : { width, height }));
+    });
+    observer.observe(svg);
+    return () => observer.disconnect();
+  }, []);
+  const pxPerUnit = size.width > 0 ? Math.min(size.width / vb.width, size.height / vb.height) : 0.6;
+  const cellPx = Math.min(layout.cellWidth, layout.cellHeight) * pxPerUnit;
+  const textLevel = textLevelFor(cellPx);
+  const step = rulerStep(layout.cellWidth * pxPerUnit);
+  const scale = scaleOf(vb, layout.content);
+
+  const cellIndex = useMemo(() => {
+    const index = new Map<string, WallMapCell>();
+    for (const cell of cells ?? []) index.set(keyOf(cell), cell);
+    return index;
+  }, [cells]);
+  const selectedKeys = useMemo(() => new Set((selected ?? []).map(keyOf)), [selected]);
+
+  // Roving tab stop: one cell is in the tab order; arrow keys move it.
+  const [focusPos, setFocusPos] = useState<GridPosition>(() => selected?.[0] ?? { column: 1, row: 1 });
+  const focus = {
+    column: Math.min(columns, Math.max(1, focusPos.column)),
+    row: Math.min(rows, Math.max(1, focusPos.row)),
+  };
+  const focusKey = keyOf(focus);
+  const [keyboardRing, setKeyboardRing] = useState(false);
+  const pendingFocus = useRef(false);
+
+  useEffect(() => {
+    if (!pendingFocus.current) return;
+    pendingFocus.current = false;
+    const el = svgRef.current?.querySelector<SVGGElement>(`[data-c="${focus.column}"][data-r="${focus.row}"]`);
+    el?.focus({ preventScroll: true });
+  }, [focus.column, focus.row]);
+
+  const interactive = Boolean(onCellActivate);
+  const cellLayer = useMemo(() => {
+    const rowGroups: ReactNode[] = [];
+    for (let r = 1; r <= rows; r += 1) {
+      const rowCells: ReactNode[] = [];
+      for (let c = 1; c <= columns; c += 1) {
+        const key = `${c}:${r}`;
+        const cell = cellIndex.get(key);
+        const rect = layout.cellRect({ column: c, row: r });
+        rowCells.push(
+          <MapCell
+            key={key}
+            column={c}
+            row={r}
+            x={rect.x}
+            y={rect.y}
+            width={rect.width}
+            height={rect.height}
+            tone={toneOf(cell)}
+            serial={cell?.serial}
+            heat={cell?.heat}
+            selected={selectedKeys.has(key)}
+            tabbable={key === focusKey}
+            textLevel={textLevel}
+            name={cellName({ column: c, row: r }, cell)}
+            interactive={interactive}
+          />,
+        );
+      }
+      rowGroups.push(
+        <g key={r} role="row">
+          {rowCells}
+        </g>,
+      );
+    }
+    return rowGroups;
+  }, [columns, rows, layout, cellIndex, selectedKeys, focusKey, textLevel, interactive]);
+
+  const geometry = useMemo<WallMapGeometry>(() => ({ cellRect: layout.cellRect, center: layout.center }), [layout]);
+
+  // ---- zoom and pan ----
+  const toUser = useCallback((clientX: number, clientY: number) => {
+    const svg = svgRef.current;
+    const ctm = svg?.getScreenCTM();
+    if (!svg || !ctm) return null;
+    const p = new DOMPoint(clientX, clientY).matrixTransform(ctm.inverse());
+    return { x: p.x, y: p.y };
+  }, []);
+
+  const zoomBy = useCallback(
+    (factor: number, at?: { x: number; y: number }) =>
+      setVb((current) => zoomAt(current, layout.content, factor, at ?? { x: current.x + current.width / 2, y: current.y + current.height / 2 }, maxScale)),
+    [layout, maxScale, setVb],
+  );
+
+  useEffect(() => {
+    const svg = svgRef.current;
+    if (!svg) return;
+    const onWheel = (e: WheelEvent) => {
+      // Plain scrolling keeps scrolling the page until the map is zoomed in.
+      const zoomed = scaleOf(vbRef.current, layout.content) > 1.001;
+      if (!e.ctrlKey && !e.metaKey && !zoomed) return;
+      e.preventDefault();
+      const delta = e.deltaMode === 1 ? e.deltaY * 16 : e.deltaY;
+      const at = toUser(e.clientX, e.clientY);
+      if (at) zoomBy(Math.exp(-delta * 0.0015), at);
+    };
+    svg.addEventListener('wheel', onWheel, { passive: false });
+    return () => svg.removeEventListener('wheel', onWheel);
+  }, [layout, toUser, zoomBy]);
+
+  const pointers = useRef(new Map<number, { x: number; y: number }>());
+  const gesture = useRef<{
+    startX: number;
+    startY: number;
+    vb: Rect;
+    pxPerUnit: number;
+    moved: boolean;
+    pinch?: { distance: number; at: { x: number; y: number }; vb: Rect };
+  } | null>(null);
+  const suppressClick = useRef(false);
+
+  const onPointerDown = (e: ReactPointerEvent<SVGSVGElement>) => {
+    if (e.pointerType === 'mouse' && e.button !== 0) return;
+    setKeyboardRing(false);
+    pointers.current.set(e.pointerId, { x: e.clientX, y: e.clientY });
+    suppressClick.current = false;
+    const ctm = svgRef.current?.getScreenCTM();
+    if (pointers.current.size === 1) {
+      gesture.current = { startX: e.clientX, startY: e.clientY, vb: vbRef.current, pxPerUnit: ctm?.a ?? 1, moved: false };
+    } else if (pointers.current.size === 2 && gesture.current) {
+      const [a, b] = [...pointers.current.values()];
+      const at = toUser((a.x + b.x) / 2, (a.y + b.y) / 2);
+      if (at) gesture.current.pinch = { distance: Math.hypot(a.x - b.x, a.y - b.y) || 1, at, vb: vbRef.current };
+      gesture.current.moved = true;
+    }
+  };
+
+  const onPointerMove = (e: ReactPointerEvent<SVGSVGElement>) => {
+    const g = gesture.current;
+    if (!g || !pointers.current.has(e.pointerId)) return;
+    pointers.current.set(e.pointerId, { x: e.clientX, y: e.clientY });
+    if (g.pinch && pointers.current.size >= 2) {
+      const [a, b] = [...pointers.current.values()];
+      const factor = Math.hypot(a.x - b.x, a.y - b.y) / g.pinch.distance;
+      setVb(zoomAt(g.pinch.vb, layout.content, factor, g.pinch.at, maxScale));
+      return;
+    }
+    const dx = e.clientX - g.startX;
+    const dy = e.clientY - g.startY;
+    if (!g.moved && Math.hypot(dx, dy) > 5) {
+      g.moved = true;
+      svgRef.current?.setPointerCapture(e.pointerId);
+    }
+    if (g.moved && scaleOf(g.vb, layout.content) > 1.001) {
+      setVb(panBy(g.vb, layout.content, -dx / g.pxPerUnit, -dy / g.pxPerUnit, maxScale));
+    }
+  };
+
+  const onPointerEnd = (e: ReactPointerEvent<SVGSVGElement>) => {
+    pointers.current.delete(e.pointerId);
+    const g = gesture.current;
+    if (!g) return;
+    if (g.moved) suppressClick.current = true;
+    if (pointers.current.size < 2) g.pinch = undefined;
+    if (pointers.current.size === 0) gesture.current = null;
+  };
+
+  const activate = (p: GridPosition) => {
+    setFocusPos(p);
+    onCellActivate?.(p);
+  };
+
+  const cellFromTarget = (target: EventTarget | null): GridPosition | null => {
+    const el = (target as Element | null)?.closest?.('[data-c]');
+    if (!el) return null;
+    return { column: Number(el.getAttribute('data-c')), row: Number(el.getAttribute('data-r')) };
+  };
+
+  const onClick = (e: ReactMouseEvent<SVGSVGElement>) => {
+    if (suppressClick.current) {
+      suppressClick.current = false;
+      return;
+    }
+    const p = cellFromTarget(e.target);
+    if (p) activate(p);
+  };
+
+  const onKeyDown = (e: ReactKeyboardEvent<SVGSVGElement>) => {
+    const target = cellFromTarget(e.target);
+    if (!target) return;
+    setKeyboardRing(true);
+    if (e.key === 'Enter' || e.key === ' ') {
+      e.preventDefault();
+      activate(target);
+      return;
+    }
+    if (e.key === '+' || e.key === '=') {
+      e.preventDefault();
+      zoomBy(1.5, layout.center(target));
+      return;
+    }
+    if (e.key === '-') {
+      e.preventDefault();
+      zoomBy(1 / 1.5, layout.center(target));
+      return;
+    }
+    if (e.key === '0') {
+      e.preventDefault();
+      setVb(layout.content);
+      return;
+    }
+    const next = stepFrom(target, e.key, columns, rows, view, e.ctrlKey || e.metaKey);
+    if (!next) return;
+    e.preventDefault();
+    pendingFocus.current = true;
+    setFocusPos(next);
+    setVb((current) => revealRect(current, layout.content, layout.cellRect(next), maxScale));
+  };
+
+  const [focusWithin, setFocusWithin] = useState(false);
+  const ring = focusWithin && keyboardRing ? layout.cellRect(focus) : null;
+
+  // ---- legend ----
+  const legend = useMemo(() => {
+    const counts = new Map<CellTone, number>();
+    let filled = 0;
+    let heat = false;
+    for (const cell of cells ?? []) {
+      if (cell.column < 1 || cell.row < 1 || cell.column > columns || cell.row > rows) continue;
+      const tone = toneOf(cell);
+      counts.set(tone, (counts.get(tone) ?? 0) + 1);
+      if (tone !== 'empty') filled += 1;
+      if (cell.heat && cell.heat > 0) heat = true;
+    }
+    // Positions without a cell are empty too.
+    counts.set('empty', columns * rows - filled);
+    return { counts, heat };
+  }, [cells, columns, rows]);
+
+  const zoomPercent = Math.round(scale * 100);
+
+  return (
+    <div className={clsx('space-y-2', className)}>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <p className="text-sm font-medium text-stone-700" data-testid="wall-map-caption">
+          {viewCaptions[view]}
+        </p>
+        <div className="ml-auto flex items-center gap-1" role="group" aria-label="Zoom">
+          <span className="mr-1 min-w-[3.5rem] text-right text-xs tabular-nums text-stone-600" aria-live="polite">
+            {zoomPercent} %
+          </span>
+          <MapButton label="Zoom out" onClick={() => zoomBy(1 / 1.5)} disabled={scale <= 1.001}>
+            <Minus className="h-4 w-4" aria-hidden="true" />
+          </MapButton>
+          <MapButton label="Zoom in" onClick={() => zoomBy(1.5)} disabled={scale >= maxScale - 0.001}>
+            <Plus className="h-4 w-4" aria-hidden="true" />
+          </MapButton>
+          <MapButton label="Show the whole wall" onClick={() => setVb(layout.content)} disabled={scale <= 1.001}>
+            <Maximize2 className="h-4 w-4" aria-hidden="true" />
+          </MapButton>
+        </div>
+      </div>
+      <div className="overflow-hidden rounded-md border border-stone-200 bg-stone-100">
+        <svg
+          ref={svgRef}
+          role="grid"
+          aria-label={`${ariaLabel}. ${viewCaptions[view]}.`}
+          aria-rowcount={rows}
+          aria-colcount={columns}
+          data-view={view}
+          viewBox={`${vb.x} ${vb.y} ${vb.width} ${vb.height}`}
+          preserveAspectRatio="xMidYMid meet"
+          className={clsx('block h-auto w-full select-none', scale > 1.001 && 'cursor-grab active:cursor-grabbing')}
+          style={{
+            aspectRatio: `${layout.content.width} / ${layout.content.height}`,
+            maxHeight: '70vh',
+            // Untouched, a finger still scrolls the page; zoomed in, it pans the map.
+            touchAction: scale > 1.001 ? 'none' : 'pan-y',
+          }}
+          onPointerDown={onPointerDown}
+          onPointerMove={onPointerMove}
+          onPointerUp={onPointerEnd}
+          onPointerCancel={onPointerEnd}
+          onClick={onClick}
+          onKeyDown={onKeyDown}
+          onFocus={() => setFocusWithin(true)}
+          onBlur={(e) => {
+            if (!e.currentTarget.contains(e.relatedTarget as Node | null)) setFocusWithin(false);
+          }}
+        >
+          <Rulers layout={layout} step={step} />
+          {cellLayer}
+          {overlay ? <g pointerEvents="none">{overlay(geometry)}</g> : null}
+          {ring ? (
+            <rect
+              x={ring.x - 5}
+              y={ring.y - 5}
+              width={ring.width + 10}
+              height={ring.height + 10}
+              rx={6}
+              fill="none"
+              strokeWidth={4}
+              className="pointer-events-none stroke-ink-700"
+            />
+          ) : null}
+        </svg>
+      </div>
+      <p className="text-xs text-stone-600">
+        {scale > 1.001 ? 'Drag to move around. ' : ''}Pinch, Ctrl + scroll or the + − buttons zoom; arrow keys move between cells.
+      </p>
+      {showLegend ? <Legend counts={legend.counts} heat={legend.heat} selected={selectedKeys.size > 0} /> : null}
+    </div>
+  );
+}
+
+function MapButton({ label, onClick, disabled, children }: { label: string; onClick: () => void; disabled?: boolean; children: ReactNode }) {
+  return (
+    <button
+      type="button"
+      onClick={onClick}
+      disabled={disabled}
+      aria-label={label}
+      title={label}
+      className="flex h-touch w-touch items-center justify-center rounded border border-stone-300 bg-white text-ink-800 shadow-sm hover:bg-stone-50 disabled:cursor-not-allowed disabled:opacity-50 md:h-9 md:w-9"
+    >
+      {children}
+    </button>
+  );
+}
+
+function Legend({ counts, heat, selected }: { counts: Map<CellTone, number>; heat: boolean; selected: boolean }) {
+  const shown = cellTones.filter((t) => (counts.get(t) ?? 0) > 0 || t === 'installed');
+  return (
+    <ul className="flex flex-wrap gap-x-4 gap-y-1.5 text-sm text-stone-700" aria-label="Legend">
+      {shown.map((tone) => (
+        <li key={tone} className="flex items-center gap-1.5">
+          <span className={clsx('relative h-4 w-4 shrink-0 rounded-sm border-2', toneStyles[tone].swatch)} aria-hidden="true">
+            {tone === 'open_ticket' ? (
+              <span className="absolute right-0 top-0 h-0 w-0 border-l-[7px] border-t-[7px] border-l-transparent border-t-state-open-ticket-dot" />
+            ) : null}
+          </span>
+          {toneStyles[tone].label}
+          <span className="tabular-nums text-stone-500">{counts.get(tone) ?? 0}</span>
+        </li>
+      ))}
+      {selected ? (
+        <li className="flex items-center gap-1.5">
+          <span className="h-4 w-4 shrink-0 rounded-sm border-[3px] border-amber-500 bg-white" aria-hidden="true" />
+          Selected
+        </li>
+      ) : null}
+      {heat ? (
+        <li className="flex items-center gap-1.5">
+          <span className="h-4 w-8 shrink-0 rounded-sm bg-gradient-to-r from-state-breached-bg to-state-breached-dot" aria-hidden="true" />
+          Repair heat (low → high)
+        </li>
+      ) : null}
+    </ul>
+  );
+}
+
+/** Front / rear switch for a wall map. */
+export function WallViewToggle({ view, onChange }: { view: WallView; onChange: (v: WallView) => void }) {
+  const option = (value: WallView, label: string, hint: string) => (
+    <button
+      type="button"
+      aria-pressed={view === value}
+      title={hint}
+      onClick={() => onChange(value)}
+      className={clsx(
+        'min-h-touch rounded px-3.5 text-base font-medium transition-colors md:min-h-9',
+        view === value ? 'bg-ink-800 text-white shadow-sm' : 'text-ink-800 hover:bg-stone-100',
+      )}
+    >
+      {label}
+    </button>
+  );
+  return (
+    <div role="group" aria-label="Wall view" className="inline-flex rounded-md border border-stone-300 bg-white p-0.5">
+      {option('front', 'Front', 'As the audience sees it')}
+      {option('rear', 'Rear', 'As the technician behind the wall sees it')}
+    </div>
+  );
+}

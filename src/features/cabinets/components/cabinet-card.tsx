@@ -1,0 +1,188 @@
+import { cabinetPatch } from '@shared/schemas/register';
+import { ArrowLeftRight, Move, Pencil, X } from 'lucide-react';
+import { useState, type ReactNode } from 'react';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { Dialog, DialogActions } from '@/components/ui/dialog';
+import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
+import { SelectField } from '@/components/ui/select-field';
+import { Spinner } from '@/components/ui/spinner';
+import { TextField } from '@/components/ui/text-field';
+import { useToast } from '@/components/ui/toast';
+import { useCabinet } from '@/features/cabinets/api/get-cabinet';
+import type { CabinetDetail, WallCabinet } from '@/features/cabinets/api/types';
+import { useUpdateCabinet } from '@/features/cabinets/api/update-cabinet';
+import { CabinetHistory } from '@/features/cabinets/components/cabinet-history';
+import { CabinetStatusPill, cabinetStatusOptions } from '@/features/cabinets/components/cabinet-status';
+import { TextAreaField } from '@/features/cabinets/components/text-area-field';
+import { errorMessage } from '@/lib/errors';
+import { formatDate } from '@/lib/format';
+
+function Fact({ label, children }: { label: string; children: ReactNode }) {
+  return (
+    <div className="min-w-0">
+      <dt className="text-xs font-semibold text-stone-600">{label}</dt>
+      <dd className="mt-0.5 break-words text-base text-stone-900">{children}</dd>
+    </div>
+  );
+}
+
+/** Model, batch, install date, where it is kept: the facts of one cabinet. */
+export function CabinetFacts({ cabinet }: { cabinet: CabinetDetail }) {
+  return (
+    <dl className="grid grid-cols-2 gap-x-4 gap-y-3">
+      <Fact label="Model">{cabinet.model.name}</Fact>
+      <Fact label="Module batch">{cabinet.batch || <span className="text-stone-500">Not recorded</span>}</Fact>
+      <Fact label="Installed on">{formatDate(cabinet.installedOn)}</Fact>
+      <Fact label="Modules">
+        {cabinet.model.modulesWide} × {cabinet.model.modulesHigh}
+      </Fact>
+      {cabinet.stockLocation ? <Fact label="Stock location">{cabinet.stockLocation.name}</Fact> : null}
+      {cabinet.notes ? (
+        <div className="col-span-2">
+          <Fact label="Notes (staff only)">
+            <span className="whitespace-pre-line">{cabinet.notes}</span>
+          </Fact>
+        </div>
+      ) : null}
+    </dl>
+  );
+}
+
+interface CabinetCardProps {
+  cabinetId: string;
+  /** What the wall map already knows, shown while the full record loads. */
+  summary?: WallCabinet;
+  /** Staff: move, swap, change status. */
+  canOperate: boolean;
+  onMove?: (cabinet: CabinetDetail) => void;
+  onSwap?: (cabinet: CabinetDetail) => void;
+  onClose?: () => void;
+  /** Leave out the "Cabinet at C3·R2" line when the dialog's title already says it. */
+  titled?: boolean;
+}
+
+/** The card of a cabinet opened from the wall map: serial, position, status, facts and whole history. */
+export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, onClose, titled = false }: CabinetCardProps) {
+  const query = useCabinet(cabinetId);
+  const cabinet = query.data;
+  const [editing, setEditing] = useState(false);
+  const serial = cabinet?.serial ?? summary?.serial ?? '';
+  const position = cabinet?.position ?? (summary ? `C${summary.column}·R${summary.row}` : null);
+  const status = cabinet?.status ?? summary?.status;
+
+  return (
+    <article aria-labelledby={`cabinet-${cabinetId}-title`} className="space-y-4" data-testid="cabinet-card">
+      <header className="flex items-start justify-between gap-3">
+        <div className="min-w-0 space-y-1">
+          {titled ? null : (
+            <p className="text-xs font-semibold uppercase tracking-wide text-stone-600">Cabinet{position ? ` at ${position}` : ''}</p>
+          )}
+          <h2 id={`cabinet-${cabinetId}-title`} className="break-all font-mono text-2xl font-semibold text-ink-950">
+            {serial}
+          </h2>
+          {status ? <CabinetStatusPill status={status} /> : null}
+          {summary && summary.openTickets > 0 ? (
+            <p className="text-sm font-medium text-state-open-ticket">
+              {summary.openTickets === 1 ? '1 open ticket names this position' : `${summary.openTickets} open tickets name this position`}
+            </p>
+          ) : null}
+        </div>
+        {onClose ? (
+          <button
+            type="button"
+            onClick={onClose}
+            className="-mr-2 -mt-1 flex h-touch w-touch shrink-0 items-center justify-center rounded text-stone-500 hover:bg-stone-100 hover:text-stone-900"
+            aria-label="Close the cabinet card"
+          >
+            <X className="h-5 w-5" aria-hidden="true" />
+          </button>
+        ) : null}
+      </header>
+
+      {canOperate && cabinet ? (
+        <div className="flex flex-wrap gap-2">
+          {cabinet.wall && onMove ? (
+            <Button size="sm" onClick={() => onMove(cabinet)} icon={<Move className="h-4 w-4" aria-hidden="true" />}>
+              Move
+            </Button>
+          ) : null}
+          {cabinet.wall && onSwap ? (
+            <Button size="sm" onClick={() => onSwap(cabinet)} icon={<ArrowLeftRight className="h-4 w-4" aria-hidden="true" />}>
+              Swap
+            </Button>
+          ) : null}
+          <Button size="sm" onClick={() => setEditing(true)} icon={<Pencil className="h-4 w-4" aria-hidden="true" />}>
+            Status and batch
+          </Button>
+        </div>
+      ) : null}
+
+      {query.isPending ? (
+        <p className="text-stone-600">
+          <Spinner className="mr-2" label="" /> Loading the cabinet…
+        </p>
+      ) : query.isError ? (
+        <Alert tone="danger" title="The cabinet could not be loaded.">
+          {errorMessage(query.error)}
+        </Alert>
+      ) : cabinet ? (
+        <>
+          <CabinetFacts cabinet={cabinet} />
+          <section aria-labelledby={`cabinet-${cabinetId}-history`} className="space-y-2 border-t border-stone-200 pt-3">
+            <h3 id={`cabinet-${cabinetId}-history`} className="text-base font-semibold">
+              History
+            </h3>
+            <CabinetHistory events={cabinet.history} />
+          </section>
+          <UpdateCabinetDialog cabinet={cabinet} open={editing} onClose={() => setEditing(false)} />
+        </>
+      ) : null}
+    </article>
+  );
+}
+
+function UpdateCabinetDialog({ cabinet, open, onClose }: { cabinet: CabinetDetail; open: boolean; onClose: () => void }) {
+  return (
+    <Dialog open={open} onClose={onClose} title={`Update ${cabinet.serial}`} description={cabinet.position ? `At ${cabinet.position} on ${cabinet.wall?.name}` : undefined}>
+      {open ? <UpdateCabinetForm cabinet={cabinet} onDone={onClose} /> : null}
+    </Dialog>
+  );
+}
+
+function UpdateCabinetForm({ cabinet, onDone }: { cabinet: CabinetDetail; onDone: () => void }) {
+  const update = useUpdateCabinet();
+  const toast = useToast();
+  const form = useZodForm(cabinetPatch, {
+    defaultValues: { status: cabinet.status, batch: cabinet.batch, notes: cabinet.notes ?? '', note: '' },
+  });
+  const status = form.watch('status');
+  const leaves = Boolean(cabinet.wall) && status !== 'installed';
+  // A cabinet goes onto a wall by being moved there, not by a status.
+  const options = cabinetStatusOptions.filter((o) => o.value !== 'installed' || cabinet.wall);
+  return (
+    <Form
+      form={form}
+      aria-label={`Update ${cabinet.serial}`}
+      onSubmit={async (values) => {
+        const saved = await update.mutateAsync({ id: cabinet.id, ...values });
+        toast(saved.wall ? `${saved.serial} is saved.` : `${saved.serial} is off the wall: ${cabinet.position ?? 'its position'} is free.`);
+        onDone();
+      }}
+    >
+      <SelectField name="status" label="Status" options={options} />
+      {leaves ? (
+        <Alert tone="info">
+          This takes the cabinet off the wall and frees {cabinet.position}. The history keeps where it was.
+        </Alert>
+      ) : null}
+      <TextField name="batch" label="Module batch / bin" autoComplete="off" hint="Modules from different batches differ slightly in colour." />
+      <TextAreaField name="notes" label="Notes" rows={3} hint="Staff only." />
+      <TextField name="note" label="Reason (kept in the history)" autoComplete="off" hint="Optional, e.g. sent to the bench for a dead receiving card." />
+      <DialogActions>
+        <Button onClick={onDone}>Cancel</Button>
+        <SubmitButton>Save</SubmitButton>
+      </DialogActions>
+    </Form>
+  );
+}

@@ -1,0 +1,78 @@
+import { positionLabel } from '@shared/schemas/register';
+import { ArrowLeftRight, ArrowRight, CircleDot, FileUp, MapPin, PackageMinus, RefreshCw, Wrench } from 'lucide-react';
+import type { CabinetEvent } from '@/features/cabinets/api/types';
+import { cabinetStatusLabels } from '@/features/cabinets/components/cabinet-status';
+import { formatDateTime } from '@/lib/format';
+
+const pos = (column: number | null, row: number | null) => (column && row ? positionLabel({ column, row }) : null);
+
+/** Where on which wall, naming the wall only when the move crossed walls. */
+function place(wallName: string | null, column: number | null, row: number | null, showWall: boolean) {
+  const p = pos(column, row);
+  if (!p) return wallName ?? 'stock';
+  return showWall && wallName ? `${p} on ${wallName}` : p;
+}
+
+/** One line that says what happened, positions written C{col}·R{row}. */
+export function describeEvent(e: CabinetEvent): string {
+  const crossWalls = Boolean(e.fromWallId && e.toWallId && e.fromWallId !== e.toWallId);
+  const from = place(e.fromWallName, e.fromColumn, e.fromRow, crossWalls);
+  const to = place(e.toWallName, e.toColumn, e.toRow, crossWalls || !e.fromWallId);
+  switch (e.kind) {
+    case 'placed':
+      return e.fromStatus && e.fromStatus !== 'installed'
+        ? `Placed at ${to} (was ${cabinetStatusLabels[e.fromStatus].toLowerCase()})`
+        : `Placed at ${to}`;
+    case 'imported':
+      return `Registered at ${to} by CSV import`;
+    case 'moved':
+      return `Moved from ${from} to ${to}`;
+    case 'swapped':
+      return `Swapped with ${e.otherSerial ?? 'another cabinet'}: from ${from} to ${to}`;
+    case 'removed':
+      return `Taken off the wall at ${from}${e.toStatus ? `: ${cabinetStatusLabels[e.toStatus].toLowerCase()}` : ''}`;
+    case 'repaired':
+      return pos(e.fromColumn, e.fromRow) ? `Repaired at ${from}` : 'Repaired';
+    case 'status_changed':
+      return `Status ${e.fromStatus ? `changed from ${cabinetStatusLabels[e.fromStatus].toLowerCase()} ` : ''}to ${
+        e.toStatus ? cabinetStatusLabels[e.toStatus].toLowerCase() : '—'
+      }`;
+    default:
+      return e.kind;
+  }
+}
+
+const icons = {
+  placed: MapPin,
+  imported: FileUp,
+  moved: ArrowRight,
+  swapped: ArrowLeftRight,
+  removed: PackageMinus,
+  repaired: Wrench,
+  status_changed: RefreshCw,
+} as const;
+
+/** The cabinet's whole life, newest first: placed, moved, swapped, repaired, removed. */
+export function CabinetHistory({ events }: { events: CabinetEvent[] }) {
+  if (events.length === 0) return <p className="text-sm text-stone-600">No history recorded.</p>;
+  return (
+    <ol className="relative space-y-3 border-l border-stone-200 pl-5" aria-label="History, newest first">
+      {events.map((e) => {
+        const Icon = icons[e.kind] ?? CircleDot;
+        return (
+          <li key={e.id} className="relative">
+            <span className="absolute -left-[1.95rem] top-0 flex h-6 w-6 items-center justify-center rounded-full border border-stone-200 bg-white text-ink-600">
+              <Icon className="h-3.5 w-3.5" aria-hidden="true" />
+            </span>
+            <p className="text-base text-stone-900">{describeEvent(e)}</p>
+            <p className="text-xs text-stone-600">
+              <time dateTime={e.createdAt}>{formatDateTime(e.createdAt)}</time>
+              {e.actorName ? ` · ${e.actorName}` : ''}
+            </p>
+            {e.note ? <p className="mt-0.5 text-sm italic text-stone-700">“{e.note}”</p> : null}
+          </li>
+        );
+      })}
+    </ol>
+  );
+}

@@ -1,0 +1,75 @@
+import { createColumnHelper } from '@tanstack/react-table';
+import { LayoutGrid } from 'lucide-react';
+import { useMemo, useState } from 'react';
+import { Badge } from '@/components/ui/badge';
+import { Button } from '@/components/ui/button';
+import { DataTable } from '@/components/ui/data-table';
+import { EmptyState } from '@/components/ui/empty-state';
+import { useCabinetModels } from '@/features/catalogue/api/get-cabinet-models';
+import type { CabinetModel } from '@/features/catalogue/api/types';
+import { EditCabinetModelDialog } from '@/features/catalogue/components/cabinet-model-form-dialog';
+
+const column = createColumnHelper<CabinetModel>();
+const n = (v: number) => v.toLocaleString('en');
+
+/** The cabinet models in the catalogue with their whole spec. */
+export function CabinetModelsTable({ canEdit }: { canEdit: boolean }) {
+  const query = useCabinetModels();
+  const [editing, setEditing] = useState<CabinetModel | null>(null);
+  const rows = query.data?.items ?? [];
+
+  const columns = useMemo(
+    () => [
+      column.accessor('name', {
+        header: 'Model',
+        meta: { alwaysVisible: true, className: 'min-w-[10rem]' },
+        cell: (c) => <span className="font-medium text-ink-950">{c.getValue()}</span>,
+      }),
+      column.accessor('maker', { header: 'Maker', cell: (c) => c.getValue() || <span className="text-stone-400">—</span> }),
+      column.accessor('pixelPitchMm', { header: 'Pitch', meta: { align: 'right' }, cell: (c) => `${c.getValue()} mm` }),
+      column.accessor((m) => `${n(m.widthMm)} × ${n(m.heightMm)}`, { id: 'size', header: 'Size (mm)', meta: { align: 'right' } }),
+      column.accessor((m) => `${m.pixelsWide} × ${m.pixelsHigh}`, { id: 'pixels', header: 'Pixels', meta: { align: 'right' } }),
+      column.accessor((m) => `${m.modulesWide} × ${m.modulesHigh}`, { id: 'modules', header: 'Modules', meta: { align: 'right' } }),
+      column.accessor((m) => `${n(m.maxPowerW)} / ${n(m.typicalPowerW)}`, { id: 'power', header: 'Power max / typ. (W)', meta: { align: 'right' } }),
+      column.accessor('weightKg', { header: 'Weight', meta: { align: 'right' }, cell: (c) => `${c.getValue()} kg` }),
+      column.accessor('brightnessNits', { header: 'Brightness', meta: { align: 'right', hiddenByDefault: true }, cell: (c) => `${n(c.getValue())} nits` }),
+      column.accessor((m) => `${m.voltageMin}–${m.voltageMax} V`, { id: 'voltage', header: 'Supply', meta: { hiddenByDefault: true } }),
+      column.accessor('environment', {
+        header: 'Use',
+        cell: (c) => <Badge tone={c.getValue() === 'outdoor' ? 'amber' : 'neutral'}>{c.getValue() === 'outdoor' ? 'Outdoor' : 'Indoor'}</Badge>,
+      }),
+      ...(canEdit
+        ? [
+            column.display({
+              id: 'actions',
+              header: () => <span className="sr-only">Actions</span>,
+              meta: { noCsv: true, alwaysVisible: true, align: 'right' as const, className: 'w-px whitespace-nowrap' },
+              cell: ({ row }) => (
+                <Button size="sm" variant="ghost" onClick={() => setEditing(row.original)} aria-label={`Edit ${row.original.name}`}>
+                  Edit
+                </Button>
+              ),
+            }),
+          ]
+        : []),
+    ],
+    [canEdit],
+  );
+
+  return (
+    <>
+      <DataTable
+        tableId="cabinet-models"
+        label="Cabinet models"
+        columns={columns}
+        data={rows}
+        getRowId={(m) => m.id}
+        isLoading={query.isPending}
+        error={query.error}
+        onRetry={() => query.refetch()}
+        empty={<EmptyState icon={LayoutGrid} title="No cabinet models yet" description="Add the models you install: walls are built from them." />}
+      />
+      <EditCabinetModelDialog model={editing} onClose={() => setEditing(null)} />
+    </>
+  );
+}

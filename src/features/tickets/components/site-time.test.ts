@@ -1,0 +1,21 @@
+import { describe, expect, it } from 'vitest';
+import { formatSiteTime, fromLocalInput, toLocalInput } from '@/features/tickets/components/site-time';
+
+// Offsets from the IANA time zone database: America/Chicago is UTC−6 in winter (CST) and
+// UTC−5 in summer (CDT); America/Phoenix keeps UTC−7 all year (no daylight saving).
+describe('site local time', () => {
+  it('shows a moment in the site’s time zone with its abbreviation', () => {
+    expect(formatSiteTime('2026-12-10T15:00:00Z', 'America/Chicago')).toBe('Thu 10 Dec, 09:00 CST');
+    expect(formatSiteTime('2026-07-10T15:00:00Z', 'America/Chicago')).toBe('Fri 10 Jul, 10:00 CDT');
+    expect(formatSiteTime('2026-07-10T15:00:00Z', 'America/Phoenix')).toBe('Fri 10 Jul, 08:00 MST');
+    expect(formatSiteTime(null, 'America/Chicago')).toBe('—');
+  });
+
+  it('reads a datetime-local value as the site’s wall-clock time, and back', () => {
+    expect(fromLocalInput('2026-12-10T09:00', 'America/Chicago')).toBe('2026-12-10T09:00:00.000-06:00');
+    expect(new Date(fromLocalInput('2026-12-10T09:00', 'America/Chicago')!).toISOString()).toBe('2026-12-10T15:00:00.000Z');
+    expect(new Date(fromLocalInput('2026-07-10T09:00', 'America/Phoenix')!).toISOString()).toBe('2026-07-10T16:00:00.000Z');
+    expect(toLocalInput(new Date('2026-12-10T15:00:00Z'), 'America/Chicago')).toBe('2026-12-10T09:00');
+    expect(fromLocalInput('not a date', 'America/Chicago')).toBeNull();
+  });
+});

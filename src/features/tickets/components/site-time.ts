@@ -1,0 +1,45 @@
+import { TZDate } from '@date-fns/tz';
+import { format, formatDistanceToNowStrict, isValid, parseISO } from 'date-fns';
+
+/** "CST", "EDT" or "GMT+2": the short name of a time zone at a moment. */
+export function zoneAbbreviation(date: Date, timeZone: string): string {
+  try {
+    const part = new Intl.DateTimeFormat('en-US', { timeZone, timeZoneName: 'short' }).formatToParts(date).find((p) => p.type === 'timeZoneName');
+    return part?.value ?? timeZone;
+  } catch {
+    return timeZone;
+  }
+}
+
+/**
+ * A moment in the site's local time: "Thu 10 Dec, 09:00 CST". Without a time zone (still
+ * loading), the viewer's own time.
+ */
+export function formatSiteTime(iso: string | null | undefined, timeZone: string | undefined, pattern = 'EEE d MMM, HH:mm'): string {
+  if (!iso) return '—';
+  const d = parseISO(iso);
+  if (!isValid(d)) return '—';
+  if (!timeZone) return format(d, pattern);
+  return `${format(new TZDate(d, timeZone), pattern)} ${zoneAbbreviation(d, timeZone)}`;
+}
+
+/** "in 3 hours", "5 minutes ago". */
+export function relativeTime(iso: string | null | undefined): string {
+  if (!iso) return '';
+  const d = parseISO(iso);
+  return isValid(d) ? formatDistanceToNowStrict(d, { addSuffix: true }) : '';
+}
+
+/** The value of a `datetime-local` input ("2026-12-10T09:00") for a moment, in the site's time zone. */
+export function toLocalInput(date: Date, timeZone: string): string {
+  return format(new TZDate(date, timeZone), "yyyy-MM-dd'T'HH:mm");
+}
+
+/** A `datetime-local` value read as wall-clock time at the site, as an ISO string with offset. */
+export function fromLocalInput(value: string, timeZone: string): string | null {
+  const m = value.match(/^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})$/);
+  if (!m) return null;
+  const [, y, mo, d, h, mi] = m.map(Number);
+  const at = new TZDate(y, mo - 1, d, h, mi, timeZone);
+  return isValid(at) ? at.toISOString() : null;
+}

@@ -1,0 +1,104 @@
+import { ChevronRight, Grid3x3, MapPin, Ticket } from 'lucide-react';
+import { Link } from 'react-router-dom';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import type { TicketListItem } from '@/features/tickets/api/types';
+import { ClockBadge, PriorityBadge, TicketStatusBadge } from '@/features/tickets/components/ticket-status';
+import { errorMessage } from '@/lib/errors';
+import { formatAgo, formatDateTime } from '@/lib/format';
+import type { ReactNode } from 'react';
+
+interface TicketCardListProps {
+  label: string;
+  items: TicketListItem[];
+  isLoading: boolean;
+  error: unknown;
+  onRetry: () => void;
+  hasNextPage: boolean;
+  onLoadMore: () => void;
+  isLoadingMore: boolean;
+  /** Client portal wording ("Waiting for you") and no clock (the client reads the status). */
+  forClient?: boolean;
+  empty: { title: string; description?: ReactNode; action?: ReactNode };
+}
+
+/** Tickets as cards, one per row: for the client portal and for technicians on a phone. */
+export function TicketCardList({ label, items, isLoading, error, onRetry, hasNextPage, onLoadMore, isLoadingMore, forClient = false, empty }: TicketCardListProps) {
+  if (error && items.length === 0) {
+    return (
+      <Alert tone="danger" title="The tickets could not be loaded.">
+        <p>{errorMessage(error)}</p>
+        <Button size="sm" className="mt-2" onClick={onRetry}>
+          Try again
+        </Button>
+      </Alert>
+    );
+  }
+  if (isLoading && items.length === 0) {
+    return (
+      <p className="flex items-center justify-center gap-2 py-12 text-stone-600">
+        <Spinner label="" /> Loading tickets…
+      </p>
+    );
+  }
+  if (items.length === 0) {
+    return (
+      <div className="rounded-md border border-stone-200 bg-white shadow-card">
+        <EmptyState icon={Ticket} title={empty.title} description={empty.description} action={empty.action} />
+      </div>
+    );
+  }
+  return (
+    <div className="space-y-3">
+      <ul aria-label={label} className="space-y-2">
+        {items.map((t) => (
+          <li key={t.id}>
+            <Link
+              to={paths.ticket.getHref(t.id)}
+              className="group flex items-start gap-3 rounded-md border border-stone-200 bg-white p-4 shadow-card hover:border-ink-300 hover:bg-ink-50/40"
+            >
+              <div className="min-w-0 flex-1 space-y-2">
+                <div className="flex flex-wrap items-center gap-x-2 gap-y-1">
+                  <span className="font-mono text-sm font-medium text-ink-600">{t.ref}</span>
+                  <TicketStatusBadge status={t.status} forClient={forClient} />
+                  <PriorityBadge priority={t.priority} />
+                  {!forClient && t.clockState && t.clockState !== 'on_track' ? <ClockBadge state={t.clockState} what="Service-plan clock" /> : null}
+                </div>
+                <p className="text-md font-semibold leading-snug text-ink-950 group-hover:underline">{t.title}</p>
+                <p className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-stone-600">
+                  <span className="inline-flex items-center gap-1">
+                    <MapPin className="h-3.5 w-3.5" aria-hidden="true" />
+                    {forClient ? t.site.name : `${t.client.name} · ${t.site.name}`}
+                  </span>
+                  {t.wall ? (
+                    <span className="inline-flex items-center gap-1">
+                      <Grid3x3 className="h-3.5 w-3.5" aria-hidden="true" />
+                      {t.wall.name}
+                      {t.cellCount ? ` · ${t.cellCount === 1 ? '1 cabinet' : `${t.cellCount} cabinets`}` : ''}
+                    </span>
+                  ) : null}
+                  <span title={formatDateTime(t.updatedAt)}>Updated {formatAgo(t.updatedAt)}</span>
+                </p>
+              </div>
+              <ChevronRight className="mt-1 h-5 w-5 shrink-0 text-stone-400 group-hover:text-ink-700" aria-hidden="true" />
+            </Link>
+          </li>
+        ))}
+      </ul>
+      <div className="flex flex-wrap items-center justify-between gap-3 text-sm text-stone-600">
+        <p aria-live="polite">
+          {items.length === 1 ? '1 ticket shown' : `${items.length} tickets shown`}
+          {hasNextPage ? ', more available' : ''}
+        </p>
+        {hasNextPage ? (
+          <Button size="sm" onClick={onLoadMore} loading={isLoadingMore}>
+            Load more
+          </Button>
+        ) : null}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,48 @@
+import { positionLabel } from '@shared/schemas/register';
+import { Cpu, Grid3x3, MapPin } from 'lucide-react';
+import { Card } from '@/components/ui/card';
+import type { TicketDetail } from '@/features/tickets/api/types';
+import { TicketWallMap } from '@/features/tickets/components/ticket-wall-map';
+
+/** What was reported: the description and, on a wall, the reported cells on the map. */
+export function TicketSummary({ ticket }: { ticket: TicketDetail }) {
+  return (
+    <Card title="What is wrong">
+      <div className="space-y-4">
+        {ticket.description ? (
+          <p className="whitespace-pre-wrap break-words text-base text-stone-900">{ticket.description}</p>
+        ) : (
+          <p className="text-sm text-stone-600">No description.</p>
+        )}
+        <p className="flex flex-wrap items-center gap-x-2 gap-y-1 text-sm text-stone-700">
+          <MapPin className="h-4 w-4 text-ink-600" aria-hidden="true" />
+          {ticket.site.name}
+          {ticket.wall ? (
+            <>
+              <span aria-hidden="true">·</span>
+              <Grid3x3 className="h-4 w-4 text-ink-600" aria-hidden="true" />
+              {ticket.wall.name}
+            </>
+          ) : null}
+        </p>
+        {ticket.wall ? (
+          ticket.scope === 'cells' && ticket.cells.length ? (
+            <div className="space-y-3">
+              <p className="text-sm text-stone-800">
+                <span className="font-medium">{ticket.cells.length === 1 ? 'Reported cabinet:' : `Reported cabinets (${ticket.cells.length}):`}</span>{' '}
+                {ticket.cellLabels.join(', ')}
+              </p>
+              <TicketWallMap wall={ticket.wall} selected={ticket.cells} />
+            </div>
+          ) : (
+            <p className="flex items-center gap-2 rounded-md bg-stone-100 px-3 py-2 text-sm font-medium text-stone-800">
+              {ticket.scope === 'controller' ? <Cpu className="h-4 w-4" aria-hidden="true" /> : <Grid3x3 className="h-4 w-4" aria-hidden="true" />}
+              {ticket.scope === 'controller' ? 'The controller or the signal' : 'The whole wall'}
+              {ticket.cells.length ? ` · ${ticket.cells.map(positionLabel).join(', ')}` : ''}
+            </p>
+          )
+        ) : null}
+      </div>
+    </Card>
+  );
+}

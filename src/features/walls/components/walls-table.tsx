@@ -1,0 +1,158 @@
+import { createColumnHelper, type SortingState } from '@tanstack/react-table';
+import { Grid3x3 } from 'lucide-react';
+import { useMemo, type ReactNode } from 'react';
+import { Link } from 'react-router-dom';
+import { Badge } from '@/components/ui/badge';
+import { DataTable } from '@/components/ui/data-table';
+import { EmptyState } from '@/components/ui/empty-state';
+import { FilterSearch, FilterSelect } from '@/components/ui/filters';
+import type { SelectOption } from '@/components/ui/select-field';
+import { paths } from '@/config/paths';
+import { useWalls } from '@/features/walls/api/get-walls';
+import type { WallFilters } from '@/features/walls/api/keys';
+import type { WallSummary } from '@/features/walls/api/types';
+import { mountingLabels } from '@/features/walls/components/wall-labels';
+import { formatDate } from '@/lib/format';
+
+const column = createColumnHelper<WallSummary>();
+
+interface WallsTableProps {
+  filters: WallFilters;
+  onFiltersChange: (filters: WallFilters) => void;
+  /** Choices for the filters; a filter without choices is not shown (client users have one organisation). */
+  clientOptions?: SelectOption[];
+  siteOptions?: SelectOption[];
+  modelOptions?: SelectOption[];
+  emptyAction?: ReactNode;
+}
+
+/** Every wall of the register, filtered by client, site and cabinet model; search by name. */
+export function WallsTable({ filters, onFiltersChange, clientOptions, siteOptions, modelOptions, emptyAction }: WallsTableProps) {
+  const query = useWalls(filters);
+  const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
+
+  const columns = useMemo(
+    () => [
+      column.accessor('name', {
+        header: 'Wall',
+        enableSorting: true,
+        meta: { alwaysVisible: true, className: 'min-w-[12rem]' },
+        cell: (c) => (
+          <Link to={paths.wall.getHref(c.row.original.id)} className="font-medium text-ink-800 hover:underline">
+            {c.getValue()}
+          </Link>
+        ),
+      }),
+      column.accessor('clientName', { header: 'Client' }),
+      column.accessor('siteName', {
+        header: 'Site',
+        cell: (c) => (
+          <Link to={paths.site.getHref(c.row.original.siteId)} className="text-stone-800 hover:underline">
+            {c.getValue()}
+          </Link>
+        ),
+      }),
+      column.accessor((w) => w.cabinetModel.name, { id: 'model', header: 'Cabinet model' }),
+      column.accessor((w) => `${w.columns} × ${w.rows}`, {
+        id: 'grid',
+        header: 'Grid',
+        meta: { align: 'right' },
+        cell: (c) => <span className="tabular-nums">{c.getValue()}</span>,
+      }),
+      column.accessor('cabinetCount', { header: 'Cabinets', meta: { align: 'right', hiddenByDefault: true } }),
+      column.accessor((w) => w.cabinetModel.pixelPitchMm, {
+        id: 'pitch',
+        header: 'Pitch',
+        meta: { align: 'right', csv: (w) => w.cabinetModel.pixelPitchMm },
+        cell: (c) => `${c.getValue()} mm`,
+      }),
+      column.accessor('mounting', {
+        header: 'Mounting',
+        meta: { hiddenByDefault: true, csv: (w) => mountingLabels[w.mounting] },
+        cell: (c) => mountingLabels[c.getValue()],
+      }),
+      column.accessor('installDate', { header: 'Installed', meta: { hiddenByDefault: true }, cell: (c) => formatDate(c.getValue()) }),
+      column.accessor('warrantyEnd', {
+        header: 'Warranty ends',
+        meta: { hiddenByDefault: true },
+        cell: (c) => formatDate(c.getValue()),
+      }),
+      column.accessor('openTicketCount', {
+        header: 'Open tickets',
+        meta: { align: 'right' },
+        cell: (c) => (c.getValue() > 0 ? <Badge tone="amber">{c.getValue()}</Badge> : <span className="text-stone-500">0</span>),
+      }),
+    ],
+    [],
+  );
+
+  const sorting: SortingState = [{ id: filters.sort ?? 'name', desc: filters.dir === 'desc' }];
+  const filtered = Boolean(filters.q || filters.clientId || filters.siteId || filters.cabinetModelId);
+
+  return (
+    <DataTable
+      tableId="walls"
+      label="Walls"
+      columns={columns}
+      data={rows}
+      getRowId={(w) => w.id}
+      isLoading={query.isPending}
+      error={query.error}
+      onRetry={() => query.refetch()}
+      sorting={sorting}
+      onSortingChange={(next) => {
+        const first = next[0];
+        if (first) onFiltersChange({ ...filters, sort: first.id === 'name' ? 'name' : 'createdAt', dir: first.desc ? 'desc' : 'asc' });
+      }}
+      hasNextPage={query.hasNextPage}
+      onLoadMore={() => query.fetchNextPage()}
+      isLoadingMore={query.isFetchingNextPage}
+      toolbar={
+        <>
+          <FilterSearch
+            label="Search"
+            placeholder="Wall, site or client"
+            value={filters.q ?? ''}
+            onChange={(q) => onFiltersChange({ ...filters, q: q || undefined })}
+          />
+          {clientOptions && clientOptions.length > 1 ? (
+            <FilterSelect
+              label="Client"
+              anyLabel="All clients"
+              options={clientOptions}
+              value={filters.clientId ?? ''}
+              // A site belongs to one client: a new client clears the site.
+              onChange={(v) => onFiltersChange({ ...filters, clientId: v || undefined, siteId: undefined })}
+            />
+          ) : null}
+          {siteOptions && siteOptions.length > 0 ? (
+            <FilterSelect
+              label="Site"
+              anyLabel="All sites"
+              options={siteOptions}
+              value={filters.siteId ?? ''}
+              onChange={(v) => onFiltersChange({ ...filters, siteId: v || undefined })}
+            />
+          ) : null}
+          {modelOptions && modelOptions.length > 0 ? (
+            <FilterSelect
+              label="Cabinet model"
+              anyLabel="All models"
+              options={modelOptions}
+              value={filters.cabinetModelId ?? ''}
+              onChange={(v) => onFiltersChange({ ...filters, cabinetModelId: v || undefined })}
+            />
+          ) : null}
+        </>
+      }
+      empty={
+        <EmptyState
+          icon={Grid3x3}
+          title={filtered ? 'No wall matches these filters' : 'No walls yet'}
+          description={filtered ? 'Try another name, or clear the filters.' : 'Walls are added from a site’s page.'}
+          action={filtered ? undefined : emptyAction}
+        />
+      }
+    />
+  );
+}

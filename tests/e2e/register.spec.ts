@@ -1,0 +1,128 @@
+// The register in a real browser against the real app and its demo data: the walls list, the
+// wall map's front and rear views, the cabinet card, moving a cabinet, and the CSV import.
+// The rules checked come from the product's description: positions are C{column}·R{row}
+// counted from the top-left as the audience sees the wall; the rear view mirrors left and right
+// and keeps every label; an import with a bad row imports nothing and names the line
+// (line numbers count the header as line 1, as a spreadsheet shows them).
+import { expect, test, type Locator, type Page } from '@playwright/test';
+
+const csrf = { 'X-Requested-With': 'gridkeep' };
+
+async function signIn(page: Page, email = 'office@gridkeep.test') {
+  const res = await page.request.post('/api/auth/login', { data: { email, password: 'gridkeep-demo' }, headers: csrf });
+  expect(res.status()).toBe(200);
+}
+
+const cell = (page: Page, label: string) => page.getByRole('gridcell', { name: new RegExp(`^${label},`) });
+
+async function leftEdge(locator: Locator) {
+  const box = await locator.boundingBox();
+  expect(box).not.toBeNull();
+  return box!.x;
+}
+
+test.describe('wall map', () => {
+  test('opens from the walls list; the rear view mirrors the cells and keeps their labels; a cell opens its cabinet card', async ({ page }) => {
+    await signIn(page);
+    await page.goto('/walls');
+    await page.getByRole('link', { name: 'Main hall centre wall' }).click();
+    await expect(page).toHaveURL(/\/walls\/[0-9a-f-]{36}$/);
+    await expect(page.getByRole('heading', { level: 1 })).toContainText('Main hall centre wall');
+
+    // The demo wall is 12 × 6: C1 is the leftmost column from the audience's side.
+    const c1 = cell(page, 'C1·R1');
+    const c12 = cell(page, 'C12·R1');
+    await expect(c1).toBeVisible();
+    await expect(c1.locator('text').first()).toHaveText('C1·R1');
+    const frontC1 = await leftEdge(c1);
+    const frontC12 = await leftEdge(c12);
+    expect(frontC1).toBeLessThan(frontC12);
+
+    await page.getByRole('button', { name: 'Rear', exact: true }).click();
+    await expect(page.getByText('Rear view (as seen by the technician behind the wall)')).toBeVisible();
+    await expect(page).toHaveURL(/view=rear/);
+    // Same label, mirrored position: C1 now sits where C12 was, and C12 where C1 was.
+    await expect(c1.locator('text').first()).toHaveText('C1·R1');
+    const rearC1 = await leftEdge(c1);
+    const rearC12 = await leftEdge(c12);
+    expect(rearC1).toBeGreaterThan(rearC12);
+    expect(Math.abs(rearC1 - frontC12)).toBeLessThan(1);
+    expect(Math.abs(rearC12 - frontC1)).toBeLessThan(1);
+
+    // Tapping a cell opens the cabinet card with its serial and history.
+    const target = cell(page, 'C3·R2');
+    const name = (await target.getAttribute('aria-label')) ?? '';
+    const serial = /serial ([^,]+),/.exec(name)?.[1];
+    expect(serial, `the cell's name "${name}" carries its serial`).toBeTruthy();
+    await target.click();
+    await expect(page).toHaveURL(/col=3&row=2|row=2.*col=3/);
+    const card = page.getByTestId('cabinet-card');
+    await expect(card.getByRole('heading', { level: 2 })).toHaveText(serial!);
+    await expect(card.getByRole('heading', { name: 'History' })).toBeVisible();
+    await expect(card.getByRole('list', { name: 'History, newest first' }).getByRole('listitem').first()).toBeVisible();
+    await expect(card.getByText(/C3·R2/).first()).toBeVisible();
+  });
+
+  test('keyboard: one tab stop, arrow keys move by what is seen in the rear view', async ({ page }) => {
+    await signIn(page);
+    await page.goto('/walls');
+    await page.getByRole('link', { name: 'Main hall centre wall' }).click();
+    await page.getByRole('button', { name: 'Rear', exact: true }).click();
+    await expect(page.locator('[role=gridcell][tabindex="0"]')).toHaveCount(1);
+    await cell(page, 'C5·R3').focus();
+    // From behind the wall, the cell on the right is the previous column.
+    await page.keyboard.press('ArrowRight');
+    await expect(cell(page, 'C4·R3')).toBeFocused();
+    await page.keyboard.press('ArrowDown');
+    await expect(cell(page, 'C4·R4')).toBeFocused();
+  });
+});
+
+test.describe('cabinet import and move', () => {
+  test('a file with one bad row is refused with its line number and imports nothing; a good one imports; a cabinet moves to a free cell', async ({
+    page,
+  }) => {
+    await signIn(page);
+    // A fresh 4 × 2 wall of its own, so the test never collides with the demo data.
+    const sites = await (await page.request.get('/api/sites?limit=1')).json();
+    const models = await (await page.request.get('/api/cabinet-models')).json();
+    const stamp = Date.now().toString(36).toUpperCase();
+    const created = await page.request.post('/api/walls', {
+      headers: csrf,
+      data: { siteId: sites.items[0].id, cabinetModelId: models.items[0].id, name: `Import check ${stamp}`, columns: 4, rows: 2 },
+    });
+    expect(created.status()).toBe(201);
+    const wall = await created.json();
+
+    await page.goto(`/walls/${wall.id}?tab=import`);
+    const bad = ['serial,column,row,batch', `T${stamp}-1,1,1,B7`, `T${stamp}-2,9,1,B7`, `T${stamp}-3,2,1,B7`].join('\n');
+    await page.getByLabel('CSV file').setInputFiles({ name: 'cabinets.csv', mimeType: 'text/csv', buffer: Buffer.from(bad) });
+    await page.getByRole('button', { name: 'Import' }).click();
+    await expect(page.getByText('Nothing was imported')).toBeVisible();
+    const errors = page.getByTestId('import-errors');
+    // Column 9 on a 4-column wall is line 3 of the file (the header is line 1).
+    await expect(errors.getByRole('row')).toHaveCount(2);
+    await expect(errors.getByRole('row').nth(1)).toContainText('3');
+    await expect(errors.getByRole('row').nth(1)).toContainText(`T${stamp}-2`);
+    await expect(errors.getByRole('row').nth(1)).toContainText('outside');
+    const none = await (await page.request.get(`/api/walls/${wall.id}/cabinets`)).json();
+    expect(none.items).toHaveLength(0);
+
+    const good = ['serial,column,row,batch', `T${stamp}-1,1,1,B7`, `T${stamp}-3,2,1,B7`].join('\n');
+    await page.getByLabel('CSV file').setInputFiles({ name: 'cabinets.csv', mimeType: 'text/csv', buffer: Buffer.from(good) });
+    await page.getByRole('button', { name: 'Import' }).click();
+    await expect(page.getByText('2 cabinets imported')).toBeVisible();
+
+    // Move T…-1 from C1·R1 to the free C4·R2 by tapping it on the map.
+    await page.getByRole('link', { name: 'See them on the wall map' }).click();
+    await cell(page, 'C1·R1').click();
+    const card = page.getByTestId('cabinet-card');
+    await expect(card.getByRole('heading', { level: 2 })).toHaveText(`T${stamp}-1`);
+    await card.getByRole('button', { name: 'Move' }).click();
+    await cell(page, 'C4·R2').click();
+    await page.getByRole('button', { name: 'Move to C4·R2' }).click();
+    await expect(cell(page, 'C4·R2')).toHaveAttribute('aria-label', `C4·R2, serial T${stamp}-1, installed`);
+    await expect(cell(page, 'C1·R1')).toHaveAttribute('aria-label', 'C1·R1, empty');
+    await expect(card.getByText('Moved from C1·R1 to C4·R2')).toBeVisible();
+  });
+});

@@ -1,0 +1,146 @@
+import { expect, test, type Browser, type BrowserContext, type Page } from '@playwright/test';
+
+// The ticket journey across the three audiences, against the real app with the seeded demo
+// data: a client reports a fault from a phone (two tapped cabinets and a photo), the office
+// answers in public, and the e-mail to the client shows in the development mailbox.
+
+const password = 'gridkeep-demo';
+const admin = 'admin@gridkeep.test';
+const office = 'office@gridkeep.test';
+const desktop = { viewport: { width: 1366, height: 800 } };
+const phone = { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
+
+// A 1 × 1 PNG (the PNG signature and IHDR/IDAT/IEND chunks, RFC 2083), so the server's
+// content check sees a real image.
+const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==', 'base64');
+
+async function signIn(browser: Browser, email: string, options = desktop): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await browser.newContext(options);
+  const page = await context.newPage();
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail address').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page).not.toHaveURL(/\/sign-in/);
+  return { context, page };
+}
+
+const escapeRegExp = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+
+interface Wall {
+  id: string;
+  name: string;
+  siteId: string;
+  columns: number;
+  rows: number;
+}
+
+test('a client opens a ticket with a photo and tapped cells; the office replies; the client is e-mailed', async ({ browser }, testInfo) => {
+  test.setTimeout(180_000);
+  const shot = async (page: Page, name: string) =>
+    testInfo.attach(name, { body: await page.screenshot({ fullPage: true, path: testInfo.outputPath(`${name}.png`) }), contentType: 'image/png' });
+
+  // ---- a client user of the demo data, found as the admin ----
+  const adminSession = await signIn(browser, admin);
+  const users = await adminSession.page.request.get('/api/users?role=client&limit=100');
+  expect(users.ok()).toBe(true);
+  const clientUsers = ((await users.json()) as { items: { email: string; disabled: boolean; invitePending: boolean }[] }).items.filter(
+    (u) => !u.disabled && !u.invitePending,
+  );
+  expect(clientUsers.length).toBeGreaterThan(0);
+
+  // The first of them whose organisation has a wall of at least 2 × 1 cabinets.
+  let client: { context: BrowserContext; page: Page } | undefined;
+  let clientEmail = '';
+  let wall: Wall | undefined;
+  for (const u of clientUsers) {
+    const session = await signIn(browser, u.email, phone);
+    const walls = (await (await session.page.request.get('/api/walls?limit=100')).json()) as { items: Wall[] };
+    wall = walls.items.find((w) => w.columns >= 2);
+    if (wall) {
+      client = session;
+      clientEmail = u.email;
+      break;
+    }
+    await session.context.close();
+  }
+  expect(wall, 'a client organisation with a wall in the demo data').toBeDefined();
+  const { page } = client!;
+
+  // ---- the client opens a ticket on the phone ----
+  const title = `Two dark cabinets top left ${Date.now().toString(36)}`;
+  await page.getByRole('link', { name: 'Tickets' }).click();
+  await page.getByRole('link', { name: 'Open a ticket' }).first().click();
+  await expect(page.getByRole('heading', { name: 'Open a ticket' })).toBeVisible();
+  const siteSelect = page.getByLabel('Site', { exact: true });
+  if (await siteSelect.count()) await siteSelect.selectOption(wall!.siteId);
+  await page.getByRole('radio', { name: new RegExp(`^${escapeRegExp(wall!.name)}`) }).check({ force: true });
+  await page.getByRole('gridcell', { name: /^C1·R1,/ }).click();
+  await page.getByRole('gridcell', { name: /^C2·R1,/ }).click();
+  await expect(page.getByText('2 cabinets selected:')).toBeVisible();
+  await expect(page.getByRole('button', { name: 'Unselect C1·R1' })).toBeVisible();
+  await expect(page.getByRole('button', { name: 'Unselect C2·R1' })).toBeVisible();
+  await page.getByRole('radio', { name: /^High/ }).check();
+  await page.getByLabel('In a few words').fill(title);
+  await page.getByLabel('What do you see?').fill('Both cabinets went black during the evening service; the rest of the wall is fine.');
+  await page.getByLabel('Add photos or a video').setInputFiles({ name: 'fault.png', mimeType: 'image/png', buffer: png });
+  await expect(page.getByRole('progressbar', { name: 'Upload of fault.png' })).toBeVisible();
+  await shot(page, 'client-new-ticket-phone');
+  await page.getByRole('button', { name: 'Send the ticket' }).click();
+
+  // The ticket page, with the photo and the two cells.
+  await expect(page).toHaveURL(/\/tickets\/[0-9a-f-]{36}$/, { timeout: 20_000 });
+  const ticketUrl = page.url();
+  await expect(page.getByRole('heading', { level: 1 })).toContainText(title);
+  const ref = ((await page.getByRole('heading', { level: 1 }).textContent()) ?? '').match(/GK-\d+/)?.[0];
+  expect(ref).toBeTruthy();
+  await expect(page.getByText('Reported cabinets (2):')).toBeVisible();
+  await expect(page.getByText('C1·R1, C2·R1')).toBeVisible();
+  await expect(page.getByRole('gridcell', { name: /^C1·R1,/ })).toHaveAttribute('aria-selected', 'true');
+  await expect(page.getByRole('img', { name: 'fault.png' })).toBeVisible();
+  await shot(page, 'client-ticket-phone');
+
+  // What the server stored: the two cells, the priority, and the photo on the ticket.
+  const ticketId = ticketUrl.split('/').pop()!;
+  const stored = await (await page.request.get(`/api/tickets/${ticketId}`)).json();
+  expect(stored).toMatchObject({ status: 'new', priority: 'high', scope: 'cells', cellLabels: ['C1·R1', 'C2·R1'], wall: { id: wall!.id } });
+  const files = await (await page.request.get(`/api/tickets/${ticketId}/attachments`)).json();
+  expect(files.items).toHaveLength(1);
+  expect(files.items[0]).toMatchObject({ fileName: 'fault.png', contentType: 'image/png', kind: 'photo', sizeBytes: png.length });
+
+  // ---- the office finds it in the list and answers in public ----
+  const desk = await signIn(browser, office);
+  await desk.page.goto('/tickets');
+  await desk.page.getByLabel('Search', { exact: true }).fill(ref!);
+  const row = desk.page.getByRole('row').filter({ hasText: title });
+  await expect(row).toBeVisible();
+  await shot(desk.page, 'office-tickets-desktop');
+  await row.getByRole('link', { name: title }).click();
+  await expect(desk.page).toHaveURL(ticketUrl);
+  await expect(desk.page.getByRole('heading', { level: 1 })).toContainText(ref!);
+
+  const reply = `We will bring two cabinets from the site kit tomorrow (${ref}).`;
+  await expect(desk.page.getByRole('radio', { name: 'Public reply' })).toBeChecked();
+  await desk.page.getByLabel('Reply to the client').fill(reply);
+  await desk.page.getByRole('button', { name: 'Send public reply' }).click();
+  const comment = desk.page.getByRole('article').filter({ hasText: reply });
+  await expect(comment).toBeVisible();
+  await expect(comment).not.toContainText('Internal — not visible to the client');
+  await shot(desk.page, 'office-ticket-desktop');
+
+  // The client sees the reply on their ticket.
+  await page.reload();
+  await expect(page.getByRole('article').filter({ hasText: reply })).toBeVisible();
+
+  // ---- the admin finds the e-mail to the client in the development mailbox ----
+  await adminSession.page.goto('/admin/mailbox');
+  const subject = `New reply on ${ref}: ${title}`;
+  // The mail worker polls the outbox every 2 s and the page refreshes itself every 5 s.
+  const mail = adminSession.page.getByRole('button').filter({ hasText: subject }).filter({ hasText: clientEmail });
+  await expect(mail).toBeVisible({ timeout: 45_000 });
+  await mail.click();
+  await expect(adminSession.page.getByText(reply)).toBeVisible();
+  await expect(adminSession.page.getByText(new RegExp(`/tickets/${ticketId}`))).toBeVisible();
+
+  await Promise.all([client!.context.close(), desk.context.close(), adminSession.context.close()]);
+});
