@@ -1,13 +1,12 @@
-import { and, asc, desc, eq, ilike, isNotNull, isNull, notInArray, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, ilike, isNotNull, isNull, notInArray, sql } from 'drizzle-orm';
 import type { AnyPgColumn } from 'drizzle-orm/pg-core';
 import type { ClientInput, ClientPatch, ContactInput, ContactPatch, ListClientsQuery } from '../../shared/schemas/register.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { clients, contacts, servicePlans, sites } from '../db/schema/clients.js';
-import { tickets } from '../db/schema/tickets.js';
-import { walls } from '../db/schema/walls.js';
 import { badRequest } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
+import { clientOpenTicketCount, clientSiteCount, clientWallCount, siteWallCount } from './counts.js';
 import { afterCursor, decodeCursor, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 
@@ -21,8 +20,6 @@ export function orderFor(column: AnyPgColumn, id: AnyPgColumn, dir: 'asc' | 'des
 
 export const cursorValue = (v: unknown) => (v instanceof Date ? v.toISOString() : v);
 
-const openTickets = (clientColumn: AnyPgColumn | SQL) =>
-  sql<number>`(select count(*)::int from ${tickets} where ${tickets.clientId} = ${clientColumn} and ${tickets.status} not in ('resolved','closed'))`;
 
 export async function listClients(actor: Actor, query: ListClientsQuery) {
   const sortColumn = query.sort === 'createdAt' ? clients.createdAt : clients.name;
@@ -34,9 +31,9 @@ export async function listClients(actor: Actor, query: ListClientsQuery) {
       servicePlanName: servicePlans.name,
       archivedAt: clients.archivedAt,
       createdAt: clients.createdAt,
-      siteCount: sql<number>`(select count(*)::int from ${sites} where ${sites.clientId} = ${clients.id} and ${sites.archivedAt} is null)`,
-      wallCount: sql<number>`(select count(*)::int from ${walls} where ${walls.clientId} = ${clients.id} and ${walls.archivedAt} is null)`,
-      openTicketCount: openTickets(clients.id),
+      siteCount: clientSiteCount,
+      wallCount: clientWallCount,
+      openTicketCount: clientOpenTicketCount,
     })
     .from(clients)
     .leftJoin(servicePlans, eq(servicePlans.id, clients.servicePlanId))
@@ -94,7 +91,7 @@ export async function getClient(actor: Actor, id: string) {
       city: sites.city,
       region: sites.region,
       timeZone: sites.timeZone,
-      wallCount: sql<number>`(select count(*)::int from ${walls} where ${walls.siteId} = ${sites.id} and ${walls.archivedAt} is null)`,
+      wallCount: siteWallCount,
     })
     .from(sites)
     .where(and(eq(sites.clientId, id), isNull(sites.archivedAt)))

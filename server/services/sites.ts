@@ -1,4 +1,4 @@
-import { and, eq, ilike, isNull, or, sql } from 'drizzle-orm';
+import { and, eq, ilike, isNull, or } from 'drizzle-orm';
 import type { ListSitesQuery, SiteInput, SitePatch } from '../../shared/schemas/register.js';
 import { db } from '../db/client.js';
 import { clients, contacts, sites } from '../db/schema/clients.js';
@@ -6,6 +6,7 @@ import { walls } from '../db/schema/walls.js';
 import { badRequest } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
+import { siteWallCount } from './counts.js';
 import { cursorValue, likePattern, orderFor } from './clients.js';
 import { afterCursor, decodeCursor, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
@@ -24,7 +25,7 @@ export async function listSites(actor: Actor, query: ListSitesQuery) {
       country: sites.country,
       timeZone: sites.timeZone,
       createdAt: sites.createdAt,
-      wallCount: sql<number>`(select count(*)::int from ${walls} where ${walls.siteId} = ${sites.id} and ${walls.archivedAt} is null)`,
+      wallCount: siteWallCount,
     })
     .from(sites)
     .innerJoin(clients, eq(clients.id, sites.clientId))

@@ -6,12 +6,12 @@ import { cabinetModels, cabinets, controllers, walls } from '../db/schema/walls.
 import { badRequest } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
+import { cellOpenTicketCount, wallOpenTicketCount } from './counts.js';
 import { presentModel } from './catalogue.js';
 import { cursorValue, likePattern, orderFor } from './clients.js';
 import { afterCursor, decodeCursor, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 
-const openTicketCount = sql<number>`(select count(*)::int from tickets t where t.wall_id = ${walls.id} and t.status not in ('resolved','closed'))`;
 
 export async function listWalls(actor: Actor, query: ListWallsQuery) {
   const sortColumn = query.sort === 'createdAt' ? walls.createdAt : walls.name;
@@ -33,7 +33,7 @@ export async function listWalls(actor: Actor, query: ListWallsQuery) {
       cabinetModelName: cabinetModels.name,
       pixelPitchMm: cabinetModels.pixelPitchMm,
       createdAt: walls.createdAt,
-      openTicketCount,
+      openTicketCount: wallOpenTicketCount,
     })
     .from(walls)
     .innerJoin(sites, eq(sites.id, walls.siteId))
@@ -182,7 +182,7 @@ export async function wallCabinets(actor: Actor, id: string) {
       batch: cabinets.batch,
       status: cabinets.status,
       installedOn: cabinets.installedOn,
-      openTickets: sql<number>`(select count(*)::int from tickets t where t.wall_id = ${cabinets.wallId} and t.status not in ('resolved','closed') and t.cells @> jsonb_build_array(jsonb_build_object('column', ${cabinets.column}, 'row', ${cabinets.row})))`,
+      openTickets: cellOpenTicketCount(id),
     })
     .from(cabinets)
     .where(eq(cabinets.wallId, id))

@@ -42,6 +42,33 @@ describe('clients, sites and walls', () => {
     expect(detail.body.notes).toBe('Pays on 30 days');
   });
 
+  it('counts sites, walls and open tickets per row (each count its own, never another table’s)', async () => {
+    const { client, site, wall } = await newWall(3, 2);
+    const second = await office.post('/api/sites', { clientId: client.id, name: 'Annex', timeZone: 'America/Chicago' });
+    expect(second.status).toBe(201);
+    const a = (await office.post(`/api/walls/${wall.id}/cabinets`, { serial: unique('CNT'), column: 1, row: 1 })).body;
+    await office.post(`/api/walls/${wall.id}/cabinets`, { serial: unique('CNT'), column: 2, row: 1 });
+    const ticket = await office.post('/api/tickets', { siteId: site.id, wallId: wall.id, cells: [{ column: 1, row: 1 }], title: 'Dark cabinet', priority: 'high' });
+    expect(ticket.status).toBe(201);
+    // A ticket on another wall at the same cell must not count here.
+    const other = await newWall(3, 2);
+    await office.post('/api/tickets', { siteId: other.site.id, wallId: other.wall.id, cells: [{ column: 2, row: 1 }], title: 'Elsewhere', priority: 'low' });
+
+    const clients = await office.get(`/api/clients?q=${encodeURIComponent(client.name)}`);
+    expect(clients.body.items).toEqual([expect.objectContaining({ id: client.id, siteCount: 2, wallCount: 1, openTicketCount: 1 })]);
+    const walls = await office.get(`/api/walls?clientId=${client.id}`);
+    expect(walls.body.items).toEqual([expect.objectContaining({ id: wall.id, openTicketCount: 1 })]);
+    const sites = await office.get(`/api/sites?clientId=${client.id}`);
+    expect(Object.fromEntries(sites.body.items.map((s: { name: string; wallCount: number }) => [s.name, s.wallCount]))).toEqual({ [site.name]: 1, Annex: 0 });
+    const detail = await office.get(`/api/clients/${client.id}`);
+    expect(detail.body.sites.find((s: { id: string }) => s.id === site.id).wallCount).toBe(1);
+    const map = await office.get(`/api/walls/${wall.id}/cabinets`);
+    expect(map.body.items.map((c: { id: string; openTickets: number }) => [c.id === a.id, c.openTickets])).toEqual([
+      [true, 1],
+      [false, 0],
+    ]);
+  });
+
   it('names the failing fields', async () => {
     const { site } = await createOrganisation();
     const res = await office.post('/api/walls', { siteId: site.id, name: '', cabinetModelId: 'nope', columns: 0, rows: -2 });

@@ -1,0 +1,79 @@
+// The wall map in a real browser (Debian's Chromium through playwright-core): how long a large
+// wall takes to draw once its data has arrived, to flip to the rear view, and to open a
+// cabinet card from a tap. Times are taken inside the page with performance.now().
+import { chromium } from 'playwright-core';
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
+export async function measureWallMap(base: string, account: { email: string; password: string }, wallId: string, cabinets: number, rounds = 5) {
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+  try {
+    const context = await browser.newContext({ viewport: { width: 1366, height: 800 } });
+    const login = await context.request.post(`${base}/api/auth/login`, { headers: { 'X-Requested-With': 'gridkeep' }, data: account });
+    if (!login.ok()) throw new Error(`sign-in failed: ${login.status()}`);
+    // Notes the moment every cabinet cell is drawn, checking once per frame.
+    await context.addInitScript((expected: number) => {
+      const w = window as unknown as { __mapReadyAt?: number };
+      const check = () => {
+        if (document.querySelectorAll('[role="gridcell"][aria-label*="serial"]').length >= expected) w.__mapReadyAt = performance.now();
+        else requestAnimationFrame(check);
+      };
+      requestAnimationFrame(check);
+    }, cabinets);
+    const page = await context.newPage();
+    const render: number[] = [];
+    const toggle: number[] = [];
+    const card: number[] = [];
+    for (let i = 0; i < rounds; i++) {
+      await page.goto(`${base}/walls/${wallId}`);
+      await page
+        .waitForFunction(() => (window as unknown as { __mapReadyAt?: number }).__mapReadyAt !== undefined, null, { timeout: 30_000 })
+        .catch(async (err) => {
+          const shot = `/tmp/gridkeep-bench-map-${Date.now()}.png`;
+          await page.screenshot({ path: shot });
+          throw new Error(`${(err as Error).message} (screenshot: ${shot})`);
+        });
+      render.push(
+        await page.evaluate((id) => {
+          const entry = performance
+            .getEntriesByType('resource')
+            .find((e) => e.name.includes(`/api/walls/${id}/cabinets`)) as PerformanceResourceTiming | undefined;
+          if (!entry) throw new Error('the wall map data request was not seen');
+          return (window as unknown as { __mapReadyAt: number }).__mapReadyAt - entry.responseEnd;
+        }, wallId),
+      );
+      toggle.push(
+        await page.evaluate(async () => {
+          const button = [...document.querySelectorAll('[aria-label="Wall view"] button')].find((b) => b.textContent?.includes('Rear')) as HTMLButtonElement;
+          const frame = () => new Promise((r) => requestAnimationFrame(() => r(null)));
+          const started = performance.now();
+          button.click();
+          while (!document.querySelector('svg[data-view="rear"]')) await frame();
+          await frame();
+          return performance.now() - started;
+        }),
+      );
+      card.push(
+        await page.evaluate(async () => {
+          const cell = document.querySelector('[role="gridcell"][data-c="7"][data-r="4"]') as SVGGElement;
+          const serial = /serial ([^,]+)/.exec(cell.getAttribute('aria-label') ?? '')?.[1] ?? '';
+          const frame = () => new Promise((r) => requestAnimationFrame(() => r(null)));
+          const started = performance.now();
+          cell.dispatchEvent(new MouseEvent('click', { bubbles: true }));
+          const shown = () => [...document.querySelectorAll('aside[aria-label="Cabinet"], [role="dialog"]')].some((e) => e.textContent?.includes(serial));
+          while (!shown()) {
+            if (performance.now() - started > 10_000) throw new Error('the cabinet card did not open');
+            await frame();
+          }
+          return performance.now() - started;
+        }),
+      );
+    }
+    return { renderMs: median(render), toggleMs: median(toggle), cardMs: median(card) };
+  } finally {
+    await browser.close();
+  }
+}
