@@ -14,14 +14,18 @@ export async function measureWallMap(base: string, account: { email: string; pas
     const context = await browser.newContext({ viewport: { width: 1366, height: 800 } });
     const login = await context.request.post(`${base}/api/auth/login`, { headers: { 'X-Requested-With': 'gridkeep' }, data: account });
     if (!login.ok()) throw new Error(`sign-in failed: ${login.status()}`);
-    // Notes the moment every cabinet cell is drawn, checking once per frame.
+    // tsx keeps function names with a `__name` helper that does not exist inside the page.
+    await context.addInitScript({ content: 'window.__name = (f) => f;' });
+    // Notes the moment every cabinet cell is in the document (a DOM observer, so no polling delay).
     await context.addInitScript((expected: number) => {
       const w = window as unknown as { __mapReadyAt?: number };
-      const check = () => {
-        if (document.querySelectorAll('[role="gridcell"][aria-label*="serial"]').length >= expected) w.__mapReadyAt = performance.now();
-        else requestAnimationFrame(check);
-      };
-      requestAnimationFrame(check);
+      const observer = new MutationObserver(() => {
+        if (w.__mapReadyAt === undefined && document.querySelectorAll('[role="gridcell"][aria-label*="serial"]').length >= expected) {
+          w.__mapReadyAt = performance.now();
+          observer.disconnect();
+        }
+      });
+      observer.observe(document, { childList: true, subtree: true, attributes: true, attributeFilter: ['aria-label'] });
     }, cabinets);
     const page = await context.newPage();
     const render: number[] = [];
@@ -34,6 +38,12 @@ export async function measureWallMap(base: string, account: { email: string; pas
         .catch(async (err) => {
           const shot = `/tmp/gridkeep-bench-map-${Date.now()}.png`;
           await page.screenshot({ path: shot });
+          const seen = await page.evaluate(() => ({
+            cells: document.querySelectorAll('[role="gridcell"]').length,
+            withSerial: document.querySelectorAll('[role="gridcell"][aria-label*="serial"]').length,
+            sample: document.querySelector('[role="gridcell"]')?.getAttribute('aria-label'),
+          }));
+          console.error(JSON.stringify(seen));
           throw new Error(`${(err as Error).message} (screenshot: ${shot})`);
         });
       render.push(

@@ -310,6 +310,7 @@ export async function updateCabinet(actor: Actor, id: string, input: CabinetPatc
 // reason; nothing is written unless the whole file is good.
 // ---------------------------------------------------------------------------------------------
 const MAX_IMPORT_ROWS = 50_000;
+const IMPORT_CHUNK = 5000;
 
 export async function importCabinets(actor: Actor, wallId: string, csv: string): Promise<ImportResult> {
   const wall = await visibleWall(db(), actor, wallId);
@@ -396,8 +397,9 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
   }
 
   await db().transaction(async (tx) => {
-    for (let i = 0; i < rows.length; i += 1000) {
-      const chunk = rows.slice(i, i + 1000);
+    // Chunks stay under PostgreSQL's 65,535 bind parameters per statement.
+    for (let i = 0; i < rows.length; i += IMPORT_CHUNK) {
+      const chunk = rows.slice(i, i + IMPORT_CHUNK);
       const inserted = await tx
         .insert(cabinets)
         .values(chunk.map((r) => ({ serial: r.serial, cabinetModelId: wall.cabinetModelId, wallId, column: r.column, row: r.row, batch: r.batch, status: 'installed' as const })))

@@ -8,6 +8,3 @@ export const clientWallCount = sql<number>`(select count(*)::int from walls w wh
 export const clientOpenTicketCount = sql<number>`(select count(*)::int from tickets t where t.client_id = "clients"."id" and t.status not in ('resolved','closed'))`;
 export const siteWallCount = sql<number>`(select count(*)::int from walls w where w.site_id = "sites"."id" and w.archived_at is null)`;
 export const wallOpenTicketCount = sql<number>`(select count(*)::int from tickets t where t.wall_id = "walls"."id" and t.status not in ('resolved','closed'))`;
-/** Open tickets on one wall that name the cabinet's cell. */
-export const cellOpenTicketCount = (wallId: string) =>
-  sql<number>`(select count(*)::int from tickets t where t.wall_id = ${wallId} and t.status not in ('resolved','closed') and t.cells @> jsonb_build_array(jsonb_build_object('column', "cabinets"."column", 'row', "cabinets"."row")))`;

@@ -1,12 +1,13 @@
-import { and, asc, eq, ilike, isNull, or, sql } from 'drizzle-orm';
+import { and, asc, eq, ilike, isNull, notInArray, or, sql } from 'drizzle-orm';
 import type { ListWallsQuery, WallInput, WallPatch } from '../../shared/schemas/register.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { clients, sites } from '../db/schema/clients.js';
+import { tickets } from '../db/schema/tickets.js';
 import { cabinetModels, cabinets, controllers, walls } from '../db/schema/walls.js';
 import { badRequest } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
-import { cellOpenTicketCount, wallOpenTicketCount } from './counts.js';
+import { wallOpenTicketCount } from './counts.js';
 import { presentModel } from './catalogue.js';
 import { cursorValue, likePattern, orderFor } from './clients.js';
 import { afterCursor, decodeCursor, pageOf } from './pagination.js';
@@ -170,22 +171,29 @@ export async function updateWall(actor: Actor, id: string, input: WallPatch) {
   return getWall(actor, id);
 }
 
-/** Every cabinet on the wall, for the wall map. */
+/** Every cabinet on the wall, for the wall map, with how many open tickets name its cell. */
 export async function wallCabinets(actor: Actor, id: string) {
   await visibleWall(db(), actor, id);
-  const rows = await db()
-    .select({
-      id: cabinets.id,
-      serial: cabinets.serial,
-      column: cabinets.column,
-      row: cabinets.row,
-      batch: cabinets.batch,
-      status: cabinets.status,
-      installedOn: cabinets.installedOn,
-      openTickets: cellOpenTicketCount(id),
-    })
-    .from(cabinets)
-    .where(eq(cabinets.wallId, id))
-    .orderBy(asc(cabinets.row), asc(cabinets.column));
-  return { items: rows.map((r) => ({ ...r, column: r.column!, row: r.row! })) };
+  const [rows, open] = await Promise.all([
+    db()
+      .select({
+        id: cabinets.id,
+        serial: cabinets.serial,
+        column: cabinets.column,
+        row: cabinets.row,
+        batch: cabinets.batch,
+        status: cabinets.status,
+        installedOn: cabinets.installedOn,
+      })
+      .from(cabinets)
+      .where(eq(cabinets.wallId, id))
+      .orderBy(asc(cabinets.row), asc(cabinets.column)),
+    db()
+      .select({ cells: tickets.cells })
+      .from(tickets)
+      .where(and(eq(tickets.wallId, id), notInArray(tickets.status, ['resolved', 'closed']))),
+  ]);
+  const perCell = new Map<string, number>();
+  for (const t of open) for (const c of t.cells) perCell.set(`${c.column}:${c.row}`, (perCell.get(`${c.column}:${c.row}`) ?? 0) + 1);
+  return { items: rows.map((r) => ({ ...r, column: r.column!, row: r.row!, openTickets: perCell.get(`${r.column}:${r.row}`) ?? 0 })) };
 }

@@ -98,7 +98,7 @@ test.describe('cabinet import and move', () => {
     const bad = ['serial,column,row,batch', `T${stamp}-1,1,1,B7`, `T${stamp}-2,9,1,B7`, `T${stamp}-3,2,1,B7`].join('\n');
     await page.getByLabel('CSV file').setInputFiles({ name: 'cabinets.csv', mimeType: 'text/csv', buffer: Buffer.from(bad) });
     await page.getByRole('button', { name: 'Import' }).click();
-    await expect(page.getByText('Nothing was imported')).toBeVisible();
+    await expect(page.getByText('Nothing was imported', { exact: true })).toBeVisible();
     const errors = page.getByTestId('import-errors');
     // Column 9 on a 4-column wall is line 3 of the file (the header is line 1).
     await expect(errors.getByRole('row')).toHaveCount(2);

@@ -130,7 +130,7 @@ test('a client opens a ticket with a photo and tapped cells; the office replies;
 
   // The client sees the reply on their ticket.
   await page.reload();
-  await expect(page.getByRole('article').filter({ hasText: reply })).toBeVisible();
+  await expect(page.getByRole('article').filter({ hasText: reply })).toBeVisible({ timeout: 20_000 });
 
   // ---- the admin finds the e-mail to the client in the development mailbox ----
   await adminSession.page.goto('/admin/mailbox');

@@ -19,7 +19,7 @@ export type WallView = 'front' | 'rear';
 export const CELL_WIDTH = 100;
 /** The gap between cabinets, so neighbouring outlines stay apart. */
 export const CELL_GAP = 6;
-/** The band for the column numbers (top) and row numbers (left). */
+/** The band for the column numbers (top) and row numbers (left), at least this wide. */
 export const RULER = 44;
 /** A margin on the right and bottom, so the outermost outlines are not clipped. */
 export const EDGE = 8;
@@ -34,6 +34,8 @@ export interface WallLayout {
   content: Rect;
   /** Where the cabinets are (without the rulers). */
   grid: Rect;
+  /** The width of the number bands: it grows with big walls so the numbers stay readable whole. */
+  ruler: number;
   cellRect: (p: GridPosition) => Rect;
   center: (p: GridPosition) => { x: number; y: number };
   /** The x of a column's centre, mirrored in the rear view. */
@@ -61,8 +63,11 @@ export function wallLayout(columns: number, rows: number, view: WallView = 'fron
   const stepY = cellHeight + CELL_GAP;
   const gridWidth = columns * stepX - CELL_GAP;
   const gridHeight = rows * stepY - CELL_GAP;
-  const grid = { x: RULER, y: RULER, width: gridWidth, height: gridHeight };
-  const content = { x: 0, y: 0, width: RULER + gridWidth + EDGE, height: RULER + gridHeight + EDGE };
+  const ruler = Math.max(RULER, Math.round(0.03 * Math.max(gridWidth, gridHeight)));
+  const grid = { x: ruler, y: ruler, width: gridWidth, height: gridHeight };
+  // The right margin also holds half of the last column's number.
+  const edge = Math.max(EDGE, Math.round(ruler * 0.3));
+  const content = { x: 0, y: 0, width: ruler + gridWidth + edge, height: ruler + gridHeight + edge };
   const slot = (column: number) => (view === 'rear' ? columns - column : column - 1);
   const cellRect = (p: GridPosition): Rect => ({
     x: grid.x + slot(p.column) * stepX,
@@ -80,6 +85,7 @@ export function wallLayout(columns: number, rows: number, view: WallView = 'fron
     cellHeight,
     content,
     grid,
+    ruler,
     cellRect,
     center: (p) => ({ x: columnCenterX(p.column), y: rowCenterY(p.row) }),
     columnCenterX,

@@ -214,9 +214,8 @@ const MapCell = memo(function MapCell({
   );
 });
 
-function Rulers({ layout, step }: { layout: WallLayout; step: number }) {
+const Rulers = memo(function Rulers({ layout, step, fontSize }: { layout: WallLayout; step: number; fontSize: number }) {
   const numbers: ReactNode[] = [];
-  const fontSize = Math.min(22, layout.cellWidth * 0.22);
   for (let c = 1; c <= layout.columns; c += 1) {
     if (c !== 1 && c % step !== 0) continue;
     numbers.push(
@@ -238,7 +237,7 @@ function Rulers({ layout, step }: { layout: WallLayout; step: number }) {
       {numbers}
     </g>
   );
-}
+});
 
 // ---------------------------------------------------------------------------------------------
 // The map
@@ -304,6 +303,8 @@ export function WallMap({
   const cellPx = Math.min(layout.cellWidth, layout.cellHeight) * pxPerUnit;
   const textLevel = textLevelFor(cellPx);
   const step = rulerStep(layout.cellWidth * pxPerUnit);
+  // About 12 px on screen, never more than the band holds (rounded: no re-render per pixel of zoom).
+  const rulerFont = Math.round(Math.min(layout.ruler * 0.48, 12 / pxPerUnit));
   const scale = scaleOf(vb, layout.content);
 
   const cellIndex = useMemo(() => {
@@ -581,7 +582,7 @@ export function WallMap({
             if (!e.currentTarget.contains(e.relatedTarget as Node | null)) setFocusWithin(false);
           }}
         >
-          <Rulers layout={layout} step={step} />
+          <Rulers layout={layout} step={step} fontSize={rulerFont} />
           {cellLayer}
           {overlay ? <g pointerEvents="none">{overlay(geometry)}</g> : null}
           {ring ? (

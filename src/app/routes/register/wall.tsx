@@ -108,13 +108,15 @@ export function Component() {
         description={`${wall.cabinetModel.name} · ${wall.columns} × ${wall.rows} cabinets · ${mountingLabels[wall.mounting]}`}
         actions={
           <>
-            <ButtonLink to={paths.wallRuns.getHref(id)} icon={<Cable className="h-4 w-4" aria-hidden="true" />}>
-              Power and data runs
-            </ButtonLink>
             {staff ? (
-              <ButtonLink to={paths.wallLabels.getHref(id)} icon={<QrCode className="h-4 w-4" aria-hidden="true" />}>
-                QR labels
-              </ButtonLink>
+              <>
+                <ButtonLink to={paths.wallRuns.getHref(id)} icon={<Cable className="h-4 w-4" aria-hidden="true" />}>
+                  Power and data runs
+                </ButtonLink>
+                <ButtonLink to={paths.wallLabels.getHref(id)} icon={<QrCode className="h-4 w-4" aria-hidden="true" />}>
+                  QR labels
+                </ButtonLink>
+              </>
             ) : null}
             {office ? (
               <Button onClick={() => setEditing(true)} icon={<Pencil className="h-4 w-4" aria-hidden="true" />}>
@@ -154,7 +156,7 @@ export function Component() {
             canOperate={staff}
             notice={staff ? <ServiceCaution /> : null}
           />
-          <div className="grid gap-5 lg:grid-cols-2">
+          <div className="grid items-start gap-5 lg:grid-cols-2">
             <WallSpecCard wall={wall} />
             <WallControllersCard
               wall={wall}

@@ -72,7 +72,7 @@ function OfficeTickets() {
 
 const showChoices: { value: Show; label: string }[] = [
   { value: 'open', label: 'Open' },
-  { value: 'done', label: 'Resolved and closed' },
+  { value: 'done', label: 'Done' },
   { value: 'all', label: 'All' },
 ];
 

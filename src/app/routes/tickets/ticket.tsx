@@ -20,6 +20,7 @@ import { TicketFacts, TicketVisits } from '@/features/tickets/components/ticket-
 import { ClockBadge, PriorityBadge, TicketStatusBadge } from '@/features/tickets/components/ticket-status';
 import { TicketSummary } from '@/features/tickets/components/ticket-summary';
 import { TriagePanel } from '@/features/tickets/components/triage-panel';
+import { useMediaQuery } from '@/features/tickets/components/use-media-query';
 import { requireUser } from '@/app/auth-guard';
 import { errorMessage } from '@/lib/errors';
 import { queryClient } from '@/lib/query-client';
@@ -55,6 +56,9 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
   const office = isOffice(user);
   const timeZone = useSiteTimeZone(ticket.site.id).data;
   const closed = ticket.status === 'closed' || Boolean(ticket.mergedInto);
+  // Beside the ticket on a wide screen; on a phone right at the top, where the thumb is.
+  const wide = useMediaQuery('(min-width: 1024px)');
+  const triage = forClient ? null : <TriagePanel ticket={ticket} office={office} timeZone={timeZone} />;
 
   return (
     <>
@@ -94,13 +98,14 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
 
       <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="min-w-0 space-y-5">
+          {triage && !wide ? triage : null}
           <TicketClocks ticket={ticket} timeZone={timeZone} />
           <TicketSummary ticket={ticket} />
           <AttachmentsPanel ticketId={ticket.id} canUpload={!closed} />
           <Conversation ticketId={ticket.id} staff={!forClient} closed={closed} />
         </div>
         <aside className="min-w-0 space-y-5" aria-label="Ticket details">
-          {forClient ? null : <TriagePanel ticket={ticket} office={office} timeZone={timeZone} />}
+          {triage && wide ? triage : null}
           <TicketFacts ticket={ticket} forClient={forClient} />
           <TicketVisits visits={ticket.visits} timeZone={timeZone} />
           {ticket.mergedInto ? (

@@ -103,16 +103,16 @@ export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, on
       {canOperate && cabinet ? (
         <div className="flex flex-wrap gap-2">
           {cabinet.wall && onMove ? (
-            <Button size="sm" onClick={() => onMove(cabinet)} icon={<Move className="h-4 w-4" aria-hidden="true" />}>
+            <Button onClick={() => onMove(cabinet)} icon={<Move className="h-4 w-4" aria-hidden="true" />}>
               Move
             </Button>
           ) : null}
           {cabinet.wall && onSwap ? (
-            <Button size="sm" onClick={() => onSwap(cabinet)} icon={<ArrowLeftRight className="h-4 w-4" aria-hidden="true" />}>
+            <Button onClick={() => onSwap(cabinet)} icon={<ArrowLeftRight className="h-4 w-4" aria-hidden="true" />}>
               Swap
             </Button>
           ) : null}
-          <Button size="sm" onClick={() => setEditing(true)} icon={<Pencil className="h-4 w-4" aria-hidden="true" />}>
+          <Button onClick={() => setEditing(true)} icon={<Pencil className="h-4 w-4" aria-hidden="true" />}>
             Status and batch
           </Button>
         </div>

@@ -124,7 +124,7 @@ export function CabinetWallMap({ wall, selected, onSelect, view, onViewChange, c
         title="Wall map"
         description={
           query.data
-            ? `${filled} of ${wall.columns * wall.rows} positions hold a cabinet${withTickets ? ` · ${withTickets} with an open ticket` : ''}`
+            ? `${filled} of ${wall.columns * wall.rows} positions hold a cabinet${withTickets ? ` · ${withTickets} named in an open ticket` : ''}`
             : undefined
         }
         actions={<WallViewToggle view={view} onChange={onViewChange} />}
@@ -145,7 +145,7 @@ export function CabinetWallMap({ wall, selected, onSelect, view, onViewChange, c
                   </>
                 )}
               </p>
-              <Button size="sm" onClick={() => setMode(null)}>
+              <Button onClick={() => setMode(null)}>
                 Cancel
               </Button>
             </div>

@@ -41,7 +41,7 @@ function PitchCheck() {
   const off = pitch && Number.isFinite(pitch) ? Math.abs(implied - pitch) / implied > 0.02 : false;
   return (
     <p className={off ? 'text-sm font-medium text-danger-700' : 'text-sm text-stone-600'} aria-live="polite">
-      Width ÷ pixels across = {implied.toFixed(3)} mm{off ? ': this does not match the pitch typed.' : '.'}
+      Width ÷ pixels wide = {implied.toFixed(3)} mm{off ? ': this does not match the pitch typed.' : '.'}
     </p>
   );
 }
@@ -80,13 +80,13 @@ function CreateCabinetModelForm({ onDone }: { onDone: () => void }) {
           <NumberField name="widthMm" label="Width" unit="mm" />
           <NumberField name="heightMm" label="Height" unit="mm" />
           <NumberField name="pixelPitchMm" label="Pixel pitch" unit="mm" />
-          <NumberField name="pixelsWide" label="Pixels across" step="1" />
-          <NumberField name="pixelsHigh" label="Pixels down" step="1" />
+          <NumberField name="pixelsWide" label="Pixels wide" step="1" />
+          <NumberField name="pixelsHigh" label="Pixels high" step="1" />
         </div>
         <PitchCheck />
         <div className="grid grid-cols-2 gap-4 sm:grid-cols-3">
-          <NumberField name="modulesWide" label="Modules across" step="1" />
-          <NumberField name="modulesHigh" label="Modules down" step="1" />
+          <NumberField name="modulesWide" label="Modules wide" step="1" />
+          <NumberField name="modulesHigh" label="Modules high" step="1" />
         </div>
       </fieldset>
       <fieldset className="space-y-4">

@@ -18,7 +18,7 @@ interface RunArrowsProps {
  * The runs as numbered arrows over the wall map (its `overlay`): every cell of a run is tinted
  * in the run's colour, each link from one cabinet to the next is an arrow across the gap between
  * them (pointing the way the cable goes, leaving the position labels readable), and the run's
- * number sits in a disc in the corner of its first cabinet. A link between cells that are not
+ * number sits in a disc on the top-left corner of its first cabinet. A link between cells that are not
  * neighbours is a dashed red line. Drawn in the map's units, so it follows zoom, pan and the
  * rear view.
  */
@@ -85,15 +85,15 @@ export const RunArrows = memo(function RunArrows({ geometry, runs, highlight = n
               );
             })}
             <circle
-              cx={start.x + badge + unit * 0.03}
-              cy={start.y + badge + unit * 0.03}
+              cx={start.x + badge * 0.55}
+              cy={start.y + badge * 0.55}
               r={badge}
               className={clsx(colour.fill, 'stroke-white')}
               strokeWidth={strokeWidth * 0.5}
             />
             <text
-              x={start.x + badge + unit * 0.03}
-              y={start.y + badge + unit * 0.03}
+              x={start.x + badge * 0.55}
+              y={start.y + badge * 0.55}
               textAnchor="middle"
               dominantBaseline="central"
               className="fill-white font-sans font-semibold"

@@ -109,7 +109,7 @@ export function RunsEditor({ wall, canEdit }: { wall: WallPlanView; canEdit: boo
       {!set.stored ? (
         <Alert tone="info" title="No runs are stored for this wall yet" live={false}>
           This is a proposal from its cabinet model and {settingsStored ? 'its stored settings' : 'the default settings'}, laid{' '}
-          {runPatternLabels[set.pattern as RunPattern]?.toLowerCase() ?? 'by hand'}.
+          {set.pattern === 'custom' ? 'by hand' : `by ${runPatternLabels[set.pattern].toLowerCase()}`}.
           {canEdit ? ' Save it to keep it, or change it first.' : ''}
         </Alert>
       ) : null}

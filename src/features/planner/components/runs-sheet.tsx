@@ -131,8 +131,8 @@ export function RunsSheet({ wall }: { wall: WallPlanView }) {
                 <thead>
                   <tr className="border-b-2 border-stone-400 text-left">
                     <th scope="col" className="w-28 py-1.5 pr-3 sm:w-20">Run</th>
-                    <th scope="col" className="hidden w-24 py-1.5 pr-3 text-right sm:table-cell print:table-cell">Cabinets</th>
-                    <th scope="col" className="hidden w-48 py-1.5 pr-3 text-right sm:table-cell print:table-cell">{kind === 'data' ? 'Pixels' : 'Watts'} of limit</th>
+                    <th scope="col" className="hidden w-24 py-1.5 pr-3 text-right sm:table-cell">Cabinets</th>
+                    <th scope="col" className="hidden w-48 py-1.5 pr-3 text-right sm:table-cell">{kind === 'data' ? 'Pixels' : 'Watts'} of limit</th>
                     <th scope="col" className="py-1.5">Cells in order (from the controller or feed)</th>
                   </tr>
                 </thead>
@@ -144,14 +144,14 @@ export function RunsSheet({ wall }: { wall: WallPlanView }) {
                           <span className={clsx('inline-block h-3 w-3 rounded-full', runColour(position).swatch)} aria-hidden="true" />
                           {run.index}
                         </span>
-                        <span className="mt-0.5 block text-xs text-stone-600 sm:hidden print:hidden">
+                        <span className="mt-0.5 block text-xs text-stone-600 sm:hidden">
                           {run.cells.length} cab.
                           <br />
                           {loadText(run.cells.length, limits).text}
                         </span>
                       </td>
-                      <td className="hidden py-1.5 pr-3 text-right tabular-nums sm:table-cell print:table-cell">{run.cells.length}</td>
-                      <td className="hidden py-1.5 pr-3 text-right tabular-nums sm:table-cell print:table-cell">{loadText(run.cells.length, limits).text}</td>
+                      <td className="hidden py-1.5 pr-3 text-right tabular-nums sm:table-cell">{run.cells.length}</td>
+                      <td className="hidden py-1.5 pr-3 text-right tabular-nums sm:table-cell">{loadText(run.cells.length, limits).text}</td>
                       <td className="py-1.5 leading-relaxed">{pathText(run)}</td>
                     </tr>
                   ))}

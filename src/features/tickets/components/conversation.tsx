@@ -140,7 +140,7 @@ function Composer({ ticketId, staff }: { ticketId: string; staff: boolean }) {
       ) : null}
       <TextAreaField
         name="body"
-        label={staff ? (internal ? 'Internal note' : 'Reply to the client') : 'Your reply'}
+        label={staff ? (internal ? 'Note for the team' : 'Reply to the client') : 'Your reply'}
         rows={3}
         hint={
           staff ? (

@@ -3,7 +3,7 @@ import { priorityGuidance, statusLabels } from '@shared/schemas/tickets';
 import type { SelectOption } from '@/components/ui/select-field';
 
 export const statusFilterOptions: SelectOption[] = [
-  { value: 'open', label: 'Open (not resolved)' },
+  { value: 'open', label: 'All open' },
   { value: 'done', label: 'Resolved or closed' },
   ...ticketStatuses.map((s) => ({ value: s, label: s === 'waiting_client' ? 'Waiting for client' : statusLabels[s] })),
 ];
@@ -11,9 +11,9 @@ export const statusFilterOptions: SelectOption[] = [
 export const priorityFilterOptions: SelectOption[] = ticketPriorities.map((p) => ({ value: p, label: priorityGuidance[p].label }));
 
 export const clockFilterOptions: SelectOption[] = [
-  { value: 'at_risk,breached', label: 'Needs attention (at risk or breached)' },
+  { value: 'at_risk,breached', label: 'At risk or breached' },
   { value: 'on_track', label: 'On track' },
   { value: 'at_risk', label: 'At risk' },
   { value: 'breached', label: 'Breached' },
-  { value: 'paused', label: 'Paused (waiting for client)' },
+  { value: 'paused', label: 'Paused' },
 ];
