@@ -82,6 +82,8 @@ test.describe('cabinet import and move', () => {
   test('a file with one bad row is refused with its line number and imports nothing; a good one imports; a cabinet moves to a free cell', async ({
     page,
   }) => {
+    // Three steps (refused import, import, move) in one test: more than the default 30 s on a busy machine.
+    test.setTimeout(60_000);
     await signIn(page);
     // A fresh 4 × 2 wall of its own, so the test never collides with the demo data.
     const sites = await (await page.request.get('/api/sites?limit=1')).json();

@@ -37,8 +37,9 @@ interface Wall {
 
 test('a client opens a ticket with a photo and tapped cells; the office replies; the client is e-mailed', async ({ browser }, testInfo) => {
   test.setTimeout(180_000);
-  const shot = async (page: Page, name: string) =>
-    testInfo.attach(name, { body: await page.screenshot({ fullPage: true, path: testInfo.outputPath(`${name}.png`) }), contentType: 'image/png' });
+  // Phone pages scroll as a whole (full page); the office shell keeps its bars in place (the screen as seen).
+  const shot = async (page: Page, name: string, fullPage = true) =>
+    testInfo.attach(name, { body: await page.screenshot({ fullPage, path: testInfo.outputPath(`${name}.png`) }), contentType: 'image/png' });
 
   // ---- a client user of the demo data, found as the admin ----
   const adminSession = await signIn(browser, admin);
@@ -83,6 +84,11 @@ test('a client opens a ticket with a photo and tapped cells; the office replies;
   await page.getByRole('radio', { name: /^High/ }).check();
   await page.getByLabel('In a few words').fill(title);
   await page.getByLabel('What do you see?').fill('Both cabinets went black during the evening service; the rest of the wall is fine.');
+  // On a phone the camera opens straight away; the other input picks photos already taken.
+  const camera = page.getByLabel('Take a photo or video');
+  await expect(camera).toHaveAttribute('capture', 'environment');
+  await expect(camera).toHaveAttribute('accept', 'image/*,video/*');
+  await expect(page.getByText('Take a photo or video')).toBeVisible();
   await page.getByLabel('Add photos or a video').setInputFiles({ name: 'fault.png', mimeType: 'image/png', buffer: png });
   await expect(page.getByRole('progressbar', { name: 'Upload of fault.png' })).toBeVisible();
   await shot(page, 'client-new-ticket-phone');
@@ -114,7 +120,7 @@ test('a client opens a ticket with a photo and tapped cells; the office replies;
   await desk.page.getByLabel('Search', { exact: true }).fill(ref!);
   const row = desk.page.getByRole('row').filter({ hasText: title });
   await expect(row).toBeVisible();
-  await shot(desk.page, 'office-tickets-desktop');
+  await shot(desk.page, 'office-tickets-desktop', false);
   await row.getByRole('link', { name: title }).click();
   await expect(desk.page).toHaveURL(ticketUrl);
   await expect(desk.page.getByRole('heading', { level: 1 })).toContainText(ref!);
@@ -126,7 +132,7 @@ test('a client opens a ticket with a photo and tapped cells; the office replies;
   const comment = desk.page.getByRole('article').filter({ hasText: reply });
   await expect(comment).toBeVisible();
   await expect(comment).not.toContainText('Internal — not visible to the client');
-  await shot(desk.page, 'office-ticket-desktop');
+  await shot(desk.page, 'office-ticket-desktop', false);
 
   // The client sees the reply on their ticket.
   await page.reload();

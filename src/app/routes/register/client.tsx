@@ -18,12 +18,14 @@ import { requireUser } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { idParam } from '@/app/routes/register/id-param';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   const user = await requireUser(request);
+  const id = idParam(params);
   // A client that does not exist (or is another organisation's) is a 404 page.
-  await queryClient.ensureQueryData(clientQueryOptions(params.id!));
+  await queryClient.ensureQueryData(clientQueryOptions(id));
   if (isOffice(user)) void queryClient.prefetchQuery(servicePlansQueryOptions());
   return null;
 }

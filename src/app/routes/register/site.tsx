@@ -20,11 +20,13 @@ import { requireUser } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { idParam } from '@/app/routes/register/id-param';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   const user = await requireUser(request);
-  await queryClient.ensureQueryData(siteQueryOptions(params.id!));
+  const id = idParam(params);
+  await queryClient.ensureQueryData(siteQueryOptions(id));
   if (isOffice(user)) void queryClient.prefetchQuery(cabinetModelsQueryOptions());
   return null;
 }

@@ -13,13 +13,15 @@ import { requireUser, staff } from '@/app/auth-guard';
 import { errorMessage } from '@/lib/errors';
 import { queryClient } from '@/lib/query-client';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { idParam } from '@/app/routes/register/id-param';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   await requireUser(request, staff);
+  const id = idParam(params);
   await Promise.all([
-    queryClient.ensureQueryData(wallQueryOptions(params.id!)),
-    queryClient.prefetchQuery(wallCabinetsQueryOptions(params.id!)),
+    queryClient.ensureQueryData(wallQueryOptions(id)),
+    queryClient.prefetchQuery(wallCabinetsQueryOptions(id)),
   ]);
   return null;
 }

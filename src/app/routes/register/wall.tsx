@@ -24,15 +24,17 @@ import { requireUser } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { idParam } from '@/app/routes/register/id-param';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 type Tab = 'map' | 'documents' | 'import';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   await requireUser(request);
+  const id = idParam(params);
   // A wall that does not exist (or is another organisation's) is a 404 page.
-  await queryClient.ensureQueryData(wallQueryOptions(params.id!));
-  void queryClient.prefetchQuery(wallCabinetsQueryOptions(params.id!));
+  await queryClient.ensureQueryData(wallQueryOptions(id));
+  void queryClient.prefetchQuery(wallCabinetsQueryOptions(id));
   return null;
 }
 

@@ -1,6 +1,6 @@
 import { ArrowLeft, CircleCheck, GitMerge } from 'lucide-react';
 import { useState } from 'react';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { data, Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
@@ -31,6 +31,8 @@ export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 export async function loader({ request, params }: LoaderFunctionArgs) {
   await requireUser(request);
   const id = params.id ?? '';
+  // Not an id at all (a mistyped link): the same "not found" as a ticket that is not there.
+  if (!/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id)) throw data('Not found', { status: 404 });
   // The ticket itself must load (a 404 shows "not found"); the rest may load on the page.
   await Promise.all([
     queryClient.ensureQueryData(ticketQueryOptions(id)),

@@ -1,15 +1,18 @@
 import type { TicketScope } from '@shared/schemas/enums';
 import { positionLabel, type Position } from '@shared/schemas/register';
-import { createTicketInput } from '@shared/schemas/tickets';
+import { createTicketInput, type CreateTicketInput } from '@shared/schemas/tickets';
+import { zodResolver } from '@hookform/resolvers/zod';
 import clsx from 'clsx';
 import { Building2, Cpu, Grid3x3, LayoutGrid, MapPin, X } from 'lucide-react';
 import { useEffect, useState, type ReactNode } from 'react';
+import { useForm, type Resolver } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
+import type { z } from 'zod';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { FieldErrorText } from '@/components/ui/field';
-import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
+import { Form, SubmitButton } from '@/components/ui/form';
 import { SelectField } from '@/components/ui/select-field';
 import { Spinner } from '@/components/ui/spinner';
 import { TextField } from '@/components/ui/text-field';
@@ -26,6 +29,21 @@ import { MediaPicker, UploadList } from '@/features/tickets/components/upload-li
 import { useUploadQueue } from '@/features/tickets/components/use-upload-queue';
 import { errorMessage } from '@/lib/errors';
 
+/**
+ * The shared schema's rules, with words for a person opening a ticket where the generic
+ * messages ("Invalid UUID") would say nothing.
+ */
+const schemaResolver = zodResolver(createTicketInput);
+const friendlyResolver: Resolver<z.input<typeof createTicketInput>, unknown, CreateTicketInput> = async (values, context, options) => {
+  const result = await schemaResolver(values, context, options);
+  const words: Record<string, string> = { siteId: 'Choose the site.', priority: 'Choose how bad it is.', title: 'Say in a few words what is wrong.' };
+  for (const [name, message] of Object.entries(words)) {
+    const error = (result.errors as Record<string, { message?: string } | undefined>)[name];
+    if (error) error.message = message;
+  }
+  return result;
+};
+
 const sameCell = (a: Position, b: Position) => a.column === b.column && a.row === b.row;
 const sortCells = (cells: Position[]) => [...cells].sort((a, b) => a.row - b.row || a.column - b.column);
 
@@ -39,7 +57,8 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
   const [created, setCreated] = useState<TicketDetail | null>(null);
   const [uploadFailures, setUploadFailures] = useState(0);
 
-  const form = useZodForm(createTicketInput, {
+  const form = useForm<z.input<typeof createTicketInput>, unknown, CreateTicketInput>({
+    resolver: friendlyResolver,
     defaultValues: { siteId: '', wallId: null, scope: 'cells', cells: [], title: '', description: '' },
   });
   const siteId = form.watch('siteId');
