@@ -15,6 +15,10 @@ const id = (req: { valid: { params?: unknown } }) => (req.valid.params as { id: 
 ticketsRouter.get('/', validate({ query: s.listTicketsQuery }), async (req, res) => {
   res.json(await tickets.listTickets(actorOf(req), req.valid.query as s.ListTicketsQuery));
 });
+/** Open tickets by clock state, for the office board. */
+ticketsRouter.get('/clock-counts', async (req, res) => {
+  res.json(await tickets.clockCounts(actorOf(req)));
+});
 ticketsRouter.post('/', validate({ body: s.createTicketInput }), async (req, res) => {
   res.status(201).json(await tickets.createTicket(actorOf(req), req.valid.body as s.CreateTicketInput));
 });

@@ -159,6 +159,7 @@ export async function getTicket(actor: Actor, id: string) {
     .from(visits)
     .where(eq(visits.ticketId, id))
     .orderBy(asc(visits.windowStart));
+  const [site] = await db().select({ timeZone: sites.timeZone }).from(sites).where(eq(sites.id, t.siteId));
   const merged = t.mergedIntoId ? (await db().select({ id: tickets.id, number: tickets.number }).from(tickets).where(eq(tickets.id, t.mergedIntoId)))[0] : null;
   const now = new Date();
   const response = clockStateOf(now, { dueAt: t.responseDueAt, atRiskAt: t.responseAtRiskAt, doneAt: t.acknowledgedAt });
@@ -168,6 +169,8 @@ export async function getTicket(actor: Actor, id: string) {
     description: t.description,
     cells: t.cells,
     cellLabels: t.cells.map(positionLabel),
+    /** Due times and visit windows are shown in the site's own time zone. */
+    siteTimeZone: site.timeZone,
     wall,
     mergedInto: merged ? { id: merged.id, ref: ticketRef(merged.number) } : null,
     acknowledgedAt: iso(t.acknowledgedAt),
@@ -260,7 +263,8 @@ export async function updateTicket(actor: Actor, id: string, input: UpdateTicket
     if (before.mergedIntoId) throw conflict('merged', 'This ticket was merged into another; work on that one.');
     const now = new Date();
     const clock = await clockFor(tx, before.siteId);
-    const changes: Partial<typeof tickets.$inferInsert> = {};
+    // updatedAt always moves: scheduling a further visit changes no column of the ticket itself.
+    const changes: Partial<typeof tickets.$inferInsert> = { updatedAt: now };
     if (input.title !== undefined) changes.title = input.title;
     if (input.description !== undefined) changes.description = input.description;
     if (input.assigneeId !== undefined) changes.assigneeId = await assertAssignable(tx, input.assigneeId);

@@ -1,4 +1,5 @@
-import { and, asc, desc, eq, ilike, isNull, or, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, ilike, inArray, isNull, or, sql } from 'drizzle-orm';
+import { staffRoles } from '../../shared/schemas/enums.js';
 import type { InviteUserInput, UpdateUserInput, UserSummary } from '../../shared/schemas/auth.js';
 import type { ListAuditQuery, ListUsersQuery } from '../../shared/schemas/users.js';
 import { db, type DbOrTx } from '../db/client.js';
@@ -174,4 +175,17 @@ export async function listAudit(query: ListAuditQuery) {
     })),
     nextCursor: page.nextCursor,
   };
+}
+
+/**
+ * The team, for pickers (assignee, technicians of a visit): active staff by name, with only
+ * what a picker needs. The full user list stays the admin's.
+ */
+export async function listStaff() {
+  const rows = await db()
+    .select({ id: users.id, name: users.name, role: users.role })
+    .from(users)
+    .where(and(inArray(users.role, [...staffRoles]), isNull(users.disabledAt)))
+    .orderBy(asc(users.name), asc(users.id));
+  return { items: rows };
 }

@@ -155,6 +155,28 @@ describe('triage and the clock', () => {
     expect(breached.body.items.map((i: { id: string }) => i.id)).toContain(late.id);
   });
 
+  it('plans a further visit on a ticket that is already scheduled', async () => {
+    const t = await open(clientUser);
+    const window = (day: number) => ({ start: `2026-12-${day}T15:00:00Z`, end: `2026-12-${day}T17:00:00Z`, technicianIds: [tech.user.id] });
+    expect((await office.patch(`/api/tickets/${t.id}`, { status: 'scheduled', schedule: window(14) })).status).toBe(200);
+    const again = await office.patch(`/api/tickets/${t.id}`, { status: 'scheduled', schedule: window(15) });
+    expect(again.status).toBe(200);
+    expect(again.body.visits.map((v: { windowStart: string }) => v.windowStart)).toEqual(['2026-12-14T15:00:00.000Z', '2026-12-15T15:00:00.000Z']);
+    expect(again.body.siteTimeZone).toBe('America/Chicago');
+  });
+
+  it('counts open tickets by clock state for the board', async () => {
+    const before = (await office.get('/api/tickets/clock-counts')).body as Record<string, number>;
+    const t = await open(clientUser, { title: 'counted' });
+    await db().update(tickets).set({ resolutionDueAt: new Date(Date.now() - 1000), acknowledgedAt: new Date() }).where(eq(tickets.id, t.id));
+    const after = (await office.get('/api/tickets/clock-counts')).body as Record<string, number>;
+    expect((after.breached ?? 0) - (before.breached ?? 0)).toBe(1);
+    const theirs = await clientUser.get('/api/tickets/clock-counts');
+    const total = Object.values(theirs.body as Record<string, number>).reduce((a, b) => a + b, 0);
+    const own = await clientUser.get('/api/tickets?open=true&limit=500');
+    expect(total).toBe(own.body.items.length);
+  });
+
   it('recomputes due times when the priority changes', async () => {
     const t = await open(clientUser, { priority: 'low' });
     const res = await office.patch(`/api/tickets/${t.id}`, { priority: 'critical' });
