@@ -33,8 +33,9 @@ export default defineConfig({
   workers: process.env.CI ? 1 : 2,
   retries: 0,
   forbidOnly: Boolean(process.env.CI),
-  timeout: 30_000,
-  expect: { timeout: 10_000 },
+  // Generous: a first page load compiles nothing, but a busy 2-core machine can take seconds.
+  timeout: 90_000,
+  expect: { timeout: 15_000 },
   reporter: 'list',
   use: {
     baseURL,

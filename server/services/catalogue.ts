@@ -1,5 +1,12 @@
 import { and, asc, eq, isNull } from 'drizzle-orm';
-import type { CabinetModelInput, CabinetModelPatch, ControllerInput, ControllerPatch } from '../../shared/schemas/register.js';
+import type {
+  CabinetModel,
+  CabinetModelInput,
+  CabinetModelPatch,
+  Controller,
+  ControllerInput,
+  ControllerPatch,
+} from '../../shared/schemas/register.js';
 import { db } from '../db/client.js';
 import { cabinetModels, controllers, walls } from '../db/schema/walls.js';
 import { badRequest } from '../errors.js';
@@ -7,7 +14,7 @@ import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
 import { found, tenantWhere } from './scope.js';
 
-export function presentModel(m: typeof cabinetModels.$inferSelect) {
+export function presentModel(m: typeof cabinetModels.$inferSelect): CabinetModel {
   return {
     id: m.id,
     name: m.name,
@@ -69,7 +76,7 @@ export async function updateCabinetModel(actor: Actor, id: string, input: Cabine
 }
 
 // ---- controllers ----
-function presentController(c: typeof controllers.$inferSelect, wallName: string | null) {
+function presentController(c: typeof controllers.$inferSelect, wallName: string | null): Controller {
   return {
     id: c.id,
     wallId: c.wallId,

@@ -225,3 +225,39 @@ export const searchQuery = z.object({ q: z.string().trim().min(1, 'Type somethin
 
 /** `C{column}·R{row}`, counted from the top-left as seen from the audience. */
 export const positionLabel = (p: { column: number; row: number }) => `C${p.column}·R${p.row}`;
+
+// ---- response shapes (the server's presenters return exactly these) ----
+export interface CabinetModel {
+  id: string;
+  name: string;
+  maker: string;
+  widthMm: number;
+  heightMm: number;
+  pixelPitchMm: number;
+  pixelsWide: number;
+  pixelsHigh: number;
+  modulesWide: number;
+  modulesHigh: number;
+  maxPowerW: number;
+  typicalPowerW: number;
+  weightKg: number;
+  brightnessNits: number;
+  voltageMin: number;
+  voltageMax: number;
+  environment: (typeof environments)[number];
+  archived: boolean;
+}
+
+export interface Controller {
+  id: string;
+  wallId: string | null;
+  wallName: string | null;
+  model: string;
+  serial: string;
+  firmware: string;
+  outputs: number;
+  outputsInUse: number;
+  pixelsPerOutput: number;
+  notes: string;
+  archived: boolean;
+}
