@@ -1,13 +1,6 @@
 import { createBrowserRouter, RouterProvider } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import * as root from '@/app/routes/root';
-import type { PlaceholderKey } from '@/app/routes/app/placeholder';
-
-/** A screen that does not exist yet: replace the line with the real route module when it does. */
-const placeholder = (key: PlaceholderKey) => ({
-  path: key,
-  lazy: () => import('@/app/routes/app/placeholder').then((m) => m.placeholderRoute(key)),
-});
 
 // Every screen is its own chunk (lazy); loaders warm the query cache before it shows.
 const router = createBrowserRouter([
@@ -40,14 +33,9 @@ const router = createBrowserRouter([
           { path: paths.tickets.path, lazy: () => import('@/app/routes/tickets/list') },
           { path: paths.newTicket.path, lazy: () => import('@/app/routes/tickets/new') },
           { path: paths.ticket.path, lazy: () => import('@/app/routes/tickets/ticket') },
-          placeholder(paths.schedule.path), // PLACEHOLDER
-          placeholder(paths.stock.path), // PLACEHOLDER
-          placeholder(paths.reports.path), // PLACEHOLDER
           { path: paths.planner.path, lazy: () => import('@/app/routes/planner/planner') },
           { path: paths.wallRuns.path, lazy: () => import('@/app/routes/planner/wall-runs') },
-          placeholder(paths.vanStock.path), // PLACEHOLDER
-          placeholder(paths.scan.path), // PLACEHOLDER
-          placeholder(paths.visits.path), // PLACEHOLDER
+          { path: paths.scan.path, lazy: () => import('@/app/routes/scan/scan') },
           { path: paths.cabinetLabel.path, lazy: () => import('@/app/routes/register/cabinet-label') },
 
           { path: paths.admin.users.path, lazy: () => import('@/app/routes/admin/users') },

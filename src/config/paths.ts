@@ -63,9 +63,6 @@ export const paths = {
   newTicket: { path: '/tickets/new', getHref: () => '/tickets/new' },
   /** A ticket's page; the e-mails link here (`${APP_URL}/tickets/<id>`). */
   ticket: { path: '/tickets/:id', getHref: (id: string) => `/tickets/${encodeURIComponent(id)}` },
-  schedule: { path: '/schedule', getHref: () => '/schedule' },
-  stock: { path: '/stock', getHref: () => '/stock' },
-  reports: { path: '/reports', getHref: () => '/reports' },
   /** `wall`: start from that wall's model, grid and settings. */
   planner: { path: '/planner', getHref: (wall?: string) => withParams('/planner', { wall }) },
   /** A wall's data and power runs (view, edit by hand, print). */
@@ -73,12 +70,8 @@ export const paths = {
   /** The runs as a sheet for the crew, outside the app's shell. */
   wallRunsPrint: { path: '/walls/:id/runs/print', getHref: (id: string) => `/walls/${encodeURIComponent(id)}/runs/print` },
 
-  // Technician
-  vanStock: { path: '/van', getHref: () => '/van' },
+  /** Type or scan a cabinet's serial (technicians and office). */
   scan: { path: '/scan', getHref: () => '/scan' },
-
-  // Client portal
-  visits: { path: '/visits', getHref: () => '/visits' },
 
   /** The target of a cabinet's QR label: opens that cabinet. */
   cabinetLabel: {

@@ -9,6 +9,8 @@ export class ApiError extends Error {
     message: string,
     readonly fields?: Record<string, string>,
     readonly requestId?: string,
+    /** Structured detail some refusals carry, e.g. the rows a CSV import refused. */
+    readonly details?: unknown,
   ) {
     super(message);
     this.name = 'ApiError';
@@ -43,10 +45,52 @@ function isErrorBody(value: unknown): value is ApiErrorBody {
   return typeof error === 'object' && error !== null && typeof (error as { code?: unknown }).code === 'string';
 }
 
-async function request<T>(method: string, path: string, options: RequestOptions = {}): Promise<T> {
+/** Headers every request carries; state-changing ones add the CSRF header the server requires. */
+export function requestHeaders(method: string): Record<string, string> {
   const headers: Record<string, string> = { Accept: 'application/json' };
   // CSRF defence: the server refuses a state-changing request without this header.
   if (method !== 'GET' && method !== 'HEAD') headers[csrfHeader.name] = csrfHeader.value;
+  return headers;
+}
+
+/** A response body as JSON; undefined when it is empty or not JSON. */
+function parseResponseText(text: string): unknown {
+  if (!text) return undefined;
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
+/** The typed error of a failed response: the server's `{ error }` body, or the bare status. */
+function responseError(status: number, statusText: string, data: unknown, requestId?: string): ApiError {
+  if (isErrorBody(data)) {
+    const { code, message, fields } = data.error;
+    const details = (data.error as { details?: unknown }).details;
+    return new ApiError(status, code, message ?? '', fields, requestId, details);
+  }
+  return new ApiError(status, `http_${status}`, statusText || 'Unexpected response.', undefined, requestId);
+}
+
+/**
+ * A response's JSON body (undefined when empty), or the typed error a failed or malformed
+ * response means. Shared by `api` and `uploadWithProgress` (lib/upload-with-progress.ts).
+ */
+export function readResponse<T>(status: number, statusText: string, text: string, requestId?: string): T {
+  const data = parseResponseText(text);
+  if (status < 200 || status > 299) throw responseError(status, statusText, data, requestId);
+  if (text && data === undefined) {
+    throw new ApiError(status, 'unexpected_response', 'The server sent something that is not JSON.', undefined, requestId);
+  }
+  return data as T;
+}
+
+/** The request never reached the server (offline, DNS, refused). */
+export const networkError = () => new ApiError(0, 'network_error', 'The server could not be reached.');
+
+async function request<T>(method: string, path: string, options: RequestOptions = {}): Promise<T> {
+  const headers = requestHeaders(method);
   let body: BodyInit | undefined;
   if (options.body !== undefined) {
     headers['Content-Type'] = 'application/json';
@@ -64,31 +108,12 @@ async function request<T>(method: string, path: string, options: RequestOptions 
     });
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
-    throw new ApiError(0, 'network_error', 'The server could not be reached.');
+    throw networkError();
   }
 
   const requestId = response.headers.get('X-Request-Id') ?? undefined;
   const text = response.status === 204 ? '' : await response.text();
-  let data: unknown = undefined;
-  if (text) {
-    try {
-      data = JSON.parse(text);
-    } catch {
-      data = undefined;
-    }
-  }
-
-  if (!response.ok) {
-    if (isErrorBody(data)) {
-      const { code, message, fields } = data.error;
-      throw new ApiError(response.status, code, message ?? '', fields, requestId);
-    }
-    throw new ApiError(response.status, `http_${response.status}`, response.statusText || 'Unexpected response.', undefined, requestId);
-  }
-  if (text && data === undefined) {
-    throw new ApiError(response.status, 'unexpected_response', 'The server sent something that is not JSON.', undefined, requestId);
-  }
-  return data as T;
+  return readResponse<T>(response.status, response.statusText, text, requestId);
 }
 
 /** The one way the client talks to `/api`: JSON in and out, same-origin cookie, typed errors. */

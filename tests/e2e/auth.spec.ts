@@ -48,7 +48,7 @@ test.describe('office staff', () => {
 
     await expect(page.getByRole('heading', { level: 1, name: new RegExp(`${firstName(me.name)}$`) })).toBeVisible();
     const nav = page.getByRole('navigation', { name: 'Main' });
-    for (const label of ['Today', 'Clients', 'Walls', 'Tickets', 'Schedule', 'Stock', 'Reports', 'Planner', 'Users', 'Audit log', 'Mailbox']) {
+    for (const label of ['Today', 'Clients', 'Walls', 'Tickets', 'Planner', 'Users', 'Audit log', 'Mailbox']) {
       await expect(nav.getByRole('link', { name: label, exact: true })).toBeVisible();
     }
     await expect(page.getByRole('searchbox', { name: 'Search Gridkeep' })).toBeVisible();
@@ -69,7 +69,7 @@ test.describe('office staff', () => {
 
     const nav = page.getByRole('navigation', { name: 'Main' });
     await expect(nav.getByRole('link', { name: 'Tickets', exact: true })).toBeVisible();
-    await expect(nav.getByRole('link', { name: 'Schedule', exact: true })).toBeVisible();
+    await expect(nav.getByRole('link', { name: 'Planner', exact: true })).toBeVisible();
     await expect(nav.getByRole('link', { name: 'Users', exact: true })).toHaveCount(0);
     await expect(nav.getByRole('link', { name: 'Audit log', exact: true })).toHaveCount(0);
 
@@ -93,7 +93,7 @@ test.describe('technician on a phone', () => {
     await expect(page.getByRole('heading', { level: 1, name: new RegExp(`${firstName(me.name)}$`) })).toBeVisible();
     const nav = page.getByRole('navigation', { name: 'Main' });
     const viewport = page.viewportSize()!;
-    for (const label of ['Today', 'Walls', 'Van stock', 'Scan', 'Me']) {
+    for (const label of ['Today', 'Tickets', 'Walls', 'Scan', 'Me']) {
       const link = nav.getByRole('link', { name: label, exact: true });
       await expect(link).toBeVisible();
       const box = (await link.boundingBox())!;
@@ -138,7 +138,7 @@ test.describe('client portal', () => {
 
     await expect(page.getByRole('banner').getByText(contact.clientName!, { exact: true })).toBeVisible();
     const nav = page.getByRole('navigation', { name: 'Main' });
-    for (const label of ['Overview', 'Walls', 'Tickets', 'Visits']) {
+    for (const label of ['Overview', 'Walls', 'Tickets']) {
       await expect(nav.getByRole('link', { name: label, exact: true })).toBeVisible();
     }
     await expect(page.getByRole('link', { name: 'Stock', exact: true })).toHaveCount(0);

@@ -70,7 +70,7 @@ test('a client opens a ticket with a photo and tapped cells; the office replies;
 
   // ---- the client opens a ticket on the phone ----
   const title = `Two dark cabinets top left ${Date.now().toString(36)}`;
-  await page.getByRole('link', { name: 'Tickets' }).click();
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Tickets', exact: true }).click();
   await page.getByRole('link', { name: 'Open a ticket' }).first().click();
   await expect(page.getByRole('heading', { name: 'Open a ticket' })).toBeVisible();
   const siteSelect = page.getByLabel('Site', { exact: true });

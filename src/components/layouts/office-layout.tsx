@@ -1,11 +1,8 @@
 import clsx from 'clsx';
 import type { LucideIcon } from 'lucide-react';
 import {
-  Boxes,
   Building2,
   Calculator,
-  CalendarDays,
-  ChartColumn,
   Grid3x3,
   History,
   Inbox,
@@ -36,9 +33,6 @@ const workItems: NavItem[] = [
   { to: paths.walls.getHref(), label: 'Walls', icon: Grid3x3 },
   { to: paths.catalogue.getHref(), label: 'Catalogue', icon: Layers },
   { to: paths.tickets.getHref(), label: 'Tickets', icon: Ticket },
-  { to: paths.schedule.getHref(), label: 'Schedule', icon: CalendarDays },
-  { to: paths.stock.getHref(), label: 'Stock', icon: Boxes },
-  { to: paths.reports.getHref(), label: 'Reports', icon: ChartColumn },
   { to: paths.planner.getHref(), label: 'Planner', icon: Calculator },
 ];
 

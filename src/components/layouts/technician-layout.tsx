@@ -1,6 +1,6 @@
 import clsx from 'clsx';
 import type { LucideIcon } from 'lucide-react';
-import { CircleUser, Grid3x3, House, ScanLine, Truck } from 'lucide-react';
+import { CircleUser, Grid3x3, House, ScanLine, Ticket } from 'lucide-react';
 import { NavLink } from 'react-router-dom';
 import { SkipLink, UserMenu, type ShellProps } from '@/components/layouts/user-menu';
 import { Logo } from '@/components/ui/logo';
@@ -15,8 +15,8 @@ interface NavItem {
 
 const items: NavItem[] = [
   { to: paths.home.getHref(), label: 'Today', icon: House, end: true },
+  { to: paths.tickets.getHref(), label: 'Tickets', icon: Ticket },
   { to: paths.walls.getHref(), label: 'Walls', icon: Grid3x3 },
-  { to: paths.vanStock.getHref(), label: 'Van stock', icon: Truck },
   { to: paths.scan.getHref(), label: 'Scan', icon: ScanLine },
   { to: paths.account.getHref(), label: 'Me', icon: CircleUser },
 ];

@@ -100,6 +100,27 @@ export function wallLayout(columns: number, rows: number, view: WallView = 'fron
   };
 }
 
+/**
+ * The columns and rows a window (in user units) shows, widened by `pad` cells on each side; in
+ * the rear view the columns are mirrored like the cells. Null when the window holds no cell.
+ */
+export function cellsInWindow(
+  layout: WallLayout,
+  vb: Rect,
+  pad = 0,
+): { columns: [number, number]; rows: [number, number] } | null {
+  const stepX = layout.cellWidth + CELL_GAP;
+  const stepY = layout.cellHeight + CELL_GAP;
+  const firstSlot = Math.max(0, Math.floor((vb.x - layout.grid.x) / stepX) - pad);
+  const lastSlot = Math.min(layout.columns - 1, Math.floor((vb.x + vb.width - layout.grid.x) / stepX) + pad);
+  const firstRow = Math.max(1, Math.floor((vb.y - layout.grid.y) / stepY) + 1 - pad);
+  const lastRow = Math.min(layout.rows, Math.floor((vb.y + vb.height - layout.grid.y) / stepY) + 1 + pad);
+  if (firstSlot > lastSlot || firstRow > lastRow) return null;
+  const columns: [number, number] =
+    layout.view === 'rear' ? [layout.columns - lastSlot, layout.columns - firstSlot] : [firstSlot + 1, lastSlot + 1];
+  return { columns, rows: [firstRow, lastRow] };
+}
+
 // ---- the visible window ----
 
 /** How far one can zoom in: at least 4×, more on big walls (about 3 cells across at most zoom). */

@@ -4,6 +4,7 @@ import {
   memo,
   useCallback,
   useEffect,
+  useLayoutEffect,
   useMemo,
   useRef,
   useState,
@@ -13,6 +14,7 @@ import {
   type ReactNode,
 } from 'react';
 import {
+  cellsInWindow,
   maxScaleFor,
   mirrorViewBox,
   panBy,
@@ -99,117 +101,116 @@ export function cellName(p: GridPosition, cell: WallMapCell | undefined): string
 }
 
 // ---------------------------------------------------------------------------------------------
-// One cell: plain SVG, memoised, no handlers of its own (the map listens once for all of them).
+// The cells: plain SVG, one memoised component per row (a tap or an arrow key redraws the one or
+// two rows it touches, not the wall), no handlers of their own (the map listens once for all).
+// Text is the costly part for the browser, so a cell carries it only when it is big enough on
+// screen to read and inside the visible window; its accessible name is always there.
 // ---------------------------------------------------------------------------------------------
-interface MapCellProps {
+
+/** What a cell shows, independent of the view and the zoom (computed once per data change). */
+interface CellModel {
   column: number;
   row: number;
-  x: number;
-  y: number;
-  width: number;
-  height: number;
   tone: CellTone;
   serial?: string;
   heat?: number;
-  selected: boolean;
-  tabbable: boolean;
-  textLevel: TextLevel;
   name: string;
-  interactive: boolean;
 }
 
-const MapCell = memo(function MapCell({
-  column,
-  row,
-  x,
-  y,
-  width,
-  height,
-  tone,
-  serial,
-  heat,
-  selected,
-  tabbable,
-  textLevel,
-  name,
-  interactive,
-}: MapCellProps) {
-  const style = toneStyles[tone];
+interface MapRowProps {
+  cells: readonly CellModel[];
+  layout: WallLayout;
+  /** 'none' for rows outside the visible window. */
+  textLevel: TextLevel;
+  /** The columns of this row that carry text (inside the visible window). */
+  textFrom: number;
+  textTo: number;
+  /** The selected columns of this row, written "|3|7|" (a string, so the row's memo holds). */
+  selectedColumns: string;
+  /** The column that holds the tab stop, 0 when it is in another row. */
+  tabColumn: number;
+}
+
+const MapRow = memo(function MapRow({ cells, layout, textLevel, textFrom, textTo, selectedColumns, tabColumn }: MapRowProps) {
+  const width = layout.cellWidth;
+  const height = layout.cellHeight;
   const size = Math.min(width, height);
-  const label = `C${column}·R${row}`;
-  const showSerial = textLevel === 'full' && serial;
   const labelSize = size * 0.2;
-  // Long serials shrink to fit the cell (about 0.6 em per character in the UI font).
-  const serialSize = serial ? Math.min(size * 0.15, (width * 0.88) / (0.62 * serial.length)) : 0;
-  const cx = x + width / 2;
+  const y = layout.rowCenterY(cells[0]?.row ?? 1) - height / 2;
   const cy = y + height / 2;
   return (
-    <g
-      role="gridcell"
-      data-c={column}
-      data-r={row}
-      tabIndex={tabbable ? 0 : -1}
-      aria-label={name}
-      aria-selected={selected}
-      className={clsx('group outline-none', interactive && 'cursor-pointer')}
-    >
-      <rect
-        x={x}
-        y={y}
-        width={width}
-        height={height}
-        rx={4}
-        className={clsx(style.fill, style.stroke, interactive && 'group-hover:stroke-ink-800')}
-        strokeWidth={tone === 'empty' ? 2 : 2.5}
-        strokeDasharray={tone === 'empty' ? '7 5' : undefined}
-      />
-      {heat && heat > 0 ? (
-        <rect x={x} y={y} width={width} height={height} rx={4} className="fill-state-breached-dot" fillOpacity={0.12 + 0.6 * Math.min(1, heat)} />
-      ) : null}
-      {tone === 'open_ticket' ? (
-        // A mark as well as a colour: colour is never the only signal.
-        <path
-          d={`M ${x + width - size * 0.3} ${y + 2} L ${x + width - 2} ${y + 2} L ${x + width - 2} ${y + size * 0.3} Z`}
-          className="fill-state-open-ticket-dot"
-        />
-      ) : null}
-      {selected ? (
-        <rect
-          x={x + 5}
-          y={y + 5}
-          width={width - 10}
-          height={height - 10}
-          rx={3}
-          fill="none"
-          className="stroke-amber-500"
-          strokeWidth={7}
-        />
-      ) : null}
-      {textLevel !== 'none' ? (
-        <text
-          x={cx}
-          y={showSerial ? cy - labelSize * 0.25 : cy}
-          textAnchor="middle"
-          dominantBaseline="central"
-          fontSize={labelSize}
-          fontWeight={600}
-          className={clsx(style.text, 'pointer-events-none select-none')}
-        >
-          {label}
-        </text>
-      ) : null}
-      {showSerial ? (
-        <text
-          x={cx}
-          y={cy + labelSize * 0.95}
-          textAnchor="middle"
-          dominantBaseline="central"
-          fontSize={serialSize}
-          className={clsx(style.text, 'pointer-events-none select-none font-mono')}
-        >
-          {serial}
-        </text>
-      ) : null}
+    <g role="row">
+      {cells.map((cell) => {
+        const { column, row, tone, serial, heat } = cell;
+        const style = toneStyles[tone];
+        const cx = layout.columnCenterX(column);
+        const x = cx - width / 2;
+        const selected = selectedColumns !== '' && selectedColumns.includes(`|${column}|`);
+        const level = column >= textFrom && column <= textTo ? textLevel : 'none';
+        const showSerial = level === 'full' && serial;
+        // Long serials shrink to fit the cell (about 0.6 em per character in the UI font).
+        const serialSize = serial ? Math.min(size * 0.15, (width * 0.88) / (0.62 * serial.length)) : 0;
+        return (
+          <g
+            key={column}
+            role="gridcell"
+            data-c={column}
+            data-r={row}
+            tabIndex={column === tabColumn ? 0 : -1}
+            aria-label={cell.name}
+            aria-selected={selected}
+          >
+            <rect
+              x={x}
+              y={y}
+              width={width}
+              height={height}
+              rx={4}
+              className={style.shape}
+              strokeWidth={tone === 'empty' ? 2 : 2.5}
+              strokeDasharray={tone === 'empty' ? '7 5' : undefined}
+            />
+            {heat && heat > 0 ? (
+              <rect x={x} y={y} width={width} height={height} rx={4} className="fill-state-breached-dot" fillOpacity={0.12 + 0.6 * Math.min(1, heat)} />
+            ) : null}
+            {tone === 'open_ticket' ? (
+              // A mark as well as a colour: colour is never the only signal.
+              <path
+                d={`M ${x + width - size * 0.3} ${y + 2} L ${x + width - 2} ${y + 2} L ${x + width - 2} ${y + size * 0.3} Z`}
+                className="fill-state-open-ticket-dot"
+              />
+            ) : null}
+            {selected ? (
+              <rect x={x + 5} y={y + 5} width={width - 10} height={height - 10} rx={3} fill="none" className="stroke-amber-500" strokeWidth={7} />
+            ) : null}
+            {level !== 'none' ? (
+              <text
+                x={cx}
+                y={showSerial ? cy - labelSize * 0.25 : cy}
+                textAnchor="middle"
+                dominantBaseline="central"
+                fontSize={labelSize}
+                fontWeight={600}
+                className={style.text}
+              >
+                {`C${column}·R${row}`}
+              </text>
+            ) : null}
+            {showSerial ? (
+              <text
+                x={cx}
+                y={cy + labelSize * 0.95}
+                textAnchor="middle"
+                dominantBaseline="central"
+                fontSize={serialSize}
+                className={clsx(style.text, 'font-mono')}
+              >
+                {serial}
+              </text>
+            ) : null}
+          </g>
+        );
+      })}
     </g>
   );
 });
@@ -287,32 +288,67 @@ export function WallMap({
     [],
   );
 
-  // The map's size on screen decides how much text the cells can carry.
+  // The map's size on screen decides how much text the cells can carry. It is measured before
+  // the first paint; until then no cell carries text (drawing 2,000 labels only to remove them
+  // a moment later costs more than the whole map).
   const [size, setSize] = useState({ width: 0, height: 0 });
-  useEffect(() => {
+  useLayoutEffect(() => {
     const svg = svgRef.current;
-    if (!svg || typeof ResizeObserver === 'undefined') return;
-    const observer = new ResizeObserver(([entry]) => {
-      const { width, height } = entry.contentRect;
+    if (!svg) return;
+    const measured = (width: number, height: number) =>
       setSize((s) => (s.width === width && s.height === height ? s : { width, height }));
-    });
+    const box = svg.getBoundingClientRect();
+    measured(box.width, box.height);
+    if (typeof ResizeObserver === 'undefined') return;
+    const observer = new ResizeObserver(([entry]) => measured(entry.contentRect.width, entry.contentRect.height));
     observer.observe(svg);
     return () => observer.disconnect();
   }, []);
   const pxPerUnit = size.width > 0 ? Math.min(size.width / vb.width, size.height / vb.height) : 0.6;
   const cellPx = Math.min(layout.cellWidth, layout.cellHeight) * pxPerUnit;
-  const textLevel = textLevelFor(cellPx);
+  const textLevel = size.width > 0 ? textLevelFor(cellPx) : 'none';
   const step = rulerStep(layout.cellWidth * pxPerUnit);
   // About 12 px on screen, never more than the band holds (rounded: no re-render per pixel of zoom).
   const rulerFont = Math.round(Math.min(layout.ruler * 0.48, 12 / pxPerUnit));
   const scale = scaleOf(vb, layout.content);
 
-  const cellIndex = useMemo(() => {
+  // What every cell shows, row by row: only new data changes it (not the view, zoom or focus).
+  const cellRows = useMemo(() => {
     const index = new Map<string, WallMapCell>();
     for (const cell of cells ?? []) index.set(keyOf(cell), cell);
-    return index;
-  }, [cells]);
+    const result: CellModel[][] = [];
+    for (let r = 1; r <= rows; r += 1) {
+      const row: CellModel[] = [];
+      for (let c = 1; c <= columns; c += 1) {
+        const p = { column: c, row: r };
+        const cell = index.get(keyOf(p));
+        row.push({ column: c, row: r, tone: toneOf(cell), serial: cell?.serial, heat: cell?.heat, name: cellName(p, cell) });
+      }
+      result.push(row);
+    }
+    return result;
+  }, [cells, columns, rows]);
   const selectedKeys = useMemo(() => new Set((selected ?? []).map(keyOf)), [selected]);
+  const selectedByRow = useMemo(() => {
+    const byRow = new Map<number, string>();
+    for (const p of selected ?? []) byRow.set(p.row, `${byRow.get(p.row) ?? '|'}${p.column}|`);
+    return byRow;
+  }, [selected]);
+
+  // Text only on the cells in view (and a margin), in blocks of 8 so that panning a little does
+  // not redraw any row.
+  const textWindow = useMemo(() => {
+    if (textLevel === 'none') return null;
+    const span = cellsInWindow(layout, vb, 1);
+    if (!span) return null;
+    const block = (from: number, to: number, max: number): [number, number] => [
+      Math.floor((from - 1) / 8) * 8 + 1,
+      Math.min(max, Math.ceil(to / 8) * 8),
+    ];
+    return { columns: block(...span.columns, columns), rows: block(...span.rows, rows) };
+  }, [textLevel, layout, vb, columns, rows]);
+  const [textFrom, textTo] = textWindow?.columns ?? [0, 0];
+  const [textRowFrom, textRowTo] = textWindow?.rows ?? [0, 0];
 
   // Roving tab stop: one cell is in the tab order; arrow keys move it.
   const [focusPos, setFocusPos] = useState<GridPosition>(() => selected?.[0] ?? { column: 1, row: 1 });
@@ -320,7 +356,6 @@ export function WallMap({
     column: Math.min(columns, Math.max(1, focusPos.column)),
     row: Math.min(rows, Math.max(1, focusPos.row)),
   };
-  const focusKey = keyOf(focus);
   const [keyboardRing, setKeyboardRing] = useState(false);
   const pendingFocus = useRef(false);
 
@@ -332,42 +367,22 @@ export function WallMap({
   }, [focus.column, focus.row]);
 
   const interactive = Boolean(onCellActivate);
-  const cellLayer = useMemo(() => {
-    const rowGroups: ReactNode[] = [];
-    for (let r = 1; r <= rows; r += 1) {
-      const rowCells: ReactNode[] = [];
-      for (let c = 1; c <= columns; c += 1) {
-        const key = `${c}:${r}`;
-        const cell = cellIndex.get(key);
-        const rect = layout.cellRect({ column: c, row: r });
-        rowCells.push(
-          <MapCell
-            key={key}
-            column={c}
-            row={r}
-            x={rect.x}
-            y={rect.y}
-            width={rect.width}
-            height={rect.height}
-            tone={toneOf(cell)}
-            serial={cell?.serial}
-            heat={cell?.heat}
-            selected={selectedKeys.has(key)}
-            tabbable={key === focusKey}
-            textLevel={textLevel}
-            name={cellName({ column: c, row: r }, cell)}
-            interactive={interactive}
-          />,
-        );
-      }
-      rowGroups.push(
-        <g key={r} role="row">
-          {rowCells}
-        </g>,
-      );
-    }
-    return rowGroups;
-  }, [columns, rows, layout, cellIndex, selectedKeys, focusKey, textLevel, interactive]);
+  const cellLayer = cellRows.map((rowCells, i) => {
+    const r = i + 1;
+    const withText = textLevel !== 'none' && r >= textRowFrom && r <= textRowTo;
+    return (
+      <MapRow
+        key={r}
+        cells={rowCells}
+        layout={layout}
+        textLevel={withText ? textLevel : 'none'}
+        textFrom={withText ? textFrom : 0}
+        textTo={withText ? textTo : 0}
+        selectedColumns={selectedByRow.get(r) ?? ''}
+        tabColumn={focus.row === r ? focus.column : 0}
+      />
+    );
+  });
 
   const geometry = useMemo<WallMapGeometry>(() => ({ cellRect: layout.cellRect, center: layout.center }), [layout]);
 
@@ -583,7 +598,14 @@ export function WallMap({
           }}
         >
           <Rulers layout={layout} step={step} fontSize={rulerFont} />
-          {cellLayer}
+          <g
+            className={clsx(
+              '[&>g>g]:outline-none [&_text]:pointer-events-none',
+              interactive && '[&>g>g:hover>rect:first-child]:stroke-ink-800 [&>g>g]:cursor-pointer',
+            )}
+          >
+            {cellLayer}
+          </g>
           {overlay ? <g pointerEvents="none">{overlay(geometry)}</g> : null}
           {ring ? (
             <rect

@@ -9,7 +9,6 @@ import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
 import { attachmentsQueryOptions } from '@/features/tickets/api/get-attachments';
 import { commentsQueryOptions } from '@/features/tickets/api/get-comments';
-import { useSiteTimeZone } from '@/features/tickets/api/get-site-time-zone';
 import { ticketQueryOptions, useTicket } from '@/features/tickets/api/get-ticket';
 import type { TicketDetail } from '@/features/tickets/api/types';
 import { useUpdateTicket } from '@/features/tickets/api/update-ticket';
@@ -20,12 +19,12 @@ import { TicketFacts, TicketVisits } from '@/features/tickets/components/ticket-
 import { ClockBadge, PriorityBadge, TicketStatusBadge } from '@/features/tickets/components/ticket-status';
 import { TicketSummary } from '@/features/tickets/components/ticket-summary';
 import { TriagePanel } from '@/features/tickets/components/triage-panel';
-import { useMediaQuery } from '@/features/tickets/components/use-media-query';
 import { requireUser } from '@/app/auth-guard';
 import { errorMessage } from '@/lib/errors';
 import { queryClient } from '@/lib/query-client';
 import { audienceOf, isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { useMediaQuery } from '@/lib/use-media-query';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
@@ -56,7 +55,7 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
   const audience = audienceOf(user);
   const forClient = audience === 'client';
   const office = isOffice(user);
-  const timeZone = useSiteTimeZone(ticket.site.id).data;
+  const timeZone = ticket.siteTimeZone;
   const closed = ticket.status === 'closed' || Boolean(ticket.mergedInto);
   // Beside the ticket on a wide screen; on a phone right at the top, where the thumb is.
   const wide = useMediaQuery('(min-width: 1024px)');

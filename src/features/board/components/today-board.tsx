@@ -11,13 +11,13 @@ import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
 import { useAcknowledgeTicket } from '@/features/board/api/acknowledge-ticket';
 import { attentionLimit, useAttentionTickets } from '@/features/board/api/get-attention-tickets';
-import { useClockCounts } from '@/features/board/api/get-clock-counts';
+import { useClockCounts, type OpenClockState } from '@/features/board/api/get-clock-counts';
 import { useWaitingTickets, waitingLimit } from '@/features/board/api/get-waiting-tickets';
 import type { BoardTicket } from '@/features/board/api/types';
 import { errorMessage } from '@/lib/errors';
 import { formatAgo, formatDateTime } from '@/lib/format';
 
-const clockTiles: { state: 'breached' | 'at_risk' | 'paused' | 'on_track'; label: string; hint: string; tone: string; dot: string }[] = [
+const clockTiles: { state: OpenClockState; label: string; hint: string; tone: string; dot: string }[] = [
   { state: 'breached', label: 'Breached', hint: 'Past a due time', tone: 'border-l-state-breached-dot', dot: 'bg-state-breached-dot' },
   { state: 'at_risk', label: 'At risk', hint: 'Close to a due time', tone: 'border-l-state-at-risk-dot', dot: 'bg-state-at-risk-dot' },
   { state: 'paused', label: 'Paused', hint: 'Waiting for the client', tone: 'border-l-stone-400', dot: 'bg-stone-400' },
@@ -67,7 +67,7 @@ function ClockCountTiles() {
                   {t.label}
                 </span>
                 <span className="mt-1 block text-3xl font-semibold tabular-nums text-ink-950" data-testid={`count-${t.state}`}>
-                  {counts.isPending ? <Spinner label="" className="text-lg text-stone-400" /> : `${counts.data.counts[t.state]}${counts.data.complete ? '' : '+'}`}
+                  {counts.isPending ? <Spinner label="" className="text-lg text-stone-400" /> : counts.data[t.state]}
                 </span>
                 <span className="block text-xs text-stone-600 group-hover:underline">{t.hint}</span>
               </Link>

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { csrfHeader } from '@shared/schemas/auth';
 import type { ImportResult, ImportRowError } from '@shared/schemas/register';
-import { ApiError } from '@/lib/api-client';
+import { ApiError, isApiError } from '@/lib/api-client';
+import { uploadWithProgress } from '@/lib/upload-with-progress';
 import { cabinetOwnerKeys } from '@/features/cabinets/api/keys';
 
 /** The import was refused: `rows` says which lines and why (nothing was written). */
@@ -13,7 +13,7 @@ export class CabinetImportError extends ApiError {
     readonly rows: ImportRowError[],
     requestId?: string,
   ) {
-    super(status, code, message, undefined, requestId);
+    super(status, code, message, undefined, requestId, { errors: rows });
     this.name = 'CabinetImportError';
   }
 }
@@ -27,46 +27,29 @@ export interface ImportCabinetsInput {
   signal?: AbortSignal;
 }
 
+/** The rows a refusal lists (`error.details.errors`), when it lists any. */
+function refusedRows(details: unknown): ImportRowError[] | undefined {
+  const errors = (details as { errors?: unknown } | undefined)?.errors;
+  return Array.isArray(errors) ? (errors as ImportRowError[]) : undefined;
+}
+
 /**
- * Uploads a CSV of `serial,column,row,batch` for a wall. XMLHttpRequest rather than fetch
- * because only it reports upload progress. All or nothing: a refusal lists every bad row.
+ * Uploads a CSV of `serial,column,row,batch` for a wall, with progress. All or nothing: a
+ * refusal lists every bad row.
  */
-export function importCabinets({ wallId, file, onProgress, signal }: ImportCabinetsInput): Promise<ImportResult> {
-  return new Promise((resolve, reject) => {
-    const xhr = new XMLHttpRequest();
-    xhr.open('POST', `/api/walls/${encodeURIComponent(wallId)}/cabinets/import`);
-    xhr.setRequestHeader('Content-Type', 'text/csv');
-    xhr.setRequestHeader('Accept', 'application/json');
-    xhr.setRequestHeader(csrfHeader.name, csrfHeader.value);
-    xhr.withCredentials = true;
-    xhr.upload.onprogress = (e) => {
-      if (e.lengthComputable) onProgress?.(e.loaded / e.total);
-    };
-    xhr.onload = () => {
-      const requestId = xhr.getResponseHeader('X-Request-Id') ?? undefined;
-      let body: unknown;
-      try {
-        body = xhr.responseText ? JSON.parse(xhr.responseText) : undefined;
-      } catch {
-        body = undefined;
-      }
-      if (xhr.status >= 200 && xhr.status < 300) {
-        onProgress?.(1);
-        resolve(body as ImportResult);
-        return;
-      }
-      const error = (body as { error?: { code?: string; message?: string; details?: { errors?: ImportRowError[] } } } | undefined)?.error;
-      if (error?.code) {
-        reject(new CabinetImportError(xhr.status, error.code, error.message ?? '', error.details?.errors ?? [], requestId));
-      } else {
-        reject(new ApiError(xhr.status, `http_${xhr.status}`, xhr.statusText || 'Unexpected response.', undefined, requestId));
-      }
-    };
-    xhr.onerror = () => reject(new ApiError(0, 'network_error', 'The server could not be reached.'));
-    xhr.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));
-    signal?.addEventListener('abort', () => xhr.abort(), { once: true });
-    xhr.send(file);
-  });
+export async function importCabinets({ wallId, file, onProgress, signal }: ImportCabinetsInput): Promise<ImportResult> {
+  try {
+    return await uploadWithProgress<ImportResult>(`/api/walls/${encodeURIComponent(wallId)}/cabinets/import`, {
+      body: file,
+      contentType: 'text/csv',
+      onProgress,
+      signal,
+    });
+  } catch (error) {
+    if (!isApiError(error)) throw error;
+    const rows = refusedRows(error.details);
+    throw rows ? new CabinetImportError(error.status, error.code, error.message, rows, error.requestId) : error;
+  }
 }
 
 export function useImportCabinets() {

@@ -1,29 +1,3 @@
-import type { ReactNode, TextareaHTMLAttributes } from 'react';
-import { useFormContext } from 'react-hook-form';
-import { describedBy, FieldShell, inputClasses, useFieldState } from '@/components/ui/field';
-
-interface TextAreaFieldProps extends Omit<TextareaHTMLAttributes<HTMLTextAreaElement>, 'name' | 'id'> {
-  name: string;
-  label: ReactNode;
-  hint?: ReactNode;
-  className?: string;
-}
-
-/** A multi-line text input bound to the surrounding <Form>. */
-export function TextAreaField({ name, label, hint, className, rows = 4, ...rest }: TextAreaFieldProps) {
-  const { register } = useFormContext();
-  const { id, hintId, errorId, error } = useFieldState(name);
-  return (
-    <FieldShell id={id} label={label} hint={hint} hintId={hintId} error={error} errorId={errorId} className={className}>
-      <textarea
-        id={id}
-        rows={rows}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(hint, error, hintId, errorId)}
-        className={inputClasses(Boolean(error), 'py-2 leading-normal')}
-        {...rest}
-        {...register(name)}
-      />
-    </FieldShell>
-  );
-}
+// The one TextAreaField lives in components/ui; this path stays only while cabinet-card.tsx
+// still imports it from here. Import '@/components/ui/text-area-field' instead.
+export { TextAreaField } from '@/components/ui/text-area-field';

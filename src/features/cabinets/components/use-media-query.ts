@@ -1,14 +1,3 @@
-import { useSyncExternalStore } from 'react';
-
-/** True while the CSS media query matches (e.g. a screen wide enough for a side panel). */
-export function useMediaQuery(query: string): boolean {
-  return useSyncExternalStore(
-    (notify) => {
-      const list = window.matchMedia(query);
-      list.addEventListener('change', notify);
-      return () => list.removeEventListener('change', notify);
-    },
-    () => window.matchMedia(query).matches,
-    () => false,
-  );
-}
+// The one useMediaQuery lives in lib; this path stays only while cabinet-wall-map.tsx still
+// imports it from here. Import '@/lib/use-media-query' instead.
+export { useMediaQuery } from '@/lib/use-media-query';

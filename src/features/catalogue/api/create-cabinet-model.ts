@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CabinetModelInput } from '@shared/schemas/register';
+import type { CabinetModel, CabinetModelInput } from '@shared/schemas/register';
 import { api } from '@/lib/api-client';
 import { catalogueKeys } from '@/features/catalogue/api/keys';
-import type { CabinetModel } from '@/features/catalogue/api/types';
 
 export const createCabinetModel = (input: CabinetModelInput) => api.post<CabinetModel>('/api/cabinet-models', input);
 

@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ControllerInput } from '@shared/schemas/register';
+import type { Controller, ControllerInput } from '@shared/schemas/register';
 import { api } from '@/lib/api-client';
 import { controllerOwnerKeys } from '@/features/catalogue/api/keys';
-import type { Controller } from '@/features/catalogue/api/types';
 
 export const createController = (input: ControllerInput) => api.post<Controller>('/api/controllers', input);
 

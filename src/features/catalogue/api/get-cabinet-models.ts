@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { CabinetModel } from '@shared/schemas/register';
 import { api } from '@/lib/api-client';
 import { catalogueKeys } from '@/features/catalogue/api/keys';
-import type { CabinetModel } from '@/features/catalogue/api/types';
 
 /** The cabinet models in the catalogue, by name (archived ones left out). */
 export const getCabinetModels = (signal?: AbortSignal) => api.get<{ items: CabinetModel[] }>('/api/cabinet-models', { signal });

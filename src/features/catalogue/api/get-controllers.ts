@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { Controller } from '@shared/schemas/register';
 import { api } from '@/lib/api-client';
 import { catalogueKeys } from '@/features/catalogue/api/keys';
-import type { Controller } from '@/features/catalogue/api/types';
 
 /** Controllers by serial; with `wallId`, only those driving that wall. */
 export const getControllers = (wallId?: string, signal?: AbortSignal) =>

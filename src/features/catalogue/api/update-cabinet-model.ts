@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CabinetModelPatch } from '@shared/schemas/register';
+import type { CabinetModel, CabinetModelPatch } from '@shared/schemas/register';
 import { api } from '@/lib/api-client';
 import { catalogueKeys } from '@/features/catalogue/api/keys';
-import type { CabinetModel } from '@/features/catalogue/api/types';
 
 /** Only the name and maker change (and archiving): walls already built keep their physical spec. */
 export const updateCabinetModel = ({ id, ...input }: CabinetModelPatch & { id: string }) =>

@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ControllerPatch } from '@shared/schemas/register';
+import type { Controller, ControllerPatch } from '@shared/schemas/register';
 import { api } from '@/lib/api-client';
 import { controllerOwnerKeys } from '@/features/catalogue/api/keys';
-import type { Controller } from '@/features/catalogue/api/types';
 
 /** The wall it drives, firmware, outputs in use, notes, archiving. */
 export const updateController = ({ id, ...input }: ControllerPatch & { id: string }) =>

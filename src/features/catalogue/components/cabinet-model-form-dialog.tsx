@@ -1,4 +1,4 @@
-import { cabinetModelInput, cabinetModelPatch } from '@shared/schemas/register';
+import { cabinetModelInput, cabinetModelPatch, type CabinetModel } from '@shared/schemas/register';
 import { useFormContext } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { Checkbox } from '@/components/ui/checkbox';
@@ -8,7 +8,6 @@ import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { useCreateCabinetModel } from '@/features/catalogue/api/create-cabinet-model';
-import type { CabinetModel } from '@/features/catalogue/api/types';
 import { useUpdateCabinetModel } from '@/features/catalogue/api/update-cabinet-model';
 
 const asNumber = { valueAsNumber: true };

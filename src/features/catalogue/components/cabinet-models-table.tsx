@@ -1,12 +1,12 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { LayoutGrid } from 'lucide-react';
 import { useMemo, useState } from 'react';
+import type { CabinetModel } from '@shared/schemas/register';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { useCabinetModels } from '@/features/catalogue/api/get-cabinet-models';
-import type { CabinetModel } from '@/features/catalogue/api/types';
 import { EditCabinetModelDialog } from '@/features/catalogue/components/cabinet-model-form-dialog';
 
 const column = createColumnHelper<CabinetModel>();

@@ -1,4 +1,4 @@
-import { controllerInput, controllerPatch } from '@shared/schemas/register';
+import { controllerInput, controllerPatch, type Controller } from '@shared/schemas/register';
 import { useEffect } from 'react';
 import { useFormContext } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
@@ -6,12 +6,11 @@ import { Checkbox } from '@/components/ui/checkbox';
 import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField, type SelectOption } from '@/components/ui/select-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { useCreateController } from '@/features/catalogue/api/create-controller';
-import type { Controller } from '@/features/catalogue/api/types';
 import { useUpdateController } from '@/features/catalogue/api/update-controller';
-import { TextAreaField } from '@/features/catalogue/components/text-area-field';
 
 const asNumber = { valueAsNumber: true };
 const nullIfEmpty = { setValueAs: (v: unknown) => (v === '' || v === undefined ? null : v) };

@@ -2,13 +2,13 @@ import { createColumnHelper } from '@tanstack/react-table';
 import { Cpu } from 'lucide-react';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
+import type { Controller } from '@shared/schemas/register';
 import { Button } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import type { SelectOption } from '@/components/ui/select-field';
 import { paths } from '@/config/paths';
 import { useControllers } from '@/features/catalogue/api/get-controllers';
-import type { Controller } from '@/features/catalogue/api/types';
 import { EditControllerDialog } from '@/features/catalogue/components/controller-form-dialog';
 
 const column = createColumnHelper<Controller>();

@@ -7,6 +7,7 @@ import { Checkbox } from '@/components/ui/checkbox';
 import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField } from '@/components/ui/select-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
@@ -14,7 +15,6 @@ import { useCreateClient } from '@/features/clients/api/create-client';
 import { useServicePlans } from '@/features/clients/api/get-service-plans';
 import type { ClientDetail } from '@/features/clients/api/types';
 import { useUpdateClient } from '@/features/clients/api/update-client';
-import { TextAreaField } from '@/features/clients/components/text-area-field';
 
 const nullIfEmpty = { setValueAs: (v: unknown) => (v === '' || v === undefined ? null : v) };
 

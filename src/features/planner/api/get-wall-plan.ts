@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { CabinetModel, Controller } from '@shared/schemas/register';
 import type { StoredPlanSettings, StoredWallRuns } from '@shared/schemas/wall-plan';
 import { api } from '@/lib/api-client';
-import type { CabinetModel } from '@/features/planner/api/get-cabinet-models';
 import { plannerKeys } from '@/features/planner/api/keys';
 
 /** What the runs page reads of GET /api/walls/:id. */
@@ -14,7 +14,7 @@ export interface WallPlanView {
   rows: number;
   mounting: string;
   cabinetModel: CabinetModel;
-  controllers: { id: string; model: string; serial: string; outputs: number; pixelsPerOutput: number }[];
+  controllers: Pick<Controller, 'id' | 'model' | 'serial' | 'outputs' | 'pixelsPerOutput'>[];
   planSettings: StoredPlanSettings | null;
   dataRuns: StoredWallRuns | null;
   powerRuns: StoredWallRuns | null;

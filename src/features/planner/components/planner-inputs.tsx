@@ -1,5 +1,6 @@
 import { circuitCapacityW } from '@shared/calc/electrical';
 import { pixelPitchMm } from '@shared/calc/viewing-distance';
+import type { CabinetModel } from '@shared/schemas/register';
 import clsx from 'clsx';
 import { Pencil } from 'lucide-react';
 import { useController, useFormContext, useWatch } from 'react-hook-form';
@@ -8,7 +9,6 @@ import { Card } from '@/components/ui/card';
 import { Checkbox } from '@/components/ui/checkbox';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
-import type { CabinetModel } from '@/features/planner/api/get-cabinet-models';
 import { ChoiceGroup } from '@/features/planner/components/choice-group';
 import { difference, num, sizeImperial, sizeMetric } from '@/features/planner/utils/format';
 import { gridOptions, inputPresets, type PlannerFormInput } from '@/features/planner/utils/planner-form';

@@ -7,6 +7,7 @@ import { Checkbox } from '@/components/ui/checkbox';
 import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField } from '@/components/ui/select-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
@@ -14,7 +15,6 @@ import { useCreateSite } from '@/features/sites/api/create-site';
 import type { SiteDetail } from '@/features/sites/api/types';
 import { useUpdateSite } from '@/features/sites/api/update-site';
 import { localTime } from '@/features/sites/components/site-time';
-import { TextAreaField } from '@/features/sites/components/text-area-field';
 
 /** Every IANA time zone the browser knows, plus UTC (the server accepts the same list). */
 function timeZoneOptions() {

@@ -31,7 +31,6 @@ export const ticketsKeys = {
    * to sites, walls, clients or people (which invalidates that root) refreshes them too.
    */
   siteOptions: () => ['sites', 'options', 'tickets'] as const,
-  siteTimeZone: (id: string) => ['sites', 'detail', id, 'time-zone'] as const,
   wallOptions: (siteId: string) => ['walls', 'options', 'tickets', siteId] as const,
   wallCabinets: (wallId: string) => ['walls', 'detail', wallId, 'cabinets', 'tickets'] as const,
   wallShape: (wallId: string) => ['walls', 'detail', wallId, 'shape'] as const,

@@ -40,6 +40,8 @@ export interface TicketVisit {
 
 export interface TicketDetail extends TicketListItem {
   description: string;
+  /** The site's IANA time zone: due times and visit windows are shown in the site's local time. */
+  siteTimeZone: string;
   cells: Position[];
   cellLabels: string[];
   wall: (NamedRef & { columns: number; rows: number }) | null;

@@ -6,11 +6,11 @@ import { Alert } from '@/components/ui/alert';
 import { Card } from '@/components/ui/card';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { Spinner } from '@/components/ui/spinner';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import { useToast } from '@/components/ui/toast';
 import { useAddComment } from '@/features/tickets/api/add-comment';
 import { useComments } from '@/features/tickets/api/get-comments';
 import type { TicketComment } from '@/features/tickets/api/types';
-import { TextAreaField } from '@/features/tickets/components/text-area-field';
 import { errorMessage } from '@/lib/errors';
 import { formatAgo, formatDateTime, initials } from '@/lib/format';
 

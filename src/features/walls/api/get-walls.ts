@@ -1,4 +1,4 @@
-import { infiniteQueryOptions, keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
+import { infiniteQueryOptions, keepPreviousData, queryOptions, useInfiniteQuery, useQuery } from '@tanstack/react-query';
 import type { Page } from '@shared/schemas/common';
 import { api } from '@/lib/api-client';
 import { wallsKeys, type WallFilters } from '@/features/walls/api/keys';
@@ -19,3 +19,12 @@ export const wallsInfiniteQueryOptions = (filters: WallFilters) =>
 
 export const useWalls = (filters: WallFilters) =>
   useInfiniteQuery({ ...wallsInfiniteQueryOptions(filters), placeholderData: keepPreviousData });
+
+/** One page of walls, for short views such as the client's overview (`limit` walls at most). */
+export const wallsPageQueryOptions = (filters: WallFilters, limit: number) =>
+  queryOptions({
+    queryKey: wallsKeys.list({ ...filters, limit }),
+    queryFn: ({ signal }) => getWalls({ ...filters, limit }, signal),
+  });
+
+export const useWallsPage = (filters: WallFilters, limit: number) => useQuery(wallsPageQueryOptions(filters, limit));

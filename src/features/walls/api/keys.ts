@@ -11,7 +11,7 @@ export interface WallFilters {
 export const wallsKeys = {
   all: ['walls'] as const,
   lists: () => [...wallsKeys.all, 'list'] as const,
-  list: (filters: WallFilters) => [...wallsKeys.lists(), filters] as const,
+  list: (filters: WallFilters & { limit?: number }) => [...wallsKeys.lists(), filters] as const,
   details: () => [...wallsKeys.all, 'detail'] as const,
   detail: (id: string) => [...wallsKeys.details(), id] as const,
 };

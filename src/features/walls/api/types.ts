@@ -1,4 +1,5 @@
 import type { Mounting } from '@shared/schemas/enums';
+import type { CabinetModel, Controller } from '@shared/schemas/register';
 
 // Response shapes of the walls API (server/services/walls.ts).
 
@@ -19,37 +20,8 @@ export interface WallSummary {
   openTicketCount: number;
 }
 
-/** The catalogue figures of the wall's cabinet model. */
-export interface WallCabinetModel {
-  id: string;
-  name: string;
-  maker: string;
-  widthMm: number;
-  heightMm: number;
-  pixelPitchMm: number;
-  pixelsWide: number;
-  pixelsHigh: number;
-  modulesWide: number;
-  modulesHigh: number;
-  maxPowerW: number;
-  typicalPowerW: number;
-  weightKg: number;
-  brightnessNits: number;
-  voltageMin: number;
-  voltageMax: number;
-  environment: 'indoor' | 'outdoor';
-  archived: boolean;
-}
-
-export interface WallController {
-  id: string;
-  model: string;
-  serial: string;
-  firmware: string;
-  outputs: number;
-  outputsInUse: number;
-  pixelsPerOutput: number;
-}
+/** A controller as the wall page lists it (the catalogue's controller, fewer fields). */
+export type WallController = Pick<Controller, 'id' | 'model' | 'serial' | 'firmware' | 'outputs' | 'outputsInUse' | 'pixelsPerOutput'>;
 
 export interface WallDetail {
   id: string;
@@ -68,7 +40,8 @@ export interface WallDetail {
   inputNotes: string;
   /** Staff only. */
   internalNotes?: string;
-  cabinetModel: WallCabinetModel;
+  /** The catalogue figures of the wall's cabinet model. */
+  cabinetModel: CabinetModel;
   controllers: WallController[];
   planSettings: unknown;
   dataRuns: unknown;

@@ -10,13 +10,13 @@ import { Checkbox } from '@/components/ui/checkbox';
 import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField, type SelectOption } from '@/components/ui/select-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
 import { useCreateWall } from '@/features/walls/api/create-wall';
 import type { WallDetail } from '@/features/walls/api/types';
 import { useUpdateWall } from '@/features/walls/api/update-wall';
-import { TextAreaField } from '@/features/walls/components/text-area-field';
 import { mountingOptions } from '@/features/walls/components/wall-labels';
 
 /** What the form needs of a catalogue model to show the wall's size as it is typed. */
