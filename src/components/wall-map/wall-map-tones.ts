@@ -17,7 +17,7 @@ interface ToneStyle {
   /** Cell fill and outline. */
   fill: string;
   stroke: string;
-  /** `fill` and `stroke` together: the class of the cell's shape. */
+  /** The class of the cell's outline: `fill`, `stroke` and the line (width, dashes). */
   shape: string;
   /** Text drawn on the cell. */
   text: string;
@@ -30,7 +30,7 @@ export const toneStyles: Record<CellTone, ToneStyle> = {
     label: 'Installed',
     fill: 'fill-state-installed-bg',
     stroke: 'stroke-state-installed-dot',
-    shape: 'fill-state-installed-bg stroke-state-installed-dot',
+    shape: 'fill-state-installed-bg stroke-state-installed-dot stroke-[2.5]',
     text: 'fill-state-installed',
     swatch: 'bg-state-installed-bg border-state-installed-dot',
   },
@@ -38,7 +38,7 @@ export const toneStyles: Record<CellTone, ToneStyle> = {
     label: 'Open ticket',
     fill: 'fill-state-open-ticket-bg',
     stroke: 'stroke-state-open-ticket-dot',
-    shape: 'fill-state-open-ticket-bg stroke-state-open-ticket-dot',
+    shape: 'fill-state-open-ticket-bg stroke-state-open-ticket-dot stroke-[2.5]',
     text: 'fill-state-open-ticket',
     swatch: 'bg-state-open-ticket-bg border-state-open-ticket-dot',
   },
@@ -46,7 +46,7 @@ export const toneStyles: Record<CellTone, ToneStyle> = {
     label: 'Spare',
     fill: 'fill-state-spare-bg',
     stroke: 'stroke-state-spare-dot',
-    shape: 'fill-state-spare-bg stroke-state-spare-dot',
+    shape: 'fill-state-spare-bg stroke-state-spare-dot stroke-[2.5]',
     text: 'fill-state-spare',
     swatch: 'bg-state-spare-bg border-state-spare-dot',
   },
@@ -54,7 +54,7 @@ export const toneStyles: Record<CellTone, ToneStyle> = {
     label: 'At bench',
     fill: 'fill-state-at-bench-bg',
     stroke: 'stroke-state-at-bench-dot',
-    shape: 'fill-state-at-bench-bg stroke-state-at-bench-dot',
+    shape: 'fill-state-at-bench-bg stroke-state-at-bench-dot stroke-[2.5]',
     text: 'fill-state-at-bench',
     swatch: 'bg-state-at-bench-bg border-state-at-bench-dot',
   },
@@ -62,7 +62,7 @@ export const toneStyles: Record<CellTone, ToneStyle> = {
     label: 'Returned to vendor',
     fill: 'fill-state-returned-bg',
     stroke: 'stroke-state-returned-dot',
-    shape: 'fill-state-returned-bg stroke-state-returned-dot',
+    shape: 'fill-state-returned-bg stroke-state-returned-dot stroke-[2.5]',
     text: 'fill-state-returned',
     swatch: 'bg-state-returned-bg border-state-returned-dot',
   },
@@ -70,7 +70,7 @@ export const toneStyles: Record<CellTone, ToneStyle> = {
     label: 'Retired',
     fill: 'fill-state-retired-bg',
     stroke: 'stroke-state-retired-dot',
-    shape: 'fill-state-retired-bg stroke-state-retired-dot',
+    shape: 'fill-state-retired-bg stroke-state-retired-dot stroke-[2.5]',
     text: 'fill-state-retired',
     swatch: 'bg-state-retired-bg border-state-retired-dot',
   },
@@ -78,7 +78,7 @@ export const toneStyles: Record<CellTone, ToneStyle> = {
     label: 'Empty position',
     fill: 'fill-white',
     stroke: 'stroke-stone-400',
-    shape: 'fill-white stroke-stone-400',
+    shape: 'fill-white stroke-stone-400 stroke-2 [stroke-dasharray:7_5]',
     text: 'fill-stone-600',
     swatch: 'bg-white border-stone-400 border-dashed',
   },

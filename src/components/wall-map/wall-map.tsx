@@ -90,12 +90,17 @@ function toneOf(cell: WallMapCell | undefined): CellTone {
   return cell.tone ?? (cell.serial ? 'installed' : 'empty');
 }
 
+/** A cell's state in its accessible name: "installed", "open ticket", "empty"… */
+const toneWords = Object.fromEntries(
+  cellTones.map((tone) => [tone, tone === 'empty' ? 'empty' : toneStyles[tone].label.toLowerCase()]),
+) as Record<CellTone, string>;
+
 /** The accessible name of a cell: "C4·R2, serial ABC123, installed". */
 export function cellName(p: GridPosition, cell: WallMapCell | undefined): string {
   const tone = toneOf(cell);
   const parts = [`C${p.column}·R${p.row}`];
   if (cell?.serial) parts.push(`serial ${cell.serial}`);
-  parts.push(tone === 'empty' ? 'empty' : toneStyles[tone].label.toLowerCase());
+  parts.push(toneWords[tone]);
   if (cell?.heat && cell.heat > 0) parts.push(`repair heat ${Math.round(Math.min(1, cell.heat) * 100)} %`);
   return parts.join(', ');
 }
@@ -136,10 +141,14 @@ const MapRow = memo(function MapRow({ cells, layout, textLevel, textFrom, textTo
   const height = layout.cellHeight;
   const size = Math.min(width, height);
   const labelSize = size * 0.2;
-  const y = layout.rowCenterY(cells[0]?.row ?? 1) - height / 2;
-  const cy = y + height / 2;
+  // The row is moved down as a whole and its cells sit at y = 0 in it: then the cells of a column
+  // have the same attributes in every row, and the browser styles a few dozen distinct cells
+  // instead of 2,000 (it shares the computed style of elements with equal attributes).
+  const top = layout.rowCenterY(cells[0]?.row ?? 1) - height / 2;
+  const y = 0;
+  const cy = height / 2;
   return (
-    <g role="row">
+    <g role="row" transform={`translate(0 ${top})`}>
       {cells.map((cell) => {
         const { column, row, tone, serial, heat } = cell;
         const style = toneStyles[tone];
@@ -162,16 +171,13 @@ const MapRow = memo(function MapRow({ cells, layout, textLevel, textFrom, textTo
           >
             <rect
               x={x}
-              y={y}
               width={width}
               height={height}
               rx={4}
               className={style.shape}
-              strokeWidth={tone === 'empty' ? 2 : 2.5}
-              strokeDasharray={tone === 'empty' ? '7 5' : undefined}
             />
             {heat && heat > 0 ? (
-              <rect x={x} y={y} width={width} height={height} rx={4} className="fill-state-breached-dot" fillOpacity={0.12 + 0.6 * Math.min(1, heat)} />
+              <rect x={x} width={width} height={height} rx={4} className="fill-state-breached-dot" fillOpacity={0.12 + 0.6 * Math.min(1, heat)} />
             ) : null}
             {tone === 'open_ticket' ? (
               // A mark as well as a colour: colour is never the only signal.
@@ -312,21 +318,31 @@ export function WallMap({
   const rulerFont = Math.round(Math.min(layout.ruler * 0.48, 12 / pxPerUnit));
   const scale = scaleOf(vb, layout.content);
 
-  // What every cell shows, row by row: only new data changes it (not the view, zoom or focus).
-  const cellRows = useMemo(() => {
-    const index = new Map<string, WallMapCell>();
-    for (const cell of cells ?? []) index.set(keyOf(cell), cell);
+  // What every cell shows, row by row, and the legend's counts: only new data changes them (not
+  // the view, the zoom or the focus).
+  const { cellRows, legend } = useMemo(() => {
+    const byPosition: (WallMapCell | undefined)[] = new Array(columns * rows);
+    for (const cell of cells ?? []) {
+      if (Number.isInteger(cell.column) && Number.isInteger(cell.row) && cell.column >= 1 && cell.row >= 1 && cell.column <= columns && cell.row <= rows) {
+        byPosition[(cell.row - 1) * columns + cell.column - 1] = cell;
+      }
+    }
+    const counts = new Map<CellTone, number>();
+    let heat = false;
     const result: CellModel[][] = [];
     for (let r = 1; r <= rows; r += 1) {
       const row: CellModel[] = [];
       for (let c = 1; c <= columns; c += 1) {
         const p = { column: c, row: r };
-        const cell = index.get(keyOf(p));
-        row.push({ column: c, row: r, tone: toneOf(cell), serial: cell?.serial, heat: cell?.heat, name: cellName(p, cell) });
+        const cell = byPosition[(r - 1) * columns + c - 1];
+        const tone = toneOf(cell);
+        counts.set(tone, (counts.get(tone) ?? 0) + 1);
+        if (cell?.heat && cell.heat > 0) heat = true;
+        row.push({ column: c, row: r, tone, serial: cell?.serial, heat: cell?.heat, name: cellName(p, cell) });
       }
       result.push(row);
     }
-    return result;
+    return { cellRows: result, legend: { counts, heat } };
   }, [cells, columns, rows]);
   const selectedKeys = useMemo(() => new Set((selected ?? []).map(keyOf)), [selected]);
   const selectedByRow = useMemo(() => {
@@ -529,22 +545,6 @@ export function WallMap({
   const [focusWithin, setFocusWithin] = useState(false);
   const ring = focusWithin && keyboardRing ? layout.cellRect(focus) : null;
 
-  // ---- legend ----
-  const legend = useMemo(() => {
-    const counts = new Map<CellTone, number>();
-    let filled = 0;
-    let heat = false;
-    for (const cell of cells ?? []) {
-      if (cell.column < 1 || cell.row < 1 || cell.column > columns || cell.row > rows) continue;
-      const tone = toneOf(cell);
-      counts.set(tone, (counts.get(tone) ?? 0) + 1);
-      if (tone !== 'empty') filled += 1;
-      if (cell.heat && cell.heat > 0) heat = true;
-    }
-    // Positions without a cell are empty too.
-    counts.set('empty', columns * rows - filled);
-    return { counts, heat };
-  }, [cells, columns, rows]);
 
   const zoomPercent = Math.round(scale * 100);
 

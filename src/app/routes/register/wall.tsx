@@ -15,6 +15,7 @@ import { useCabinetModels } from '@/features/catalogue/api/get-cabinet-models';
 import { CreateControllerDialog } from '@/features/catalogue/components/controller-form-dialog';
 import { WallDocuments } from '@/features/documents/components/wall-documents';
 import { useWall, wallQueryOptions } from '@/features/walls/api/get-wall';
+import type { WallDetail } from '@/features/walls/api/types';
 import { ServiceCaution } from '@/features/walls/components/service-caution';
 import { WallControllersCard } from '@/features/walls/components/wall-controllers-card';
 import { EditWallDialog } from '@/features/walls/components/wall-form-dialog';
@@ -38,6 +39,15 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
   return null;
 }
 
+/**
+ * The edit dialog with the catalogue it offers: the catalogue arrives while the wall map is being
+ * drawn, and only this re-renders then, not the whole page.
+ */
+function EditWallWithModels({ wall, open, onClose }: { wall: WallDetail; open: boolean; onClose: () => void }) {
+  const models = useCabinetModels();
+  return <EditWallDialog wall={wall} models={models.data?.items ?? []} open={open} onClose={onClose} />;
+}
+
 function positiveInt(value: string | null): number | null {
   const n = Number(value);
   return Number.isInteger(n) && n >= 1 ? n : null;
@@ -52,7 +62,6 @@ export function Component() {
   const [addingController, setAddingController] = useState(false);
   const office = isOffice(user);
   const staff = user.role !== 'client';
-  const models = useCabinetModels();
   const wall = query.data;
   useDocumentTitle(wall?.name ?? 'Wall');
   if (!wall) return <PageSpinner />;
@@ -180,7 +189,7 @@ export function Component() {
 
       {office ? (
         <>
-          <EditWallDialog wall={wall} models={models.data?.items ?? []} open={editing} onClose={() => setEditing(false)} />
+          <EditWallWithModels wall={wall} open={editing} onClose={() => setEditing(false)} />
           <CreateControllerDialog open={addingController} onClose={() => setAddingController(false)} wallOptions={[]} wallId={wall.id} />
         </>
       ) : null}

@@ -40,13 +40,33 @@ interface CabinetWallMapProps {
 }
 
 const same = (a: Position | null | undefined, b: Position | null | undefined) => Boolean(a && b && a.column === b.column && a.row === b.row);
+const samePlace = (a: Position | null, b: Position | null) => a === b || same(a, b);
+
+/**
+ * A value the page keeps in the address (the open cell, the view), shown changed at once: a new
+ * address re-renders the whole page once the router has run its loaders, so the map and the card
+ * follow a tap now, in the tap's own task, and the address a moment later. When the address
+ * changes (to this value or to another), it leads again.
+ */
+function useAddressValue<T>(value: T, equal: (a: T, b: T) => boolean, onChange: (next: T) => void) {
+  const [pending, setPending] = useState<{ value: T; base: T } | null>(null);
+  const current = pending && equal(pending.base, value) ? pending.value : value;
+  if (pending && !equal(pending.base, value)) setPending(null);
+  const change = (next: T) => {
+    setPending({ value: next, base: value });
+    onChange(next);
+  };
+  return [current, change] as const;
+}
 
 /**
  * The wall map of the register: cells coloured by cabinet state and open tickets; a tap opens
  * the cabinet card (a side panel on wide screens, a dialog on phones) from which staff move or
  * swap the cabinet by tapping its new position.
  */
-export function CabinetWallMap({ wall, selected, onSelect, view, onViewChange, canRegister, canOperate, notice }: CabinetWallMapProps) {
+export function CabinetWallMap({ wall, selected: selectedInAddress, onSelect: select, view: viewInAddress, onViewChange, canRegister, canOperate, notice }: CabinetWallMapProps) {
+  const [selected, onSelect] = useAddressValue(selectedInAddress, samePlace, select);
+  const [view, setView] = useAddressValue<View>(viewInAddress, (a, b) => a === b, onViewChange);
   const query = useWallCabinets(wall.id);
   const wide = useMediaQuery('(min-width: 1280px)');
   const toast = useToast();
@@ -91,7 +111,11 @@ export function CabinetWallMap({ wall, selected, onSelect, view, onViewChange, c
   const current = occupant(selected);
 
   const panel = selected ? (
-    current ? (
+    query.isPending ? (
+      <p className="text-stone-600">
+        <Spinner className="mr-2" label="" /> Loading the cabinets…
+      </p>
+    ) : current ? (
       <CabinetCard
         key={current.id}
         cabinetId={current.id}
@@ -125,9 +149,11 @@ export function CabinetWallMap({ wall, selected, onSelect, view, onViewChange, c
         description={
           query.data
             ? `${filled} of ${wall.columns * wall.rows} positions hold a cabinet${withTickets ? ` · ${withTickets} named in an open ticket` : ''}`
-            : undefined
+            : query.isPending
+              ? 'Loading the cabinets…'
+              : undefined
         }
-        actions={<WallViewToggle view={view} onChange={onViewChange} />}
+        actions={<WallViewToggle view={view} onChange={setView} />}
       >
         <div className="space-y-3">
           {notice}
@@ -150,11 +176,7 @@ export function CabinetWallMap({ wall, selected, onSelect, view, onViewChange, c
               </Button>
             </div>
           ) : null}
-          {query.isPending ? (
-            <p className="py-10 text-center text-stone-600">
-              <Spinner className="mr-2" label="" /> Loading the cabinets…
-            </p>
-          ) : query.isError ? (
+          {query.isError ? (
             <Alert tone="danger" title="The cabinets could not be loaded.">
               {errorMessage(query.error)}
               <Button size="sm" className="mt-2" onClick={() => query.refetch()}>
@@ -162,6 +184,8 @@ export function CabinetWallMap({ wall, selected, onSelect, view, onViewChange, c
               </Button>
             </Alert>
           ) : (
+            // Drawn in outline while the cabinets load, so that their arrival only names and
+            // colours the cells already there (2,000 cells are drawn well before the list comes).
             <WallMap
               columns={wall.columns}
               rows={wall.rows}
