@@ -3,6 +3,7 @@
 //  - the wall map of a 2,000-cabinet wall in Chromium (target: interactive under 200 ms)
 //  - API throughput of the busiest reads (autocannon; reported, no target)
 // Prints one line per measurement and exits non-zero when a target is missed.
+// `npm run bench -- map` (or `import`, `api`) runs only those parts.
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -14,6 +15,15 @@ const log = (line: string) => console.log(line);
 const shutdown = new Shutdown(() => {});
 const results: { name: string; value: number; unit: string; target?: number }[] = [];
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+const parts = ['import', 'map', 'api'] as const;
+const chosen = process.argv.slice(2);
+for (const name of chosen) {
+  if (!(parts as readonly string[]).includes(name)) {
+    console.error(`Unknown bench part "${name}": choose from ${parts.join(', ')} (none means all).`);
+    process.exit(2);
+  }
+}
+const runs = (part: (typeof parts)[number]) => chosen.length === 0 || chosen.includes(part);
 
 async function main() {
   process.env.DATA_DIR = fs.mkdtempSync(path.join(os.tmpdir(), 'gridkeep-bench-'));
@@ -53,7 +63,7 @@ async function main() {
 
   // 1. CSV import: 10,000 rows onto a 100 × 100 wall, three times on fresh walls.
   const importTimes: number[] = [];
-  for (let round = 0; round < 3; round++) {
+  for (let round = 0; round < (runs('import') ? 3 : 0); round++) {
     const wall = await api('POST', '/api/walls', { siteId, name: `Bench import ${round} ${Date.now()}`, cabinetModelId: modelId, columns: 100, rows: 100 });
     const lines = ['serial,column,row,batch'];
     for (let r = 1; r <= 100; r++) for (let c = 1; c <= 100; c++) lines.push(`BN${round}-${Date.now() % 100000}-${c}-${r},${c},${r},B${r % 3}`);
@@ -62,7 +72,7 @@ async function main() {
     importTimes.push(performance.now() - started);
     if (result.imported !== 10_000) throw new Error(`imported ${result.imported}, expected 10000`);
   }
-  results.push({ name: 'import 10,000-row CSV (median of 3)', value: median(importTimes), unit: 'ms', target: 3000 });
+  if (runs('import')) results.push({ name: 'import 10,000-row CSV (median of 3)', value: median(importTimes), unit: 'ms', target: 3000 });
 
   // A 2,000-cabinet wall (50 × 40) for the map and the read throughput.
   const bigWall = await api('POST', '/api/walls', { siteId, name: `Bench map ${Date.now()}`, cabinetModelId: modelId, columns: 50, rows: 40 });
@@ -71,18 +81,21 @@ async function main() {
   await api('POST', `/api/walls/${bigWall.id}/cabinets/import`, rows.join('\n'), 'text/csv');
 
   // 2. The wall map in Chromium.
-  const { measureWallMap } = await import('./lib/bench-map.js');
-  const map = await measureWallMap(base, { email: 'office@gridkeep.test', password: 'gridkeep-demo' }, bigWall.id, 2000);
-  results.push({ name: 'wall map, 2,000 cabinets: data to all cells drawn (median of 5)', value: map.renderMs, unit: 'ms', target: 200 });
-  results.push({ name: 'wall map, 2,000 cabinets: front/rear toggle to redrawn (median of 5)', value: map.toggleMs, unit: 'ms', target: 200 });
-  results.push({ name: 'wall map, 2,000 cabinets: cell tap to cabinet card (median of 5)', value: map.cardMs, unit: 'ms', target: 200 });
+  if (runs('map')) {
+    const { measureWallMap } = await import('./lib/bench-map.js');
+    const map = await measureWallMap(base, { email: 'office@gridkeep.test', password: 'gridkeep-demo' }, bigWall.id, 2000);
+    results.push({ name: 'wall map, 2,000 cabinets: data to all cells drawn (median of 5)', value: map.renderMs, unit: 'ms', target: 200 });
+    results.push({ name: 'wall map, 2,000 cabinets: front/rear toggle to redrawn (median of 5)', value: map.toggleMs, unit: 'ms', target: 200 });
+    results.push({ name: 'wall map, 2,000 cabinets: cell tap to cabinet card (median of 5)', value: map.cardMs, unit: 'ms', target: 200 });
+  }
 
   // 3. Read throughput (reported only: the machine is shared by server and load generator).
-  for (const [name, url] of [
+  const reads: [string, string][] = [
     ['GET wall map data (2,000 cabinets)', `/api/walls/${bigWall.id}/cabinets`],
     ['GET tickets list (50 per page)', '/api/tickets?limit=50'],
     ['GET health', '/api/health'],
-  ] as const) {
+  ];
+  for (const [name, url] of runs('api') ? reads : []) {
     const out = await autocannon({ url: `${base}${url}`, connections: 20, duration: 5, headers: { Cookie: cookie } });
     results.push({ name: `${name}: requests/s (20 connections, 5 s; p99 ${out.latency.p99} ms)`, value: out.requests.average, unit: 'req/s' });
     if (out.non2xx > 0) throw new Error(`${name}: ${out.non2xx} non-2xx answers`);

@@ -4,6 +4,13 @@ import { AppProvider } from '@/app/provider';
 import { AppRouter } from '@/app/router';
 import './index.css';
 
+// The UI font is fetched now, while the app starts, rather than when text is first laid out: a font
+// that arrives after a large page (a wall map of 2,000 cells) is drawn makes the browser restyle
+// and lay out the whole page a second time.
+if (document.fonts) {
+  for (const weight of [400, 500, 600, 700]) void document.fonts.load(`${weight} 1em "Work Sans"`).catch(() => undefined);
+}
+
 const root = document.getElementById('root');
 if (!root) throw new Error('The page has no #root element.');
 
