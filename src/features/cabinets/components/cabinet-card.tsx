@@ -14,7 +14,7 @@ import type { CabinetDetail, WallCabinet } from '@/features/cabinets/api/types';
 import { useUpdateCabinet } from '@/features/cabinets/api/update-cabinet';
 import { CabinetHistory } from '@/features/cabinets/components/cabinet-history';
 import { CabinetStatusPill, cabinetStatusOptions } from '@/features/cabinets/components/cabinet-status';
-import { TextAreaField } from '@/features/cabinets/components/text-area-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import { errorMessage } from '@/lib/errors';
 import { formatDate } from '@/lib/format';
 

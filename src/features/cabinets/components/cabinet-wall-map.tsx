@@ -16,7 +16,7 @@ import { useSwapCabinets } from '@/features/cabinets/api/swap-cabinets';
 import type { CabinetDetail, WallCabinet } from '@/features/cabinets/api/types';
 import { CabinetCard } from '@/features/cabinets/components/cabinet-card';
 import { EmptyCellCard } from '@/features/cabinets/components/empty-cell-card';
-import { useMediaQuery } from '@/features/cabinets/components/use-media-query';
+import { useMediaQuery } from '@/lib/use-media-query';
 import { errorMessage } from '@/lib/errors';
 import { z } from 'zod';
 
