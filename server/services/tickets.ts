@@ -16,8 +16,9 @@ import { db, type DbOrTx, type Tx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
 import { clients, servicePlans, sites } from '../db/schema/clients.js';
 import { savedViews, ticketComments, tickets } from '../db/schema/tickets.js';
-import { visits, visitTechnicians } from '../db/schema/visits.js';
-import { walls } from '../db/schema/walls.js';
+import { parts } from '../db/schema/stock.js';
+import { repairs, visits, visitTechnicians } from '../db/schema/visits.js';
+import { cabinets, walls } from '../db/schema/walls.js';
 import { badRequest, conflict, forbidden } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
@@ -159,6 +160,20 @@ export async function getTicket(actor: Actor, id: string) {
     .from(visits)
     .where(eq(visits.ticketId, id))
     .orderBy(asc(visits.windowStart));
+  const technician = aliasedTable(users, 'technician');
+  const ticketRepairs = await db()
+    .select({
+      r: repairs,
+      cabinetSerial: cabinets.serial,
+      technicianName: technician.name,
+      partName: parts.name,
+    })
+    .from(repairs)
+    .leftJoin(cabinets, eq(cabinets.id, repairs.cabinetId))
+    .leftJoin(technician, eq(technician.id, repairs.technicianId))
+    .leftJoin(parts, eq(parts.id, repairs.partId))
+    .where(eq(repairs.ticketId, id))
+    .orderBy(asc(repairs.performedAt));
   const [site] = await db().select({ timeZone: sites.timeZone }).from(sites).where(eq(sites.id, t.siteId));
   const merged = t.mergedIntoId ? (await db().select({ id: tickets.id, number: tickets.number }).from(tickets).where(eq(tickets.id, t.mergedIntoId)))[0] : null;
   const now = new Date();
@@ -180,6 +195,22 @@ export async function getTicket(actor: Actor, id: string) {
     clocks: { response, resolution },
     clockState: worstState(response, resolution),
     visits: ticketVisits.map((v) => ({ ...v, windowStart: v.windowStart.toISOString(), windowEnd: v.windowEnd.toISOString() })),
+    // The work done on the wall for this ticket. Clients see what was done and where; the part
+    // taken from stock, what became of the removed one and the technician's notes stay inside.
+    repairs: ticketRepairs.map(({ r, cabinetSerial, technicianName, partName }) => ({
+      id: r.id,
+      column: r.column,
+      row: r.row,
+      position: positionLabel(r),
+      module: r.moduleColumn && r.moduleRow ? { column: r.moduleColumn, row: r.moduleRow } : null,
+      component: r.component,
+      fault: r.fault,
+      action: r.action,
+      cabinetSerial,
+      technicianName,
+      performedAt: r.performedAt.toISOString(),
+      ...(isStaff(actor) ? { notes: r.notes, part: partName ? { name: partName, batch: r.partBatch } : null, removedPartFate: r.removedPartFate } : {}),
+    })),
     nextStatuses: actor.role === 'client' ? (t.status === 'resolved' ? ['closed'] : []) : allowedNextStatuses(t.status),
   };
 }

@@ -4,7 +4,10 @@ import { dueAt } from '../../shared/calc/service-clock.js';
 import { closeDb, db } from '../../server/db/client.js';
 import { contacts } from '../../server/db/schema/clients.js';
 import { outboundMail } from '../../server/db/schema/mail.js';
+import { parts, stockLocations } from '../../server/db/schema/stock.js';
 import { tickets } from '../../server/db/schema/tickets.js';
+import { repairs } from '../../server/db/schema/visits.js';
+import { cabinets } from '../../server/db/schema/walls.js';
 import { closeMail, processMailOnce } from '../../server/integrations/mail.js';
 import { createOrganisation, createServicePlan, createUser, signIn, signedIn, type Session } from '../factories/index.js';
 import { createIsolatedDatabase } from '../setup/isolated-database.js';
@@ -163,6 +166,58 @@ describe('triage and the clock', () => {
     expect(again.status).toBe(200);
     expect(again.body.visits.map((v: { windowStart: string }) => v.windowStart)).toEqual(['2026-12-14T15:00:00.000Z', '2026-12-15T15:00:00.000Z']);
     expect(again.body.siteTimeZone).toBe('America/Chicago');
+  });
+
+  it('lists the repairs done for a ticket; the part, its fate and the notes only for staff', async () => {
+    const t = await open(clientUser, { title: 'module out' });
+    const wall = org.wall!;
+    const [cabinet] = await db()
+      .insert(cabinets)
+      .values({ wallId: wall.id, cabinetModelId: wall.cabinetModelId, serial: `RP-${Date.now()}`, column: 4, row: 2, batch: 'B7' })
+      .returning();
+    const [part] = await db().insert(parts).values({ sku: `MOD-${Date.now()}`, name: 'Test module', kind: 'module' }).returning();
+    const [van] = await db().insert(stockLocations).values({ name: `Van ${Date.now()}`, kind: 'van', holderId: tech.user.id }).returning();
+    await db().insert(repairs).values({
+      clientId: org.client.id,
+      wallId: wall.id,
+      ticketId: t.id,
+      cabinetId: cabinet.id,
+      column: 4,
+      row: 2,
+      component: 'module',
+      moduleColumn: 1,
+      moduleRow: 2,
+      fault: 'dead_module',
+      action: 'replaced',
+      partId: part.id,
+      partBatch: 'B7',
+      fromLocationId: van.id,
+      removedPartFate: 'to_bench',
+      notes: 'Spare from the site kit',
+      technicianId: tech.user.id,
+    });
+
+    const seen = (await office.get(`/api/tickets/${t.id}`)).body.repairs;
+    expect(seen).toEqual([
+      expect.objectContaining({
+        position: 'C4·R2',
+        module: { column: 1, row: 2 },
+        component: 'module',
+        fault: 'dead_module',
+        action: 'replaced',
+        cabinetSerial: cabinet.serial,
+        technicianName: tech.user.name,
+        notes: 'Spare from the site kit',
+        part: { name: 'Test module', batch: 'B7' },
+        removedPartFate: 'to_bench',
+      }),
+    ]);
+    const client = (await clientUser.get(`/api/tickets/${t.id}`)).body.repairs;
+    expect(client).toHaveLength(1);
+    expect(client[0]).toMatchObject({ position: 'C4·R2', action: 'replaced', cabinetSerial: cabinet.serial });
+    expect(client[0]).not.toHaveProperty('notes');
+    expect(client[0]).not.toHaveProperty('part');
+    expect(client[0]).not.toHaveProperty('removedPartFate');
   });
 
   it('counts open tickets by clock state for the board', async () => {

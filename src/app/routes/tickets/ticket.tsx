@@ -16,6 +16,7 @@ import { AttachmentsPanel } from '@/features/tickets/components/attachments-pane
 import { Conversation } from '@/features/tickets/components/conversation';
 import { TicketClocks } from '@/features/tickets/components/ticket-clocks';
 import { TicketFacts, TicketVisits } from '@/features/tickets/components/ticket-facts';
+import { TicketRepairs } from '@/features/tickets/components/ticket-repairs';
 import { ClockBadge, PriorityBadge, TicketStatusBadge } from '@/features/tickets/components/ticket-status';
 import { TicketSummary } from '@/features/tickets/components/ticket-summary';
 import { TriagePanel } from '@/features/tickets/components/triage-panel';
@@ -109,6 +110,7 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
           {triage && wide ? triage : null}
           <TicketFacts ticket={ticket} forClient={forClient} />
           <TicketVisits visits={ticket.visits} timeZone={timeZone} />
+          <TicketRepairs repairs={ticket.repairs} timeZone={timeZone} />
           {ticket.mergedInto ? (
             <p className="flex items-center gap-2 text-sm text-stone-600">
               <GitMerge className="h-4 w-4" aria-hidden="true" /> Merged tickets take no more changes.

@@ -1,4 +1,15 @@
-import type { CommentVisibility, Role, TicketPriority, TicketScope, TicketStatus, VisitStatus } from '@shared/schemas/enums';
+import type {
+  CommentVisibility,
+  RemovedPartFate,
+  RepairAction,
+  RepairComponent,
+  RepairFault,
+  Role,
+  TicketPriority,
+  TicketScope,
+  TicketStatus,
+  VisitStatus,
+} from '@shared/schemas/enums';
 import type { Position } from '@shared/schemas/register';
 import type { TicketClockState } from '@shared/schemas/tickets';
 
@@ -38,6 +49,24 @@ export interface TicketVisit {
   windowEnd: string;
 }
 
+/** One line of work done for the ticket. `notes`, `part` and `removedPartFate` come to staff only. */
+export interface TicketRepair {
+  id: string;
+  column: number;
+  row: number;
+  position: string;
+  module: Position | null;
+  component: RepairComponent;
+  fault: RepairFault;
+  action: RepairAction;
+  cabinetSerial: string | null;
+  technicianName: string | null;
+  performedAt: string;
+  notes?: string;
+  part?: { name: string; batch: string | null } | null;
+  removedPartFate?: RemovedPartFate;
+}
+
 export interface TicketDetail extends TicketListItem {
   description: string;
   /** The site's IANA time zone: due times and visit windows are shown in the site's local time. */
@@ -52,6 +81,7 @@ export interface TicketDetail extends TicketListItem {
   pausedAt: string | null;
   clocks: { response: TicketClockState | null; resolution: TicketClockState | null };
   visits: TicketVisit[];
+  repairs: TicketRepair[];
   nextStatuses: TicketStatus[];
 }
 
