@@ -9,38 +9,32 @@ import { accountLines, projectRoot, Shutdown, startLocalServices } from './lib/l
 const log = (line: string) => console.log(line);
 const shutdown = new Shutdown(log);
 
-let exiting = false;
-function exit(code: number) {
-  if (exiting) return;
-  exiting = true;
-  const force = setTimeout(() => {
-    log('Stopping took too long: exiting.');
-    process.exit(code || 1);
-  }, 30_000);
-  force.unref();
-  shutdown.run().then(() => {
-    clearTimeout(force);
-    process.exit(code);
-  });
-}
+shutdown.exitOnSignals('the development servers');
 
-for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
-  process.on(signal, () => {
-    if (exiting) return;
-    log(`\n${signal}: stopping…`);
-    exit(0);
-  });
-}
-
+/**
+ * Stops the API watcher and the server it runs. The watcher leads a process group of its own
+ * (see `detached` below), so the signal goes to the group: a Ctrl-C while the server is still
+ * starting, before the watcher relays signals, stops both as well.
+ */
 function stopChild(child: ChildProcess): Promise<void> {
-  if (child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
+  const signalGroup = (signal: NodeJS.Signals) => {
+    try {
+      process.kill(-child.pid!, signal);
+    } catch {
+      /* the group is gone already */
+    }
+  };
+  if (child.exitCode !== null || child.signalCode !== null) {
+    signalGroup('SIGTERM'); // a server the watcher left behind
+    return Promise.resolve();
+  }
   return new Promise((resolve) => {
-    const kill = setTimeout(() => child.kill('SIGKILL'), 15_000);
+    const kill = setTimeout(() => signalGroup('SIGKILL'), 15_000);
     child.once('exit', () => {
       clearTimeout(kill);
       resolve();
     });
-    child.kill('SIGTERM');
+    signalGroup('SIGTERM');
   });
 }
 
@@ -54,7 +48,7 @@ async function main() {
   // The API child opens its own pool; this process needs none now.
   const { closeDb } = await import('../server/db/client.js');
   await closeDb();
-  if (exiting) return;
+  if (shutdown.stopping) return;
 
   const api = spawn(path.join(projectRoot, 'node_modules/.bin/tsx'), ['watch', '--clear-screen=false', 'server/index.ts'], {
     cwd: projectRoot,
@@ -65,9 +59,9 @@ async function main() {
   });
   shutdown.add('the API', () => stopChild(api));
   api.on('exit', (code, signal) => {
-    if (!exiting) {
+    if (!shutdown.stopping) {
       log(`The API watcher stopped (${signal ?? `exit code ${code}`}): stopping everything.`);
-      exit(1);
+      shutdown.exit(1);
     }
   });
 
@@ -94,5 +88,5 @@ async function main() {
 
 main().catch((err) => {
   console.error(`\nCould not start the development servers: ${(err as Error).message}`);
-  exit(1);
+  shutdown.exit(1);
 });

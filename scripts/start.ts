@@ -8,30 +8,7 @@ import { accountLines, Shutdown, startLocalServices } from './lib/local-services
 const log = (line: string) => console.log(line);
 const shutdown = new Shutdown(log);
 
-let exiting = false;
-function exit(code: number, why?: string) {
-  if (exiting) return;
-  exiting = true;
-  if (why) log(why);
-  // Stop on a timer too, so a stuck step cannot keep the process alive for ever.
-  const force = setTimeout(() => {
-    log('Stopping took too long: exiting.');
-    process.exit(code || 1);
-  }, 30_000);
-  force.unref();
-  shutdown.run().then(() => {
-    clearTimeout(force);
-    process.exit(code);
-  });
-}
-
-for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
-  process.on(signal, () => {
-    if (exiting) return;
-    log(`\n${signal}: stopping Gridkeep…`);
-    exit(0);
-  });
-}
+shutdown.exitOnSignals('Gridkeep');
 process.on('unhandledRejection', (reason) => {
   // The server logs and survives lost database connections; anything else reaching here is
   // logged rather than taking the whole stack down.
@@ -40,10 +17,10 @@ process.on('unhandledRejection', (reason) => {
 
 async function main() {
   const services = await startLocalServices(shutdown, log);
-  if (exiting) return;
+  if (shutdown.stopping) return;
   if (process.env.SKIP_CLIENT_BUILD === '1') log('SKIP_CLIENT_BUILD=1: serving dist/ as it is.');
   else await buildClientIfStale(log);
-  if (exiting) return;
+  if (shutdown.stopping) return;
 
   const { startServer } = await import('../server/index.js');
   const port = Number(process.env.PORT || 3000);
@@ -72,5 +49,5 @@ async function main() {
 main().catch((err) => {
   console.error(`\nCould not start Gridkeep: ${(err as Error).message}`);
   if (process.env.DEBUG) console.error(err);
-  exit(1);
+  shutdown.exit(1);
 });

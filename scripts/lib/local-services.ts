@@ -43,8 +43,41 @@ export interface LocalServices {
 export class Shutdown {
   private steps: { name: string; run: () => Promise<void> | void }[] = [];
   private running: Promise<void> | undefined;
+  private exiting = false;
 
   constructor(private log: (line: string) => void = console.log) {}
+
+  /** Whether the process has begun to stop: a start still under way gives up. */
+  get stopping(): boolean {
+    return this.exiting;
+  }
+
+  /** Runs the stop steps, then exits with `code`. A stuck step cannot keep the process alive. */
+  exit(code: number, why?: string) {
+    if (this.exiting) return;
+    this.exiting = true;
+    if (why) this.log(why);
+    const force = setTimeout(() => {
+      this.log('Stopping took too long: exiting.');
+      process.exit(code || 1);
+    }, 30_000);
+    force.unref();
+    void this.run().then(() => {
+      clearTimeout(force);
+      process.exit(code);
+    });
+  }
+
+  /** Ctrl-C, a kill or a closed terminal stops everything, once. */
+  exitOnSignals(what: string) {
+    for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
+      process.on(signal, () => {
+        if (this.exiting) return;
+        this.log(`\n${signal}: stopping ${what}…`);
+        this.exit(0);
+      });
+    }
+  }
 
   add(name: string, run: () => Promise<void> | void) {
     this.steps.push({ name, run });
