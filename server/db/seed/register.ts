@@ -3,6 +3,7 @@
 // brand and person here is made up; phone numbers use the 555-01xx range set aside for fiction,
 // and e-mail domains end in .test (reserved by RFC 2606).
 import type { Mounting, TicketPriority } from '../../../shared/schemas/enums.js';
+import type { CabinetModel } from '../../../shared/schemas/register.js';
 import type { PlanTargets } from '../schema/clients.js';
 
 export const company = {
@@ -257,23 +258,7 @@ export const siteSpecs: Record<SiteKey, {
 export type ModelKey = 'hx19' | 'hx26' | 'tw39' | 'tw48' | 'mv15';
 
 /** Invented cabinet models. Pixels per cabinet = cabinet size / pitch; powers and weights are typical of the class. */
-export const modelSpecs: Record<ModelKey, {
-  name: string;
-  maker: string;
-  widthMm: number;
-  heightMm: number;
-  pixelPitchMm: number;
-  pixelsWide: number;
-  pixelsHigh: number;
-  modulesWide: number;
-  modulesHigh: number;
-  maxPowerW: number;
-  typicalPowerW: number;
-  weightKg: number;
-  brightnessNits: number;
-  voltageMin: number;
-  voltageMax: number;
-  environment: 'indoor' | 'outdoor';
+export const modelSpecs: Record<ModelKey, Omit<CabinetModel, 'id' | 'archived'> & {
   /** How this maker writes serials and module batch codes. */
   serialPrefix: string;
   batchPrefix: string;
