@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { aliasedTable, and, asc, desc, eq, inArray, like } from 'drizzle-orm';
+import { aliasedTable, and, desc, eq, inArray, like, sql } from 'drizzle-orm';
 import {
   importRow,
   positionLabel,
@@ -20,7 +20,8 @@ import { AppError, badRequest, conflict } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { fieldErrors } from '../middleware/validate.js';
 import { recordAudit } from './audit.js';
-import { afterCursor, decodeCursor, pageOf } from './pagination.js';
+import { orderFor } from './clients.js';
+import { afterCursor, afterCursorNullsLast, decodeCursor, orderNullsLast, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 import { visibleWall } from './walls.js';
 
@@ -31,39 +32,93 @@ function visibleCabinets(actor: Actor) {
   return actor.role === 'client' ? tenantWhere(actor, walls.clientId) : undefined;
 }
 
+const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+const isoDatePattern = /^\d{4}-\d{2}-\d{2}$/;
+
+/** The page cursor of a cabinet list, checked against its sort: [serial | batch | installedOn (or null), id]. */
+function cabinetCursor(query: ListCabinetsQuery) {
+  const cursor = decodeCursor(query.cursor, 2);
+  if (!cursor) return null;
+  const [value, id] = cursor;
+  const valueOk = query.sort === 'installedOn' ? value === null || (typeof value === 'string' && isoDatePattern.test(value)) : typeof value === 'string';
+  if (!valueOk || typeof id !== 'string' || !uuidPattern.test(id)) {
+    throw badRequest('bad_cursor', 'The page cursor is not valid; start from the first page.', { cursor: 'Not valid.' });
+  }
+  return cursor;
+}
+
+/**
+ * The cabinets of the register, on walls and (for staff) in stock. Sorted by serial, batch or
+ * install date (cabinets never installed come last either way), the id breaking ties.
+ */
 export async function listCabinets(actor: Actor, query: ListCabinetsQuery) {
+  const cursor = cabinetCursor(query);
+  const sortColumn = query.sort === 'batch' ? cabinets.batch : query.sort === 'installedOn' ? cabinets.installedOn : cabinets.serial;
   const rows = await db()
     .select({
       id: cabinets.id,
       serial: cabinets.serial,
       status: cabinets.status,
       batch: cabinets.batch,
+      installedOn: cabinets.installedOn,
       column: cabinets.column,
       row: cabinets.row,
       wallId: cabinets.wallId,
       wallName: walls.name,
+      siteId: walls.siteId,
+      siteName: sites.name,
+      clientId: walls.clientId,
+      clientName: clients.name,
+      modelId: cabinets.cabinetModelId,
       modelName: cabinetModels.name,
       locationName: stockLocations.name,
     })
     .from(cabinets)
     .innerJoin(cabinetModels, eq(cabinetModels.id, cabinets.cabinetModelId))
     .leftJoin(walls, eq(walls.id, cabinets.wallId))
+    .leftJoin(sites, eq(sites.id, walls.siteId))
+    .leftJoin(clients, eq(clients.id, walls.clientId))
     .leftJoin(stockLocations, eq(stockLocations.id, cabinets.stockLocationId))
     .where(
       and(
         visibleCabinets(actor),
         query.serial ? like(cabinets.serial, `${escapeLike(query.serial.toUpperCase())}%`) : undefined,
         query.wallId ? eq(cabinets.wallId, query.wallId) : undefined,
+        query.clientId ? eq(walls.clientId, query.clientId) : undefined,
+        query.siteId ? eq(walls.siteId, query.siteId) : undefined,
+        query.modelId ? eq(cabinets.cabinetModelId, query.modelId) : undefined,
         query.status ? eq(cabinets.status, query.status) : undefined,
-        query.batch ? eq(cabinets.batch, query.batch) : undefined,
-        afterCursor(cabinets.serial, cabinets.id, decodeCursor(query.cursor, 2)),
+        // Batch codes are typed from a maker's letter as often as copied: any case matches.
+        query.batch ? sql`lower(${cabinets.batch}) = lower(${query.batch})` : undefined,
+        query.sort === 'installedOn'
+          ? afterCursorNullsLast(sortColumn, cabinets.id, cursor, query.dir)
+          : afterCursor(sortColumn, cabinets.id, cursor, query.dir),
       ),
     )
-    .orderBy(asc(cabinets.serial), asc(cabinets.id))
+    .orderBy(...(query.sort === 'installedOn' ? orderNullsLast(sortColumn, cabinets.id, query.dir) : orderFor(sortColumn, cabinets.id, query.dir)))
     .limit(query.limit + 1);
-  const page = pageOf(rows, query.limit, (r) => [r.serial, r.id]);
+  const page = pageOf(rows, query.limit, (r) => [query.sort === 'batch' ? r.batch : query.sort === 'installedOn' ? r.installedOn : r.serial, r.id]);
+  const staff = isStaff(actor);
   return {
-    items: page.items.map((r) => ({ ...r, locationName: isStaff(actor) ? r.locationName : null })),
+    items: page.items.map((r) => ({
+      id: r.id,
+      serial: r.serial,
+      status: r.status,
+      batch: r.batch,
+      installedOn: r.installedOn,
+      wallId: r.wallId,
+      wallName: r.wallName,
+      column: r.column,
+      row: r.row,
+      siteId: r.siteId,
+      siteName: r.siteName,
+      clientId: r.clientId,
+      clientName: r.clientName,
+      modelId: r.modelId,
+      modelName: r.modelName,
+      // Where the company keeps its stock is the staff's business.
+      locationName: staff ? r.locationName : null,
+    })),
     nextCursor: page.nextCursor,
   };
 }

@@ -1,4 +1,4 @@
-import { and, gt, lt, or, eq, type SQL } from 'drizzle-orm';
+import { and, asc, desc, gt, isNull, lt, or, eq, sql, type SQL } from 'drizzle-orm';
 import type { AnyPgColumn } from 'drizzle-orm/pg-core';
 import { badRequest } from '../errors.js';
 
@@ -33,6 +33,28 @@ export function afterCursor(
   const beyond = direction === 'asc' ? gt : lt;
   const value = sortColumn.columnType === 'PgTimestamp' && typeof sortValue === 'string' ? new Date(sortValue) : sortValue;
   return or(beyond(sortColumn, value), and(eq(sortColumn, value), beyond(idColumn, idValue)));
+}
+
+/**
+ * `order by sortColumn <dir> nulls last, idColumn <dir>`: for a sort column that may be null,
+ * the rows without a value come after every value whichever the direction.
+ */
+export function orderNullsLast(sortColumn: AnyPgColumn, idColumn: AnyPgColumn, direction: 'asc' | 'desc' = 'asc'): SQL[] {
+  return direction === 'asc' ? [sql`${sortColumn} asc nulls last`, asc(idColumn)] : [sql`${sortColumn} desc nulls last`, desc(idColumn)];
+}
+
+/** Rows after the cursor for `orderNullsLast(...)`; a cursor's sort value is null inside the tail of nulls. */
+export function afterCursorNullsLast(
+  sortColumn: AnyPgColumn,
+  idColumn: AnyPgColumn,
+  cursor: unknown[] | null,
+  direction: 'asc' | 'desc' = 'asc',
+): SQL | undefined {
+  if (!cursor) return undefined;
+  const [sortValue, idValue] = cursor;
+  const beyond = direction === 'asc' ? gt : lt;
+  if (sortValue === null) return and(isNull(sortColumn), beyond(idColumn, idValue));
+  return or(afterCursor(sortColumn, idColumn, cursor, direction), isNull(sortColumn));
 }
 
 /** Splits `limit + 1` fetched rows into the page and the next cursor. */

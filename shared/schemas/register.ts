@@ -197,10 +197,19 @@ export const cabinetPatch = z.object({
 export type CabinetPatch = z.infer<typeof cabinetPatch>;
 
 export const listCabinetsQuery = pageQuery.extend({
+  /** A serial prefix (a scan or the first characters typed). */
   serial: z.string().trim().max(64).optional(),
   wallId: optionalId,
+  /** Cabinets on the walls of this client or site (a cabinet in stock belongs to neither). */
+  clientId: optionalId,
+  siteId: optionalId,
+  /** The cabinet's own model. */
+  modelId: optionalId,
   status: z.enum(cabinetStatuses).optional(),
+  /** A production batch, matched whole (any case): the filter of a batch recall. */
   batch: z.string().trim().max(40).optional(),
+  sort: z.enum(['serial', 'batch', 'installedOn']).default('serial'),
+  dir: sortDir,
 });
 export type ListCabinetsQuery = z.infer<typeof listCabinetsQuery>;
 

@@ -33,6 +33,11 @@ export const paths = {
   clients: { path: '/clients', getHref: () => '/clients' },
   /** A client organisation: service plan, notes, contacts, sites. */
   client: { path: '/clients/:id', getHref: (id: string) => `/clients/${encodeURIComponent(id)}` },
+  /** With list filters (clientId, q). */
+  sites: {
+    path: '/sites',
+    getHref: (filters: { clientId?: string; q?: string } = {}) => withParams('/sites', filters),
+  },
   /** A site: address, time zone, access notes, contacts, walls. */
   site: { path: '/sites/:id', getHref: (id: string) => `/sites/${encodeURIComponent(id)}` },
   /** With list filters (clientId, siteId, cabinetModelId, q). */
@@ -50,6 +55,13 @@ export const paths = {
         row: options.row ? String(options.row) : null,
         view: options.view === 'rear' ? 'rear' : null,
       }),
+  },
+  /** Every cabinet, with list filters; `?batch=` is the list of a batch recall. */
+  cabinets: {
+    path: '/cabinets',
+    getHref: (
+      filters: { serial?: string; clientId?: string; siteId?: string; status?: string; batch?: string; modelId?: string } = {},
+    ) => withParams('/cabinets', filters),
   },
   /** A printable sheet of QR labels, one per cabinet of the wall. */
   wallLabels: { path: '/walls/:id/labels', getHref: (id: string) => `/walls/${encodeURIComponent(id)}/labels` },

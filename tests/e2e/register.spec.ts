@@ -91,6 +91,69 @@ test.describe('wall map', () => {
   });
 });
 
+test.describe('cabinets list', () => {
+  /**
+   * A production batch of the demo data with few cabinets: the later batch that replaced units
+   * failing burn-in at commissioning on the main hall centre wall (server/db/seed/build.ts).
+   * Batch codes carry the month they were made, so they are looked up rather than written here.
+   */
+  async function replacementBatch(page: Page) {
+    const walls = await (await page.request.get(`/api/walls?q=${encodeURIComponent('Main hall centre wall')}`)).json();
+    const wall = walls.items.find((w: { name: string }) => w.name === 'Main hall centre wall');
+    expect(wall, 'the demo wall exists').toBeTruthy();
+    const map = await (await page.request.get(`/api/walls/${wall.id}/cabinets`)).json();
+    const counts = new Map<string, number>();
+    for (const c of map.items as { batch: string }[]) if (c.batch) counts.set(c.batch, (counts.get(c.batch) ?? 0) + 1);
+    const [batch] = [...counts.entries()].sort((a, b) => a[1] - b[1])[0];
+    const all = await (await page.request.get(`/api/cabinets?batch=${encodeURIComponent(batch)}&limit=500`)).json();
+    const serials = (all.items as { serial: string }[]).map((c) => c.serial).sort();
+    // Some, and few enough for one page of the list (100 rows).
+    expect(serials.length).toBeGreaterThan(0);
+    expect(serials.length).toBeLessThan(100);
+    return { batch, serials };
+  }
+
+  const rowSerials = async (page: Page) => (await page.locator('table tbody tr td:first-child').allInnerTexts()).map((s) => s.trim()).sort();
+
+  test('the office finds every cabinet of a batch (a recall) and opens one from its serial', async ({ page }, testInfo) => {
+    await signIn(page);
+    const { batch, serials } = await replacementBatch(page);
+    await page.goto('/');
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Cabinets' }).click();
+    await expect(page.getByRole('heading', { level: 1, name: 'Cabinets' })).toBeVisible();
+    // Before filtering, the list holds more than this batch.
+    await expect.poll(() => page.locator('table tbody tr').count()).toBeGreaterThan(serials.length);
+
+    await page.getByRole('searchbox', { name: 'Batch' }).fill(batch);
+    await page.getByRole('searchbox', { name: 'Batch' }).press('Enter');
+    await expect(page).toHaveURL(new RegExp(`[?&]batch=${encodeURIComponent(batch)}`));
+    await expect(page.locator('table tbody tr')).toHaveCount(serials.length);
+    expect(await rowSerials(page)).toEqual(serials);
+    for (const row of await page.locator('table tbody tr').all()) await expect(row).toContainText(batch);
+    await testInfo.attach('cabinets-batch', { body: await page.screenshot({ fullPage: true }), contentType: 'image/png' });
+
+    // The address alone gives the same list (a recall link can be sent on).
+    await page.goto(`/cabinets?batch=${encodeURIComponent(batch)}`);
+    await expect(page.locator('table tbody tr')).toHaveCount(serials.length);
+
+    const serial = serials[0];
+    await page.getByRole('link', { name: serial, exact: true }).click();
+    await expect(page).toHaveURL(new RegExp(`/c/${encodeURIComponent(serial)}$`));
+    await expect(page.getByRole('heading', { level: 1 })).toHaveText(serial);
+  });
+
+  test('a batch in any row opens the list of that batch', async ({ page }) => {
+    await signIn(page);
+    const { batch, serials } = await replacementBatch(page);
+    await page.goto(`/cabinets?serial=${encodeURIComponent(serials[0])}`);
+    await expect(page.locator('table tbody tr')).toHaveCount(1);
+    await page.getByRole('link', { name: batch, exact: true }).click();
+    await expect(page).toHaveURL(new RegExp(`/cabinets\\?batch=${encodeURIComponent(batch)}$`));
+    await expect(page.locator('table tbody tr')).toHaveCount(serials.length);
+    expect(await rowSerials(page)).toEqual(serials);
+  });
+});
+
 test.describe('cabinet import and move', () => {
   test('a file with one bad row is refused with its line number and imports nothing; a good one imports; a cabinet moves to a free cell', async ({
     page,

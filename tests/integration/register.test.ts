@@ -2,6 +2,7 @@ import { eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { db } from '../../server/db/client.js';
 import { auditEvents } from '../../server/db/schema/accounts.js';
+import { stockLocations } from '../../server/db/schema/stock.js';
 import { cabinetEvents, cabinets } from '../../server/db/schema/walls.js';
 import { anonymous, createCabinetModel, createOrganisation, signedIn, unique, type Session } from '../factories/index.js';
 
@@ -210,6 +211,175 @@ describe('cabinets and positions', () => {
     const byName = await office.get(`/api/search?q=${encodeURIComponent(client.name.slice(0, 10))}`);
     expect(byName.body.clients.map((c: { id: string }) => c.id)).toContain(client.id);
     expect((await office.get('/api/search?q=')).status).toBe(400);
+  });
+});
+
+describe('the cabinets list', () => {
+  // One client with two sites and a wall on each (different cabinet models), cabinets of three
+  // batches, some never given an install date, and one taken off its wall into stock.
+  const tag = unique('LST').toUpperCase();
+  const batch = { a: `${tag}-A`, b: `${tag}-B`, c: `${tag}-C` };
+  let org: Awaited<ReturnType<typeof newWall>>;
+  let siteB: { id: string; name: string };
+  let wallB: { id: string; name: string };
+  let modelB: { id: string };
+  let location: { id: string; name: string };
+  let spare: { id: string; serial: string };
+
+  type Row = {
+    id: string;
+    serial: string;
+    batch: string;
+    installedOn: string | null;
+    clientId: string | null;
+    clientName: string | null;
+    siteName: string | null;
+    wallId: string | null;
+    wallName: string | null;
+    column: number | null;
+    row: number | null;
+    modelId: string;
+    locationName: string | null;
+  };
+  const list = async (s: Session, qs: string) => {
+    const res = await s.get(`/api/cabinets?limit=500&${qs}`);
+    expect(res.status).toBe(200);
+    return res.body.items as Row[];
+  };
+  /** Every row of a filtered, sorted list fetched `limit` at a time through the cursors. */
+  async function allPages(qs: string, limit: number) {
+    const rows: Row[] = [];
+    let cursor: string | null = null;
+    let pages = 0;
+    do {
+      const res = await office.get(`/api/cabinets?${qs}&limit=${limit}${cursor ? `&cursor=${cursor}` : ''}`);
+      expect(res.status).toBe(200);
+      rows.push(...res.body.items);
+      cursor = res.body.nextCursor;
+      pages++;
+    } while (cursor && pages < 50);
+    return { rows, pages };
+  }
+
+  beforeAll(async () => {
+    org = await newWall(4, 3);
+    const site = await office.post('/api/sites', { clientId: org.client.id, name: unique('Annex'), timeZone: 'America/Chicago' });
+    expect(site.status).toBe(201);
+    siteB = site.body;
+    modelB = await createCabinetModel();
+    const wall = await office.post('/api/walls', { siteId: siteB.id, name: unique('Foyer'), cabinetModelId: modelB.id, columns: 3, rows: 2 });
+    expect(wall.status).toBe(201);
+    wallB = wall.body;
+    const place = async (wallId: string, n: number, column: number, row: number, b: string, installedOn?: string) => {
+      const res = await office.post(`/api/walls/${wallId}/cabinets`, { serial: `${tag}-${String(n).padStart(2, '0')}`, column, row, batch: b, installedOn });
+      expect(res.status).toBe(201);
+      return res.body as { id: string; serial: string };
+    };
+    // Serials are placed out of order, so creation order is not the serial order.
+    await place(org.wall.id, 4, 1, 1, batch.a, '2024-03-01');
+    await place(org.wall.id, 2, 2, 1, batch.a, '2024-03-01');
+    await place(org.wall.id, 6, 3, 1, batch.b);
+    await place(org.wall.id, 1, 4, 1, batch.b, '2023-11-20');
+    await place(wallB.id, 7, 1, 1, batch.a, '2025-01-15');
+    await place(wallB.id, 3, 2, 1, batch.c);
+    await place(wallB.id, 5, 3, 1, '', '2024-03-01');
+    [location] = await db().insert(stockLocations).values({ name: unique('Shelf'), kind: 'warehouse' }).returning();
+    spare = await place(wallB.id, 8, 1, 2, batch.a, '2025-01-15');
+    const off = await office.patch(`/api/cabinets/${spare.id}`, { status: 'spare', stockLocationId: location.id, note: 'Kept as attic stock' });
+    expect(off.status).toBe(200);
+  });
+
+  it('filters by client, site, cabinet model and batch; a cabinet in stock belongs to no client or site', async () => {
+    const byClient = await list(office, `clientId=${org.client.id}`);
+    expect(byClient.map((c) => c.serial).sort()).toEqual([1, 2, 3, 4, 5, 6, 7].map((n) => `${tag}-0${n}`));
+    expect(byClient.every((c) => c.clientId === org.client.id && c.clientName === org.client.name)).toBe(true);
+
+    const bySite = await list(office, `siteId=${siteB.id}`);
+    expect(bySite.map((c) => c.serial).sort()).toEqual([3, 5, 7].map((n) => `${tag}-0${n}`));
+    expect(bySite.map((c) => [c.siteName, c.wallName])).toEqual(bySite.map(() => [siteB.name, wallB.name]));
+
+    // The cabinet's own model, so the spare that left the wall still counts.
+    const byModel = await list(office, `modelId=${modelB.id}`);
+    expect(byModel.map((c) => c.serial).sort()).toEqual([3, 5, 7, 8].map((n) => `${tag}-0${n}`));
+    expect(byModel.every((c) => c.modelId === modelB.id)).toBe(true);
+
+    // A batch recall: every cabinet of the batch, wherever it is; the code matches whole, in any case.
+    const byBatch = await list(office, `batch=${encodeURIComponent(batch.a)}`);
+    expect(byBatch.map((c) => c.serial).sort()).toEqual([2, 4, 7, 8].map((n) => `${tag}-0${n}`));
+    expect(await list(office, `batch=${encodeURIComponent(batch.a.toLowerCase())}`)).toEqual(byBatch);
+    expect(await list(office, `batch=${encodeURIComponent(batch.a.slice(0, -1))}`)).toEqual([]);
+    const inStock = byBatch.find((c) => c.id === spare.id);
+    expect(inStock).toMatchObject({ wallId: null, column: null, row: null, clientName: null, siteName: null, locationName: location.name, installedOn: '2025-01-15' });
+    const onWall = byBatch.find((c) => c.serial === `${tag}-07`);
+    expect(onWall).toMatchObject({ wallId: wallB.id, column: 1, row: 1, siteName: siteB.name, clientName: org.client.name, installedOn: '2025-01-15' });
+
+    const combined = await list(office, `clientId=${org.client.id}&batch=${encodeURIComponent(batch.a)}&modelId=${org.model.id}`);
+    expect(combined.map((c) => c.serial).sort()).toEqual([`${tag}-02`, `${tag}-04`]);
+  });
+
+  // The list's contract (listCabinets): ascending or descending by the chosen key, the id
+  // breaking ties, and cabinets without an install date last in either direction.
+  const expected = {
+    serial: { asc: ['01', '02', '03', '04', '05', '06', '07'], desc: ['07', '06', '05', '04', '03', '02', '01'] },
+    batch: { asc: ['', 'A', 'A', 'A', 'B', 'B', 'C'], desc: ['C', 'B', 'B', 'A', 'A', 'A', ''] },
+    installedOn: {
+      asc: ['2023-11-20', '2024-03-01', '2024-03-01', '2024-03-01', '2025-01-15', null, null],
+      desc: ['2025-01-15', '2024-03-01', '2024-03-01', '2024-03-01', '2023-11-20', null, null],
+    },
+  } as const;
+  const keyOf = (sort: keyof typeof expected, c: Row) =>
+    sort === 'serial' ? c.serial.slice(-2) : sort === 'batch' ? (c.batch ? c.batch.slice(-1) : '') : c.installedOn;
+
+  for (const sort of ['serial', 'batch', 'installedOn'] as const) {
+    for (const dir of ['asc', 'desc'] as const) {
+      it(`sorts by ${sort} ${dir}, and pages of two give the same rows in the same order as one page`, async () => {
+        const qs = `clientId=${org.client.id}&sort=${sort}&dir=${dir}`;
+        const one = await list(office, qs);
+        expect(one.map((c) => keyOf(sort, c))).toEqual(expected[sort][dir]);
+        const paged = await allPages(qs, 2);
+        expect(paged.pages).toBe(4);
+        expect(paged.rows.map((c) => c.id)).toEqual(one.map((c) => c.id));
+        // Ties are broken by id in the sort's direction, so equal keys never swap between pages.
+        for (let i = 1; i < one.length; i++) {
+          if (keyOf(sort, one[i]) === keyOf(sort, one[i - 1])) expect(one[i].id > one[i - 1].id).toBe(dir === 'asc');
+        }
+      });
+    }
+  }
+
+  it('pages through the cabinets without an install date, and refuses a cursor that does not fit the sort', async () => {
+    // One row a page: a cursor at every boundary, among them one inside the two undated cabinets.
+    for (const dir of ['asc', 'desc'] as const) {
+      const paged = await allPages(`clientId=${org.client.id}&sort=installedOn&dir=${dir}`, 1);
+      expect(paged.rows.map((c) => c.installedOn)).toEqual(expected.installedOn[dir]);
+      expect(new Set(paged.rows.map((c) => c.id)).size).toBe(7);
+    }
+    const bad = Buffer.from(JSON.stringify(['not a date', org.wall.id])).toString('base64url');
+    const res = await office.get(`/api/cabinets?sort=installedOn&cursor=${bad}`);
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('bad_cursor');
+  });
+
+  it('names the field of a bad sort or filter', async () => {
+    const res = await office.get('/api/cabinets?sort=colour&dir=up&siteId=nope');
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields).sort()).toEqual(['dir', 'siteId', 'sort']);
+  });
+
+  it('shows a client user only the cabinets of their own walls, whatever the filter', async () => {
+    const me = await signedIn('client', org.client.id);
+    const other = await newWall(2, 2);
+    const theirs = await office.post(`/api/walls/${other.wall.id}/cabinets`, { serial: `${tag}-X1`, column: 1, row: 1, batch: batch.a });
+    expect(theirs.status).toBe(201);
+    // Filtering by another organisation's client or site finds nothing (as the walls list does).
+    expect(await list(me, `clientId=${other.client.id}`)).toEqual([]);
+    expect(await list(me, `siteId=${other.site.id}`)).toEqual([]);
+    expect(await list(office, `clientId=${other.client.id}`)).toHaveLength(1);
+    // The batch is shared, but neither their cabinet nor the one in stock shows.
+    const recall = await list(me, `batch=${encodeURIComponent(batch.a)}`);
+    expect(recall.map((c) => c.serial).sort()).toEqual([`${tag}-02`, `${tag}-04`, `${tag}-07`]);
+    expect(recall.every((c) => c.locationName === null)).toBe(true);
+    expect(await list(me, `modelId=${other.model.id}`)).toEqual([]);
   });
 });
 

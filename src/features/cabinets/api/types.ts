@@ -15,6 +15,28 @@ export interface WallCabinet {
   openTickets: number;
 }
 
+/** One row of the cabinets list: where the cabinet is, whether on a wall or in stock. */
+export interface CabinetSummary {
+  id: string;
+  serial: string;
+  status: CabinetStatus;
+  batch: string;
+  installedOn: string | null;
+  /** The wall, site and client: null for a cabinet off any wall. */
+  wallId: string | null;
+  wallName: string | null;
+  column: number | null;
+  row: number | null;
+  siteId: string | null;
+  siteName: string | null;
+  clientId: string | null;
+  clientName: string | null;
+  modelId: string;
+  modelName: string;
+  /** The stock location of a spare; always null for client users. */
+  locationName: string | null;
+}
+
 export interface CabinetEvent {
   id: string;
   kind: CabinetEventKind;

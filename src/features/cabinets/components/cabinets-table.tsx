@@ -1,0 +1,215 @@
+import { createColumnHelper, type SortingState } from '@tanstack/react-table';
+import { Square } from 'lucide-react';
+import { useMemo } from 'react';
+import { Link } from 'react-router-dom';
+import { positionLabel } from '@shared/schemas/register';
+import { DataTable } from '@/components/ui/data-table';
+import { EmptyState } from '@/components/ui/empty-state';
+import { FilterSearch, FilterSelect } from '@/components/ui/filters';
+import type { SelectOption } from '@/components/ui/select-field';
+import { paths } from '@/config/paths';
+import { useCabinets } from '@/features/cabinets/api/get-cabinets';
+import type { CabinetFilters } from '@/features/cabinets/api/keys';
+import type { CabinetSummary } from '@/features/cabinets/api/types';
+import { CabinetStatusPill, cabinetStatusLabels, cabinetStatusOptions } from '@/features/cabinets/components/cabinet-status';
+import { formatDate } from '@/lib/format';
+
+const column = createColumnHelper<CabinetSummary>();
+const sortable = ['serial', 'batch', 'installedOn'] as const;
+type CabinetSort = (typeof sortable)[number];
+
+const position = (c: CabinetSummary) => (c.column && c.row ? positionLabel({ column: c.column, row: c.row }) : null);
+const none = <span className="text-stone-500">—</span>;
+
+interface CabinetsTableProps {
+  filters: CabinetFilters;
+  onFiltersChange: (filters: CabinetFilters) => void;
+  /** Staff see each cabinet's client and where spares are kept; client users have one organisation and no stock. */
+  staff: boolean;
+  /** Choices for the filters; a filter without choices is not shown (client users have one organisation). */
+  clientOptions?: SelectOption[];
+  siteOptions?: SelectOption[];
+  modelOptions?: SelectOption[];
+}
+
+/**
+ * Every cabinet of the register, on a wall or in stock: find one by serial prefix, or all of one
+ * production batch (a batch recall), client, site, state or model.
+ */
+export function CabinetsTable({ filters, onFiltersChange, staff, clientOptions, siteOptions, modelOptions }: CabinetsTableProps) {
+  const query = useCabinets(filters);
+  const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
+
+  const columns = useMemo(
+    () => [
+      column.accessor('serial', {
+        header: 'Serial',
+        enableSorting: true,
+        meta: { alwaysVisible: true },
+        cell: (c) => (
+          <Link to={paths.cabinetLabel.getHref(c.getValue())} className="whitespace-nowrap font-mono font-medium text-ink-800 hover:underline">
+            {c.getValue()}
+          </Link>
+        ),
+      }),
+      column.accessor('status', {
+        header: 'Status',
+        meta: { csv: (r) => cabinetStatusLabels[r.status] },
+        cell: (c) => <CabinetStatusPill status={c.getValue()} />,
+      }),
+      ...(staff ? [column.accessor('clientName', { header: 'Client', cell: (c) => c.getValue() ?? none })] : []),
+      column.accessor('siteName', {
+        header: 'Site',
+        cell: (c) => {
+          const { siteId } = c.row.original;
+          return siteId ? (
+            <Link to={paths.site.getHref(siteId)} className="text-stone-800 hover:underline">
+              {c.getValue()}
+            </Link>
+          ) : (
+            none
+          );
+        },
+      }),
+      column.accessor('wallName', {
+        header: 'Wall',
+        meta: { className: 'min-w-[10rem]' },
+        cell: (c) => {
+          const { wallId, column: col, row } = c.row.original;
+          // The wall's map opens on the cabinet's cell.
+          return wallId ? (
+            <Link to={paths.wall.getHref(wallId, { col: col ?? undefined, row: row ?? undefined })} className="text-stone-800 hover:underline">
+              {c.getValue()}
+            </Link>
+          ) : (
+            none
+          );
+        },
+      }),
+      column.accessor(position, {
+        id: 'position',
+        header: 'Position',
+        cell: (c) => (c.getValue() ? <span className="whitespace-nowrap tabular-nums">{c.getValue()}</span> : none),
+      }),
+      column.accessor('batch', {
+        header: 'Batch',
+        enableSorting: true,
+        cell: (c) => {
+          const batch = c.getValue();
+          if (!batch) return none;
+          return batch.toLowerCase() === filters.batch?.toLowerCase() ? (
+            <span className="whitespace-nowrap font-mono">{batch}</span>
+          ) : (
+            <Link
+              to={paths.cabinets.getHref({ batch })}
+              className="whitespace-nowrap font-mono text-stone-800 hover:underline"
+              title={`Every cabinet of batch ${batch}`}
+            >
+              {batch}
+            </Link>
+          );
+        },
+      }),
+      column.accessor('modelName', { header: 'Model' }),
+      column.accessor('installedOn', {
+        header: 'Installed on',
+        enableSorting: true,
+        cell: (c) => (c.getValue() ? <span className="whitespace-nowrap">{formatDate(c.getValue())}</span> : none),
+      }),
+      ...(staff
+        ? [column.accessor('locationName', { header: 'Stock location', meta: { hiddenByDefault: true }, cell: (c) => c.getValue() ?? none })]
+        : []),
+    ],
+    [staff, filters.batch],
+  );
+
+  const sorting: SortingState = [{ id: filters.sort ?? 'serial', desc: filters.dir === 'desc' }];
+  const filtered = Boolean(filters.serial || filters.clientId || filters.siteId || filters.status || filters.batch || filters.modelId);
+
+  return (
+    <DataTable
+      tableId="cabinets"
+      label="Cabinets"
+      columns={columns}
+      data={rows}
+      getRowId={(c) => c.id}
+      isLoading={query.isPending}
+      error={query.error}
+      onRetry={() => query.refetch()}
+      sorting={sorting}
+      onSortingChange={(next) => {
+        const first = next[0];
+        const sort = sortable.find((s) => s === first?.id) as CabinetSort | undefined;
+        if (first && sort) onFiltersChange({ ...filters, sort, dir: first.desc ? 'desc' : 'asc' });
+      }}
+      hasNextPage={query.hasNextPage}
+      onLoadMore={() => query.fetchNextPage()}
+      isLoadingMore={query.isFetchingNextPage}
+      toolbar={
+        <>
+          <FilterSearch
+            label="Serial"
+            placeholder="Starts with…"
+            className="w-full sm:w-48"
+            value={filters.serial ?? ''}
+            onChange={(serial) => onFiltersChange({ ...filters, serial: serial || undefined })}
+          />
+          <FilterSearch
+            label="Batch"
+            placeholder="Exact code"
+            className="w-full sm:w-48"
+            value={filters.batch ?? ''}
+            onChange={(batch) => onFiltersChange({ ...filters, batch: batch.trim() || undefined })}
+          />
+          {clientOptions && clientOptions.length > 1 ? (
+            <FilterSelect
+              label="Client"
+              anyLabel="All clients"
+              options={clientOptions}
+              value={filters.clientId ?? ''}
+              // A site belongs to one client: a new client clears the site.
+              onChange={(v) => onFiltersChange({ ...filters, clientId: v || undefined, siteId: undefined })}
+            />
+          ) : null}
+          {siteOptions && siteOptions.length > 0 ? (
+            <FilterSelect
+              label="Site"
+              anyLabel="All sites"
+              options={siteOptions}
+              value={filters.siteId ?? ''}
+              onChange={(v) => onFiltersChange({ ...filters, siteId: v || undefined })}
+            />
+          ) : null}
+          <FilterSelect
+            label="Status"
+            anyLabel="Any status"
+            className="w-full sm:w-40"
+            options={cabinetStatusOptions}
+            value={filters.status ?? ''}
+            onChange={(v) => onFiltersChange({ ...filters, status: (v || undefined) as CabinetFilters['status'] })}
+          />
+          {modelOptions && modelOptions.length > 0 ? (
+            <FilterSelect
+              label="Model"
+              anyLabel="All models"
+              options={modelOptions}
+              value={filters.modelId ?? ''}
+              onChange={(v) => onFiltersChange({ ...filters, modelId: v || undefined })}
+            />
+          ) : null}
+        </>
+      }
+      empty={
+        <EmptyState
+          icon={Square}
+          title={filtered ? 'No cabinet matches these filters' : 'No cabinets yet'}
+          description={
+            filtered
+              ? 'A batch matches only as a whole code. Check it, or clear the filters.'
+              : 'Cabinets are added on a wall’s page, one by one or from a CSV file.'
+          }
+        />
+      }
+    />
+  );
+}
