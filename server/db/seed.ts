@@ -46,6 +46,7 @@ async function writeDemo(tx: Tx, rows: DemoRows) {
   await insertAll(tx, schema.stockMovements, rows.stockMovements);
   await insertAll(tx, schema.stockBalances, rows.stockBalances);
   await insertAll(tx, schema.reorderPoints, rows.reorderPoints);
+  await insertAll(tx, schema.auditEvents, rows.auditEvents);
 }
 
 async function hasNoUsers(db: Db | Tx) {

@@ -236,11 +236,38 @@ describe('demo data', () => {
       expect(t.resolvedAt !== null).toBe(t.status === 'resolved' || t.status === 'closed');
       expect(t.closedAt !== null).toBe(t.status === 'closed');
       expect(t.pausedAt !== null).toBe(t.status === 'waiting_client');
+      if (t.acknowledgedAt) expect(t.acknowledgedAt.getTime()).toBeGreaterThan(t.createdAt.getTime());
+      if (t.resolvedAt) expect(t.resolvedAt.getTime()).toBeGreaterThan(t.acknowledgedAt!.getTime());
       if (t.closedAt) expect(t.closedAt.getTime()).toBeGreaterThan(t.resolvedAt!.getTime());
       if (t.closedAt) expect(t.closedAt.getTime()).toBeLessThan(now);
     }
     const comments = await db.select().from(schema.ticketComments);
     expect(new Set(comments.map((c) => c.visibility))).toEqual(new Set(['public', 'internal']));
+    // Nobody goes out to a call before it was taken.
+    const early = await rows<{ number: number }>(sql`
+      select t.number from visits v join tickets t on t.id = v.ticket_id where v.window_start < t.acknowledged_at`);
+    expect(early).toEqual([]);
+  });
+
+  it('has an audit trail that tells the same story as the tickets and the cabinet histories', async () => {
+    // Every ticket's last recorded status is its status; every placed or moved cabinet has its entry.
+    const last = await rows<{ id: string; status: string; logged: string | null }>(sql`
+      select t.id, t.status,
+             (select coalesce(a.after ->> 'status', 'new') from audit_events a
+               where a.entity = 'ticket' and a.entity_id = t.id::text and a.action in ('created', 'updated')
+               order by a.created_at desc, a.id desc limit 1) as logged
+        from tickets t`);
+    expect(last.length).toBeGreaterThan(0);
+    for (const t of last) expect(t.logged, `ticket ${t.id}`).toBe(t.status);
+    const [counts] = await rows<{ comments: number; logged: number; moves: number; movesLogged: number; unknownActors: number }>(sql`
+      select (select count(*)::int from ticket_comments) as comments,
+             (select count(*)::int from audit_events where action like 'comment_%') as logged,
+             (select count(*)::int from cabinet_events where kind in ('placed', 'imported', 'moved', 'removed', 'swapped')) as moves,
+             (select count(*)::int from audit_events where entity = 'cabinet' and action in ('placed', 'moved', 'swapped')) as "movesLogged",
+             (select count(*)::int from audit_events a where a.actor_id is not null and not exists (select 1 from users u where u.id = a.actor_id)) as "unknownActors"`);
+    expect(counts.logged).toBe(counts.comments);
+    expect(counts.movesLogged).toBe(counts.moves);
+    expect(counts.unknownActors).toBe(0);
   });
 
   it('plans visits this week and next for both technicians, and keeps completed visits signed off', async () => {

@@ -4,6 +4,7 @@ import { addMonths, addYears, differenceInCalendarDays, parseISO } from 'date-fn
 import type * as schema from '../schema/index.js';
 import type { ChecklistItem } from '../schema/visits.js';
 import { planClock, ticketDueTimes } from '../../services/ticket-clock.js';
+import { demoAuditTrail } from './audit-trail.js';
 import { createClock, HOUR } from './clock.js';
 import { settleLedger, type Move } from './ledger.js';
 import { createRandom } from './random.js';
@@ -60,6 +61,7 @@ export interface DemoRows {
   stockMovements: Insert<typeof schema.stockMovements>[];
   stockBalances: Insert<typeof schema.stockBalances>[];
   reorderPoints: Insert<typeof schema.reorderPoints>[];
+  auditEvents: Insert<typeof schema.auditEvents>[];
 }
 
 const letters = 'ABCDEFGH';
@@ -74,7 +76,7 @@ export function buildDemo(now: Date, passwordHash: string): DemoRows {
     companySettings: { id: 1, ...company, updatedAt: now },
     servicePlans: [], clients: [], sites: [], contacts: [], users: [], cabinetModels: [], walls: [], controllers: [],
     parts: [], stockLocations: [], cabinets: [], cabinetEvents: [], maintenancePlans: [], tickets: [], ticketComments: [],
-    visits: [], visitTechnicians: [], repairs: [], vendorReturns: [], stockMovements: [], stockBalances: [], reorderPoints: [],
+    visits: [], visitTechnicians: [], repairs: [], vendorReturns: [], stockMovements: [], stockBalances: [], reorderPoints: [], auditEvents: [],
   };
   const longAgo = clock.at(company.defaultTimeZone, -900, 9);
 
@@ -431,9 +433,11 @@ export function buildDemo(now: Date, passwordHash: string): DemoRows {
     const done = ['closed', 'resolved', 'waiting_parts'].includes(t.status);
     if (done && !t.noVisit) {
       const after = t.visitAfterDays ?? visitAfterDays[t.priority];
-      const start = t.priority === 'critical'
+      const planned = t.priority === 'critical'
         ? clock.hoursFrom(createdAt, 2.5)
         : clock.at(tz, clock.weekdayOffset(tz, -(t.ageDays ?? 0) + after), siteKey === 'fHq' ? 7 : 9);
+      // A visit on the day of the call starts after the call was taken, not at the morning's start.
+      const start = planned.getTime() < ackAt!.getTime() + HOUR ? clock.hoursFrom(ackAt!, 2) : planned;
       const repairs = t.repairs ?? [];
       const completedAt = clock.hoursFrom(start, 1 + 0.75 * Math.max(1, repairs.length));
       const visitId = addVisit({
@@ -608,5 +612,6 @@ export function buildDemo(now: Date, passwordHash: string): DemoRows {
     });
   }
 
+  rows.auditEvents = demoAuditTrail(rows, userId.office);
   return rows;
 }

@@ -40,6 +40,28 @@ declare module '@tanstack/react-table' {
   }
 }
 
+/** What a DataTable needs of an infinite query (TanStack Query's result has all of it). */
+interface PagedQuery {
+  isPending: boolean;
+  error: unknown;
+  refetch: () => unknown;
+  hasNextPage: boolean;
+  fetchNextPage: () => unknown;
+  isFetchingNextPage: boolean;
+}
+
+/** The loading, error and "load more" props of a DataTable fed by a keyset-paged infinite query. */
+export function pagedQueryProps(query: PagedQuery) {
+  return {
+    isLoading: query.isPending,
+    error: query.error,
+    onRetry: () => void query.refetch(),
+    hasNextPage: query.hasNextPage,
+    onLoadMore: () => void query.fetchNextPage(),
+    isLoadingMore: query.isFetchingNextPage,
+  };
+}
+
 export interface DataTableProps<T> {
   /** Names the remembered column choice and the CSV file. */
   tableId: string;

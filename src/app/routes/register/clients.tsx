@@ -1,6 +1,6 @@
 import { Plus } from 'lucide-react';
 import { useState } from 'react';
-import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import type { LoaderFunctionArgs } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { clientsInfiniteQueryOptions } from '@/features/clients/api/get-clients';
@@ -8,6 +8,7 @@ import type { ClientFilters } from '@/features/clients/api/keys';
 import { CreateClientDialog } from '@/features/clients/components/client-form-dialog';
 import { ClientsTable } from '@/features/clients/components/clients-table';
 import { requireUser, staff } from '@/app/auth-guard';
+import { useListFilters } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
@@ -32,7 +33,7 @@ export async function loader({ request }: LoaderFunctionArgs) {
 export function Component() {
   useDocumentTitle('Clients');
   const user = useUser();
-  const [params, setParams] = useSearchParams();
+  const [filters, setFilters] = useListFilters(filtersFrom, { sort: 'name', dir: 'asc' });
   const [adding, setAdding] = useState(false);
   const canEdit = isOffice(user);
   const addButton = canEdit ? (
@@ -45,24 +46,9 @@ export function Component() {
     <>
       <PageHeader title="Clients" description="Every organisation whose walls you look after: service plan, contacts, sites and walls." actions={addButton} />
       <ClientsTable
-        filters={filtersFrom(params)}
+        filters={filters}
         emptyAction={addButton}
-        onFiltersChange={(next) =>
-          setParams(
-            (prev) => {
-              const p = new URLSearchParams(prev);
-              for (const [key, value] of Object.entries(next)) {
-                if (value === undefined || value === '' || value === false) p.delete(key);
-                else p.set(key, String(value));
-              }
-              // Defaults stay out of the address.
-              if (p.get('sort') === 'name') p.delete('sort');
-              if (p.get('dir') === 'asc') p.delete('dir');
-              return p;
-            },
-            { replace: true },
-          )
-        }
+        onFiltersChange={setFilters}
       />
       {canEdit ? <CreateClientDialog open={adding} onClose={() => setAdding(false)} /> : null}
     </>

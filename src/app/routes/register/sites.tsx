@@ -1,25 +1,23 @@
 import { useMemo } from 'react';
-import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import type { LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
 import { useClientOptions } from '@/features/clients/api/get-clients';
 import { sitesInfiniteQueryOptions } from '@/features/sites/api/get-sites';
 import type { SiteFilters } from '@/features/sites/api/keys';
 import { SitesTable } from '@/features/sites/components/sites-table';
 import { requireUser } from '@/app/auth-guard';
+import { idParam, useListFilters } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 /** The filters live in the address, so a sorted, filtered list can be bookmarked. */
 function filtersFrom(params: URLSearchParams): SiteFilters {
-  const clientId = params.get('clientId') ?? '';
   const sort = params.get('sort');
   return {
     q: params.get('q')?.trim() || undefined,
-    clientId: uuid.test(clientId) ? clientId : undefined,
+    clientId: idParam(params, 'clientId'),
     sort: sort === 'city' || sort === 'createdAt' ? sort : undefined,
     dir: params.get('dir') === 'desc' ? 'desc' : undefined,
   };
@@ -35,7 +33,7 @@ export function Component() {
   useDocumentTitle('Sites');
   const user = useUser();
   const staff = user.role !== 'client';
-  const [params, setParams] = useSearchParams();
+  const [filters, setFilters] = useListFilters(filtersFrom, { sort: 'name', dir: 'asc' });
   // Client users have one organisation, so no client filter.
   const clients = useClientOptions(staff);
   const clientOptions = useMemo(() => (clients.data ?? []).map((c) => ({ value: c.id, label: c.name })), [clients.data]);
@@ -47,25 +45,10 @@ export function Component() {
         description={staff ? 'Every place where a client has walls: address, time zone and access notes.' : "Your organisation's sites."}
       />
       <SitesTable
-        filters={filtersFrom(params)}
+        filters={filters}
         staff={staff}
         clientOptions={staff ? clientOptions : undefined}
-        onFiltersChange={(next) =>
-          setParams(
-            (prev) => {
-              const p = new URLSearchParams(prev);
-              for (const [key, value] of Object.entries(next)) {
-                if (value === undefined || value === '') p.delete(key);
-                else p.set(key, String(value));
-              }
-              // Defaults stay out of the address.
-              if (p.get('sort') === 'name') p.delete('sort');
-              if (p.get('dir') === 'asc') p.delete('dir');
-              return p;
-            },
-            { replace: true },
-          )
-        }
+        onFiltersChange={setFilters}
       />
     </>
   );

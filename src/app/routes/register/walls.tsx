@@ -1,26 +1,21 @@
 import { Plus } from 'lucide-react';
-import { useMemo, useState } from 'react';
-import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { useState } from 'react';
+import type { LoaderFunctionArgs } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { useCabinetModels } from '@/features/catalogue/api/get-cabinet-models';
-import { useClientOptions } from '@/features/clients/api/get-clients';
 import { useSites } from '@/features/sites/api/get-sites';
+import { usePlaceFilterOptions } from '@/features/sites/components/place-filters';
 import { wallsInfiniteQueryOptions } from '@/features/walls/api/get-walls';
 import type { WallFilters } from '@/features/walls/api/keys';
 import { CreateWallDialog } from '@/features/walls/components/wall-form-dialog';
 import { WallsTable } from '@/features/walls/components/walls-table';
 import { requireUser } from '@/app/auth-guard';
+import { idParam, useListFilters } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
-
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-const idParam = (params: URLSearchParams, key: string) => {
-  const v = params.get(key) ?? '';
-  return uuid.test(v) ? v : undefined;
-};
 
 function filtersFrom(params: URLSearchParams): WallFilters {
   return {
@@ -44,21 +39,11 @@ export function Component() {
   const user = useUser();
   const staff = user.role !== 'client';
   const canEdit = isOffice(user);
-  const [params, setParams] = useSearchParams();
-  const filters = filtersFrom(params);
+  const [filters, setFilters] = useListFilters(filtersFrom, { sort: 'name', dir: 'asc' });
   const [adding, setAdding] = useState(false);
-
-  // The filters' choices: client users have one organisation, so no client filter.
-  const clients = useClientOptions(staff);
-  const sites = useSites({ clientId: filters.clientId });
-  const allSites = useSites({}, canEdit && adding);
+  const filterOptions = usePlaceFilterOptions(staff, filters.clientId);
   const models = useCabinetModels();
-  const clientOptions = useMemo(() => (clients.data ?? []).map((c) => ({ value: c.id, label: c.name })), [clients.data]);
-  const siteOptions = useMemo(
-    () => (sites.data?.items ?? []).map((s) => ({ value: s.id, label: staff && !filters.clientId ? `${s.name} (${s.clientName})` : s.name })),
-    [sites.data, staff, filters.clientId],
-  );
-  const modelOptions = useMemo(() => (models.data?.items ?? []).map((m) => ({ value: m.id, label: m.name })), [models.data]);
+  const allSites = useSites({}, canEdit && adding);
 
   const addButton = canEdit ? (
     <Button variant="primary" onClick={() => setAdding(true)} icon={<Plus className="h-4 w-4" aria-hidden="true" />}>
@@ -75,25 +60,9 @@ export function Component() {
       />
       <WallsTable
         filters={filters}
-        clientOptions={staff ? clientOptions : undefined}
-        siteOptions={siteOptions}
-        modelOptions={modelOptions}
+        filterOptions={filterOptions}
         emptyAction={addButton}
-        onFiltersChange={(next) =>
-          setParams(
-            (prev) => {
-              const p = new URLSearchParams(prev);
-              for (const [key, value] of Object.entries(next)) {
-                if (value === undefined || value === '') p.delete(key);
-                else p.set(key, String(value));
-              }
-              if (p.get('sort') === 'name') p.delete('sort');
-              if (p.get('dir') === 'asc') p.delete('dir');
-              return p;
-            },
-            { replace: true },
-          )
-        }
+        onFiltersChange={setFilters}
       />
       {canEdit ? (
         <CreateWallDialog

@@ -2,6 +2,7 @@ import { Plus } from 'lucide-react';
 import clsx from 'clsx';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { ButtonLink } from '@/components/ui/button';
+import { pagedQueryProps } from '@/components/ui/data-table';
 import { FilterSearch } from '@/components/ui/filters';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -124,12 +125,7 @@ function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
         label={isClient ? 'Your tickets' : 'Tickets assigned to you'}
         items={items}
         forClient={isClient}
-        isLoading={query.isPending}
-        error={query.error}
-        onRetry={() => query.refetch()}
-        hasNextPage={query.hasNextPage}
-        onLoadMore={() => query.fetchNextPage()}
-        isLoadingMore={query.isFetchingNextPage}
+        {...pagedQueryProps(query)}
         empty={
           filters.q
             ? { title: 'No tickets match this search', description: 'Try another word or the GK-number.' }

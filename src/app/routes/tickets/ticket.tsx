@@ -26,13 +26,14 @@ import { queryClient } from '@/lib/query-client';
 import { audienceOf, isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { useMediaQuery } from '@/lib/use-media-query';
+import { isRecordId } from '@/lib/record-id';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   await requireUser(request);
   const id = params.id ?? '';
   // Not an id at all (a mistyped link): the same "not found" as a ticket that is not there.
-  if (!/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id)) throw data('Not found', { status: 404 });
+  if (!isRecordId(id)) throw data('Not found', { status: 404 });
   // The ticket itself must load (a 404 shows "not found"); the rest may load on the page.
   await Promise.all([
     queryClient.ensureQueryData(ticketQueryOptions(id)),

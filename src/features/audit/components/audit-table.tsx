@@ -3,7 +3,7 @@ import { createColumnHelper } from '@tanstack/react-table';
 import { History, X } from 'lucide-react';
 import { useMemo } from 'react';
 import { Badge } from '@/components/ui/badge';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import { useAuditEvents } from '@/features/audit/api/get-audit-events';
@@ -117,12 +117,7 @@ export function AuditTable({ filters, onFiltersChange }: AuditTableProps) {
       columns={columns}
       data={rows}
       getRowId={(e) => String(e.id)}
-      isLoading={query.isPending}
-      error={query.error}
-      onRetry={() => query.refetch()}
-      hasNextPage={query.hasNextPage}
-      onLoadMore={() => query.fetchNextPage()}
-      isLoadingMore={query.isFetchingNextPage}
+      {...pagedQueryProps(query)}
       renderExpanded={(e) => <AuditChanges before={e.before} after={e.after} />}
       expandLabel={(e) => `Show changes: ${actionLabel(e.action)} ${entityLabel(e.entity)} ${formatDateTime(e.createdAt)}`}
       toolbar={

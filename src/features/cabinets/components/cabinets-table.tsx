@@ -3,15 +3,15 @@ import { Square } from 'lucide-react';
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import { positionLabel } from '@shared/schemas/register';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
-import type { SelectOption } from '@/components/ui/select-field';
 import { paths } from '@/config/paths';
 import { useCabinets } from '@/features/cabinets/api/get-cabinets';
 import type { CabinetFilters } from '@/features/cabinets/api/keys';
 import type { CabinetSummary } from '@/features/cabinets/api/types';
 import { CabinetStatusPill, cabinetStatusLabels, cabinetStatusOptions } from '@/features/cabinets/components/cabinet-status';
+import { PlaceFilters, type PlaceFilterOptions } from '@/features/sites/components/place-filters';
 import { formatDate } from '@/lib/format';
 
 const column = createColumnHelper<CabinetSummary>();
@@ -26,17 +26,14 @@ interface CabinetsTableProps {
   onFiltersChange: (filters: CabinetFilters) => void;
   /** Staff see each cabinet's client and where spares are kept; client users have one organisation and no stock. */
   staff: boolean;
-  /** Choices for the filters; a filter without choices is not shown (client users have one organisation). */
-  clientOptions?: SelectOption[];
-  siteOptions?: SelectOption[];
-  modelOptions?: SelectOption[];
+  filterOptions: Partial<PlaceFilterOptions>;
 }
 
 /**
  * Every cabinet of the register, on a wall or in stock: find one by serial prefix, or all of one
  * production batch (a batch recall), client, site, state or model.
  */
-export function CabinetsTable({ filters, onFiltersChange, staff, clientOptions, siteOptions, modelOptions }: CabinetsTableProps) {
+export function CabinetsTable({ filters, onFiltersChange, staff, filterOptions }: CabinetsTableProps) {
   const query = useCabinets(filters);
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
 
@@ -133,18 +130,13 @@ export function CabinetsTable({ filters, onFiltersChange, staff, clientOptions, 
       columns={columns}
       data={rows}
       getRowId={(c) => c.id}
-      isLoading={query.isPending}
-      error={query.error}
-      onRetry={() => query.refetch()}
+      {...pagedQueryProps(query)}
       sorting={sorting}
       onSortingChange={(next) => {
         const first = next[0];
         const sort = sortable.find((s) => s === first?.id) as CabinetSort | undefined;
         if (first && sort) onFiltersChange({ ...filters, sort, dir: first.desc ? 'desc' : 'asc' });
       }}
-      hasNextPage={query.hasNextPage}
-      onLoadMore={() => query.fetchNextPage()}
-      isLoadingMore={query.isFetchingNextPage}
       toolbar={
         <>
           <FilterSearch
@@ -161,25 +153,6 @@ export function CabinetsTable({ filters, onFiltersChange, staff, clientOptions, 
             value={filters.batch ?? ''}
             onChange={(batch) => onFiltersChange({ ...filters, batch: batch.trim() || undefined })}
           />
-          {clientOptions && clientOptions.length > 1 ? (
-            <FilterSelect
-              label="Client"
-              anyLabel="All clients"
-              options={clientOptions}
-              value={filters.clientId ?? ''}
-              // A site belongs to one client: a new client clears the site.
-              onChange={(v) => onFiltersChange({ ...filters, clientId: v || undefined, siteId: undefined })}
-            />
-          ) : null}
-          {siteOptions && siteOptions.length > 0 ? (
-            <FilterSelect
-              label="Site"
-              anyLabel="All sites"
-              options={siteOptions}
-              value={filters.siteId ?? ''}
-              onChange={(v) => onFiltersChange({ ...filters, siteId: v || undefined })}
-            />
-          ) : null}
           <FilterSelect
             label="Status"
             anyLabel="Any status"
@@ -188,15 +161,7 @@ export function CabinetsTable({ filters, onFiltersChange, staff, clientOptions, 
             value={filters.status ?? ''}
             onChange={(v) => onFiltersChange({ ...filters, status: (v || undefined) as CabinetFilters['status'] })}
           />
-          {modelOptions && modelOptions.length > 0 ? (
-            <FilterSelect
-              label="Model"
-              anyLabel="All models"
-              options={modelOptions}
-              value={filters.modelId ?? ''}
-              onChange={(v) => onFiltersChange({ ...filters, modelId: v || undefined })}
-            />
-          ) : null}
+          <PlaceFilters options={filterOptions} values={filters} onChange={(place) => onFiltersChange({ ...filters, ...place })} />
         </>
       }
       empty={

@@ -3,7 +3,7 @@ import { Building2 } from 'lucide-react';
 import { useMemo, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { Badge } from '@/components/ui/badge';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import { paths } from '@/config/paths';
@@ -77,18 +77,13 @@ export function ClientsTable({ filters, onFiltersChange, emptyAction }: ClientsT
       columns={columns}
       data={rows}
       getRowId={(c) => c.id}
-      isLoading={query.isPending}
-      error={query.error}
-      onRetry={() => query.refetch()}
+      {...pagedQueryProps(query)}
       sorting={sorting}
       onSortingChange={(next) => {
         const first = next[0];
         if (!first) return;
         onFiltersChange({ ...filters, sort: first.id === 'createdAt' ? 'createdAt' : 'name', dir: first.desc ? 'desc' : 'asc' });
       }}
-      hasNextPage={query.hasNextPage}
-      onLoadMore={() => query.fetchNextPage()}
-      isLoadingMore={query.isFetchingNextPage}
       toolbar={
         <>
           <FilterSearch

@@ -2,7 +2,7 @@ import { createColumnHelper, type SortingState } from '@tanstack/react-table';
 import { MapPin } from 'lucide-react';
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import type { SelectOption } from '@/components/ui/select-field';
@@ -68,18 +68,13 @@ export function SitesTable({ filters, onFiltersChange, staff, clientOptions }: S
       columns={columns}
       data={rows}
       getRowId={(s) => s.id}
-      isLoading={query.isPending}
-      error={query.error}
-      onRetry={() => query.refetch()}
+      {...pagedQueryProps(query)}
       sorting={sorting}
       onSortingChange={(next) => {
         const first = next[0];
         const sort = sortable.find((s) => s === first?.id) as SiteSort | undefined;
         if (first && sort) onFiltersChange({ ...filters, sort, dir: first.desc ? 'desc' : 'asc' });
       }}
-      hasNextPage={query.hasNextPage}
-      onLoadMore={() => query.fetchNextPage()}
-      isLoadingMore={query.isFetchingNextPage}
       toolbar={
         <>
           <FilterSearch

@@ -1,15 +1,15 @@
 import { ticketPriorities, ticketStatuses } from '@shared/schemas/enums';
 import { ticketClockStates } from '@shared/schemas/tickets';
 import type { TicketFilters } from '@/features/tickets/api/keys';
+import { isRecordId } from '@/lib/record-id';
 
-const uuidLike = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Keeps only the values of a comma-separated list that the API knows. */
 const csvOf = (value: string | null, allowed: readonly string[]) => {
   const kept = (value ?? '').split(',').filter((v) => allowed.includes(v));
   return kept.length ? kept.join(',') : undefined;
 };
-const idOf = (value: string | null) => (value && uuidLike.test(value) ? value : undefined);
+const idOf = (value: string | null) => (value && isRecordId(value) ? value : undefined);
 
 export const filterKeys = ['status', 'open', 'priority', 'clock', 'clientId', 'siteId', 'wallId', 'assigneeId', 'q', 'sort', 'dir'] as const;
 

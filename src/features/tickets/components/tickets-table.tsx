@@ -4,7 +4,7 @@ import { createColumnHelper } from '@tanstack/react-table';
 import { Ticket } from 'lucide-react';
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import { paths } from '@/config/paths';
@@ -140,18 +140,13 @@ export function TicketsTable({ filters, onFiltersChange }: TicketsTableProps) {
       columns={columns}
       data={rows}
       getRowId={(t) => t.id}
-      isLoading={query.isPending}
-      error={query.error}
-      onRetry={() => query.refetch()}
+      {...pagedQueryProps(query)}
       sorting={sorting}
       onSortingChange={(next) => {
         const first = next[0];
         if (!first) return;
         set({ sort: first.id as TicketFilters['sort'], dir: first.desc ? 'desc' : 'asc' });
       }}
-      hasNextPage={query.hasNextPage}
-      onLoadMore={() => query.fetchNextPage()}
-      isLoadingMore={query.isFetchingNextPage}
       toolbar={
         <>
           <FilterSearch label="Search" placeholder="Title or GK-number" value={filters.q ?? ''} onChange={(q) => set({ q: q || undefined })} />

@@ -6,7 +6,7 @@ import { Link } from 'react-router-dom';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import { Popover, popoverItemClasses } from '@/components/ui/popover';
@@ -160,12 +160,7 @@ export function UsersTable({ filters, onFiltersChange }: UsersTableProps) {
         columns={columns}
         data={rows}
         getRowId={(u) => u.id}
-        isLoading={query.isPending}
-        error={query.error}
-        onRetry={() => query.refetch()}
-        hasNextPage={query.hasNextPage}
-        onLoadMore={() => query.fetchNextPage()}
-        isLoadingMore={query.isFetchingNextPage}
+        {...pagedQueryProps(query)}
         toolbar={
           <>
             <FilterSearch

@@ -3,14 +3,14 @@ import { Grid3x3 } from 'lucide-react';
 import { useMemo, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { Badge } from '@/components/ui/badge';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
-import { FilterSearch, FilterSelect } from '@/components/ui/filters';
-import type { SelectOption } from '@/components/ui/select-field';
+import { FilterSearch } from '@/components/ui/filters';
 import { paths } from '@/config/paths';
 import { useWalls } from '@/features/walls/api/get-walls';
 import type { WallFilters } from '@/features/walls/api/keys';
 import type { WallSummary } from '@/features/walls/api/types';
+import { PlaceFilters, type PlaceFilterOptions } from '@/features/sites/components/place-filters';
 import { mountingLabels } from '@/features/walls/components/wall-labels';
 import { formatDate } from '@/lib/format';
 
@@ -19,15 +19,12 @@ const column = createColumnHelper<WallSummary>();
 interface WallsTableProps {
   filters: WallFilters;
   onFiltersChange: (filters: WallFilters) => void;
-  /** Choices for the filters; a filter without choices is not shown (client users have one organisation). */
-  clientOptions?: SelectOption[];
-  siteOptions?: SelectOption[];
-  modelOptions?: SelectOption[];
+  filterOptions: Partial<PlaceFilterOptions>;
   emptyAction?: ReactNode;
 }
 
 /** Every wall of the register, filtered by client, site and cabinet model; search by name. */
-export function WallsTable({ filters, onFiltersChange, clientOptions, siteOptions, modelOptions, emptyAction }: WallsTableProps) {
+export function WallsTable({ filters, onFiltersChange, filterOptions, emptyAction }: WallsTableProps) {
   const query = useWalls(filters);
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
 
@@ -96,17 +93,12 @@ export function WallsTable({ filters, onFiltersChange, clientOptions, siteOption
       columns={columns}
       data={rows}
       getRowId={(w) => w.id}
-      isLoading={query.isPending}
-      error={query.error}
-      onRetry={() => query.refetch()}
+      {...pagedQueryProps(query)}
       sorting={sorting}
       onSortingChange={(next) => {
         const first = next[0];
         if (first) onFiltersChange({ ...filters, sort: first.id === 'name' ? 'name' : 'createdAt', dir: first.desc ? 'desc' : 'asc' });
       }}
-      hasNextPage={query.hasNextPage}
-      onLoadMore={() => query.fetchNextPage()}
-      isLoadingMore={query.isFetchingNextPage}
       toolbar={
         <>
           <FilterSearch
@@ -115,34 +107,11 @@ export function WallsTable({ filters, onFiltersChange, clientOptions, siteOption
             value={filters.q ?? ''}
             onChange={(q) => onFiltersChange({ ...filters, q: q || undefined })}
           />
-          {clientOptions && clientOptions.length > 1 ? (
-            <FilterSelect
-              label="Client"
-              anyLabel="All clients"
-              options={clientOptions}
-              value={filters.clientId ?? ''}
-              // A site belongs to one client: a new client clears the site.
-              onChange={(v) => onFiltersChange({ ...filters, clientId: v || undefined, siteId: undefined })}
-            />
-          ) : null}
-          {siteOptions && siteOptions.length > 0 ? (
-            <FilterSelect
-              label="Site"
-              anyLabel="All sites"
-              options={siteOptions}
-              value={filters.siteId ?? ''}
-              onChange={(v) => onFiltersChange({ ...filters, siteId: v || undefined })}
-            />
-          ) : null}
-          {modelOptions && modelOptions.length > 0 ? (
-            <FilterSelect
-              label="Cabinet model"
-              anyLabel="All models"
-              options={modelOptions}
-              value={filters.cabinetModelId ?? ''}
-              onChange={(v) => onFiltersChange({ ...filters, cabinetModelId: v || undefined })}
-            />
-          ) : null}
+          <PlaceFilters
+            options={filterOptions}
+            values={{ clientId: filters.clientId, siteId: filters.siteId, modelId: filters.cabinetModelId }}
+            onChange={({ clientId, siteId, modelId }) => onFiltersChange({ ...filters, clientId, siteId, cabinetModelId: modelId })}
+          />
         </>
       }
       empty={
