@@ -72,7 +72,7 @@ export async function measureWallMap(base: string, account: { email: string; pas
       );
       card.push(
         await page.evaluate(async () => {
-          const cell = document.querySelector('[role="gridcell"][data-c="7"][data-r="4"]') as SVGGElement;
+          const cell = document.querySelector('[role="gridcell"][aria-label^="C7·R4,"]') as SVGGElement;
           const serial = /serial ([^,]+)/.exec(cell.getAttribute('aria-label') ?? '')?.[1] ?? '';
           const frame = () => new Promise((r) => requestAnimationFrame(() => r(null)));
           const started = performance.now();

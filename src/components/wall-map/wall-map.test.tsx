@@ -155,7 +155,7 @@ describe('WallMap markup', () => {
   const render = (view: 'front' | 'rear') =>
     renderToStaticMarkup(<WallMap columns={6} rows={3} cells={cells} view={view} ariaLabel="Test wall" onCellActivate={() => undefined} />);
   const cellX = (html: string, c: number, r: number) => {
-    const m = new RegExp(`<rect role="gridcell" data-c="${c}" data-r="${r}"[^>]*? x="([\\d.]+)"`).exec(html);
+    const m = new RegExp(`<rect role="gridcell"[^>]*? aria-label="C${c}·R${r},[^"]*"[^>]*? x="([\\d.]+)"`).exec(html);
     return m ? Number(m[1]) : NaN;
   };
 

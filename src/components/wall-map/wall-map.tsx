@@ -163,8 +163,6 @@ const MapRow = memo(function MapRow({ cells, layout, textLevel, textFrom, textTo
       <rect
         key={column}
         role="gridcell"
-        data-c={column}
-        data-r={row}
         tabIndex={column === tabColumn ? 0 : -1}
         aria-label={cell.name}
         aria-selected={selected}
@@ -236,6 +234,22 @@ const MapRow = memo(function MapRow({ cells, layout, textLevel, textFrom, textTo
   );
 });
 
+/**
+ * Where a cell sits is where its element sits: the cell layer holds one group per row (row 1
+ * first), and a row group holds its cells in column order (column 1 first), then the layer of
+ * marks. Two attributes fewer on each of 2,000 cells.
+ */
+function positionOfCell(el: Element | null, layer: SVGGElement | null): GridPosition | null {
+  const rowEl = el?.parentNode as Element | null | undefined;
+  if (!el || !rowEl || !layer || el.getAttribute('role') !== 'gridcell' || rowEl.parentNode !== layer) return null;
+  return { column: Array.prototype.indexOf.call(rowEl.children, el) + 1, row: Array.prototype.indexOf.call(layer.children, rowEl) + 1 };
+}
+
+function cellElement(layer: SVGGElement | null, p: GridPosition): SVGElement | null {
+  const el = layer?.children[p.row - 1]?.children[p.column - 1];
+  return el instanceof SVGElement && el.getAttribute('role') === 'gridcell' ? el : null;
+}
+
 const Rulers = memo(function Rulers({ layout, step, fontSize }: { layout: WallLayout; step: number; fontSize: number }) {
   const numbers: ReactNode[] = [];
   for (let c = 1; c <= layout.columns; c += 1) {
@@ -289,6 +303,7 @@ export function WallMap({
   className,
 }: WallMapProps) {
   const svgRef = useRef<SVGSVGElement>(null);
+  const cellLayerRef = useRef<SVGGElement>(null);
   const layout = useMemo(() => wallLayout(columns, rows, view, cellAspect), [columns, rows, view, cellAspect]);
   const maxScale = maxScaleFor(columns, rows);
   const shapeKey = `${columns}x${rows}x${cellAspect}`;
@@ -393,7 +408,7 @@ export function WallMap({
   useEffect(() => {
     if (!pendingFocus.current) return;
     pendingFocus.current = false;
-    const el = svgRef.current?.querySelector<SVGElement>(`[data-c="${focus.column}"][data-r="${focus.row}"]`);
+    const el = cellElement(cellLayerRef.current, focus);
     el?.focus({ preventScroll: true });
   }, [focus.column, focus.row]);
 
@@ -510,11 +525,7 @@ export function WallMap({
     onCellActivate?.(p);
   };
 
-  const cellFromTarget = (target: EventTarget | null): GridPosition | null => {
-    const el = (target as Element | null)?.closest?.('[data-c]');
-    if (!el) return null;
-    return { column: Number(el.getAttribute('data-c')), row: Number(el.getAttribute('data-r')) };
-  };
+  const cellFromTarget = (target: EventTarget | null) => positionOfCell(target as Element | null, cellLayerRef.current);
 
   const onClick = (e: ReactMouseEvent<SVGSVGElement>) => {
     if (suppressClick.current) {
@@ -614,6 +625,7 @@ export function WallMap({
         >
           <Rulers layout={layout} step={step} fontSize={rulerFont} />
           <g
+            ref={cellLayerRef}
             className={clsx(
               // The cells' rounded corners: one rule rather than an attribute on each of 2,000 cells
               // (a browser without the SVG 2 geometry properties draws square corners, nothing worse).
