@@ -1,5 +1,6 @@
 import Papa from 'papaparse';
 import { aliasedTable, and, desc, eq, inArray, like, sql } from 'drizzle-orm';
+import type { PgSelect } from 'drizzle-orm/pg-core';
 import {
   importRow,
   positionLabel,
@@ -32,6 +33,16 @@ function visibleCabinets(actor: Actor) {
   return actor.role === 'client' ? tenantWhere(actor, walls.clientId) : undefined;
 }
 
+/** A cabinet's model and whereabouts: its wall, site and client, or its stock location. */
+function withWhereabouts<T extends PgSelect>(query: T) {
+  return query
+    .innerJoin(cabinetModels, eq(cabinetModels.id, cabinets.cabinetModelId))
+    .leftJoin(walls, eq(walls.id, cabinets.wallId))
+    .leftJoin(sites, eq(sites.id, walls.siteId))
+    .leftJoin(clients, eq(clients.id, walls.clientId))
+    .leftJoin(stockLocations, eq(stockLocations.id, cabinets.stockLocationId));
+}
+
 const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const isoDatePattern = /^\d{4}-\d{2}-\d{2}$/;
 
@@ -54,7 +65,7 @@ function cabinetCursor(query: ListCabinetsQuery) {
 export async function listCabinets(actor: Actor, query: ListCabinetsQuery) {
   const cursor = cabinetCursor(query);
   const sortColumn = query.sort === 'batch' ? cabinets.batch : query.sort === 'installedOn' ? cabinets.installedOn : cabinets.serial;
-  const rows = await db()
+  const rows = await withWhereabouts(db()
     .select({
       id: cabinets.id,
       serial: cabinets.serial,
@@ -74,11 +85,7 @@ export async function listCabinets(actor: Actor, query: ListCabinetsQuery) {
       locationName: stockLocations.name,
     })
     .from(cabinets)
-    .innerJoin(cabinetModels, eq(cabinetModels.id, cabinets.cabinetModelId))
-    .leftJoin(walls, eq(walls.id, cabinets.wallId))
-    .leftJoin(sites, eq(sites.id, walls.siteId))
-    .leftJoin(clients, eq(clients.id, walls.clientId))
-    .leftJoin(stockLocations, eq(stockLocations.id, cabinets.stockLocationId))
+    .$dynamic())
     .where(
       and(
         visibleCabinets(actor),
@@ -125,7 +132,7 @@ export async function listCabinets(actor: Actor, query: ListCabinetsQuery) {
 
 /** A cabinet with its model, where it is, and its whole history. By id or by serial. */
 export async function getCabinet(actor: Actor, by: { id: string } | { serial: string }) {
-  const [row] = await db()
+  const [row] = await withWhereabouts(db()
     .select({
       cabinet: cabinets,
       model: { id: cabinetModels.id, name: cabinetModels.name, pixelPitchMm: cabinetModels.pixelPitchMm, modulesWide: cabinetModels.modulesWide, modulesHigh: cabinetModels.modulesHigh },
@@ -138,11 +145,7 @@ export async function getCabinet(actor: Actor, by: { id: string } | { serial: st
       locationName: stockLocations.name,
     })
     .from(cabinets)
-    .innerJoin(cabinetModels, eq(cabinetModels.id, cabinets.cabinetModelId))
-    .leftJoin(walls, eq(walls.id, cabinets.wallId))
-    .leftJoin(sites, eq(sites.id, walls.siteId))
-    .leftJoin(clients, eq(clients.id, walls.clientId))
-    .leftJoin(stockLocations, eq(stockLocations.id, cabinets.stockLocationId))
+    .$dynamic())
     .where(and('id' in by ? eq(cabinets.id, by.id) : eq(cabinets.serial, by.serial.trim().toUpperCase()), visibleCabinets(actor)));
   const r = found(row, 'Cabinet');
   const fromWall = aliasedTable(walls, 'from_wall');

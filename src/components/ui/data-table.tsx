@@ -62,6 +62,20 @@ export function pagedQueryProps(query: PagedQuery) {
   };
 }
 
+/** A last column with an "Edit" button on each row, named after the row for screen readers. */
+export function editColumn<T>(onEdit: (row: T) => void, nameOf: (row: T) => string): ColumnDef<T, unknown> {
+  return {
+    id: 'actions',
+    header: () => <span className="sr-only">Actions</span>,
+    meta: { noCsv: true, alwaysVisible: true, align: 'right', className: 'w-px whitespace-nowrap' },
+    cell: ({ row }) => (
+      <Button size="sm" variant="ghost" onClick={() => onEdit(row.original)} aria-label={`Edit ${nameOf(row.original)}`}>
+        Edit
+      </Button>
+    ),
+  };
+}
+
 export interface DataTableProps<T> {
   /** Names the remembered column choice and the CSV file. */
   tableId: string;

@@ -3,8 +3,7 @@ import { LayoutGrid } from 'lucide-react';
 import { useMemo, useState } from 'react';
 import type { CabinetModel } from '@shared/schemas/register';
 import { Badge } from '@/components/ui/badge';
-import { Button } from '@/components/ui/button';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, editColumn } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { useCabinetModels } from '@/features/catalogue/api/get-cabinet-models';
 import { EditCabinetModelDialog } from '@/features/catalogue/components/cabinet-model-form-dialog';
@@ -38,20 +37,7 @@ export function CabinetModelsTable({ canEdit }: { canEdit: boolean }) {
         header: 'Use',
         cell: (c) => <Badge tone={c.getValue() === 'outdoor' ? 'amber' : 'neutral'}>{c.getValue() === 'outdoor' ? 'Outdoor' : 'Indoor'}</Badge>,
       }),
-      ...(canEdit
-        ? [
-            column.display({
-              id: 'actions',
-              header: () => <span className="sr-only">Actions</span>,
-              meta: { noCsv: true, alwaysVisible: true, align: 'right' as const, className: 'w-px whitespace-nowrap' },
-              cell: ({ row }) => (
-                <Button size="sm" variant="ghost" onClick={() => setEditing(row.original)} aria-label={`Edit ${row.original.name}`}>
-                  Edit
-                </Button>
-              ),
-            }),
-          ]
-        : []),
+      ...(canEdit ? [editColumn<CabinetModel>(setEditing, (r) => r.name)] : []),
     ],
     [canEdit],
   );

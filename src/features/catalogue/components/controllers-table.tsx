@@ -3,8 +3,7 @@ import { Cpu } from 'lucide-react';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import type { Controller } from '@shared/schemas/register';
-import { Button } from '@/components/ui/button';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, editColumn } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import type { SelectOption } from '@/components/ui/select-field';
 import { paths } from '@/config/paths';
@@ -47,20 +46,7 @@ export function ControllersTable({ canEdit, wallOptions }: { canEdit: boolean; w
         cell: (c) => c.getValue().toLocaleString('en'),
       }),
       column.accessor('notes', { header: 'Notes', meta: { hiddenByDefault: true }, cell: (c) => c.getValue() || '—' }),
-      ...(canEdit
-        ? [
-            column.display({
-              id: 'actions',
-              header: () => <span className="sr-only">Actions</span>,
-              meta: { noCsv: true, alwaysVisible: true, align: 'right' as const, className: 'w-px whitespace-nowrap' },
-              cell: ({ row }) => (
-                <Button size="sm" variant="ghost" onClick={() => setEditing(row.original)} aria-label={`Edit ${row.original.serial}`}>
-                  Edit
-                </Button>
-              ),
-            }),
-          ]
-        : []),
+      ...(canEdit ? [editColumn<Controller>(setEditing, (r) => r.serial)] : []),
     ],
     [canEdit],
   );
