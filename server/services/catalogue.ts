@@ -7,9 +7,10 @@ import type {
   ControllerInput,
   ControllerPatch,
 } from '../../shared/schemas/register.js';
+import { vaBelowWatts } from '../../shared/schemas/register.js';
 import { db } from '../db/client.js';
 import { cabinetModels, controllers, walls } from '../db/schema/walls.js';
-import { badRequest } from '../errors.js';
+import { badRequest, validationFailed } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
 import { found, tenantWhere } from './scope.js';
@@ -30,8 +31,11 @@ export function presentModel(m: typeof cabinetModels.$inferSelect): CabinetModel
     typicalPowerW: m.typicalPowerW,
     weightKg: m.weightKg,
     brightnessNits: m.brightnessNits,
-    voltageMin: m.voltageMin,
-    voltageMax: m.voltageMax,
+    inputVoltageMinV: m.inputVoltageMinV,
+    inputVoltageMaxV: m.inputVoltageMaxV,
+    passThroughAmps: m.passThroughAmps,
+    maxPerChain: m.maxPerChain,
+    maxPowerVA: m.maxPowerVA,
     environment: m.environment,
     archived: m.archivedAt !== null,
   };
@@ -59,11 +63,15 @@ export async function createCabinetModel(actor: Actor, input: CabinetModelInput)
   });
 }
 
-/** Only the name and maker change: the physical spec of walls already built must not drift. */
+/**
+ * The name, the maker and the datasheet's power connection change; the physical spec of walls
+ * already built must not drift.
+ */
 export async function updateCabinetModel(actor: Actor, id: string, input: CabinetModelPatch) {
   return db().transaction(async (tx) => {
     const [before] = await tx.select().from(cabinetModels).where(eq(cabinetModels.id, id)).for('update');
     found(before, 'Cabinet model');
+    if (input.maxPowerVA != null && input.maxPowerVA < before.maxPowerW) throw validationFailed({ maxPowerVA: vaBelowWatts });
     const { archived, ...fields } = input;
     const [after] = await tx
       .update(cabinetModels)

@@ -1,9 +1,12 @@
 import { eq } from 'drizzle-orm';
 import type { z } from 'zod';
 import { cabinetsPerRun, runLoad, validateRuns, type Run, type RunLimits } from '../../shared/calc/runs.js';
+import { chainLimit, supplyVoltageProblem } from '../../shared/calc/electrical.js';
 import {
+  cabinetPowerOf,
   runLimitsFor,
   type PlanSettings,
+  type RunCabinet,
   type RunKind,
   type saveWallPlanRequest,
   type WallRunProblem,
@@ -18,6 +21,25 @@ import { found } from './scope.js';
 import { getWall, visibleWall } from './walls.js';
 
 type SaveWallPlan = z.output<typeof saveWallPlanRequest>;
+
+const chainLimitWords = { circuit: 'its circuit', connector: "the cabinet's power connector", maker: "the maker's most cabinets per chain" } as const;
+
+/**
+ * The settings as stored: the supply must be able to feed the wall's cabinets, and a chain may
+ * carry no more than its circuit, the cabinet's connector and its maker allow (a lower figure of
+ * the crew's own is kept; none given takes that limit).
+ */
+function checkedSettings(input: SaveWallPlan['settings'], cabinet: RunCabinet): PlanSettings {
+  const power = cabinetPowerOf(cabinet);
+  const problem = supplyVoltageProblem(input.supply, power);
+  if (problem) throw validationFailed({ 'settings.supply.voltage': problem }, problem);
+  const limit = chainLimit(input.supply, power);
+  if (input.chainCapacityW !== undefined && input.chainCapacityW > limit.chainLimitW * (1 + 1e-9)) {
+    const message = `A chain on this supply may carry at most ${count.format(limit.chainLimitW)} W, set by ${chainLimitWords[limit.chainLimitedBy]}.`;
+    throw validationFailed({ 'settings.chainCapacityW': message }, message);
+  }
+  return { ...input, chainCapacityW: input.chainCapacityW ?? limit.chainLimitW };
+}
 
 const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
 
@@ -43,7 +65,7 @@ export async function saveWallPlan(actor: Actor, wallId: string, input: SaveWall
     const wall = found(before, 'Wall');
     const [model] = await tx.select().from(cabinetModels).where(eq(cabinetModels.id, wall.cabinetModelId));
     const cabinet = found(model, 'Cabinet model');
-    const settings: PlanSettings = input.settings;
+    const settings = checkedSettings(input.settings, cabinet);
 
     const dataLimits = runLimitsFor('data', cabinet, settings);
     const powerLimits = runLimitsFor('power', cabinet, settings);

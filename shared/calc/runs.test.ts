@@ -41,6 +41,7 @@ describe('generateRuns on the 12 × 6 wall of 500 mm cabinets', () => {
       rows: 6,
       supply: { voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8, powerFactor: 1 },
       outputCapacityPixels: 650_000,
+      dataPattern: 'serpentine',
     });
     expect(runs).toHaveLength(plan.outputsNeeded);
     // 72 cells in 5 runs, cut evenly: 15, 15, 14, 14, 14.

@@ -1,12 +1,12 @@
 // Contracts of the trade calculators (/api/calc/*): the same schemas check the planner's forms
 // and the server's requests. Cross-field rules sit here, each naming the field to fix.
 import { z } from 'zod';
-import { circuitCapacityW, DEFAULT_CONTINUOUS_FACTOR, wholeUnitsWithin } from '../calc/electrical.js';
+import { chainLimit, DEFAULT_CONTINUOUS_FACTOR, supplyVoltageProblem, wholeUnitsWithin } from '../calc/electrical.js';
 import { cabinetsPerRun, runPatterns, type Run, type RunLimits, type RunPattern, type RunProblem } from '../calc/runs.js';
 import type { ClockMode } from '../calc/service-clock.js';
 import type { SparesForecast } from '../calc/spares.js';
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../calc/video-signal.js';
-import type { WallPlan } from '../calc/wall-plan.js';
+import { DEFAULT_RUN_PATTERN, type WallPlan } from '../calc/wall-plan.js';
 
 const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
 
@@ -39,10 +39,28 @@ export const cabinetSpecInput = z
     maxPowerW: positive('Maximum power', 100_000),
     typicalPowerW: positive('Typical power', 100_000),
     weightKg: positive('Weight', 10_000),
+    // From the datasheet, when known: they make the power figures the cabinet's own.
+    maxPowerVA: positive('Maximum volt-amperes', 100_000).optional(),
+    inputVoltageMinV: positive('Lowest input voltage', 1_000).optional(),
+    inputVoltageMaxV: positive('Highest input voltage', 1_000).optional(),
+    passThroughAmps: positive('Connector rating', 1_000).optional(),
+    maxPerChain: positiveInt('Cabinets per chain', 10_000).optional(),
+    receivingCards: positiveInt('Receiving cards', 16).optional(),
+    receivingCardPixels: positiveInt('Receiving card capacity', 100_000_000).optional(),
   })
   .refine((c) => c.typicalPowerW <= c.maxPowerW, {
     path: ['typicalPowerW'],
     message: 'Typical power cannot exceed maximum power.',
+    ...whenFieldsValid,
+  })
+  .refine((c) => c.maxPowerVA === undefined || c.maxPowerVA >= c.maxPowerW, {
+    path: ['maxPowerVA'],
+    message: 'Volt-amperes cannot be less than watts (the power factor is at most 1).',
+    ...whenFieldsValid,
+  })
+  .refine((c) => c.inputVoltageMinV === undefined || c.inputVoltageMaxV === undefined || c.inputVoltageMinV <= c.inputVoltageMaxV, {
+    path: ['inputVoltageMinV'],
+    message: 'The lowest input voltage cannot exceed the highest.',
     ...whenFieldsValid,
   });
 
@@ -51,8 +69,44 @@ export const supplyInput = z.object({
   phases: z.union([z.literal(1), z.literal(3)], { error: 'Phases must be 1 or 3.' }),
   breakerAmps: positive('Breaker rating', 10_000),
   continuousFactor: share('Continuous-load factor').default(DEFAULT_CONTINUOUS_FACTOR),
-  powerFactor: share('Power factor').default(1),
+  // Left out: the datasheet's volt-amperes, else 0.95 (DEFAULT_POWER_FACTOR).
+  powerFactor: share('Power factor').optional(),
 });
+
+const processorInput = z.object({
+  outputs: positiveInt('Processor outputs', 1_000).optional(),
+  pixelCapacity: positiveInt('Processor capacity', 1_000_000_000).optional(),
+  maxWidth: positiveInt('Processor width', 1_000_000).optional(),
+  maxHeight: positiveInt('Processor height', 1_000_000).optional(),
+});
+
+const runPattern = (label: string) => z.enum(runPatterns, { error: `${label} must be rows, columns or serpentine.` });
+
+/**
+ * The supply and cabinet fields a chain limit needs, checked together: a branch voltage within
+ * the cabinet's input range, and at least one whole cabinet on a chain (naming the limit that
+ * is too small). `at` is where the supply sits in the request.
+ */
+export function checkChain(
+  supply: z.output<typeof supplyInput>,
+  cabinet: z.output<typeof cabinetSpecInput>,
+  ctx: z.RefinementCtx,
+  at: (string | number)[] = ['supply'],
+) {
+  const problem = supplyVoltageProblem(supply, cabinet);
+  if (problem) {
+    ctx.addIssue({ code: 'custom', path: [...at, 'voltage'], message: problem });
+    return;
+  }
+  const limit = chainLimit(supply, cabinet);
+  if (limit.cabinetsPerChain >= 1) return;
+  const over = `One cabinet (${count.format(cabinet.maxPowerW)} W) is over`;
+  ctx.addIssue(
+    limit.chainLimitedBy === 'connector'
+      ? { code: 'custom', path: ['cabinet', 'passThroughAmps'], message: `${over} what its power connector may carry (${count.format(limit.chainLimitW)} W).` }
+      : { code: 'custom', path: [...at, 'breakerAmps'], message: `${over} the circuit's continuous capacity (${count.format(limit.circuitCapacityW)} W).` },
+  );
+}
 
 export const wallPlanRequest = z
   .object({
@@ -64,6 +118,10 @@ export const wallPlanRequest = z
     input: z
       .object({ width: positiveInt('Input width', 100_000), height: positiveInt('Input height', 100_000) })
       .optional(),
+    dataPattern: runPattern('Data pattern').default(DEFAULT_RUN_PATTERN),
+    powerPattern: runPattern('Power pattern').default(DEFAULT_RUN_PATTERN),
+    processor: processorInput.optional(),
+    dataCableToWallM: z.number({ error: 'Cable length must be a number.' }).min(0, 'Cable length cannot be negative.').max(10_000, 'Cable length must be at most 10,000 m.').optional(),
   })
   .superRefine((v, ctx) => {
     const cabinetPixels = v.cabinet.pixelsWide * v.cabinet.pixelsHigh;
@@ -74,14 +132,7 @@ export const wallPlanRequest = z
         message: `One cabinet (${count.format(cabinetPixels)} pixels) is over the output capacity.`,
       });
     }
-    const capacityW = circuitCapacityW(v.supply);
-    if (wholeUnitsWithin(capacityW, v.cabinet.maxPowerW) < 1) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['supply', 'breakerAmps'],
-        message: `One cabinet (${count.format(v.cabinet.maxPowerW)} W) is over the circuit's continuous capacity (${count.format(capacityW)} W).`,
-      });
-    }
+    checkChain(v.supply, v.cabinet, ctx);
   }, whenFieldsValid);
 export type WallPlanRequest = z.input<typeof wallPlanRequest>;
 export type WallPlanResponse = WallPlan;

@@ -72,6 +72,22 @@ export type ContactPatch = z.infer<typeof contactPatch>;
 // ---- cabinet models (catalogue) ----
 const positive = (label: string) => z.number({ error: `${label} must be a number.` }).positive(`${label} must be more than zero.`);
 const positiveInt = (label: string) => positive(label).int(`${label} must be a whole number.`);
+/** An optional datasheet figure: an empty box (NaN or '') is "not known", stored as null. */
+const optionalFigure = <T extends z.ZodType>(schema: T) =>
+  z.preprocess((v) => (v === '' || (typeof v === 'number' && Number.isNaN(v)) ? null : v), schema.nullable().optional());
+const vaBelowWatts = 'Volt-amperes cannot be less than the maximum watts (the power factor is at most 1).';
+
+/**
+ * The datasheet's power connection, which may be filled in after a model is in use: it only
+ * makes plans safer. Connector rating in amperes, the maker's most cabinets per chain, VA at
+ * maximum power.
+ */
+const powerConnectionFields = {
+  passThroughAmps: optionalFigure(positive('Connector rating').max(1000, 'Connector rating must be at most 1,000 A.')),
+  maxPerChain: optionalFigure(positiveInt('Cabinets per chain').max(10_000, 'At most 10,000 cabinets per chain.')),
+  maxPowerVA: optionalFigure(positive('Maximum volt-amperes').max(100_000, 'At most 100,000 VA.')),
+};
+
 export const cabinetModelInput = z
   .object({
     name: requiredText(120),
@@ -87,19 +103,23 @@ export const cabinetModelInput = z
     typicalPowerW: positive('Typical power'),
     weightKg: positive('Weight'),
     brightnessNits: positiveInt('Brightness'),
-    voltageMin: positiveInt('Lowest supply voltage').default(100),
-    voltageMax: positiveInt('Highest supply voltage').default(240),
+    inputVoltageMinV: positiveInt('Lowest input voltage').default(100),
+    inputVoltageMaxV: positiveInt('Highest input voltage').default(240),
+    ...powerConnectionFields,
     environment: z.enum(environments).default('indoor'),
   })
   .refine((m) => m.typicalPowerW <= m.maxPowerW, { path: ['typicalPowerW'], message: 'Typical power cannot exceed maximum power.' })
-  .refine((m) => m.voltageMin <= m.voltageMax, { path: ['voltageMin'], message: 'The lowest voltage cannot exceed the highest.' });
+  .refine((m) => m.inputVoltageMinV <= m.inputVoltageMaxV, { path: ['inputVoltageMinV'], message: 'The lowest voltage cannot exceed the highest.' })
+  .refine((m) => m.maxPowerVA == null || m.maxPowerVA >= m.maxPowerW, { path: ['maxPowerVA'], message: vaBelowWatts });
 export type CabinetModelInput = z.infer<typeof cabinetModelInput>;
 export const cabinetModelPatch = z.object({
   name: requiredText(120).optional(),
   maker: text(120).optional(),
+  ...powerConnectionFields,
   archived: z.boolean().optional(),
 });
 export type CabinetModelPatch = z.infer<typeof cabinetModelPatch>;
+export { vaBelowWatts };
 
 // ---- walls ----
 export const wallInput = z.object({
@@ -251,8 +271,12 @@ export interface CabinetModel {
   typicalPowerW: number;
   weightKg: number;
   brightnessNits: number;
-  voltageMin: number;
-  voltageMax: number;
+  inputVoltageMinV: number;
+  inputVoltageMaxV: number;
+  /** The power connector's rating, amperes; null when the datasheet is not at hand. */
+  passThroughAmps: number | null;
+  maxPerChain: number | null;
+  maxPowerVA: number | null;
   environment: (typeof environments)[number];
   archived: boolean;
 }

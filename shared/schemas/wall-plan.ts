@@ -1,7 +1,7 @@
 // The plan stored on a wall (PUT /api/walls/:id/plan): the supply and capacities it was planned
 // with, and its data and power runs. The planner, the runs page and the server share these.
 import { z } from 'zod';
-import { circuitCapacityW } from '../calc/electrical.js';
+import { branchOf, chainLimit, type CabinetPower, type Supply } from '../calc/electrical.js';
 import { runPatterns, type Run, type RunLimits, type RunProblem } from '../calc/runs.js';
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../calc/video-signal.js';
 import { supplyInput } from './calc.js';
@@ -20,13 +20,20 @@ export const planSettingsInput = z.object({
     .int('Output capacity must be a whole number.')
     .positive('Output capacity must be more than zero.')
     .max(100_000_000, 'Output capacity must be at most 100,000,000.'),
+  /**
+   * Watts one power chain may carry. Left out: the chain's limit for this supply and the wall's
+   * cabinet model (`safeChainCapacityW`); a lower figure of the crew's own is kept, a higher one
+   * refused.
+   */
   chainCapacityW: z
     .number({ error: 'Chain capacity must be a number.' })
     .positive('Chain capacity must be more than zero.')
-    .max(1_000_000, 'Chain capacity must be at most 1,000,000 W.'),
+    .max(1_000_000, 'Chain capacity must be at most 1,000,000 W.')
+    .optional(),
 });
 export type PlanSettingsInput = z.input<typeof planSettingsInput>;
-export type PlanSettings = z.output<typeof planSettingsInput>;
+/** Settings as stored on a wall: the chain capacity always filled in. */
+export type PlanSettings = z.output<typeof planSettingsInput> & { chainCapacityW: number };
 
 const cellInput = z.object({
   column: z.number({ error: 'Column must be a number.' }).int('Column must be a whole number.'),
@@ -70,37 +77,70 @@ export interface StoredWallRuns {
   limit: number;
 }
 export interface StoredPlanSettings {
-  supply: { voltage: number; phases: 1 | 3; breakerAmps: number; continuousFactor: number; powerFactor: number };
+  supply: { voltage: number; phases: 1 | 3; breakerAmps: number; continuousFactor: number; powerFactor?: number };
   outputCapacityPixels: number;
   chainCapacityW: number;
 }
 
-/** What a run limit needs to know about the cabinet. */
+/** What a run limit needs to know about the cabinet: its pixels and its power connection. */
 export interface RunCabinet {
   pixelsWide: number;
   pixelsHigh: number;
   maxPowerW: number;
+  maxPowerVA?: number | null;
+  inputVoltageMinV?: number | null;
+  inputVoltageMaxV?: number | null;
+  passThroughAmps?: number | null;
+  maxPerChain?: number | null;
 }
 
-/** The limits of a data or a power run for this cabinet and these settings. */
+/** A catalogue model's power figures as the calculations take them (null: not known). */
+export function cabinetPowerOf(cabinet: RunCabinet): CabinetPower {
+  const known = (v: number | null | undefined) => (v === null || v === undefined ? undefined : v);
+  return {
+    maxPowerW: cabinet.maxPowerW,
+    maxPowerVA: known(cabinet.maxPowerVA),
+    inputVoltageMinV: known(cabinet.inputVoltageMinV),
+    inputVoltageMaxV: known(cabinet.inputVoltageMaxV),
+    passThroughAmps: known(cabinet.passThroughAmps),
+    maxPerChain: known(cabinet.maxPerChain),
+  };
+}
+
+/**
+ * The most one power chain may carry on this supply with this cabinet (the smallest of circuit,
+ * connector and maker's limit), or 0 when the supply's voltage cannot feed the cabinet at all.
+ */
+export function safeChainCapacityW(supply: Supply, cabinet: RunCabinet): number {
+  const power = cabinetPowerOf(cabinet);
+  return branchOf(supply, power) ? chainLimit(supply, power).chainLimitW : 0;
+}
+
+/**
+ * The limits of a data or a power run for this cabinet and these settings. A power chain gets
+ * the stored capacity only up to the safe limit: settings saved under older, looser rules never
+ * let a chain carry more than its circuit, connector or maker allow.
+ */
 export function runLimitsFor<K extends RunKind>(
   kind: K,
   cabinet: RunCabinet,
-  settings: Pick<PlanSettings, 'outputCapacityPixels' | 'chainCapacityW'>,
+  settings: Pick<PlanSettings, 'supply' | 'outputCapacityPixels' | 'chainCapacityW'>,
 ): Extract<RunLimits, { kind: K }> {
   const limits: RunLimits =
     kind === 'data'
       ? { kind: 'data', cabinetPixels: cabinet.pixelsWide * cabinet.pixelsHigh, outputCapacityPixels: settings.outputCapacityPixels }
-      : { kind: 'power', cabinetMaxPowerW: cabinet.maxPowerW, chainCapacityW: settings.chainCapacityW };
+      : { kind: 'power', cabinetMaxPowerW: cabinet.maxPowerW, chainCapacityW: Math.min(settings.chainCapacityW, safeChainCapacityW(settings.supply, cabinet)) };
   return limits as Extract<RunLimits, { kind: K }>;
 }
 
 /**
- * Settings a wall is planned with when none are stored: a 120 V, 20 A single-phase circuit
- * loaded to 80 % (NEC 210.19(A)(1), 210.20(A)), one power chain per circuit, and 650,000 pixels
- * per output (1 Gbit/s at 24 bit, 60 Hz).
+ * Settings a wall is planned with when none are stored: a 20 A single-phase circuit loaded to
+ * 80 % (NEC 210.19(A)(1), 210.20(A)) at 120 V, or at 230 V for a cabinet that does not take
+ * 120 V; one power chain per circuit at its safe limit; 650,000 pixels per output (1 Gbit/s at
+ * 24 bit, 60 Hz).
  */
-export function defaultPlanSettings(outputCapacityPixels = DEFAULT_OUTPUT_CAPACITY_PIXELS): PlanSettings {
-  const supply = { voltage: 120, phases: 1 as const, breakerAmps: 20, continuousFactor: 0.8, powerFactor: 1 };
-  return { supply, outputCapacityPixels, chainCapacityW: circuitCapacityW(supply) };
+export function defaultPlanSettings(cabinet: RunCabinet, outputCapacityPixels = DEFAULT_OUTPUT_CAPACITY_PIXELS): PlanSettings {
+  const at120 = { voltage: 120, phases: 1 as const, breakerAmps: 20, continuousFactor: 0.8 };
+  const supply = branchOf(at120, cabinetPowerOf(cabinet)) ? at120 : { ...at120, voltage: 230 };
+  return { supply, outputCapacityPixels, chainCapacityW: safeChainCapacityW(supply, cabinet) };
 }

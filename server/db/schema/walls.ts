@@ -37,8 +37,13 @@ export const cabinetModels = pgTable('cabinet_models', {
   typicalPowerW: doublePrecision().notNull(),
   weightKg: doublePrecision().notNull(),
   brightnessNits: integer().notNull(),
-  voltageMin: integer().notNull().default(100),
-  voltageMax: integer().notNull().default(240),
+  // The datasheet's power input: the voltage range its supplies take, what its power connector
+  // may pass on to the next cabinet, the maker's most cabinets per chain, and VA at maximum power.
+  inputVoltageMinV: integer('voltage_min').notNull().default(100),
+  inputVoltageMaxV: integer('voltage_max').notNull().default(240),
+  passThroughAmps: doublePrecision(),
+  maxPerChain: integer(),
+  maxPowerVA: doublePrecision('max_power_va'),
   environment: environmentEnum().notNull().default('indoor'),
   archivedAt: at(),
   createdAt: createdAt(),
@@ -47,14 +52,16 @@ export const cabinetModels = pgTable('cabinet_models', {
   unique('cabinet_models_name_key').on(t.name),
   check('cabinet_models_positive', sql`${t.widthMm} > 0 and ${t.heightMm} > 0 and ${t.pixelPitchMm} > 0 and ${t.pixelsWide} > 0 and ${t.pixelsHigh} > 0 and ${t.modulesWide} > 0 and ${t.modulesHigh} > 0 and ${t.weightKg} > 0`),
   check('cabinet_models_power', sql`${t.typicalPowerW} > 0 and ${t.typicalPowerW} <= ${t.maxPowerW}`),
-  check('cabinet_models_voltage', sql`${t.voltageMin} > 0 and ${t.voltageMin} <= ${t.voltageMax}`),
+  check('cabinet_models_voltage', sql`${t.inputVoltageMinV} > 0 and ${t.inputVoltageMinV} <= ${t.inputVoltageMaxV}`),
+  check('cabinet_models_chain', sql`(${t.passThroughAmps} is null or ${t.passThroughAmps} > 0) and (${t.maxPerChain} is null or ${t.maxPerChain} > 0)`),
+  check('cabinet_models_va', sql`${t.maxPowerVA} is null or ${t.maxPowerVA} >= ${t.maxPowerW}`),
 ]);
 
 export interface RunCell { column: number; row: number }
 export interface StoredRun { index: number; cells: RunCell[]; pixels?: number; watts?: number }
 export interface WallRuns { pattern: string; runs: StoredRun[]; limit: number }
 export interface WallPlanSettings {
-  supply: { voltage: number; phases: 1 | 3; breakerAmps: number; continuousFactor: number; powerFactor: number };
+  supply: { voltage: number; phases: 1 | 3; breakerAmps: number; continuousFactor: number; powerFactor?: number };
   outputCapacityPixels: number;
   chainCapacityW: number;
 }

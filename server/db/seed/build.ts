@@ -4,6 +4,8 @@ import { addMonths, addYears, differenceInCalendarDays, parseISO } from 'date-fn
 import type * as schema from '../schema/index.js';
 import type { ChecklistItem } from '../schema/visits.js';
 import { planClock, ticketDueTimes } from '../../services/ticket-clock.js';
+import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../../../shared/calc/video-signal.js';
+import { asBuiltPlan, dataLinesInUse } from './as-built.js';
 import { demoAuditTrail } from './audit-trail.js';
 import { createClock, HOUR } from './clock.js';
 import { settleLedger, type Move } from './ledger.js';
@@ -191,13 +193,12 @@ export function buildDemo(now: Date, passwordHash: string): DemoRows {
       columns: w.columns, rows: w.rows, mounting: w.mounting, installDate,
       warrantyEnd: addYears(parseISO(installDate), w.warrantyYears).toISOString().slice(0, 10),
       calibrationDate: installDate, inputNotes: w.inputNotes, internalNotes: w.internalNotes,
-      planSettings: null, dataRuns: null, powerRuns: null, createdAt: installedAt, updatedAt: installedAt,
+      ...asBuiltPlan(w, model), createdAt: installedAt, updatedAt: installedAt,
     });
     const ctrl = controllerModels[w.controller];
-    const pixels = w.columns * w.rows * model.pixelsWide * model.pixelsHigh;
     rows.controllers.push({
       id: id(), wallId: wallId[k], model: ctrl.model, serial: `${ctrl.serialPrefix}-${clock.yymm(-w.installedDaysAgo - 40)}-${pad(rand.int(1000, 99999), 5)}`,
-      firmware: w.firmware, outputs: ctrl.outputs, outputsInUse: Math.ceil(pixels / 650_000), pixelsPerOutput: 650_000,
+      firmware: w.firmware, outputs: ctrl.outputs, outputsInUse: dataLinesInUse(w, model), pixelsPerOutput: DEFAULT_OUTPUT_CAPACITY_PIXELS,
       notes: '', createdAt: installedAt, updatedAt: installedAt,
     });
 

@@ -257,7 +257,11 @@ export const siteSpecs: Record<SiteKey, {
 
 export type ModelKey = 'hx19' | 'hx26' | 'tw39' | 'tw48' | 'mv15';
 
-/** Invented cabinet models. Pixels per cabinet = cabinet size / pitch; powers and weights are typical of the class. */
+/**
+ * Invented cabinet models. Pixels per cabinet = cabinet size / pitch; powers and weights are typical
+ * of the class. The Morrow Vale datasheet at hand gives no power connection figures, so plans for
+ * it show what they assume.
+ */
 export const modelSpecs: Record<ModelKey, Omit<CabinetModel, 'id' | 'archived'> & {
   /** How this maker writes serials and module batch codes. */
   serialPrefix: string;
@@ -266,31 +270,36 @@ export const modelSpecs: Record<ModelKey, Omit<CabinetModel, 'id' | 'archived'> 
   hx19: {
     name: 'Halvard HX 1.9 Interior', maker: 'Halvard Display Works',
     widthMm: 500, heightMm: 500, pixelPitchMm: 1.953, pixelsWide: 256, pixelsHigh: 256, modulesWide: 2, modulesHigh: 2,
-    maxPowerW: 190, typicalPowerW: 65, weightKg: 7.6, brightnessNits: 800, voltageMin: 100, voltageMax: 240, environment: 'indoor',
+    maxPowerW: 190, typicalPowerW: 65, weightKg: 7.6, brightnessNits: 800,
+    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: 15, maxPerChain: 12, maxPowerVA: 200, environment: 'indoor',
     serialPrefix: 'HX19', batchPrefix: 'H19',
   },
   hx26: {
     name: 'Halvard HX 2.6 Interior', maker: 'Halvard Display Works',
     widthMm: 500, heightMm: 500, pixelPitchMm: 2.604, pixelsWide: 192, pixelsHigh: 192, modulesWide: 2, modulesHigh: 2,
-    maxPowerW: 180, typicalPowerW: 60, weightKg: 7.5, brightnessNits: 1000, voltageMin: 100, voltageMax: 240, environment: 'indoor',
+    maxPowerW: 180, typicalPowerW: 60, weightKg: 7.5, brightnessNits: 1000,
+    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: 15, maxPerChain: 12, maxPowerVA: 190, environment: 'indoor',
     serialPrefix: 'HX26', batchPrefix: 'H26',
   },
   tw39: {
     name: 'Tarnwell TW 3.9 Touring', maker: 'Tarnwell Optoelectronics',
     widthMm: 500, heightMm: 1000, pixelPitchMm: 3.906, pixelsWide: 128, pixelsHigh: 256, modulesWide: 2, modulesHigh: 4,
-    maxPowerW: 340, typicalPowerW: 115, weightKg: 12.5, brightnessNits: 1200, voltageMin: 100, voltageMax: 240, environment: 'indoor',
+    maxPowerW: 340, typicalPowerW: 115, weightKg: 12.5, brightnessNits: 1200,
+    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: 16, maxPerChain: 8, maxPowerVA: null, environment: 'indoor',
     serialPrefix: 'TW39', batchPrefix: 'T39',
   },
   tw48: {
     name: 'Tarnwell TW 4.8 Outdoor', maker: 'Tarnwell Optoelectronics',
     widthMm: 500, heightMm: 1000, pixelPitchMm: 4.81, pixelsWide: 104, pixelsHigh: 208, modulesWide: 2, modulesHigh: 4,
-    maxPowerW: 420, typicalPowerW: 140, weightKg: 16.5, brightnessNits: 5500, voltageMin: 100, voltageMax: 240, environment: 'outdoor',
+    maxPowerW: 420, typicalPowerW: 140, weightKg: 16.5, brightnessNits: 5500,
+    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: 16, maxPerChain: 6, maxPowerVA: 445, environment: 'outdoor',
     serialPrefix: 'TW48', batchPrefix: 'T48',
   },
   mv15: {
     name: 'Morrow Vale Slimline 1.5', maker: 'Morrow Vale Displays',
     widthMm: 600, heightMm: 337.5, pixelPitchMm: 1.5625, pixelsWide: 384, pixelsHigh: 216, modulesWide: 2, modulesHigh: 2,
-    maxPowerW: 110, typicalPowerW: 38, weightKg: 6.2, brightnessNits: 600, voltageMin: 100, voltageMax: 240, environment: 'indoor',
+    maxPowerW: 110, typicalPowerW: 38, weightKg: 6.2, brightnessNits: 600,
+    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: null, maxPerChain: null, maxPowerVA: null, environment: 'indoor',
     serialPrefix: 'MVS15', batchPrefix: 'M15',
   },
 };
@@ -320,6 +329,8 @@ export interface WallSpec {
   /** Cabinets swapped at commissioning for units of a later batch. */
   commissioningSwaps: number;
   controller: keyof typeof controllerModels;
+  /** The supply the wall was wired from, when its as-built plan (runs by whole rows) is on file. */
+  asBuilt?: { voltage: number; phases: 1 | 3; breakerAmps: number; continuousFactor: number };
   firmware: string;
   inputNotes: string;
   internalNotes: string;
@@ -328,6 +339,8 @@ export interface WallSpec {
 export const wallSpecs: Record<WallKey, WallSpec> = {
   w01: {
     site: 'fMain', name: 'Main hall centre wall', model: 'hx26', columns: 12, rows: 6, mounting: 'ground_stacked',
+    // As built: 208 V three-phase distro, 20 A circuits, one power chain and one data line per row.
+    asBuilt: { voltage: 208, phases: 3, breakerAmps: 20, continuousFactor: 0.8 },
     installedDaysAgo: 790, warrantyYears: 5, batches: 3, commissioningSwaps: 2, controller: 'qp8', firmware: '4.2.17',
     inputNotes: 'Program and backup 3840×2160 at 59.94 Hz from the broadcast switcher on HDMI 2.0 (inputs 1 and 2); failover to input 2 is automatic.',
     internalNotes: 'Ground-stacked on the stage riser; rear access through the stage-left door. Row 4 is fed by power chain 4 from distro B.',
