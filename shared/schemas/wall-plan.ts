@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { branchOf, chainLimit, type CabinetPower, type Supply } from '../calc/electrical.js';
 import { runPatterns, type Run, type RunLimits, type RunProblem } from '../calc/runs.js';
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../calc/video-signal.js';
+import type { CabinetSpec } from '../calc/wall-plan.js';
 import { supplyInput } from './calc.js';
 
 /** How a set of runs was laid: by one of the generator's patterns, or by hand. */
@@ -104,6 +105,19 @@ export function cabinetPowerOf(cabinet: RunCabinet): CabinetPower {
     inputVoltageMaxV: known(cabinet.inputVoltageMaxV),
     passThroughAmps: known(cabinet.passThroughAmps),
     maxPerChain: known(cabinet.maxPerChain),
+  };
+}
+
+/** A catalogue model as the wall plan takes it: its size, pixels, power, weight and power input. */
+export function cabinetSpecOf(m: RunCabinet & { widthMm: number; heightMm: number; typicalPowerW: number; weightKg: number }): CabinetSpec {
+  return {
+    widthMm: m.widthMm,
+    heightMm: m.heightMm,
+    pixelsWide: m.pixelsWide,
+    pixelsHigh: m.pixelsHigh,
+    typicalPowerW: m.typicalPowerW,
+    weightKg: m.weightKg,
+    ...cabinetPowerOf(m),
   };
 }
 

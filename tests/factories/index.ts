@@ -39,7 +39,9 @@ export async function createServicePlan(overrides: Partial<typeof servicePlans.$
 }
 
 /** An organisation with one site and, when asked, one wall. */
-export async function createOrganisation(options: { withWall?: boolean; timeZone?: string } = {}) {
+export async function createOrganisation(
+  options: { withWall?: boolean; timeZone?: string; model?: Partial<typeof cabinetModels.$inferInsert> } = {},
+) {
   const plan = await createServicePlan();
   const [client] = await db().insert(clients).values({ name: unique('Client'), servicePlanId: plan.id, notes: 'internal note' }).returning();
   const [site] = await db()
@@ -48,7 +50,7 @@ export async function createOrganisation(options: { withWall?: boolean; timeZone
     .returning();
   let wall: typeof walls.$inferSelect | undefined;
   if (options.withWall) {
-    const model = await createCabinetModel();
+    const model = await createCabinetModel(options.model);
     [wall] = await db()
       .insert(walls)
       .values({ clientId: client.id, siteId: site.id, name: unique('Wall'), cabinetModelId: model.id, columns: 12, rows: 6 })

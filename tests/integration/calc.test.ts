@@ -38,17 +38,28 @@ describe('POST /api/calc/wall-plan', () => {
       aspectRatio: 2,
       maxPowerW: 10_800,
       typicalPowerW: 3_600,
+      branchKind: 'single-phase',
+      branchVoltageV: 120,
+      powerFactor: 0.95,
+      powerFactorSource: 'default',
       cabinetsPerCircuit: 12,
       circuitsNeeded: 6,
+      phaseCurrentsA: null,
       weightKg: 576,
-      outputsNeeded: 5,
+      // Whole rows by default: one data line per row (common practice).
+      dataPattern: 'rows',
+      outputsNeeded: 6,
       inputFit: { scaledWidth: 2048, scaledHeight: 1152, bars: 'left-right' },
     });
     // 1 ft = 0.3048 m (NIST Handbook 44, Appendix C).
     expect(res.body.widthFt).toBeCloseTo(19.685, 3);
-    // Defaults: continuous factor 0.8 → 120 V × 20 A × 0.8 = 1,920 W (NEC 210.19(A)(1), 210.20(A)).
-    expect(res.body.circuitCapacityW).toBeCloseTo(1920, 6);
-    expect(res.body.maxCurrentA).toBeCloseTo(90, 6);
+    // Defaults: continuous factor 0.8 (NEC 210.19(A)(1), 210.20(A)) and power factor 0.95:
+    // 120 V × 20 A × 0.8 × 0.95 = 1,824 W a circuit; 10,800 W ÷ (120 V × 0.95) = 94.74 A in all.
+    expect(res.body.circuitCapacityW).toBeCloseTo(1824, 6);
+    expect(res.body.chainLimitW).toBeCloseTo(1824, 6);
+    expect(res.body.maxCurrentA).toBeCloseTo(94.74, 2);
+    expect(res.body.circuits[0]).toEqual({ circuit: 1, phase: null, cabinets: 12, watts: 1800, amps: expect.closeTo(15.79, 2), from: 'C1·R1', to: 'C12·R1' });
+    expect(res.body.checks.find((c: { code: string }) => c.code === 'continuous_load').message).toContain('NEC 210.19(A), 210.20(A)');
     // 1 W = 3.412142 BTU/h (NIST SP 811).
     expect(res.body.heatBtuPerHour).toBeCloseTo(36_851.13, 2);
     // 1 lb = 0.45359237 kg (NIST Handbook 44, Appendix C).
@@ -58,7 +69,7 @@ describe('POST /api/calc/wall-plan', () => {
   it('is open to client users too (a pure calculation, no records)', async () => {
     const res = await clientUser.post('/api/calc/wall-plan', { ...wallPlan, input: { width: 3840, height: 2160 } });
     expect(res.status).toBe(200);
-    expect(res.body.inputFit.scale).toBeCloseTo(1152 / 2160, 9);
+    expect(res.body.inputFit.scaleX).toBeCloseTo(1152 / 2160, 9);
   });
 
   it('answers 400 naming each bad field', async () => {
@@ -86,6 +97,79 @@ describe('POST /api/calc/wall-plan', () => {
     const zero = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, maxPowerW: 0 } });
     expect(zero.status).toBe(400);
     expect(zero.body.error.fields).toEqual({ 'cabinet.maxPowerW': 'Maximum power must be more than zero.' });
+  });
+});
+
+describe('POST /api/calc/wall-plan: supplies, chains and phases', () => {
+  const big = { ...cabinet, maxPowerW: 1000, typicalPowerW: 300, inputVoltageMinV: 100, inputVoltageMaxV: 240 };
+
+  it('gives a chain on 208 V three-phase one 208 V line-to-line circuit: 3 × 1,000 W at 20 A, not 5', async () => {
+    const res = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: big, supply: { voltage: 208, phases: 3, breakerAmps: 20, powerFactor: 1 } });
+    expect(res.status).toBe(200);
+    // 208 V × 20 A × 0.8 = 3,328 W (NEC 210.19(A)(1), 210.20(A)): three whole 1,000 W cabinets.
+    expect(res.body).toMatchObject({ branchKind: 'line-to-line', branchVoltageV: 208, cabinetsPerCircuit: 3 });
+    expect(res.body.circuitCapacityW).toBeCloseTo(3328, 6);
+    // A row of 12 takes four chains of 3: 24 circuits over the pairs A-B, B-C, C-A, eight each.
+    expect(res.body.circuitsNeeded).toBe(24);
+    expect(res.body.circuits.slice(0, 3).map((c: { phase: string }) => c.phase)).toEqual(['A-B', 'B-C', 'C-A']);
+    expect(res.body.phaseCurrentsA).toHaveLength(3);
+    // Balanced pairs of 8 × 14.42 A = 115.4 A give √3 × that on each line (worked example: three
+    // balanced line-to-line loads give √3 × the load current per leg).
+    for (const line of res.body.phaseCurrentsA) expect(line).toBeCloseTo(Math.sqrt(3) * 8 * (3000 / 208), 6);
+  });
+
+  it('feeds 100–240 V cabinets on 400 V three-phase line-to-neutral at 230.9 V', async () => {
+    const res = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: big, supply: { voltage: 400, phases: 3, breakerAmps: 16 } });
+    expect(res.status).toBe(200);
+    expect(res.body.branchKind).toBe('line-to-neutral');
+    expect(res.body.branchVoltageV).toBeCloseTo(230.94, 2);
+    // 230.94 × 16 × 0.8 × 0.95 = 2,808 W: two whole 1,000 W cabinets on each circuit.
+    expect(res.body.cabinetsPerCircuit).toBe(2);
+    expect(res.body.circuits[0].phase).toBe('A');
+    expect(res.body.checks.find((c: { code: string }) => c.code === 'continuous_load').message).toContain('local wiring code');
+  });
+
+  it('answers 400 on supply.voltage for a supply outside the cabinet’s input range', async () => {
+    const res = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: big, supply: { voltage: 480, phases: 1, breakerAmps: 20 } });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields)).toEqual(['supply.voltage']);
+    expect(res.body.error.fields['supply.voltage']).toContain("outside the cabinet's 100 V–240 V input range");
+    const three = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: big, supply: { voltage: 480, phases: 3, breakerAmps: 20 } });
+    expect(three.body.error.fields['supply.voltage']).toContain('277.1 V line-to-neutral');
+  });
+
+  it('holds a chain to the connector rating and the maker’s count', async () => {
+    const supply = { voltage: 230, phases: 1, breakerAmps: 32, powerFactor: 1 };
+    const connector = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, maxPowerW: 340, passThroughAmps: 16 }, supply });
+    expect(connector.status).toBe(200);
+    // 230 V × 16 A = 3,680 W through the connector, under the 32 A circuit's 5,888 W: 10 cabinets of 340 W.
+    expect(connector.body).toMatchObject({ chainLimitedBy: 'connector', cabinetsPerCircuit: 10 });
+    expect(connector.body.chainLimitW).toBeCloseTo(3680, 6);
+    const maker = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, maxPowerW: 340, passThroughAmps: 16, maxPerChain: 8 }, supply });
+    expect(maker.body).toMatchObject({ chainLimitedBy: 'maker', chainLimitW: 2720, cabinetsPerCircuit: 8 });
+    const tooSmall = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, passThroughAmps: 0.5 }, supply: { voltage: 120, phases: 1, breakerAmps: 20 } });
+    expect(tooSmall.status).toBe(400);
+    expect(tooSmall.body.error.fields).toHaveProperty(['cabinet.passThroughAmps']);
+  });
+
+  it('takes the power factor from the datasheet’s volt-amperes and says so', async () => {
+    const res = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, maxPowerVA: 160 }, supply: { voltage: 120, phases: 1, breakerAmps: 20 } });
+    expect(res.body.powerFactorSource).toBe('datasheet');
+    expect(res.body.powerFactor).toBeCloseTo(150 / 160, 9);
+    const bad = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, maxPowerVA: 100 } });
+    expect(bad.body.error.fields).toHaveProperty(['cabinet.maxPowerVA']);
+  });
+
+  it('checks the processor, the receiving card and the home runs when given', async () => {
+    const res = await tech.post('/api/calc/wall-plan', {
+      ...wallPlan,
+      cabinet: { ...cabinet, receivingCardPixels: 32_768 },
+      processor: { outputs: 4 },
+      dataCableToWallM: 120,
+    });
+    expect(res.status).toBe(200);
+    const status = Object.fromEntries(res.body.checks.map((c: { code: string; status: string }) => [c.code, c.status]));
+    expect(status).toMatchObject({ processor_outputs: 'fail', processor_pixels: 'fail', receiving_card: 'fail', data_cable_length: 'fail', inrush: 'note' });
   });
 });
 

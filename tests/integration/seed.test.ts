@@ -9,6 +9,8 @@ import { ticketPriorities, ticketStatuses } from '../../shared/schemas/enums.js'
 import * as schema from '../../server/db/schema/index.js';
 import { DEMO_PASSWORD, seedIfEmpty } from '../../server/db/seed.js';
 import { buildDemo } from '../../server/db/seed/build.js';
+import { planWall } from '../../shared/calc/wall-plan.js';
+import { cabinetSpecOf } from '../../shared/schemas/wall-plan.js';
 import { createIsolatedDatabase } from '../setup/isolated-database.js';
 
 let database: Awaited<ReturnType<typeof createIsolatedDatabase>>;
@@ -117,7 +119,37 @@ describe('demo data', () => {
       expect(c, wall.name).toBeDefined();
       const pixels = wall.columns * wall.rows * model.pixelsWide * model.pixelsHigh;
       expect(c!.outputsInUse * c!.pixelsPerOutput).toBeGreaterThanOrEqual(pixels);
+      expect(c!.outputsInUse, wall.name).toBeLessThanOrEqual(c!.outputs);
     }
+  });
+
+  it('wires the main hall centre wall as the trade does: six data lines and six power chains, one per row (common practice, stated by a practitioner)', async () => {
+    const [{ wall, model }] = await db
+      .select({ wall: schema.walls, model: schema.cabinetModels })
+      .from(schema.walls)
+      .innerJoin(schema.cabinetModels, sql`${schema.cabinetModels.id} = ${schema.walls.cabinetModelId}`)
+      .where(sql`${schema.walls.name} = 'Main hall centre wall'`);
+    // Its internal note names power chain 4 for row 4.
+    expect(wall.internalNotes).toContain('Row 4 is fed by power chain 4');
+    const rowsOf = (runs: { runs: { index: number; cells: { row: number }[] }[] } | null) =>
+      runs?.runs.map((r) => ({ index: r.index, rows: [...new Set(r.cells.map((c) => c.row))], cabinets: r.cells.length }));
+    const oneRowEach = [1, 2, 3, 4, 5, 6].map((r) => ({ index: r, rows: [r], cabinets: 12 }));
+    expect(rowsOf(wall.dataRuns)).toEqual(oneRowEach);
+    expect(rowsOf(wall.powerRuns)).toEqual(oneRowEach);
+    // The planner agrees on the stored supply: 208 V line-to-line chains of at most 12 cabinets (the
+    // maker's limit, 2,160 W), six circuits, two on each phase pair, one per row.
+    const plan = planWall({
+      cabinet: cabinetSpecOf(model),
+      columns: wall.columns,
+      rows: wall.rows,
+      supply: wall.planSettings!.supply,
+      outputCapacityPixels: wall.planSettings!.outputCapacityPixels,
+    });
+    expect(plan.outputsNeeded).toBe(6);
+    expect(plan.circuitsNeeded).toBe(6);
+    expect(plan.chainLimitedBy).toBe('maker');
+    expect(plan.circuits.map((c) => c.phase)).toEqual(['A-B', 'B-C', 'C-A', 'A-B', 'B-C', 'C-A']);
+    expect(wall.planSettings!.chainCapacityW).toBe(2160);
   });
 
   it('fills every grid position of every wall with a cabinet that has a serial, a batch and a placed event', async () => {

@@ -24,8 +24,8 @@ beforeAll(async () => {
   tech = await signedIn('technician');
 });
 
-async function wallOf() {
-  const org = await createOrganisation({ withWall: true });
+async function wallOf(model?: NonNullable<Parameters<typeof createOrganisation>[0]>['model']) {
+  const org = await createOrganisation({ withWall: true, model });
   return { ...org, wall: org.wall! };
 }
 
@@ -68,10 +68,11 @@ describe('PUT /api/walls/:id/plan', () => {
   it('keeps runs left out of the request, and clears runs sent as null', async () => {
     const { wall } = await wallOf();
     await office.put(`/api/walls/${wall.id}/plan`, { settings, dataRuns: { pattern: 'rows', runs: rowRuns() } }).expect(200);
-    const kept = await office.put(`/api/walls/${wall.id}/plan`, { settings: { ...settings, chainCapacityW: 2400 } });
+    // A chain capacity of the crew's own, below the circuit's 1,920 W, is kept.
+    const kept = await office.put(`/api/walls/${wall.id}/plan`, { settings: { ...settings, chainCapacityW: 1800 } });
     expect(kept.status).toBe(200);
     expect(kept.body.dataRuns.runs).toHaveLength(6);
-    expect(kept.body.planSettings.chainCapacityW).toBe(2400);
+    expect(kept.body.planSettings.chainCapacityW).toBe(1800);
     const cleared = await office.put(`/api/walls/${wall.id}/plan`, { settings, dataRuns: null });
     expect(cleared.status).toBe(200);
     expect(cleared.body.dataRuns).toBeNull();
@@ -142,6 +143,49 @@ describe('PUT /api/walls/:id/plan', () => {
     const pattern = await office.put(`/api/walls/${wall.id}/plan`, { settings, dataRuns: { pattern: 'zigzag', runs: [] } });
     expect(pattern.status).toBe(400);
     expect(pattern.body.error.fields).toHaveProperty(['dataRuns.pattern']);
+  });
+
+  it('refuses a chain capacity over what one branch circuit may carry: the three-phase feeder figure is never a chain’s', async () => {
+    const { wall } = await wallOf();
+    // 208 V three-phase, 20 A: a chain is one 208 V line-to-line circuit, 208 × 20 × 0.8 = 3,328 W;
+    // √3 × 208 × 20 × 0.8 = 5,764 W is the feeder's figure, which the old plan gave one chain.
+    const supply = { voltage: 208, phases: 3, breakerAmps: 20, continuousFactor: 0.8, powerFactor: 1 };
+    const res = await office.put(`/api/walls/${wall.id}/plan`, { settings: { ...settings, supply, chainCapacityW: 5764 } });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toEqual({ 'settings.chainCapacityW': 'A chain on this supply may carry at most 3,328 W, set by its circuit.' });
+    // Left out, the chain capacity is the chain's limit.
+    const ok = await office.put(`/api/walls/${wall.id}/plan`, { settings: { supply, outputCapacityPixels: 650_000 } });
+    expect(ok.status).toBe(200);
+    expect(ok.body.planSettings.chainCapacityW).toBeCloseTo(3328, 9);
+  });
+
+  it('holds a chain to the cabinet model’s connector and maker’s count', async () => {
+    // A 10 A connector passes 120 V × 10 A = 1,200 W (6 cabinets of 200 W), under the circuit's 1,920 W.
+    const { wall } = await wallOf({ passThroughAmps: 10 });
+    const res = await office.put(`/api/walls/${wall.id}/plan`, { settings: { ...settings, chainCapacityW: undefined } });
+    expect(res.status).toBe(200);
+    expect(res.body.planSettings.chainCapacityW).toBeCloseTo(1200, 9);
+    expect((await office.put(`/api/walls/${wall.id}/plan`, { settings })).body.error.fields).toEqual({
+      'settings.chainCapacityW': "A chain on this supply may carry at most 1,200 W, set by the cabinet's power connector.",
+    });
+    // Seven cabinets on one chain are over the connector: refused, naming the run.
+    const seven = [{ index: 1, cells: row(1, 1, 7) }, { index: 2, cells: row(1, 8, 12) }, ...rowRuns().slice(1).flatMap((r) => [
+      { index: 0, cells: r.cells.slice(0, 6) },
+      { index: 0, cells: r.cells.slice(6) },
+    ])].map((r, i) => ({ ...r, index: i + 1 }));
+    const over = await office.put(`/api/walls/${wall.id}/plan`, { settings: { ...settings, chainCapacityW: undefined }, powerRuns: { pattern: 'custom', runs: seven } });
+    expect(over.status).toBe(400);
+    expect(over.body.error.details.problems).toEqual([{ kind: 'power', run: 1, message: 'Run 1 draws 1,400 W, over the chain capacity of 1,200 W.' }]);
+    const maker = await wallOf({ maxPerChain: 4 });
+    const limited = await office.put(`/api/walls/${maker.wall.id}/plan`, { settings: { ...settings, chainCapacityW: undefined } });
+    expect(limited.body.planSettings.chainCapacityW).toBe(800);
+  });
+
+  it('refuses a supply outside the cabinet’s input range, naming the voltage and the remedy', async () => {
+    const { wall } = await wallOf();
+    const res = await office.put(`/api/walls/${wall.id}/plan`, { settings: { ...settings, supply: { ...settings.supply, voltage: 480 } } });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields['settings.supply.voltage']).toMatch(/^480 V is outside the cabinet's 100 V–240 V input range.*step-down transformer\.$/);
   });
 
   it('is the office’s: anonymous 401, technician 403, client users 404 (their own wall and another organisation’s)', async () => {

@@ -1,4 +1,4 @@
-import { cabinetsPerRun, generateRuns, type Run, type RunPattern } from '@shared/calc/runs';
+import { cabinetsPerRun, generateRuns, runPatterns, type Run, type RunPattern } from '@shared/calc/runs';
 import { planWall } from '@shared/calc/wall-plan';
 import { runLimitsFor, type PlanSettings, type RunKind } from '@shared/schemas/wall-plan';
 import { Save } from 'lucide-react';
@@ -17,9 +17,10 @@ import { cabinetFromModel, CabinetInputs, GridInputs, SupplyInputs } from '@/fea
 import { PlannerRuns } from '@/features/planner/components/runs-panel';
 import { SavePlanDialog } from '@/features/planner/components/save-plan-dialog';
 import {
-  chainCapacityOf,
+  cabinetOf,
   defaultPlannerValues,
   inputOf,
+  patternsOf,
   planInputOf,
   plannerFormSchema,
   type PlannerFormInput,
@@ -29,7 +30,6 @@ import { requireUser, staff } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
-import { circuitCapacityW } from '@shared/calc/electrical';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 const wallParam = (url: string) => {
@@ -48,10 +48,13 @@ export async function loader({ request }: LoaderFunctionArgs) {
   return null;
 }
 
-/** The form filled in from a wall of the register: its model, grid and stored settings. */
+const patternOf = (stored: { pattern: string } | null, fallback: RunPattern): RunPattern =>
+  stored && (runPatterns as readonly string[]).includes(stored.pattern) ? (stored.pattern as RunPattern) : fallback;
+
+/** The form filled in from a wall of the register: its model, grid, stored settings and run patterns. */
 function valuesFromWall(wall: WallPlanView): PlannerFormInput {
   const settings = wall.planSettings;
-  const follows = settings ? Math.abs(settings.chainCapacityW - circuitCapacityW(settings.supply)) < 0.5 : true;
+  const controller = wall.controllers[0];
   return {
     ...defaultPlannerValues,
     modelId: wall.cabinetModel.id,
@@ -60,14 +63,15 @@ function valuesFromWall(wall: WallPlanView): PlannerFormInput {
     rows: wall.rows,
     ...(settings
       ? {
-          supply: settings.supply,
+          supply: { ...settings.supply, powerFactor: settings.supply.powerFactor ?? Number.NaN },
           outputCapacityPixels: settings.outputCapacityPixels,
-          chainFollowsCircuit: follows,
-          chainCapacityW: follows ? Number.NaN : settings.chainCapacityW,
         }
-      : wall.controllers[0]
-        ? { outputCapacityPixels: wall.controllers[0].pixelsPerOutput }
+      : controller
+        ? { outputCapacityPixels: controller.pixelsPerOutput }
         : {}),
+    processorOutputs: controller?.outputs ?? Number.NaN,
+    dataPattern: patternOf(wall.dataRuns, defaultPlannerValues.dataPattern as RunPattern),
+    powerPattern: patternOf(wall.powerRuns, defaultPlannerValues.powerPattern as RunPattern),
   };
 }
 
@@ -78,8 +82,9 @@ const fieldNames: Record<string, string> = {
   target: 'Target size',
   supply: 'Supply',
   outputCapacityPixels: 'Output capacity',
-  chainCapacityW: 'Chain capacity',
   input: 'Input',
+  processorOutputs: 'Processor outputs',
+  dataCableToWallM: 'Data cable',
   cardsPerCabinet: 'Receiving cards',
 };
 
@@ -94,26 +99,25 @@ export function Component() {
   const form = useZodForm(plannerFormSchema, { mode: 'onChange', defaultValues });
   const values = useWatch({ control: form.control });
   const parsed = useMemo(() => plannerFormSchema.safeParse(values), [values]);
-  const [patterns, setPatterns] = useState<Record<RunKind, RunPattern>>({ data: 'serpentine', power: 'serpentine' });
   const [saving, setSaving] = useState(false);
 
   const result = useMemo(() => {
     if (!parsed.success) return null;
     const v = parsed.data;
     const input = planInputOf(v);
-    const settings: PlanSettings = {
-      supply: input.supply,
-      outputCapacityPixels: input.outputCapacityPixels,
-      chainCapacityW: chainCapacityOf({ ...v, supply: input.supply }),
-    };
-    const limits = { data: runLimitsFor('data', v.cabinet, settings), power: runLimitsFor('power', v.cabinet, settings) };
+    const plan = planWall(input);
+    const patterns = patternsOf(v);
+    // The chain's limit as the plan worked it out: circuit, connector and maker's count.
+    const settings: PlanSettings = { supply: input.supply, outputCapacityPixels: input.outputCapacityPixels, chainCapacityW: plan.chainLimitW };
+    const cabinet = cabinetOf(v);
+    const limits = { data: runLimitsFor('data', cabinet, settings), power: runLimitsFor('power', cabinet, settings) };
     // The schema refuses a cabinet over either limit, so every run holds at least one cabinet.
     const runs: Record<RunKind, Run[]> = {
       data: cabinetsPerRun(limits.data) >= 1 ? generateRuns(v.columns, v.rows, patterns.data, limits.data) : [],
       power: cabinetsPerRun(limits.power) >= 1 ? generateRuns(v.columns, v.rows, patterns.power, limits.power) : [],
     };
-    return { v, plan: planWall(input), settings, limits, runs };
-  }, [parsed, patterns]);
+    return { v, plan, patterns, settings, limits, runs };
+  }, [parsed]);
 
   const modelList = models.data?.items ?? [];
   const model = result ? modelList.find((m) => m.id === result.v.modelId) : undefined;
@@ -177,8 +181,8 @@ export function Component() {
                 columns={result.v.columns}
                 rows={result.v.rows}
                 cellAspect={result.v.cabinet.heightMm / result.v.cabinet.widthMm}
-                patterns={patterns}
-                onPatternChange={(kind, pattern) => setPatterns((p) => ({ ...p, [kind]: pattern }))}
+                patterns={result.patterns}
+                onPatternChange={(kind, pattern) => form.setValue(kind === 'data' ? 'dataPattern' : 'powerPattern', pattern, { shouldValidate: true })}
                 runs={result.runs}
                 limits={result.limits}
               />
@@ -195,8 +199,8 @@ export function Component() {
           columns={result.v.columns}
           rows={result.v.rows}
           settings={result.settings}
-          dataRuns={{ pattern: patterns.data, runs: result.runs.data }}
-          powerRuns={{ pattern: patterns.power, runs: result.runs.power }}
+          dataRuns={{ pattern: result.patterns.data, runs: result.runs.data }}
+          powerRuns={{ pattern: result.patterns.power, runs: result.runs.power }}
           onUseGrid={(columns, rows) => {
             form.setValue('gridMode', 'grid');
             form.setValue('columns', columns, { shouldValidate: true });

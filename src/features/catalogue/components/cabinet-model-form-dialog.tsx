@@ -57,7 +57,7 @@ function CreateCabinetModelForm({ onDone }: { onDone: () => void }) {
   const create = useCreateCabinetModel();
   const toast = useToast();
   const form = useZodForm(cabinetModelInput, {
-    defaultValues: { name: '', maker: '', voltageMin: 100, voltageMax: 240, environment: 'indoor' },
+    defaultValues: { name: '', maker: '', inputVoltageMinV: 100, inputVoltageMaxV: 240, environment: 'indoor' },
   });
   return (
     <Form
@@ -95,11 +95,10 @@ function CreateCabinetModelForm({ onDone }: { onDone: () => void }) {
           <NumberField name="typicalPowerW" label="Typical power" unit="W" hint="Ordinary video content." />
           <NumberField name="weightKg" label="Weight" unit="kg" />
           <NumberField name="brightnessNits" label="Peak brightness" unit="nits" step="1" />
-          <NumberField name="voltageMin" label="Lowest supply" unit="V" step="1" />
-          <NumberField name="voltageMax" label="Highest supply" unit="V" step="1" />
         </div>
         <SelectField name="environment" label="Use" options={environmentOptions} />
       </fieldset>
+      <PowerInputFields withRange />
       <DialogActions>
         <Button onClick={onDone}>Cancel</Button>
         <SubmitButton>Add model</SubmitButton>
@@ -108,14 +107,38 @@ function CreateCabinetModelForm({ onDone }: { onDone: () => void }) {
   );
 }
 
-/** Only the name and maker change: walls already built keep their physical spec. */
+/**
+ * The datasheet's power input: the voltage range (fixed once a model exists), the connector's
+ * rating, the maker's most cabinets per chain and the VA at maximum power. Left empty, the planner
+ * assumes and says so; filled in later, plans only get safer.
+ */
+function PowerInputFields({ withRange = false }: { withRange?: boolean }) {
+  return (
+    <fieldset className="space-y-4">
+      <legend className="mb-2 text-sm font-semibold text-ink-900">Power input (from the datasheet)</legend>
+      <div className="grid grid-cols-2 gap-4 sm:grid-cols-3">
+        {withRange ? (
+          <>
+            <NumberField name="inputVoltageMinV" label="Lowest input" unit="V" step="1" />
+            <NumberField name="inputVoltageMaxV" label="Highest input" unit="V" step="1" />
+          </>
+        ) : null}
+        <NumberField name="passThroughAmps" label="Connector rating" unit="A" hint="Power in / pass-through. Empty: not known." />
+        <NumberField name="maxPerChain" label="Most per chain" step="1" hint="The maker's limit. Empty: none given." />
+        <NumberField name="maxPowerVA" label="Maximum" unit="VA" hint="Gives the power factor. Empty: 0.95 assumed." />
+      </div>
+    </fieldset>
+  );
+}
+
+/** The name, the maker and the power input's datasheet figures change: walls already built keep their physical spec. */
 export function EditCabinetModelDialog({ model, onClose }: { model: CabinetModel | null; onClose: () => void }) {
   return (
     <Dialog
       open={model !== null}
       onClose={onClose}
       title={model ? `Edit ${model.name}` : 'Edit'}
-      description="The size, pixels and power of a model cannot change: walls already built depend on them. Add a new model instead."
+      description="The size, pixels and power of a model cannot change: walls already built depend on them. The power input's datasheet figures can be added or corrected."
     >
       {model ? <EditCabinetModelForm key={model.id} model={model} onDone={onClose} /> : null}
     </Dialog>
@@ -125,7 +148,16 @@ export function EditCabinetModelDialog({ model, onClose }: { model: CabinetModel
 function EditCabinetModelForm({ model, onDone }: { model: CabinetModel; onDone: () => void }) {
   const update = useUpdateCabinetModel();
   const toast = useToast();
-  const form = useZodForm(cabinetModelPatch, { defaultValues: { name: model.name, maker: model.maker, archived: model.archived } });
+  const form = useZodForm(cabinetModelPatch, {
+    defaultValues: {
+      name: model.name,
+      maker: model.maker,
+      passThroughAmps: model.passThroughAmps ?? undefined,
+      maxPerChain: model.maxPerChain ?? undefined,
+      maxPowerVA: model.maxPowerVA ?? undefined,
+      archived: model.archived,
+    },
+  });
   return (
     <Form
       form={form}
@@ -138,6 +170,7 @@ function EditCabinetModelForm({ model, onDone }: { model: CabinetModel; onDone: 
     >
       <TextField name="name" label="Model name" autoComplete="off" />
       <TextField name="maker" label="Maker" autoComplete="off" />
+      <PowerInputFields />
       <Checkbox name="archived" label="Archived" hint="No longer offered for new walls; existing walls keep it." />
       <DialogActions>
         <Button onClick={onDone}>Cancel</Button>

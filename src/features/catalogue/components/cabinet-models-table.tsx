@@ -32,7 +32,19 @@ export function CabinetModelsTable({ canEdit }: { canEdit: boolean }) {
       column.accessor((m) => `${n(m.maxPowerW)} / ${n(m.typicalPowerW)}`, { id: 'power', header: 'Power max / typ. (W)', meta: { align: 'right' } }),
       column.accessor('weightKg', { header: 'Weight', meta: { align: 'right' }, cell: (c) => `${c.getValue()} kg` }),
       column.accessor('brightnessNits', { header: 'Brightness', meta: { align: 'right', hiddenByDefault: true }, cell: (c) => `${n(c.getValue())} nits` }),
-      column.accessor((m) => `${m.voltageMin}–${m.voltageMax} V`, { id: 'voltage', header: 'Supply', meta: { hiddenByDefault: true } }),
+      column.accessor((m) => `${m.inputVoltageMinV}–${m.inputVoltageMaxV} V`, { id: 'voltage', header: 'Power input', meta: { hiddenByDefault: true } }),
+      column.accessor((m) => m.passThroughAmps, {
+        id: 'connector',
+        header: 'Connector',
+        meta: { align: 'right' },
+        cell: (c) => (c.getValue() === null ? <span className="text-stone-500">not given</span> : `${n(c.getValue() ?? 0)} A`),
+      }),
+      column.accessor((m) => m.maxPerChain, {
+        id: 'perChain',
+        header: 'Per chain',
+        meta: { align: 'right', hiddenByDefault: true },
+        cell: (c) => (c.getValue() === null ? <span className="text-stone-500">—</span> : n(c.getValue() ?? 0)),
+      }),
       column.accessor('environment', {
         header: 'Use',
         cell: (c) => <Badge tone={c.getValue() === 'outdoor' ? 'amber' : 'neutral'}>{c.getValue() === 'outdoor' ? 'Outdoor' : 'Indoor'}</Badge>,

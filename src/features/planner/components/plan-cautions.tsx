@@ -1,10 +1,12 @@
+import { continuousLoadNote, type Supply } from '@shared/calc/electrical';
 import clsx from 'clsx';
 import { TriangleAlert } from 'lucide-react';
 import type { ReactNode } from 'react';
 
 /** The product's cautions, word for word wherever a figure could be taken for a design. */
 export const cautions = {
-  power: 'Circuits and connections are work for a licensed electrician under local codes; these figures are planning estimates.',
+  power:
+    'These figures are planning estimates: circuits and connections are designed and signed off by a licensed electrician under the local code.',
   structure:
     "Ground-stacked and flown walls follow the manufacturer's instructions and a qualified engineer's design; ballast and rigging are not computed here.",
   service: 'Isolate power before opening a cabinet; handle modules with ESD protection; use proper access equipment when working at height.',
@@ -19,5 +21,14 @@ export function Caution({ children, className }: { children: ReactNode; classNam
         {children}
       </span>
     </p>
+  );
+}
+
+/** The power caution with the code whose continuous-load factor the figures used. */
+export function PowerCaution({ supply, className }: { supply: Pick<Supply, 'voltage' | 'phases' | 'continuousFactor'>; className?: string }) {
+  return (
+    <Caution className={className}>
+      {cautions.power} {continuousLoadNote(supply)}
+    </Caution>
   );
 }

@@ -1,7 +1,8 @@
 import type { Supply } from '@shared/calc/electrical';
 import type { WallPlan } from '@shared/calc/wall-plan';
 import type { ReactNode } from 'react';
-import { Caution, cautions } from '@/features/planner/components/plan-cautions';
+import { Caution, cautions, PowerCaution } from '@/features/planner/components/plan-cautions';
+import { CircuitTable, PlanChecks } from '@/features/planner/components/plan-power';
 import {
   amps,
   feetDecimal,
@@ -48,6 +49,18 @@ function Figure({ label, metric, imperial, testId }: { label: ReactNode; metric:
 }
 
 const phaseText = (s: Supply) => `${num(s.voltage)} V ${s.phases === 3 ? 'three-phase' : 'single-phase'}`;
+const branchText: Record<WallPlan['branchKind'], string> = {
+  'single-phase': 'single-phase',
+  'line-to-line': 'line-to-line (two phases)',
+  'line-to-neutral': 'line-to-neutral',
+};
+const limitText: Record<WallPlan['chainLimitedBy'], string> = {
+  circuit: 'the circuit',
+  connector: "the cabinet's connector",
+  maker: "the maker's limit",
+};
+const pfText: Record<WallPlan['powerFactorSource'], string> = { datasheet: 'from the datasheet', given: 'as given', default: 'assumed' };
+const patternText: Record<WallPlan['dataPattern'], string> = { rows: 'whole rows', columns: 'whole columns', serpentine: 'serpentine' };
 const barsText: Record<WallPlan['inputFit']['bars'], string> = {
   none: 'fills the wall, no bars',
   'left-right': 'bars left and right',
@@ -58,7 +71,7 @@ const barsText: Record<WallPlan['inputFit']['bars'], string> = {
 export function PlanFigures({ plan, columns, rows, supply, outputCapacityPixels, cardsPerCabinet, input }: PlanFiguresProps) {
   const fit = plan.inputFit;
   const barPixels = fit.bars === 'left-right' ? plan.pixelsWide - fit.scaledWidth : fit.bars === 'top-bottom' ? plan.pixelsHigh - fit.scaledHeight : 0;
-  const current = supply.phases === 3 ? 'per phase' : '';
+  const current = supply.phases === 3 ? 'on the busiest line' : 'in all';
   return (
     <div className="space-y-5">
       <Section title="Wall">
@@ -95,7 +108,7 @@ export function PlanFigures({ plan, columns, rows, supply, outputCapacityPixels,
         />
         <Figure
           label={`Input ${num(input.width)} × ${num(input.height)}`}
-          metric={`×${num(fit.scale, 3)} → ${num(fit.scaledWidth)} × ${num(fit.scaledHeight)} px`}
+          metric={`×${num(fit.scaleX, 3)}${Math.abs(fit.scaleX - fit.scaleY) > 1e-9 ? ` across, ×${num(fit.scaleY, 3)} down` : ''} → ${num(fit.scaledWidth)} × ${num(fit.scaledHeight)} px`}
           imperial={fit.bars === 'none' ? barsText.none : `${barsText[fit.bars]}, ${num(barPixels / 2, 1)} px each`}
         />
       </Section>
@@ -104,7 +117,7 @@ export function PlanFigures({ plan, columns, rows, supply, outputCapacityPixels,
         <Figure
           label="Outputs"
           metric={`${num(plan.outputsNeeded)} ${plan.outputsNeeded === 1 ? 'output' : 'outputs'}`}
-          imperial={`${num(plan.cabinetsPerOutput)} cabinets each at ${num(outputCapacityPixels)} px`}
+          imperial={`${patternText[plan.dataPattern]}, up to ${num(plan.cabinetsPerOutput)} cabinets each at ${num(outputCapacityPixels)} px`}
         />
         <Figure
           label="Receiving cards"
@@ -114,17 +127,39 @@ export function PlanFigures({ plan, columns, rows, supply, outputCapacityPixels,
       </Section>
 
       <Section title="Power and heat (planning estimates)">
-        <Figure label="Maximum power" metric={watts(plan.maxPowerW)} imperial={`${amps(plan.maxCurrentA)} ${current} at ${phaseText(supply)}`} />
+        <Figure
+          testId="supply"
+          label="Supply"
+          metric={phaseText(supply)}
+          imperial={`each chain one ${num(plan.branchVoltageV, 1)} V ${branchText[plan.branchKind]} circuit`}
+        />
+        <Figure label="Maximum power" metric={watts(plan.maxPowerW)} imperial={`${amps(plan.maxCurrentA)} ${current}`} />
         <Figure label="Typical power" metric={watts(plan.typicalPowerW)} imperial={`${amps(plan.typicalCurrentA)} ${current}`} />
         <Figure
+          testId="circuits"
           label="Circuits"
           metric={`${num(plan.circuitsNeeded)} × ${num(supply.breakerAmps)} A`}
-          imperial={`${num(plan.circuitCapacityW)} W each at ${num(supply.continuousFactor * 100)} % continuous load`}
+          imperial={`${patternText[plan.powerPattern]}; each up to ${num(plan.circuitCapacityW)} W at ${num(plan.continuousFactor * 100)} % continuous load`}
         />
-        <Figure label="Cabinets per circuit" metric={num(plan.cabinetsPerCircuit)} imperial={`at ${watts(plan.maxPowerW / plan.cabinetCount)} maximum each`} />
+        <Figure
+          testId="chain-limit"
+          label="One chain carries"
+          metric={`${num(plan.cabinetsPerCircuit)} cabinets, ${watts(plan.chainLimitW)}`}
+          imperial={`set by ${limitText[plan.chainLimitedBy]}; power factor ${num(plan.powerFactor, 3)} ${pfText[plan.powerFactorSource]}`}
+        />
+        {plan.phaseCurrentsA ? (
+          <Figure
+            testId="phase-currents"
+            label="Line currents"
+            metric={plan.phaseCurrentsA.map((a, i) => `${'ABC'[i]} ${amps(a)}`).join(' · ')}
+            imperial="at maximum power, whole circuits spread over the phases"
+          />
+        ) : null}
         <Figure label="Heat at maximum power" metric={watts(plan.maxPowerW)} imperial={`${num(plan.heatBtuPerHour)} BTU/h`} />
       </Section>
-      <Caution>{cautions.power}</Caution>
+      <CircuitTable plan={plan} />
+      <PowerCaution supply={supply} />
+      <PlanChecks checks={plan.checks} />
     </div>
   );
 }

@@ -1,4 +1,4 @@
-import { circuitCapacityW } from '@shared/calc/electrical';
+import { chainLimit, supplyVoltageProblem } from '@shared/calc/electrical';
 import { pixelPitchMm } from '@shared/calc/viewing-distance';
 import type { CabinetModel } from '@shared/schemas/register';
 import clsx from 'clsx';
@@ -6,7 +6,6 @@ import { Pencil } from 'lucide-react';
 import { useController, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
-import { Checkbox } from '@/components/ui/checkbox';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { ChoiceGroup } from '@/features/planner/components/choice-group';
@@ -16,7 +15,9 @@ import { gridOptions, inputPresets, type PlannerFormInput } from '@/features/pla
 const numberField = { type: 'number', inputMode: 'decimal', step: 'any', registerOptions: { valueAsNumber: true } } as const;
 const wholeField = { type: 'number', inputMode: 'numeric', step: 1, registerOptions: { valueAsNumber: true } } as const;
 
-/** The catalogue figures a model puts into the form. */
+const orEmpty = (v: number | null) => v ?? Number.NaN;
+
+/** The catalogue figures a model puts into the form (a figure the datasheet lacks stays empty). */
 export function cabinetFromModel(m: CabinetModel): PlannerFormInput['cabinet'] {
   return {
     widthMm: m.widthMm,
@@ -26,7 +27,23 @@ export function cabinetFromModel(m: CabinetModel): PlannerFormInput['cabinet'] {
     maxPowerW: m.maxPowerW,
     typicalPowerW: m.typicalPowerW,
     weightKg: m.weightKg,
+    maxPowerVA: orEmpty(m.maxPowerVA),
+    inputVoltageMinV: m.inputVoltageMinV,
+    inputVoltageMaxV: m.inputVoltageMaxV,
+    passThroughAmps: orEmpty(m.passThroughAmps),
+    maxPerChain: orEmpty(m.maxPerChain),
+    receivingCardPixels: Number.NaN,
   };
+}
+
+/** "15 A connector · at most 12 per chain · 190 VA", or what the datasheet does not say. */
+export function connectionText(m: Pick<CabinetModel, 'passThroughAmps' | 'maxPerChain' | 'maxPowerVA'>): string {
+  const parts = [
+    m.passThroughAmps === null ? 'connector rating not given' : `${num(m.passThroughAmps, 1)} A connector`,
+    m.maxPerChain === null ? null : `at most ${num(m.maxPerChain)} per chain`,
+    m.maxPowerVA === null ? null : `${num(m.maxPowerVA)} VA`,
+  ];
+  return parts.filter(Boolean).join(' · ');
 }
 
 function RadioField<T extends string>({ name, legend, choices, onChange }: { name: 'gridMode' | 'target.unit' | 'inputPreset'; legend: string; choices: { value: T; label: string }[]; onChange?: (v: T) => void }) {
@@ -78,6 +95,10 @@ export function CabinetInputs({ models }: { models: CabinetModel[] }) {
               <dd className="tabular-nums">{num(model.pixelsWide)} × {num(model.pixelsHigh)} ({num(model.pixelPitchMm, 3)} mm)</dd>
               <dt className="text-stone-600">Power</dt>
               <dd className="tabular-nums">{num(model.maxPowerW)} W max, {num(model.typicalPowerW)} W typical</dd>
+              <dt className="text-stone-600">Power input</dt>
+              <dd className="tabular-nums">
+                {num(model.inputVoltageMinV)}–{num(model.inputVoltageMaxV)} V · {connectionText(model)}
+              </dd>
               <dt className="text-stone-600">Weight</dt>
               <dd className="tabular-nums">{num(model.weightKg, 1)} kg</dd>
               <dt className="text-stone-600">Modules</dt>
@@ -106,6 +127,13 @@ export function CabinetInputs({ models }: { models: CabinetModel[] }) {
             <p className="col-span-2 text-sm text-stone-600">
               Pixel pitch: <span className="font-medium tabular-nums text-ink-950">{pitch ? `${num(pitch, 3)} mm` : '—'}</span> (width ÷ pixels wide)
             </p>
+            <p className="col-span-2 mt-1 text-sm font-medium text-stone-800">From the datasheet, when known</p>
+            <TextField name="cabinet.inputVoltageMinV" label="Lowest input (V)" {...numberField} />
+            <TextField name="cabinet.inputVoltageMaxV" label="Highest input (V)" {...numberField} />
+            <TextField name="cabinet.passThroughAmps" label="Connector rating (A)" hint="Power in / pass-through" {...numberField} />
+            <TextField name="cabinet.maxPerChain" label="Most per chain" hint="Maker's limit" {...wholeField} />
+            <TextField name="cabinet.maxPowerVA" label="Maximum VA" hint="Gives the power factor" {...numberField} />
+            <TextField name="cabinet.receivingCardPixels" label="Card capacity (px)" hint="Per receiving card" {...wholeField} />
           </div>
         )}
       </div>
@@ -215,8 +243,8 @@ export function GridInputs() {
 
 export function SupplyInputs() {
   const form = useFormContext<PlannerFormInput>();
-  const [supply, follows, preset] = useWatch({ control: form.control, name: ['supply', 'chainFollowsCircuit', 'inputPreset'] });
-  const capacity = supplyCapacity(supply);
+  const [supply, cabinet, preset] = useWatch({ control: form.control, name: ['supply', 'cabinet', 'inputPreset'] });
+  const chain = chainText(supply, cabinet);
   return (
     <Card title="Supply and signal">
       <div className="space-y-4">
@@ -231,19 +259,20 @@ export function SupplyInputs() {
             ]}
             registerOptions={{ setValueAs: (v: string) => Number(v) }}
           />
-          <TextField name="supply.breakerAmps" label="Breaker (A)" {...numberField} />
-          <TextField name="supply.continuousFactor" label="Continuous factor" hint="0.8: loaded to 80 %" {...numberField} />
-          <TextField name="supply.powerFactor" label="Power factor" {...numberField} />
+          <TextField name="supply.breakerAmps" label="Breaker (A)" hint="Each branch circuit" {...numberField} />
+          <TextField name="supply.continuousFactor" label="Continuous-load factor" hint="0.8: NEC 210.20(A); local code elsewhere" {...numberField} />
+          <TextField name="supply.powerFactor" label="Power factor" hint="Empty: datasheet VA, else 0.95" {...numberField} />
         </div>
-        <div className="space-y-1">
-          <Checkbox
-            name="chainFollowsCircuit"
-            label="One power chain per circuit"
-            hint={capacity ? `A chain then carries up to ${num(capacity)} W.` : undefined}
-          />
-          {follows ? null : <TextField name="chainCapacityW" label="Chain capacity (W)" hint="What the cabinets' power link may carry" {...numberField} />}
-        </div>
+        {chain ? (
+          <p className="text-sm text-stone-700" data-testid="chain-summary">
+            {chain}
+          </p>
+        ) : null}
         <TextField name="outputCapacityPixels" label="Output capacity (pixels)" hint="Pixels one controller output drives" {...wholeField} />
+        <div className="grid grid-cols-2 gap-3">
+          <TextField name="processorOutputs" label="Processor outputs" hint="Optional" {...wholeField} />
+          <TextField name="dataCableToWallM" label="Cable to the wall (m)" hint="Processor to the wall's corner" {...numberField} />
+        </div>
         <RadioField
           name="inputPreset"
           legend="Input"
@@ -260,9 +289,25 @@ export function SupplyInputs() {
   );
 }
 
-function supplyCapacity(supply: PlannerFormInput['supply'] | undefined): number | null {
-  if (!supply) return null;
-  const s = { voltage: Number(supply.voltage), phases: Number(supply.phases) === 3 ? 3 : 1, breakerAmps: Number(supply.breakerAmps), continuousFactor: Number(supply.continuousFactor ?? 0.8), powerFactor: Number(supply.powerFactor ?? 1) } as const;
-  const w = circuitCapacityW(s);
-  return Number.isFinite(w) && w > 0 ? w : null;
+const figure = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? v : undefined);
+
+/** "Each chain: one 208 V line-to-line circuit, up to 2,160 W (the maker's limit)", while the figures are whole. */
+function chainText(supply: PlannerFormInput['supply'] | undefined, cabinet: PlannerFormInput['cabinet'] | undefined): string | null {
+  const voltage = figure(supply?.voltage);
+  const breakerAmps = figure(supply?.breakerAmps);
+  const maxPowerW = figure(cabinet?.maxPowerW);
+  if (!supply || !cabinet || voltage === undefined || breakerAmps === undefined || maxPowerW === undefined || maxPowerW <= 0) return null;
+  const s = { voltage, phases: Number(supply.phases) === 3 ? (3 as const) : (1 as const), breakerAmps, continuousFactor: figure(supply.continuousFactor) ?? 0.8, powerFactor: figure(supply.powerFactor) };
+  const c = {
+    maxPowerW,
+    maxPowerVA: figure(cabinet.maxPowerVA),
+    inputVoltageMinV: figure(cabinet.inputVoltageMinV),
+    inputVoltageMaxV: figure(cabinet.inputVoltageMaxV),
+    passThroughAmps: figure(cabinet.passThroughAmps),
+    maxPerChain: figure(cabinet.maxPerChain),
+  };
+  if (supplyVoltageProblem(s, c)) return null;
+  const limit = chainLimit(s, c);
+  const by = { circuit: 'the circuit', connector: "the cabinet's connector", maker: "the maker's limit" }[limit.chainLimitedBy];
+  return `Each power chain is one ${num(limit.branch.voltageV, 1)} V ${limit.branch.kind} circuit carrying up to ${num(limit.chainLimitW)} W (set by ${by}).`;
 }

@@ -12,7 +12,7 @@ import { useToast } from '@/components/ui/toast';
 import type { WallPlanView } from '@/features/planner/api/get-wall-plan';
 import { useSaveWallPlan } from '@/features/planner/api/save-wall-plan';
 import { ChoiceGroup } from '@/features/planner/components/choice-group';
-import { Caution, cautions } from '@/features/planner/components/plan-cautions';
+import { PowerCaution } from '@/features/planner/components/plan-cautions';
 import { kindChoices, RunsMap } from '@/features/planner/components/runs-panel';
 import { num } from '@/features/planner/utils/format';
 import { runPatternLabels } from '@/features/planner/utils/planner-form';
@@ -37,11 +37,14 @@ function supplyText(s: { voltage: number; phases: 1 | 3; breakerAmps: number; co
  * renumber), checked live with the same rules the server applies, and saves them.
  */
 export function RunsEditor({ wall, canEdit }: { wall: WallPlanView; canEdit: boolean }) {
-  const { settings, stored: settingsStored } = useMemo(() => settingsOfWall(wall), [wall]);
+  const { settings: storedSettings, stored: settingsStored } = useMemo(() => settingsOfWall(wall), [wall]);
   const limits = useMemo(
-    () => ({ data: limitsOfWall(wall, 'data', settings), power: limitsOfWall(wall, 'power', settings) }),
-    [wall, settings],
+    () => ({ data: limitsOfWall(wall, 'data', storedSettings), power: limitsOfWall(wall, 'power', storedSettings) }),
+    [wall, storedSettings],
   );
+  // A chain never carries more than its circuit, connector and maker allow, whatever was stored.
+  const settings = { ...storedSettings, chainCapacityW: limits.power.chainCapacityW };
+  const tightened = storedSettings.chainCapacityW > settings.chainCapacityW * (1 + 1e-9);
   const initial = () => ({
     data: { ...runSetOfWall(wall, 'data', settings), edited: false },
     power: { ...runSetOfWall(wall, 'power', settings), edited: false },
@@ -106,6 +109,13 @@ export function RunsEditor({ wall, canEdit }: { wall: WallPlanView; canEdit: boo
 
   return (
     <div className="space-y-6">
+      {tightened ? (
+        <Alert tone="danger" title="The stored chain capacity is over the safe limit" live={false}>
+          {settings.chainCapacityW > 0
+            ? `The plan stored ${num(storedSettings.chainCapacityW)} W per chain; on its supply and with this cabinet's connector and maker's limit a chain may carry ${num(settings.chainCapacityW)} W. The power runs are checked against ${num(settings.chainCapacityW)} W.`
+            : `The stored supply (${supplyText(settings.supply)}) cannot feed this cabinet's input range; plan the wall again in the planner.`}
+        </Alert>
+      ) : null}
       {!set.stored ? (
         <Alert tone="info" title="No runs are stored for this wall yet" live={false}>
           This is a proposal from its cabinet model and {settingsStored ? 'its stored settings' : 'the default settings'}, laid{' '}
@@ -229,7 +239,7 @@ export function RunsEditor({ wall, canEdit }: { wall: WallPlanView; canEdit: boo
         </div>
       ) : null}
 
-      <Caution>{cautions.power}</Caution>
+      <PowerCaution supply={settings.supply} />
 
       <ConfirmDialog
         open={pendingPattern !== null}

@@ -7,6 +7,7 @@ import { Logo } from '@/components/ui/logo';
 import { WallMap, WallViewToggle } from '@/components/wall-map/wall-map';
 import { paths } from '@/config/paths';
 import type { WallPlanView } from '@/features/planner/api/get-wall-plan';
+import { continuousLoadNote } from '@shared/calc/electrical';
 import { cautions } from '@/features/planner/components/plan-cautions';
 import { RunArrows } from '@/features/planner/components/run-arrows';
 import { loadText } from '@/features/planner/components/run-legend';
@@ -90,7 +91,7 @@ export function RunsSheet({ wall }: { wall: WallPlanView }) {
             <div>
               <dt className="text-stone-600">Planned for</dt>
               <dd className="font-medium">
-                {num(settings.outputCapacityPixels)} px per output, {num(settings.chainCapacityW)} W per chain
+                {num(settings.outputCapacityPixels)} px per output, {num(limitsOfWall(wall, 'power', settings).chainCapacityW)} W per chain
                 {settingsStored ? '' : ' (defaults)'}
               </dd>
             </div>
@@ -164,7 +165,7 @@ export function RunsSheet({ wall }: { wall: WallPlanView }) {
         <section className="space-y-1.5 border-t-2 border-ink-900 pt-3 text-sm print:mt-4 print:break-inside-avoid" aria-label="Cautions">
           <p>
             <span className="font-semibold">Power: </span>
-            {cautions.power}
+            {cautions.power} {continuousLoadNote(settings.supply)}
           </p>
           <p>
             <span className="font-semibold">Structure: </span>

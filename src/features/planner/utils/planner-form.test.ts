@@ -20,7 +20,11 @@ describe('the planner form', () => {
 
   it('turns the fields into the wall-plan request the API takes', () => {
     const parsed = plannerFormSchema.parse(values({ inputPreset: 'uhd', columns: 12, rows: 6 }));
-    expect(toPlanRequest(parsed)).toMatchObject({ columns: 12, rows: 6, input: { width: 3840, height: 2160 }, outputCapacityPixels: 650_000 });
+    expect(toPlanRequest(parsed)).toMatchObject({ columns: 12, rows: 6, input: { width: 3840, height: 2160 }, outputCapacityPixels: 650_000, dataPattern: 'rows', powerPattern: 'rows' });
+    // Empty datasheet boxes are "not known", never zero: the plan then assumes 0.95 and says so.
+    const request = toPlanRequest(parsed);
+    expect(request.supply.powerFactor).toBeUndefined();
+    expect(request.cabinet.passThroughAmps).toBeUndefined();
   });
 
   it('puts the API’s own cross-field rules on the fields they name', () => {
@@ -28,7 +32,14 @@ describe('the planner form', () => {
     expect(issuesOf(values({ outputCapacityPixels: 30_000 }))).toEqual({ outputCapacityPixels: 'One cabinet (36,864 pixels) is over the output capacity.' });
     // 120 V × 1 A × 0.8 = 96 W a circuit (NEC 210.19(A)(1)): less than one 180 W cabinet.
     expect(issuesOf(values({ supply: { ...defaultPlannerValues.supply, breakerAmps: 1 } }))).toHaveProperty(['supply.breakerAmps']);
-    expect(issuesOf(values({ chainFollowsCircuit: false, chainCapacityW: 100 }))).toEqual({ chainCapacityW: 'One cabinet (180 W) is over the chain capacity.' });
+    // 480 V is outside the cabinet's 100–240 V input range.
+    expect(issuesOf(values({ supply: { ...defaultPlannerValues.supply, voltage: 480 } }))).toEqual({
+      'supply.voltage': expect.stringContaining("outside the cabinet's 100 V–240 V input range"),
+    });
+    // A 0.5 A connector passes 120 V × 0.5 A × 0.95 = 57 W: less than one 180 W cabinet.
+    expect(issuesOf(values({ cabinet: { ...defaultPlannerValues.cabinet, passThroughAmps: 0.5 } }))).toEqual({
+      'cabinet.passThroughAmps': 'One cabinet (180 W) is over what its power connector may carry (57 W).',
+    });
   });
 
   it('checks the target size and a custom input only when they are used', () => {

@@ -1,11 +1,10 @@
 // The planner's form: the fields people fill in, checked with the same shared schema the wall-plan
 // API uses (its issues land on the fields of the same name), and turned into a plan request.
-import { circuitCapacityW, wholeUnitsWithin } from '@shared/calc/electrical';
-import { runPatterns } from '@shared/calc/runs';
+import { runPatterns, type RunPattern } from '@shared/calc/runs';
 import { feetToMm } from '@shared/calc/units';
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS, INPUT_FORMATS } from '@shared/calc/video-signal';
 import { nearestGrids, type CabinetSpec, type GridOption, type WallPlanInput } from '@shared/calc/wall-plan';
-import { cabinetSpecInput, supplyInput, wallPlanRequest } from '@shared/schemas/calc';
+import { cabinetSpecInput, supplyInput, wallPlanRequest, type WallPlanRequest } from '@shared/schemas/calc';
 import { z } from 'zod';
 
 export const inputPresets = ['hd', 'uhd', 'custom'] as const;
@@ -16,7 +15,6 @@ export type LengthUnit = (typeof lengthUnits)[number];
 /** The largest grid a wall may have (the register's limit). */
 export const MAX_GRID = 500;
 
-const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
 const gridCount = (label: string) =>
   z
     .number({ error: `${label} must be a number.` })
@@ -25,12 +23,27 @@ const gridCount = (label: string) =>
     .max(MAX_GRID, `At most ${MAX_GRID} ${label.toLowerCase()}.`);
 /** A number field that only matters in some modes: NaN (an empty box) is checked later, by mode. */
 const maybeNumber = z.number().or(z.nan());
+/** A datasheet figure that may be left empty (NaN): "not known". Checked by the plan's own schema. */
+const optionalFigure = maybeNumber.optional();
+
+// The cabinet's required figures as the API checks them; its datasheet extras may stay empty.
+const { maxPowerVA: _va, inputVoltageMinV: _min, inputVoltageMaxV: _max, passThroughAmps: _pass, maxPerChain: _chain, receivingCards: _cards, receivingCardPixels: _cardPx, ...requiredCabinet } =
+  cabinetSpecInput.shape;
+const formCabinet = z.object({
+  ...requiredCabinet,
+  maxPowerVA: optionalFigure,
+  inputVoltageMinV: optionalFigure,
+  inputVoltageMaxV: optionalFigure,
+  passThroughAmps: optionalFigure,
+  maxPerChain: optionalFigure,
+  receivingCardPixels: optionalFigure,
+});
 
 export const plannerFormSchema = z
   .object({
     /** The catalogue model, or '' for a cabinet typed in by hand. */
     modelId: z.string(),
-    cabinet: cabinetSpecInput,
+    cabinet: formCabinet,
     /** Receiving cards in one cabinet: one unless the model says otherwise. */
     cardsPerCabinet: z
       .number({ error: 'Receiving cards must be a number.' })
@@ -41,17 +54,20 @@ export const plannerFormSchema = z
     columns: gridCount('Columns'),
     rows: gridCount('Rows'),
     target: z.object({ unit: z.enum(lengthUnits), width: maybeNumber, height: maybeNumber }),
-    supply: supplyInput,
+    // Power factor left empty: the datasheet's volt-amperes, else 0.95.
+    supply: supplyInput.extend({ powerFactor: optionalFigure }),
     outputCapacityPixels: z
       .number({ error: 'Output capacity must be a number.' })
       .int('Output capacity must be a whole number.')
       .positive('Output capacity must be more than zero.')
       .max(100_000_000, 'Output capacity must be at most 100,000,000.'),
-    /** One power chain per circuit (the chain carries what the circuit may), or a typed limit. */
-    chainFollowsCircuit: z.boolean(),
-    chainCapacityW: maybeNumber,
     inputPreset: z.enum(inputPresets),
     input: z.object({ width: maybeNumber, height: maybeNumber }),
+    /** The processor's outputs and the cable from it to the wall, when known. */
+    processorOutputs: optionalFigure,
+    dataCableToWallM: optionalFigure,
+    dataPattern: z.enum(runPatterns),
+    powerPattern: z.enum(runPatterns),
   })
   .superRefine((v, ctx) => {
     const positive = (value: number, path: (string | number)[], label: string, whole = false) => {
@@ -69,17 +85,14 @@ export const plannerFormSchema = z
       positive(v.input.width, ['input', 'width'], 'Input width', true);
       positive(v.input.height, ['input', 'height'], 'Input height', true);
     }
-    if (!v.chainFollowsCircuit && positive(v.chainCapacityW, ['chainCapacityW'], 'Chain capacity')) {
-      if (wholeUnitsWithin(v.chainCapacityW, v.cabinet.maxPowerW) < 1) {
-        ctx.addIssue({ code: 'custom', path: ['chainCapacityW'], message: `One cabinet (${count.format(v.cabinet.maxPowerW)} W) is over the chain capacity.` });
-      }
-    }
-    // The API's own rules (one cabinet over an output or a circuit, input sizes): same paths here.
+    // The API's own rules (each figure, the supply against the cabinet's input range, one cabinet
+    // over an output or a chain, input sizes): the same paths here.
     const request = wallPlanRequest.safeParse(toPlanRequest(v));
     if (!request.success) {
       for (const issue of request.error.issues) {
         if (issue.path[0] === 'input' && v.inputPreset !== 'custom') continue;
-        ctx.addIssue({ code: 'custom', path: issue.path as (string | number)[], message: issue.message });
+        const path = issue.path[0] === 'processor' ? ['processorOutputs'] : (issue.path as (string | number)[]);
+        ctx.addIssue({ code: 'custom', path, message: issue.message });
       }
     }
   }, { when: (payload) => payload.issues.length === 0 });
@@ -92,19 +105,27 @@ export function inputOf(v: Pick<PlannerForm, 'inputPreset' | 'input'>): { width:
   return v.inputPreset === 'custom' ? { width: v.input.width, height: v.input.height } : INPUT_FORMATS[v.inputPreset];
 }
 
+/** A typed figure, or undefined for an empty box. */
+const known = (v: number | undefined) => (v === undefined || Number.isNaN(v) ? undefined : v);
+
 /** The request the wall-plan API would take for these fields (and what planWall computes). */
-export function toPlanRequest(v: PlannerForm) {
+export function toPlanRequest(v: PlannerForm): WallPlanRequest {
+  const outputs = known(v.processorOutputs);
   return {
     cabinet: cabinetOf(v),
     columns: v.columns,
     rows: v.rows,
-    supply: v.supply,
+    supply: { ...v.supply, powerFactor: known(v.supply.powerFactor) },
     outputCapacityPixels: v.outputCapacityPixels,
     input: inputOf(v),
+    dataPattern: v.dataPattern,
+    powerPattern: v.powerPattern,
+    ...(outputs === undefined ? {} : { processor: { outputs } }),
+    dataCableToWallM: known(v.dataCableToWallM),
   };
 }
 
-export function cabinetOf(v: Pick<PlannerForm, 'cabinet'>): CabinetSpec {
+export function cabinetOf(v: Pick<PlannerForm, 'cabinet' | 'cardsPerCabinet'>): CabinetSpec {
   const c = v.cabinet;
   return {
     widthMm: c.widthMm,
@@ -114,6 +135,13 @@ export function cabinetOf(v: Pick<PlannerForm, 'cabinet'>): CabinetSpec {
     maxPowerW: c.maxPowerW,
     typicalPowerW: c.typicalPowerW,
     weightKg: c.weightKg,
+    maxPowerVA: known(c.maxPowerVA),
+    inputVoltageMinV: known(c.inputVoltageMinV),
+    inputVoltageMaxV: known(c.inputVoltageMaxV),
+    passThroughAmps: known(c.passThroughAmps),
+    maxPerChain: known(c.maxPerChain),
+    receivingCards: v.cardsPerCabinet,
+    receivingCardPixels: known(c.receivingCardPixels),
   };
 }
 
@@ -122,10 +150,11 @@ export function planInputOf(v: PlannerForm): WallPlanInput {
   return wallPlanRequest.parse(toPlanRequest(v)) as WallPlanInput;
 }
 
-/** Watts one power chain may carry. */
-export function chainCapacityOf(v: Pick<PlannerForm, 'chainFollowsCircuit' | 'chainCapacityW' | 'supply'>): number {
-  return v.chainFollowsCircuit ? circuitCapacityW(v.supply) : v.chainCapacityW;
-}
+/** The patterns a plan's runs are laid by. */
+export const patternsOf = (v: Pick<PlannerForm, 'dataPattern' | 'powerPattern'>): { data: RunPattern; power: RunPattern } => ({
+  data: v.dataPattern,
+  power: v.powerPattern,
+});
 
 /** A target length in mm from what was typed. */
 export const targetMm = (value: number, unit: LengthUnit) => (unit === 'm' ? value * 1000 : feetToMm(value));
@@ -146,7 +175,21 @@ export function gridOptions(cabinet: { widthMm?: number; heightMm?: number } | u
 }
 
 /** A 500 mm indoor cabinet of the common 2.6 mm class (invented figures, typical of the class). */
-export const defaultCustomCabinet = { widthMm: 500, heightMm: 500, pixelsWide: 192, pixelsHigh: 192, maxPowerW: 180, typicalPowerW: 60, weightKg: 7.5 };
+export const defaultCustomCabinet = {
+  widthMm: 500,
+  heightMm: 500,
+  pixelsWide: 192,
+  pixelsHigh: 192,
+  maxPowerW: 180,
+  typicalPowerW: 60,
+  weightKg: 7.5,
+  maxPowerVA: Number.NaN,
+  inputVoltageMinV: 100,
+  inputVoltageMaxV: 240,
+  passThroughAmps: Number.NaN,
+  maxPerChain: Number.NaN,
+  receivingCardPixels: Number.NaN,
+};
 
 export const defaultPlannerValues: PlannerFormInput = {
   modelId: '',
@@ -156,13 +199,17 @@ export const defaultPlannerValues: PlannerFormInput = {
   columns: 8,
   rows: 4,
   target: { unit: 'm', width: Number.NaN, height: Number.NaN },
-  // A 120 V, 20 A single-phase circuit loaded to 80 % (NEC 210.19(A)(1), 210.20(A)).
-  supply: { voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8, powerFactor: 1 },
+  // A 120 V, 20 A single-phase circuit loaded to 80 % (NEC 210.19(A)(1), 210.20(A)); the power
+  // factor from the datasheet, else 0.95.
+  supply: { voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8, powerFactor: Number.NaN },
   outputCapacityPixels: DEFAULT_OUTPUT_CAPACITY_PIXELS,
-  chainFollowsCircuit: true,
-  chainCapacityW: Number.NaN,
   inputPreset: 'hd',
   input: { width: 1920, height: 1080 },
+  processorOutputs: Number.NaN,
+  dataCableToWallM: Number.NaN,
+  // Whole rows per data line and per power chain, as the trade wires them (common practice).
+  dataPattern: 'rows',
+  powerPattern: 'rows',
 };
 
 export const runPatternLabels: Record<(typeof runPatterns)[number], string> = {

@@ -1,6 +1,7 @@
 // A wall's runs as the runs page and the print view show them: the stored ones, or a proposal
 // generated from the wall's model and default settings when none are stored yet.
 import { cabinetsPerRun, generateRuns, runLoad, type Run, type RunLimits, type RunPattern } from '@shared/calc/runs';
+import { DEFAULT_RUN_PATTERN } from '@shared/calc/wall-plan';
 import {
   defaultPlanSettings,
   runLimitsFor,
@@ -19,19 +20,19 @@ export interface RunSet {
 }
 
 /**
- * The pattern a proposal uses: serpentine, the layout with the fewest runs, so the count matches
- * the outputs and circuits of the wall plan.
+ * The pattern a proposal uses: whole rows per data line and per power chain, as the trade wires
+ * them and as the wall plan counts its outputs and circuits by default.
  */
-export const PROPOSAL_PATTERN: RunPattern = 'serpentine';
+export const PROPOSAL_PATTERN: RunPattern = DEFAULT_RUN_PATTERN;
 
-/** The settings the wall was planned with, or the defaults (with its controller's output capacity). */
-export function settingsOfWall(wall: Pick<WallPlanView, 'planSettings' | 'controllers'>): { settings: PlanSettings; stored: boolean } {
+/** The settings the wall was planned with, or the defaults (for its cabinet model, with its controller's output capacity). */
+export function settingsOfWall(wall: Pick<WallPlanView, 'planSettings' | 'controllers' | 'cabinetModel'>): { settings: PlanSettings; stored: boolean } {
   if (wall.planSettings) return { settings: wall.planSettings, stored: true };
   const controller = wall.controllers[0];
-  return { settings: defaultPlanSettings(controller?.pixelsPerOutput), stored: false };
+  return { settings: defaultPlanSettings(wall.cabinetModel, controller?.pixelsPerOutput), stored: false };
 }
 
-export const limitsOfWall = (wall: Pick<WallPlanView, 'cabinetModel'>, kind: RunKind, settings: PlanSettings): RunLimits =>
+export const limitsOfWall = <K extends RunKind>(wall: Pick<WallPlanView, 'cabinetModel'>, kind: K, settings: PlanSettings) =>
   runLimitsFor(kind, wall.cabinetModel, settings);
 
 /** Runs with their loads recomputed (pixels or watts), as the legend and the print show them. */

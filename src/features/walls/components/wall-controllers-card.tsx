@@ -3,11 +3,15 @@ import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import type { WallDetail } from '@/features/walls/api/types';
-import { wallFigures } from '@/features/walls/components/wall-spec-card';
+import { wholeUnitsWithin } from '@shared/calc/electrical';
 
 /** The controllers driving the wall, and whether their outputs cover the wall's pixels. */
 export function WallControllersCard({ wall, actions }: { wall: WallDetail; actions?: ReactNode }) {
-  const plan = wallFigures(wall);
+  const m = wall.cabinetModel;
+  const perOutput = wholeUnitsWithin(wall.controllers[0]?.pixelsPerOutput ?? 650_000, m.pixelsWide * m.pixelsHigh);
+  // Whole rows per data line (common practice), a row split only when it is over one output.
+  const byRows = perOutput >= 1 ? wall.rows * Math.ceil(wall.columns / perOutput) : null;
+  const fewest = perOutput >= 1 ? Math.ceil((wall.columns * wall.rows) / perOutput) : null;
   const outputs = wall.controllers.reduce((sum, c) => sum + c.outputs, 0);
   return (
     <Card title="Controllers" actions={actions} flush>
@@ -28,10 +32,10 @@ export function WallControllersCard({ wall, actions }: { wall: WallDetail; actio
               </li>
             ))}
           </ul>
-          {plan ? (
+          {byRows !== null && fewest !== null ? (
             <p className="border-t border-stone-100 px-4 py-2.5 text-sm text-stone-700 sm:px-5">
-              The wall needs at least {plan.outputsNeeded} output{plan.outputsNeeded === 1 ? '' : 's'} ({plan.cabinetsPerOutput} cabinets per
-              output, a cabinet is never split); the controllers have {outputs}.
+              One data line per row takes {byRows} output{byRows === 1 ? '' : 's'}, the fewest any layout can use is {fewest} (at most {perOutput}{' '}
+              cabinets per output, a cabinet is never split); the controllers have {outputs}.
             </p>
           ) : null}
         </>

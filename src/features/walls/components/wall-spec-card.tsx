@@ -1,4 +1,4 @@
-import { planWall, type WallPlan } from '@shared/calc/wall-plan';
+import { measureWall, type WallMeasures } from '@shared/calc/wall-plan';
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
 import type { WallDetail } from '@/features/walls/api/types';
@@ -9,23 +9,11 @@ import { formatDate } from '@/lib/format';
 const n = (value: number, digits = 0) => value.toLocaleString('en', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 
 /**
- * The figures of the whole wall from its model and grid (shared/calc/wall-plan.ts). The supply
- * here only serves the plan's call: circuits are not shown on this card (see the planner).
+ * The figures of the whole wall from its model and grid (shared/calc/wall-plan.ts): no supply is
+ * needed, and circuits are not shown on this card (see the planner).
  */
-export function wallFigures(wall: Pick<WallDetail, 'cabinetModel' | 'columns' | 'rows' | 'controllers'>): WallPlan | null {
-  const m = wall.cabinetModel;
-  const cabinetPixels = m.pixelsWide * m.pixelsHigh;
-  try {
-    return planWall({
-      cabinet: m,
-      columns: wall.columns,
-      rows: wall.rows,
-      supply: { voltage: m.voltageMax || 230, phases: 1, breakerAmps: 1_000_000, continuousFactor: 0.8, powerFactor: 1 },
-      outputCapacityPixels: Math.max(cabinetPixels, wall.controllers[0]?.pixelsPerOutput ?? 650_000),
-    });
-  } catch {
-    return null;
-  }
+export function wallFigures(wall: Pick<WallDetail, 'cabinetModel' | 'columns' | 'rows'>): WallMeasures {
+  return measureWall(wall.cabinetModel, wall.columns, wall.rows);
 }
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
@@ -81,8 +69,9 @@ export function WallSpecCard({ wall }: { wall: WallDetail }) {
         <Fact label="Installed">{formatDate(wall.installDate)}</Fact>
         <Fact label="Warranty ends">{formatDate(wall.warrantyEnd)}</Fact>
         <Fact label="Last calibrated">{formatDate(wall.calibrationDate)}</Fact>
-        <Fact label="Supply">
-          {m.voltageMin}–{m.voltageMax} V
+        <Fact label="Power input">
+          {m.inputVoltageMinV}–{m.inputVoltageMaxV} V
+          {m.passThroughAmps !== null ? <span className="block text-sm text-stone-600">{n(m.passThroughAmps, 0)} A connector</span> : null}
         </Fact>
       </dl>
       {wall.inputNotes ? (
