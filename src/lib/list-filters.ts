@@ -1,4 +1,5 @@
-import { useSearchParams } from 'react-router-dom';
+import { useRef } from 'react';
+import { useLocation, useNavigation, useSearchParams } from 'react-router-dom';
 import { isRecordId } from '@/lib/record-id';
 
 /** A record id from the address, or undefined when it is missing or not an id. */
@@ -19,7 +20,14 @@ export function textParam(params: URLSearchParams, key: string, max: number): st
  */
 export function useListFilters<F extends object>(read: (params: URLSearchParams) => F, defaults: Record<string, string> = {}) {
   const [params, setParams] = useSearchParams();
-  const setFilters = (next: F) =>
+  // A search box writes a moment after typing stops; when the person has already clicked through
+  // to another page meanwhile, that late write must not pull them back to the list.
+  const navigation = useNavigation();
+  const location = useLocation();
+  const leaving = useRef(false);
+  leaving.current = navigation.state !== 'idle' && navigation.location?.pathname !== location.pathname;
+  const setFilters = (next: F) => {
+    if (leaving.current) return;
     setParams(
       (prev) => {
         const p = new URLSearchParams(prev);
@@ -31,5 +39,6 @@ export function useListFilters<F extends object>(read: (params: URLSearchParams)
       },
       { replace: true },
     );
+  };
   return [read(params), setFilters] as const;
 }
