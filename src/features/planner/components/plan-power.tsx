@@ -34,8 +34,8 @@ export function CircuitTable({ plan }: { plan: WallPlan }) {
                 <td className="px-3 py-1.5">
                   {num(c.cabinets)} <span className="text-stone-600">({c.from === c.to ? c.from : `${c.from} → ${c.to}`})</span>
                 </td>
-                <td className="px-3 py-1.5 text-right">{watts(c.watts)}</td>
-                <td className="px-3 py-1.5 text-right">{amps(c.amps)}</td>
+                <td className="whitespace-nowrap px-3 py-1.5 text-right">{watts(c.watts)}</td>
+                <td className="whitespace-nowrap px-3 py-1.5 text-right">{amps(c.amps)}</td>
               </tr>
             ))}
           </tbody>
