@@ -1,12 +1,7 @@
 import { and, asc, eq, isNull } from 'drizzle-orm';
-import type {
-  CabinetModel,
-  CabinetModelInput,
-  CabinetModelPatch,
-  Controller,
-  ControllerInput,
-  ControllerPatch,
-} from '../../shared/schemas/register.js';
+import type { CabinetModelInput, CabinetModelPatch, ControllerInput, ControllerPatch } from '../../shared/schemas/register.js';
+import type { CabinetModel } from '../../shared/schemas/cabinet-models.js';
+import type { Controller } from '../../shared/schemas/controllers.js';
 import { vaBelowWatts } from '../../shared/schemas/register.js';
 import { db } from '../db/client.js';
 import { cabinetModels, controllers, walls } from '../db/schema/walls.js';

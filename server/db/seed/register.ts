@@ -3,7 +3,7 @@
 // brand and person here is made up; phone numbers use the 555-01xx range set aside for fiction,
 // and e-mail domains end in .test (reserved by RFC 2606).
 import type { Mounting, TicketPriority } from '../../../shared/schemas/enums.js';
-import type { CabinetModel } from '../../../shared/schemas/register.js';
+import type { CabinetModel } from '../../../shared/schemas/cabinet-models.js';
 import type { PlanTargets } from '../schema/clients.js';
 
 export const company = {

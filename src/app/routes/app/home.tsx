@@ -16,7 +16,6 @@ import { SerialLookupForm } from '@/features/scan/components/serial-lookup-form'
 import { ticketsPageQueryOptions, useTicketsPage } from '@/features/tickets/api/get-tickets';
 import type { TicketFilters } from '@/features/tickets/api/keys';
 import { TicketCardList } from '@/features/tickets/components/ticket-card-list';
-import { useWallsPage, wallsPageQueryOptions } from '@/features/walls/api/get-walls';
 import { ServiceCaution } from '@/features/walls/components/service-caution';
 import { WallsBySite } from '@/features/walls/components/walls-by-site';
 import { requireUser } from '@/app/auth-guard';
@@ -25,6 +24,8 @@ import { firstName } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
 import { audienceOf, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { useQuery } from '@tanstack/react-query';
+import { wallQueries } from '@/resources/walls';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 /** The technician's open tickets, the soonest due first (`GET /api/tickets?assigneeId=me&open=true`). */
@@ -44,7 +45,7 @@ export async function loader({ request }: LoaderFunctionArgs) {
     await queryClient.prefetchQuery(ticketsPageQueryOptions(myOpenTickets, myTicketsLimit));
   } else if (audience === 'client') {
     await Promise.all([
-      queryClient.prefetchQuery(wallsPageQueryOptions({}, clientWallsLimit)),
+      queryClient.prefetchQuery(wallQueries.page({}, clientWallsLimit)),
       queryClient.prefetchQuery(ticketsPageQueryOptions(clientOpenTickets, clientTicketsLimit)),
     ]);
   } else {
@@ -177,7 +178,7 @@ const reportFaultButton = (
 );
 
 function ClientHome({ name, organisation }: { name: string; organisation: string }) {
-  const walls = useWallsPage({}, clientWallsLimit);
+  const walls = useQuery(wallQueries.page({}, clientWallsLimit));
   const tickets = useTicketsPage(clientOpenTickets, clientTicketsLimit);
   const wallItems = walls.data?.items ?? [];
   const withTickets = wallItems.filter((w) => w.openTicketCount > 0).length;

@@ -10,8 +10,6 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Form, useZodForm } from '@/components/ui/form';
 import { PageHeader } from '@/components/ui/page-header';
-import { cabinetModelsQueryOptions, useCabinetModels } from '@/features/planner/api/get-cabinet-models';
-import { wallPlanQueryOptions, type WallPlanView } from '@/features/planner/api/get-wall-plan';
 import { PlanFigures } from '@/features/planner/components/plan-figures';
 import { cabinetFromModel, CabinetInputs, GridInputs, SupplyInputs } from '@/features/planner/components/planner-inputs';
 import { PlannerRuns } from '@/features/planner/components/runs-panel';
@@ -30,6 +28,10 @@ import { requireUser, staff } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { useQuery } from '@tanstack/react-query';
+import type { WallDetail } from '@shared/schemas/walls';
+import { cabinetModelQueries } from '@/resources/cabinet-models';
+import { wallQueries } from '@/resources/walls';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 const wallParam = (url: string) => {
@@ -42,8 +44,8 @@ export async function loader({ request }: LoaderFunctionArgs) {
   const wallId = wallParam(request.url);
   // Warm the cache; a failure shows on the page (custom cabinets still work) rather than instead of it.
   await Promise.all([
-    queryClient.ensureQueryData(cabinetModelsQueryOptions()).catch(() => undefined),
-    wallId ? queryClient.ensureQueryData(wallPlanQueryOptions(wallId)).catch(() => undefined) : undefined,
+    queryClient.ensureQueryData(cabinetModelQueries.list()).catch(() => undefined),
+    wallId ? queryClient.ensureQueryData(wallQueries.detail(wallId)).catch(() => undefined) : undefined,
   ]);
   return null;
 }
@@ -52,7 +54,7 @@ const patternOf = (stored: { pattern: string } | null, fallback: RunPattern): Ru
   stored && (runPatterns as readonly string[]).includes(stored.pattern) ? (stored.pattern as RunPattern) : fallback;
 
 /** The form filled in from a wall of the register: its model, grid, stored settings and run patterns. */
-function valuesFromWall(wall: WallPlanView): PlannerFormInput {
+function valuesFromWall(wall: WallDetail): PlannerFormInput {
   const settings = wall.planSettings;
   const controller = wall.controllers[0];
   return {
@@ -92,9 +94,9 @@ export function Component() {
   useDocumentTitle('Planner');
   const user = useUser();
   const [params] = useSearchParams();
-  const models = useCabinetModels();
+  const models = useQuery(cabinetModelQueries.list());
   const wallId = params.get('wall');
-  const startWall = wallId ? queryClient.getQueryData(wallPlanQueryOptions(wallId).queryKey) : undefined;
+  const startWall = wallId ? queryClient.getQueryData(wallQueries.detail(wallId).queryKey) : undefined;
   const [defaultValues] = useState<PlannerFormInput>(() => (startWall ? valuesFromWall(startWall) : defaultPlannerValues));
   const form = useZodForm(plannerFormSchema, { mode: 'onChange', defaultValues });
   const values = useWatch({ control: form.control });

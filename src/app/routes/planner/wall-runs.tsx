@@ -5,19 +5,20 @@ import { PageHeader } from '@/components/ui/page-header';
 import { PageSpinner } from '@/components/ui/spinner';
 import { Alert } from '@/components/ui/alert';
 import { paths } from '@/config/paths';
-import { useWallPlan, wallPlanQueryOptions } from '@/features/planner/api/get-wall-plan';
 import { RunsEditor } from '@/features/planner/components/runs-editor';
 import { requireUser, staff } from '@/app/auth-guard';
 import { errorMessage } from '@/lib/errors';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { useQuery } from '@tanstack/react-query';
+import { wallQueries } from '@/resources/walls';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   await requireUser(request, staff);
   // A wall that does not exist (or is out of reach) throws here and shows the not-found page.
-  await queryClient.ensureQueryData(wallPlanQueryOptions(params.id ?? ''));
+  await queryClient.ensureQueryData(wallQueries.detail(params.id ?? ''));
   return null;
 }
 
@@ -25,7 +26,7 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
 export function Component() {
   const { id = '' } = useParams();
   const user = useUser();
-  const wall = useWallPlan(id);
+  const wall = useQuery(wallQueries.detail(id));
   useDocumentTitle(wall.data ? `Runs · ${wall.data.name}` : 'Runs');
 
   if (wall.isPending) return <PageSpinner />;

@@ -6,7 +6,6 @@ import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { cabinetBySerialQueryOptions, useCabinetBySerial } from '@/features/cabinets/api/get-cabinet-by-serial';
 import { CabinetFacts } from '@/features/cabinets/components/cabinet-card';
 import { CabinetHistory } from '@/features/cabinets/components/cabinet-history';
 import { CabinetStatusPill } from '@/features/cabinets/components/cabinet-status';
@@ -16,12 +15,14 @@ import { errorMessage, isNotFound } from '@/lib/errors';
 import { queryClient } from '@/lib/query-client';
 import { useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { useQuery } from '@tanstack/react-query';
+import { cabinetQueries } from '@/resources/cabinets';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   await requireUser(request);
   // Not found is answered on the page itself ("no cabinet has this serial"), not as an error.
-  await queryClient.prefetchQuery(cabinetBySerialQueryOptions(params.serial ?? ''));
+  await queryClient.prefetchQuery(cabinetQueries.bySerial(params.serial ?? ''));
   return null;
 }
 
@@ -29,7 +30,7 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
 export function Component() {
   const { serial = '' } = useParams();
   const user = useUser();
-  const query = useCabinetBySerial(serial);
+  const query = useQuery(cabinetQueries.bySerial(serial));
   const cabinet = query.data;
   useDocumentTitle(cabinet ? `Cabinet ${cabinet.serial}` : `Cabinet ${serial}`);
 

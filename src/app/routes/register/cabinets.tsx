@@ -1,15 +1,15 @@
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { cabinetStatuses, type CabinetStatus } from '@shared/schemas/enums';
 import { PageHeader } from '@/components/ui/page-header';
-import { cabinetsInfiniteQueryOptions } from '@/features/cabinets/api/get-cabinets';
-import type { CabinetFilters } from '@/features/cabinets/api/keys';
+import type { CabinetFilters } from '@/resources/cabinets';
 import { CabinetsTable } from '@/features/cabinets/components/cabinets-table';
-import { usePlaceFilterOptions } from '@/features/sites/components/place-filters';
+import { usePlaceFilterOptions } from '@/app/use-place-filter-options';
 import { requireUser } from '@/app/auth-guard';
 import { idParam, textParam, useListFilters } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { cabinetQueries } from '@/resources/cabinets';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 /** The filters live in the address: `/cabinets?batch=…` is the list of a batch recall. */
@@ -30,7 +30,7 @@ function filtersFrom(params: URLSearchParams): CabinetFilters {
 
 export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request);
-  await queryClient.ensureInfiniteQueryData(cabinetsInfiniteQueryOptions(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined);
+  await queryClient.ensureInfiniteQueryData(cabinetQueries.list(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined);
   return null;
 }
 

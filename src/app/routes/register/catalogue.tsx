@@ -5,17 +5,18 @@ import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
-import { cabinetModelsQueryOptions } from '@/features/catalogue/api/get-cabinet-models';
-import { controllersQueryOptions } from '@/features/catalogue/api/get-controllers';
 import { CreateCabinetModelDialog } from '@/features/catalogue/components/cabinet-model-form-dialog';
 import { CabinetModelsTable } from '@/features/catalogue/components/cabinet-models-table';
 import { CreateControllerDialog } from '@/features/catalogue/components/controller-form-dialog';
 import { ControllersTable } from '@/features/catalogue/components/controllers-table';
-import { useWallOptions } from '@/features/walls/api/get-wall-options';
 import { requireUser, staff } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { cabinetModelQueries } from '@/resources/cabinet-models';
+import { controllerQueries } from '@/resources/controllers';
+import { wallQueries } from '@/resources/walls';
+import { useQuery } from '@tanstack/react-query';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 type Tab = 'models' | 'controllers';
@@ -24,8 +25,8 @@ const tabFrom = (params: URLSearchParams): Tab => (params.get('tab') === 'contro
 export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request, staff);
   const tab = tabFrom(new URL(request.url).searchParams);
-  if (tab === 'models') await queryClient.prefetchQuery(cabinetModelsQueryOptions());
-  else await queryClient.prefetchQuery(controllersQueryOptions());
+  if (tab === 'models') await queryClient.prefetchQuery(cabinetModelQueries.list());
+  else await queryClient.prefetchQuery(controllerQueries.list());
   return null;
 }
 
@@ -37,9 +38,9 @@ export function Component() {
   const [params] = useSearchParams();
   const tab = tabFrom(params);
   const [adding, setAdding] = useState(false);
-  const walls = useWallOptions(tab === 'controllers' && canEdit);
+  const walls = useQuery({ ...wallQueries.page({}), enabled: tab === 'controllers' && canEdit });
   const wallOptions = useMemo(
-    () => (walls.data ?? []).map((w) => ({ value: w.id, label: `${w.name} (${w.siteName}, ${w.clientName})` })),
+    () => (walls.data?.items ?? []).map((w) => ({ value: w.id, label: `${w.name} (${w.siteName}, ${w.clientName})` })),
     [walls.data],
   );
 

@@ -8,8 +8,6 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { clientQueryOptions, useClient } from '@/features/clients/api/get-client';
-import { servicePlansQueryOptions } from '@/features/clients/api/get-service-plans';
 import { EditClientDialog } from '@/features/clients/components/client-form-dialog';
 import { ContactsCard } from '@/features/clients/components/contacts-card';
 import { ServicePlanCard } from '@/features/clients/components/service-plan-card';
@@ -19,21 +17,23 @@ import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { idParam } from '@/app/routes/register/id-param';
+import { useQuery } from '@tanstack/react-query';
+import { clientQueries } from '@/resources/clients';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   const user = await requireUser(request);
   const id = idParam(params);
   // A client that does not exist (or is another organisation's) is a 404 page.
-  await queryClient.ensureQueryData(clientQueryOptions(id));
-  if (isOffice(user)) void queryClient.prefetchQuery(servicePlansQueryOptions());
+  await queryClient.ensureQueryData(clientQueries.detail(id));
+  if (isOffice(user)) void queryClient.prefetchQuery(clientQueries.servicePlans());
   return null;
 }
 
 export function Component() {
   const { id } = useParams() as { id: string };
   const user = useUser();
-  const query = useClient(id);
+  const query = useQuery(clientQueries.detail(id));
   const [editing, setEditing] = useState(false);
   const [addingSite, setAddingSite] = useState(false);
   const client = query.data;

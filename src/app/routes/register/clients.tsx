@@ -3,8 +3,7 @@ import { useState } from 'react';
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
-import { clientsInfiniteQueryOptions } from '@/features/clients/api/get-clients';
-import type { ClientFilters } from '@/features/clients/api/keys';
+import type { ClientFilters } from '@/resources/clients';
 import { CreateClientDialog } from '@/features/clients/components/client-form-dialog';
 import { ClientsTable } from '@/features/clients/components/clients-table';
 import { requireUser, staff } from '@/app/auth-guard';
@@ -12,6 +11,7 @@ import { useListFilters } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { clientQueries } from '@/resources/clients';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 /** The filters live in the address, so a sorted, filtered list can be bookmarked. */
@@ -26,7 +26,7 @@ function filtersFrom(params: URLSearchParams): ClientFilters {
 
 export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request, staff);
-  await queryClient.ensureInfiniteQueryData(clientsInfiniteQueryOptions(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined);
+  await queryClient.ensureInfiniteQueryData(clientQueries.list(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined);
   return null;
 }
 

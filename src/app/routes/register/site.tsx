@@ -8,9 +8,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { cabinetModelsQueryOptions, useCabinetModels } from '@/features/catalogue/api/get-cabinet-models';
 import { ContactsCard } from '@/features/clients/components/contacts-card';
-import { siteQueryOptions, useSite } from '@/features/sites/api/get-site';
 import { SiteAccessNotes } from '@/features/sites/components/site-access-notes';
 import { SiteAddressCard } from '@/features/sites/components/site-address-card';
 import { EditSiteDialog } from '@/features/sites/components/site-form-dialog';
@@ -21,22 +19,25 @@ import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { idParam } from '@/app/routes/register/id-param';
+import { useQuery } from '@tanstack/react-query';
+import { cabinetModelQueries } from '@/resources/cabinet-models';
+import { siteQueries } from '@/resources/sites';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   const user = await requireUser(request);
   const id = idParam(params);
-  await queryClient.ensureQueryData(siteQueryOptions(id));
-  if (isOffice(user)) void queryClient.prefetchQuery(cabinetModelsQueryOptions());
+  await queryClient.ensureQueryData(siteQueries.detail(id));
+  if (isOffice(user)) void queryClient.prefetchQuery(cabinetModelQueries.list());
   return null;
 }
 
 export function Component() {
   const { id } = useParams() as { id: string };
   const user = useUser();
-  const query = useSite(id);
+  const query = useQuery(siteQueries.detail(id));
   const canEdit = isOffice(user);
-  const models = useCabinetModels();
+  const models = useQuery(cabinetModelQueries.list());
   const [editing, setEditing] = useState(false);
   const [addingWall, setAddingWall] = useState(false);
   const site = query.data;

@@ -1,15 +1,16 @@
 import { useMemo } from 'react';
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
-import { useClientOptions } from '@/features/clients/api/get-clients';
-import { sitesInfiniteQueryOptions } from '@/features/sites/api/get-sites';
-import type { SiteFilters } from '@/features/sites/api/keys';
+import type { SiteFilters } from '@/resources/sites';
 import { SitesTable } from '@/features/sites/components/sites-table';
 import { requireUser } from '@/app/auth-guard';
 import { idParam, useListFilters } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { useQuery } from '@tanstack/react-query';
+import { clientQueries } from '@/resources/clients';
+import { siteQueries } from '@/resources/sites';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 /** The filters live in the address, so a sorted, filtered list can be bookmarked. */
@@ -25,7 +26,7 @@ function filtersFrom(params: URLSearchParams): SiteFilters {
 
 export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request);
-  await queryClient.ensureInfiniteQueryData(sitesInfiniteQueryOptions(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined);
+  await queryClient.ensureInfiniteQueryData(siteQueries.list(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined);
   return null;
 }
 
@@ -35,7 +36,7 @@ export function Component() {
   const staff = user.role !== 'client';
   const [filters, setFilters] = useListFilters(filtersFrom, { sort: 'name', dir: 'asc' });
   // Client users have one organisation, so no client filter.
-  const clients = useClientOptions(staff);
+  const clients = useQuery({ ...clientQueries.options(), enabled: staff });
   const clientOptions = useMemo(() => (clients.data ?? []).map((c) => ({ value: c.id, label: c.name })), [clients.data]);
 
   return (

@@ -6,22 +6,22 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { useWallCabinets, wallCabinetsQueryOptions } from '@/features/cabinets/api/get-wall-cabinets';
 import { CabinetLabelsSheet } from '@/features/cabinets/components/cabinet-labels-sheet';
-import { useWall, wallQueryOptions } from '@/features/walls/api/get-wall';
 import { requireUser, staff } from '@/app/auth-guard';
 import { errorMessage } from '@/lib/errors';
 import { queryClient } from '@/lib/query-client';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { idParam } from '@/app/routes/register/id-param';
+import { useQuery } from '@tanstack/react-query';
+import { wallQueries } from '@/resources/walls';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   await requireUser(request, staff);
   const id = idParam(params);
   await Promise.all([
-    queryClient.ensureQueryData(wallQueryOptions(id)),
-    queryClient.prefetchQuery(wallCabinetsQueryOptions(id)),
+    queryClient.ensureQueryData(wallQueries.detail(id)),
+    queryClient.prefetchQuery(wallQueries.cabinets(id)),
   ]);
   return null;
 }
@@ -29,8 +29,8 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
 /** A printable sheet of QR labels, one per cabinet of the wall. */
 export function Component() {
   const { id } = useParams() as { id: string };
-  const wall = useWall(id);
-  const cabinets = useWallCabinets(id);
+  const wall = useQuery(wallQueries.detail(id));
+  const cabinets = useQuery(wallQueries.cabinets(id));
   useDocumentTitle(wall.data ? `Labels · ${wall.data.name}` : 'Labels');
   if (!wall.data) return <PageSpinner />;
   const items = cabinets.data?.items ?? [];

@@ -8,14 +8,11 @@ import { Button, ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { wallCabinetsQueryOptions } from '@/features/cabinets/api/get-wall-cabinets';
 import { CabinetImport } from '@/features/cabinets/components/cabinet-import';
 import { CabinetWallMap } from '@/features/cabinets/components/cabinet-wall-map';
-import { useCabinetModels } from '@/features/catalogue/api/get-cabinet-models';
 import { CreateControllerDialog } from '@/features/catalogue/components/controller-form-dialog';
 import { WallDocuments } from '@/features/documents/components/wall-documents';
-import { useWall, wallQueryOptions } from '@/features/walls/api/get-wall';
-import type { WallDetail } from '@/features/walls/api/types';
+import type { WallDetail } from '@shared/schemas/walls';
 import { ServiceCaution } from '@/features/walls/components/service-caution';
 import { WallControllersCard } from '@/features/walls/components/wall-controllers-card';
 import { EditWallDialog } from '@/features/walls/components/wall-form-dialog';
@@ -26,6 +23,9 @@ import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { idParam } from '@/app/routes/register/id-param';
+import { useQuery } from '@tanstack/react-query';
+import { cabinetModelQueries } from '@/resources/cabinet-models';
+import { wallQueries } from '@/resources/walls';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 type Tab = 'map' | 'documents' | 'import';
@@ -36,7 +36,7 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
   // A wall that does not exist (or is another organisation's) is a 404 page. Its cabinets come
   // in the same wait: the page is drawn once, with its map, rather than drawn and then restyled
   // cell by cell when they arrive.
-  await Promise.all([queryClient.ensureQueryData(wallQueryOptions(id)), queryClient.prefetchQuery(wallCabinetsQueryOptions(id))]);
+  await Promise.all([queryClient.ensureQueryData(wallQueries.detail(id)), queryClient.prefetchQuery(wallQueries.cabinets(id))]);
   return null;
 }
 
@@ -45,7 +45,7 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
  * drawn, and only this re-renders then, not the whole page.
  */
 function EditWallWithModels({ wall, open, onClose }: { wall: WallDetail; open: boolean; onClose: () => void }) {
-  const models = useCabinetModels();
+  const models = useQuery(cabinetModelQueries.list());
   return <EditWallDialog wall={wall} models={models.data?.items ?? []} open={open} onClose={onClose} />;
 }
 
@@ -57,7 +57,7 @@ function positiveInt(value: string | null): number | null {
 export function Component() {
   const { id } = useParams() as { id: string };
   const user = useUser();
-  const query = useWall(id);
+  const query = useQuery(wallQueries.detail(id));
   const [params, setParams] = useSearchParams();
   const [editing, setEditing] = useState(false);
   const [addingController, setAddingController] = useState(false);

@@ -3,11 +3,8 @@ import { useState } from 'react';
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
-import { useCabinetModels } from '@/features/catalogue/api/get-cabinet-models';
-import { useSites } from '@/features/sites/api/get-sites';
-import { usePlaceFilterOptions } from '@/features/sites/components/place-filters';
-import { wallsInfiniteQueryOptions } from '@/features/walls/api/get-walls';
-import type { WallFilters } from '@/features/walls/api/keys';
+import { usePlaceFilterOptions } from '@/app/use-place-filter-options';
+import type { WallFilters } from '@/resources/walls';
 import { CreateWallDialog } from '@/features/walls/components/wall-form-dialog';
 import { WallsTable } from '@/features/walls/components/walls-table';
 import { requireUser } from '@/app/auth-guard';
@@ -15,6 +12,10 @@ import { idParam, useListFilters } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { useQuery } from '@tanstack/react-query';
+import { cabinetModelQueries } from '@/resources/cabinet-models';
+import { siteQueries } from '@/resources/sites';
+import { wallQueries } from '@/resources/walls';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 function filtersFrom(params: URLSearchParams): WallFilters {
@@ -30,7 +31,7 @@ function filtersFrom(params: URLSearchParams): WallFilters {
 
 export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request);
-  await queryClient.ensureInfiniteQueryData(wallsInfiniteQueryOptions(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined);
+  await queryClient.ensureInfiniteQueryData(wallQueries.list(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined);
   return null;
 }
 
@@ -42,8 +43,8 @@ export function Component() {
   const [filters, setFilters] = useListFilters(filtersFrom, { sort: 'name', dir: 'asc' });
   const [adding, setAdding] = useState(false);
   const filterOptions = usePlaceFilterOptions(staff, filters.clientId);
-  const models = useCabinetModels();
-  const allSites = useSites({}, canEdit && adding);
+  const models = useQuery(cabinetModelQueries.list());
+  const allSites = useQuery({ ...siteQueries.options({}), enabled: canEdit && adding });
 
   const addButton = canEdit ? (
     <Button variant="primary" onClick={() => setAdding(true)} icon={<Plus className="h-4 w-4" aria-hidden="true" />}>

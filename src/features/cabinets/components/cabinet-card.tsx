@@ -9,14 +9,16 @@ import { SelectField } from '@/components/ui/select-field';
 import { Spinner } from '@/components/ui/spinner';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { useCabinet } from '@/features/cabinets/api/get-cabinet';
-import type { CabinetDetail, WallCabinet } from '@/features/cabinets/api/types';
-import { useUpdateCabinet } from '@/features/cabinets/api/update-cabinet';
+import type { CabinetDetail } from '@shared/schemas/cabinets';
+import type { WallCabinet } from '@shared/schemas/walls';
+import { useUpdateCabinet } from '@/features/cabinets/api/mutations';
 import { CabinetHistory } from '@/features/cabinets/components/cabinet-history';
 import { CabinetStatusPill, cabinetStatusOptions } from '@/features/cabinets/components/cabinet-status';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { errorMessage } from '@/lib/errors';
 import { formatDate } from '@/lib/format';
+import { useQuery } from '@tanstack/react-query';
+import { cabinetQueries } from '@/resources/cabinets';
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
   return (
@@ -64,7 +66,7 @@ interface CabinetCardProps {
 
 /** The card of a cabinet opened from the wall map: serial, position, status, facts and whole history. */
 export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, onClose, titled = false }: CabinetCardProps) {
-  const query = useCabinet(cabinetId);
+  const query = useQuery({ ...cabinetQueries.detail(cabinetId ?? ''), enabled: Boolean(cabinetId) });
   const cabinet = query.data;
   const [editing, setEditing] = useState(false);
   const serial = cabinet?.serial ?? summary?.serial ?? '';

@@ -1,6 +1,6 @@
 import { positionLabel } from '@shared/schemas/register';
 import { ArrowLeftRight, ArrowRight, CircleDot, FileUp, MapPin, PackageMinus, RefreshCw, Wrench } from 'lucide-react';
-import type { CabinetEvent } from '@/features/cabinets/api/types';
+import type { CabinetEvent } from '@shared/schemas/cabinets';
 import { cabinetStatusLabels } from '@/features/cabinets/components/cabinet-status';
 import { formatDateTime } from '@/lib/format';
 

@@ -4,7 +4,8 @@ import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
-import { CabinetImportError, useImportCabinets } from '@/features/cabinets/api/import-cabinets';
+import { useImportCabinets } from '@/features/cabinets/api/mutations';
+import { CabinetImportError } from '@/resources/cabinets';
 import { downloadCsv, toCsv } from '@/lib/csv';
 import { errorMessage } from '@/lib/errors';
 

@@ -2,7 +2,7 @@ import { positionLabel } from '@shared/schemas/register';
 import QRCode from 'qrcode';
 import { useEffect, useState } from 'react';
 import { Spinner } from '@/components/ui/spinner';
-import type { WallCabinet } from '@/features/cabinets/api/types';
+import type { WallCabinet } from '@shared/schemas/walls';
 
 /** The address a cabinet's QR label opens: `${origin}/c/<serial>`. */
 export const labelUrl = (origin: string, serial: string) => `${origin}/c/${encodeURIComponent(serial)}`;

@@ -10,15 +10,17 @@ import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { WallMap, WallViewToggle, type WallMapCell } from '@/components/wall-map/wall-map';
-import { useWallCabinets } from '@/features/cabinets/api/get-wall-cabinets';
-import { useMoveCabinet } from '@/features/cabinets/api/move-cabinet';
-import { useSwapCabinets } from '@/features/cabinets/api/swap-cabinets';
-import type { CabinetDetail, WallCabinet } from '@/features/cabinets/api/types';
+import { useMoveCabinet } from '@/features/cabinets/api/mutations';
+import { useSwapCabinets } from '@/features/cabinets/api/mutations';
+import type { CabinetDetail } from '@shared/schemas/cabinets';
+import type { WallCabinet } from '@shared/schemas/walls';
 import { CabinetCard } from '@/features/cabinets/components/cabinet-card';
 import { EmptyCellCard } from '@/features/cabinets/components/empty-cell-card';
 import { useMediaQuery } from '@/lib/use-media-query';
 import { errorMessage } from '@/lib/errors';
 import { z } from 'zod';
+import { useQuery } from '@tanstack/react-query';
+import { wallQueries } from '@/resources/walls';
 
 type View = 'front' | 'rear';
 type Mode = { kind: 'move' | 'swap'; cabinet: CabinetDetail } | null;
@@ -67,7 +69,7 @@ function useAddressValue<T>(value: T, equal: (a: T, b: T) => boolean, onChange: 
 export function CabinetWallMap({ wall, selected: selectedInAddress, onSelect: select, view: viewInAddress, onViewChange, canRegister, canOperate, notice }: CabinetWallMapProps) {
   const [selected, onSelect] = useAddressValue(selectedInAddress, samePlace, select);
   const [view, setView] = useAddressValue<View>(viewInAddress, (a, b) => a === b, onViewChange);
-  const query = useWallCabinets(wall.id);
+  const query = useQuery(wallQueries.cabinets(wall.id));
   const wide = useMediaQuery('(min-width: 1280px)');
   const toast = useToast();
   const [mode, setMode] = useState<Mode>(null);

@@ -7,12 +7,13 @@ import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import { paths } from '@/config/paths';
-import { useCabinets } from '@/features/cabinets/api/get-cabinets';
-import type { CabinetFilters } from '@/features/cabinets/api/keys';
-import type { CabinetSummary } from '@/features/cabinets/api/types';
+import type { CabinetFilters } from '@/resources/cabinets';
+import type { CabinetSummary } from '@shared/schemas/cabinets';
 import { CabinetStatusPill, cabinetStatusLabels, cabinetStatusOptions } from '@/features/cabinets/components/cabinet-status';
-import { PlaceFilters, type PlaceFilterOptions } from '@/features/sites/components/place-filters';
+import { PlaceFilters, type PlaceFilterOptions } from '@/components/ui/place-filters';
 import { formatDate } from '@/lib/format';
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
+import { cabinetQueries } from '@/resources/cabinets';
 
 const column = createColumnHelper<CabinetSummary>();
 const sortable = ['serial', 'batch', 'installedOn'] as const;
@@ -34,7 +35,7 @@ interface CabinetsTableProps {
  * production batch (a batch recall), client, site, state or model.
  */
 export function CabinetsTable({ filters, onFiltersChange, staff, filterOptions }: CabinetsTableProps) {
-  const query = useCabinets(filters);
+  const query = useInfiniteQuery({ ...cabinetQueries.list(filters), placeholderData: keepPreviousData });
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
 
   const columns = useMemo(

@@ -3,7 +3,7 @@ import { SquareDashed, X } from 'lucide-react';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { usePlaceCabinet } from '@/features/cabinets/api/place-cabinet';
+import { usePlaceCabinet } from '@/features/cabinets/api/mutations';
 
 interface EmptyCellCardProps {
   wallId: string;

@@ -1,4 +1,5 @@
-import { cabinetModelInput, cabinetModelPatch, type CabinetModel } from '@shared/schemas/register';
+import { cabinetModelInput, cabinetModelPatch } from '@shared/schemas/register';
+import type { CabinetModel } from '@shared/schemas/cabinet-models';
 import { useFormContext } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { Checkbox } from '@/components/ui/checkbox';
@@ -7,8 +8,8 @@ import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { useCreateCabinetModel } from '@/features/catalogue/api/create-cabinet-model';
-import { useUpdateCabinetModel } from '@/features/catalogue/api/update-cabinet-model';
+import { useCreateCabinetModel } from '@/features/catalogue/api/mutations';
+import { useUpdateCabinetModel } from '@/features/catalogue/api/mutations';
 
 const asNumber = { valueAsNumber: true };
 const environmentOptions = [

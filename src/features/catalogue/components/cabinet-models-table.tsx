@@ -1,19 +1,20 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { LayoutGrid } from 'lucide-react';
 import { useMemo, useState } from 'react';
-import type { CabinetModel } from '@shared/schemas/register';
+import type { CabinetModel } from '@shared/schemas/cabinet-models';
 import { Badge } from '@/components/ui/badge';
 import { DataTable, editColumn } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
-import { useCabinetModels } from '@/features/catalogue/api/get-cabinet-models';
 import { EditCabinetModelDialog } from '@/features/catalogue/components/cabinet-model-form-dialog';
+import { useQuery } from '@tanstack/react-query';
+import { cabinetModelQueries } from '@/resources/cabinet-models';
 
 const column = createColumnHelper<CabinetModel>();
 const n = (v: number) => v.toLocaleString('en');
 
 /** The cabinet models in the catalogue with their whole spec. */
 export function CabinetModelsTable({ canEdit }: { canEdit: boolean }) {
-  const query = useCabinetModels();
+  const query = useQuery(cabinetModelQueries.list());
   const [editing, setEditing] = useState<CabinetModel | null>(null);
   const rows = query.data?.items ?? [];
 

@@ -1,4 +1,5 @@
-import { controllerInput, controllerPatch, type Controller } from '@shared/schemas/register';
+import { controllerInput, controllerPatch } from '@shared/schemas/register';
+import type { Controller } from '@shared/schemas/controllers';
 import { useEffect } from 'react';
 import { useFormContext } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
@@ -9,8 +10,8 @@ import { SelectField, type SelectOption } from '@/components/ui/select-field';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { useCreateController } from '@/features/catalogue/api/create-controller';
-import { useUpdateController } from '@/features/catalogue/api/update-controller';
+import { useCreateController } from '@/features/catalogue/api/mutations';
+import { useUpdateController } from '@/features/catalogue/api/mutations';
 
 const asNumber = { valueAsNumber: true };
 const nullIfEmpty = { setValueAs: (v: unknown) => (v === '' || v === undefined ? null : v) };

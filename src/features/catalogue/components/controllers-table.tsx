@@ -2,19 +2,20 @@ import { createColumnHelper } from '@tanstack/react-table';
 import { Cpu } from 'lucide-react';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
-import type { Controller } from '@shared/schemas/register';
+import type { Controller } from '@shared/schemas/controllers';
 import { DataTable, editColumn } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import type { SelectOption } from '@/components/ui/select-field';
 import { paths } from '@/config/paths';
-import { useControllers } from '@/features/catalogue/api/get-controllers';
 import { EditControllerDialog } from '@/features/catalogue/components/controller-form-dialog';
+import { useQuery } from '@tanstack/react-query';
+import { controllerQueries } from '@/resources/controllers';
 
 const column = createColumnHelper<Controller>();
 
 /** Every controller (processor / sending device) and the wall it drives. */
 export function ControllersTable({ canEdit, wallOptions }: { canEdit: boolean; wallOptions: SelectOption[] }) {
-  const query = useControllers();
+  const query = useQuery(controllerQueries.list());
   const [editing, setEditing] = useState<Controller | null>(null);
   const rows = query.data?.items ?? [];
 

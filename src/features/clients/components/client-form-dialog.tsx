@@ -11,15 +11,16 @@ import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { useCreateClient } from '@/features/clients/api/create-client';
-import { useServicePlans } from '@/features/clients/api/get-service-plans';
-import type { ClientDetail } from '@/features/clients/api/types';
-import { useUpdateClient } from '@/features/clients/api/update-client';
+import { useCreateClient } from '@/features/clients/api/mutations';
+import type { ClientDetail } from '@shared/schemas/clients';
+import { useUpdateClient } from '@/features/clients/api/mutations';
+import { useQuery } from '@tanstack/react-query';
+import { clientQueries } from '@/resources/clients';
 
 const nullIfEmpty = { setValueAs: (v: unknown) => (v === '' || v === undefined ? null : v) };
 
 function ServicePlanSelect() {
-  const plans = useServicePlans();
+  const plans = useQuery(clientQueries.servicePlans());
   const { getValues, setValue } = useFormContext<{ servicePlanId?: string | null }>();
   // The choices arrive after the form: put the saved choice back on the select once they do.
   useEffect(() => {

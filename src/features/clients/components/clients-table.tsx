@@ -7,10 +7,11 @@ import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import { paths } from '@/config/paths';
-import { useClients } from '@/features/clients/api/get-clients';
-import type { ClientFilters } from '@/features/clients/api/keys';
-import type { ClientSummary } from '@/features/clients/api/types';
+import type { ClientFilters } from '@/resources/clients';
+import type { ClientSummary } from '@shared/schemas/clients';
 import { formatDate } from '@/lib/format';
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
+import { clientQueries } from '@/resources/clients';
 
 const column = createColumnHelper<ClientSummary>();
 
@@ -25,7 +26,7 @@ interface ClientsTableProps {
 
 /** Client organisations: search and sort on the server, "load more", column chooser, CSV. */
 export function ClientsTable({ filters, onFiltersChange, emptyAction }: ClientsTableProps) {
-  const query = useClients(filters);
+  const query = useInfiniteQuery({ ...clientQueries.list(filters), placeholderData: keepPreviousData });
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
 
   const columns = useMemo(

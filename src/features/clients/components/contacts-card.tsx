@@ -12,10 +12,10 @@ import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { useCreateContact } from '@/features/clients/api/create-contact';
-import { useDeleteContact } from '@/features/clients/api/delete-contact';
-import type { Contact } from '@/features/clients/api/types';
-import { useUpdateContact } from '@/features/clients/api/update-contact';
+import { useCreateContact } from '@/features/clients/api/mutations';
+import { useDeleteContact } from '@/features/clients/api/mutations';
+import type { Contact } from '@shared/schemas/clients';
+import { useUpdateContact } from '@/features/clients/api/mutations';
 
 export type ContactRow = Omit<Contact, 'clientId'>;
 

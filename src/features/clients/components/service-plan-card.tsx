@@ -1,6 +1,6 @@
 import { ticketPriorities } from '@shared/schemas/enums';
 import { Card } from '@/components/ui/card';
-import type { ServicePlan } from '@/features/clients/api/types';
+import type { ServicePlan } from '@shared/schemas/clients';
 
 const priorityLabels = { critical: 'Critical', high: 'High', normal: 'Normal', low: 'Low' } as const;
 const dayNames = ['', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];

@@ -1,6 +1,6 @@
 import { chainLimit, supplyVoltageProblem } from '@shared/calc/electrical';
 import { pixelPitchMm } from '@shared/calc/viewing-distance';
-import type { CabinetModel } from '@shared/schemas/register';
+import type { CabinetModel } from '@shared/schemas/cabinet-models';
 import clsx from 'clsx';
 import { Pencil } from 'lucide-react';
 import { useController, useFormContext, useWatch } from 'react-hook-form';

@@ -9,8 +9,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { useToast } from '@/components/ui/toast';
-import type { WallPlanView } from '@/features/planner/api/get-wall-plan';
-import { useSaveWallPlan } from '@/features/planner/api/save-wall-plan';
+import { useSaveWallPlan } from '@/features/planner/api/mutations';
 import { ChoiceGroup } from '@/features/planner/components/choice-group';
 import { PowerCaution } from '@/features/planner/components/plan-cautions';
 import { kindChoices, RunsMap } from '@/features/planner/components/runs-panel';
@@ -19,6 +18,7 @@ import { runPatternLabels } from '@/features/planner/utils/planner-form';
 import { addRun, moveRun, removeRun, renumber, reverseRun, toggleCell } from '@/features/planner/utils/run-edit';
 import { kindLabels, limitsOfWall, pathText, proposeRuns, runSetOfWall, settingsOfWall, withLoads, type RunSet } from '@/features/planner/utils/wall-runs';
 import { errorMessage } from '@/lib/errors';
+import type { WallDetail } from '@shared/schemas/walls';
 
 interface EditableSet extends RunSet {
   edited: boolean;
@@ -36,7 +36,7 @@ function supplyText(s: { voltage: number; phases: 1 | 3; breakerAmps: number; co
  * the office edits them by hand (pick a run, click cells to add or take them out in order,
  * renumber), checked live with the same rules the server applies, and saves them.
  */
-export function RunsEditor({ wall, canEdit }: { wall: WallPlanView; canEdit: boolean }) {
+export function RunsEditor({ wall, canEdit }: { wall: WallDetail; canEdit: boolean }) {
   const { settings: storedSettings, stored: settingsStored } = useMemo(() => settingsOfWall(wall), [wall]);
   const limits = useMemo(
     () => ({ data: limitsOfWall(wall, 'data', storedSettings), power: limitsOfWall(wall, 'power', storedSettings) }),

@@ -6,7 +6,6 @@ import { Button, ButtonLink } from '@/components/ui/button';
 import { Logo } from '@/components/ui/logo';
 import { WallMap, WallViewToggle } from '@/components/wall-map/wall-map';
 import { paths } from '@/config/paths';
-import type { WallPlanView } from '@/features/planner/api/get-wall-plan';
 import { continuousLoadNote } from '@shared/calc/electrical';
 import { cautions } from '@/features/planner/components/plan-cautions';
 import { RunArrows } from '@/features/planner/components/run-arrows';
@@ -17,6 +16,7 @@ import { num, sizeImperial, sizeMetric } from '@/features/planner/utils/format';
 import { runPatternLabels } from '@/features/planner/utils/planner-form';
 import { kindLabels, limitsOfWall, pathText, runSetOfWall, settingsOfWall } from '@/features/planner/utils/wall-runs';
 import { formatDate } from '@/lib/format';
+import type { WallDetail } from '@shared/schemas/walls';
 
 const mountingLabels: Record<string, string> = {
   ground_stacked: 'Ground-stacked',
@@ -30,7 +30,7 @@ const mountingLabels: Record<string, string> = {
  * with large numbered arrows and a table of each run's cells in order, per kind on its own page,
  * with totals and the cautions. Printed outside the app's shell, so no navigation shows.
  */
-export function RunsSheet({ wall }: { wall: WallPlanView }) {
+export function RunsSheet({ wall }: { wall: WallDetail }) {
   const [view, setView] = useState<'front' | 'rear'>('front');
   const { settings, stored: settingsStored } = useMemo(() => settingsOfWall(wall), [wall]);
   const model = wall.cabinetModel;

@@ -9,9 +9,11 @@ import { SelectBox } from '@/components/ui/select-field';
 import { Spinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { useWallChoices, type WallChoice } from '@/features/planner/api/get-wall-choices';
-import { useSaveWallPlan } from '@/features/planner/api/save-wall-plan';
+import { wallQueries } from '@/resources/walls';
+import { useQuery } from '@tanstack/react-query';
+import { useSaveWallPlan } from '@/features/planner/api/mutations';
 import { errorMessage } from '@/lib/errors';
+import type { WallSummary } from '@shared/schemas/walls';
 
 interface SavePlanDialogProps {
   open: boolean;
@@ -27,7 +29,7 @@ interface SavePlanDialogProps {
   onUseGrid: (columns: number, rows: number) => void;
 }
 
-const choiceLabel = (w: WallChoice) => `${w.clientName} · ${w.siteName} · ${w.name} (${w.columns} × ${w.rows})`;
+const choiceLabel = (w: WallSummary) => `${w.clientName} · ${w.siteName} · ${w.name} (${w.columns} × ${w.rows})`;
 const bare = (runs: Run[]) => runs.map((r) => ({ index: r.index, cells: r.cells.map((c) => ({ column: c.column, row: c.row })) }));
 
 /**
@@ -37,8 +39,9 @@ const bare = (runs: Run[]) => runs.map((r) => ({ index: r.index, cells: r.cells.
 export function SavePlanDialog({ open, onClose, model, columns, rows, settings, dataRuns, powerRuns, onUseGrid }: SavePlanDialogProps) {
   const selectId = useId();
   const [wallId, setWallId] = useState('');
-  const [saved, setSaved] = useState<WallChoice | null>(null);
-  const walls = useWallChoices(open && model ? model.id : null);
+  const [saved, setSaved] = useState<WallSummary | null>(null);
+  // Walls built from the plan's cabinet model, by name.
+  const walls = useQuery({ ...wallQueries.page({ cabinetModelId: model?.id, sort: 'name' }), enabled: open && Boolean(model) });
   const save = useSaveWallPlan();
   const toast = useToast();
   const wall = walls.data?.items.find((w) => w.id === wallId) ?? null;

@@ -10,7 +10,7 @@ import {
   type RunKind,
   type StoredRunPattern,
 } from '@shared/schemas/wall-plan';
-import type { WallPlanView } from '@/features/planner/api/get-wall-plan';
+import type { WallDetail } from '@shared/schemas/walls';
 
 export interface RunSet {
   pattern: StoredRunPattern;
@@ -26,13 +26,13 @@ export interface RunSet {
 export const PROPOSAL_PATTERN: RunPattern = DEFAULT_RUN_PATTERN;
 
 /** The settings the wall was planned with, or the defaults (for its cabinet model, with its controller's output capacity). */
-export function settingsOfWall(wall: Pick<WallPlanView, 'planSettings' | 'controllers' | 'cabinetModel'>): { settings: PlanSettings; stored: boolean } {
+export function settingsOfWall(wall: Pick<WallDetail, 'planSettings' | 'controllers' | 'cabinetModel'>): { settings: PlanSettings; stored: boolean } {
   if (wall.planSettings) return { settings: wall.planSettings, stored: true };
   const controller = wall.controllers[0];
   return { settings: defaultPlanSettings(wall.cabinetModel, controller?.pixelsPerOutput), stored: false };
 }
 
-export const limitsOfWall = <K extends RunKind>(wall: Pick<WallPlanView, 'cabinetModel'>, kind: K, settings: PlanSettings) =>
+export const limitsOfWall = <K extends RunKind>(wall: Pick<WallDetail, 'cabinetModel'>, kind: K, settings: PlanSettings) =>
   runLimitsFor(kind, wall.cabinetModel, settings);
 
 /** Runs with their loads recomputed (pixels or watts), as the legend and the print show them. */
@@ -48,7 +48,7 @@ export function proposeRuns(columns: number, rows: number, pattern: RunPattern, 
 const asPattern = (p: string): StoredRunPattern => ((storedRunPatterns as readonly string[]).includes(p) ? (p as StoredRunPattern) : 'custom');
 
 /** The wall's data or power runs: stored, or proposed. */
-export function runSetOfWall(wall: WallPlanView, kind: RunKind, settings: PlanSettings): RunSet {
+export function runSetOfWall(wall: WallDetail, kind: RunKind, settings: PlanSettings): RunSet {
   const stored = kind === 'data' ? wall.dataRuns : wall.powerRuns;
   const limits = limitsOfWall(wall, kind, settings);
   if (stored) return { pattern: asPattern(stored.pattern), runs: withLoads(stored.runs, limits), stored: true };

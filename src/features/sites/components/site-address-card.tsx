@@ -1,6 +1,6 @@
 import { Clock, MapPin } from 'lucide-react';
 import { Card } from '@/components/ui/card';
-import type { SiteDetail } from '@/features/sites/api/types';
+import type { SiteDetail } from '@shared/schemas/sites';
 import { localTime, utcOffset } from '@/features/sites/components/site-time';
 
 /** Address and the site's time zone with its local time now. */

@@ -11,9 +11,9 @@ import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { useCreateSite } from '@/features/sites/api/create-site';
-import type { SiteDetail } from '@/features/sites/api/types';
-import { useUpdateSite } from '@/features/sites/api/update-site';
+import { useCreateSite } from '@/features/sites/api/mutations';
+import type { SiteDetail } from '@shared/schemas/sites';
+import { useUpdateSite } from '@/features/sites/api/mutations';
 import { localTime } from '@/features/sites/components/site-time';
 
 /** Every IANA time zone the browser knows, plus UTC (the server accepts the same list). */

@@ -7,10 +7,11 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import type { SelectOption } from '@/components/ui/select-field';
 import { paths } from '@/config/paths';
-import { useSitesList } from '@/features/sites/api/get-sites';
-import type { SiteFilters } from '@/features/sites/api/keys';
-import type { SiteSummary } from '@/features/sites/api/types';
+import type { SiteFilters } from '@/resources/sites';
+import type { SiteSummary } from '@shared/schemas/sites';
 import { formatDate } from '@/lib/format';
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
+import { siteQueries } from '@/resources/sites';
 
 const column = createColumnHelper<SiteSummary>();
 const sortable = ['name', 'city', 'createdAt'] as const;
@@ -27,7 +28,7 @@ interface SitesTableProps {
 
 /** Every site of the register: search by site, city or client; sort by name, city or date added. */
 export function SitesTable({ filters, onFiltersChange, staff, clientOptions }: SitesTableProps) {
-  const query = useSitesList(filters);
+  const query = useInfiniteQuery({ ...siteQueries.list(filters), placeholderData: keepPreviousData });
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
 
   const columns = useMemo(

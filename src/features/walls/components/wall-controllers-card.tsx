@@ -2,7 +2,7 @@ import { Cpu } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
-import type { WallDetail } from '@/features/walls/api/types';
+import type { WallDetail } from '@shared/schemas/walls';
 import { wholeUnitsWithin } from '@shared/calc/electrical';
 
 /** The controllers driving the wall, and whether their outputs cover the wall's pixels. */

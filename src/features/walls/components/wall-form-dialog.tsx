@@ -14,9 +14,9 @@ import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { useCreateWall } from '@/features/walls/api/create-wall';
-import type { WallDetail } from '@/features/walls/api/types';
-import { useUpdateWall } from '@/features/walls/api/update-wall';
+import { useCreateWall } from '@/features/walls/api/mutations';
+import type { WallDetail } from '@shared/schemas/walls';
+import { useUpdateWall } from '@/features/walls/api/mutations';
 import { mountingOptions } from '@/features/walls/components/wall-labels';
 
 /** What the form needs of a catalogue model to show the wall's size as it is typed. */

@@ -1,7 +1,7 @@
 import { measureWall, type WallMeasures } from '@shared/calc/wall-plan';
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
-import type { WallDetail } from '@/features/walls/api/types';
+import type { WallDetail } from '@shared/schemas/walls';
 import { StructureCaution } from '@/features/walls/components/service-caution';
 import { mountingLabels } from '@/features/walls/components/wall-labels';
 import { formatDate } from '@/lib/format';

@@ -2,7 +2,7 @@ import { ChevronRight, MapPin } from 'lucide-react';
 import { Link } from 'react-router-dom';
 import { StatusPill } from '@/components/ui/badge';
 import { paths } from '@/config/paths';
-import type { WallSummary } from '@/features/walls/api/types';
+import type { WallSummary } from '@shared/schemas/walls';
 
 interface SiteGroup {
   id: string;

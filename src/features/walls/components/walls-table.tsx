@@ -7,12 +7,13 @@ import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch } from '@/components/ui/filters';
 import { paths } from '@/config/paths';
-import { useWalls } from '@/features/walls/api/get-walls';
-import type { WallFilters } from '@/features/walls/api/keys';
-import type { WallSummary } from '@/features/walls/api/types';
-import { PlaceFilters, type PlaceFilterOptions } from '@/features/sites/components/place-filters';
+import type { WallFilters } from '@/resources/walls';
+import type { WallSummary } from '@shared/schemas/walls';
+import { PlaceFilters, type PlaceFilterOptions } from '@/components/ui/place-filters';
 import { mountingLabels } from '@/features/walls/components/wall-labels';
 import { formatDate } from '@/lib/format';
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
+import { wallQueries } from '@/resources/walls';
 
 const column = createColumnHelper<WallSummary>();
 
@@ -25,7 +26,7 @@ interface WallsTableProps {
 
 /** Every wall of the register, filtered by client, site and cabinet model; search by name. */
 export function WallsTable({ filters, onFiltersChange, filterOptions, emptyAction }: WallsTableProps) {
-  const query = useWalls(filters);
+  const query = useInfiniteQuery({ ...wallQueries.list(filters), placeholderData: keepPreviousData });
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
 
   const columns = useMemo(

@@ -1,0 +1,68 @@
+// The walls resource: what the API answers with, including a wall's cabinets as the wall map
+// draws them (GET /api/walls/:id/cabinets).
+import type { CabinetModel } from './cabinet-models.js';
+import type { Controller } from './controllers.js';
+import type { CabinetStatus, Mounting } from './enums.js';
+import type { StoredPlanSettings, StoredWallRuns } from './wall-plan.js';
+
+export interface WallSummary {
+  id: string;
+  name: string;
+  clientId: string;
+  clientName: string;
+  siteId: string;
+  siteName: string;
+  columns: number;
+  rows: number;
+  cabinetCount: number;
+  mounting: Mounting;
+  installDate: string | null;
+  warrantyEnd: string | null;
+  cabinetModel: { id: string; name: string; pixelPitchMm: number };
+  openTicketCount: number;
+}
+
+/** A controller as the wall page lists it (the catalogue's controller, fewer fields). */
+export type WallController = Pick<Controller, 'id' | 'model' | 'serial' | 'firmware' | 'outputs' | 'outputsInUse' | 'pixelsPerOutput'>;
+
+export interface WallDetail {
+  id: string;
+  name: string;
+  clientId: string;
+  clientName: string;
+  siteId: string;
+  siteName: string;
+  siteTimeZone: string;
+  columns: number;
+  rows: number;
+  mounting: Mounting;
+  installDate: string | null;
+  warrantyEnd: string | null;
+  calibrationDate: string | null;
+  inputNotes: string;
+  /** Staff only. */
+  internalNotes?: string;
+  /** The catalogue figures of the wall's cabinet model. */
+  cabinetModel: CabinetModel;
+  controllers: WallController[];
+  /** The supply and capacities the runs were planned with; null until a plan is saved. */
+  planSettings: StoredPlanSettings | null;
+  dataRuns: StoredWallRuns | null;
+  powerRuns: StoredWallRuns | null;
+  installedCabinets: number;
+  openTicketCount: number;
+  archived: boolean;
+}
+
+/** One cabinet on a wall, as the wall map needs it. */
+export interface WallCabinet {
+  id: string;
+  serial: string;
+  column: number;
+  row: number;
+  batch: string;
+  status: CabinetStatus;
+  installedOn: string | null;
+  /** Open tickets that name this cell. */
+  openTickets: number;
+}
