@@ -1,3 +1,5 @@
+import type { CabinetDetail, CabinetEvent, CabinetSummary } from '../../shared/schemas/cabinets.js';
+import type { Page } from '../../shared/schemas/common.js';
 import Papa from 'papaparse';
 import { aliasedTable, and, desc, eq, inArray, like, sql } from 'drizzle-orm';
 import type { PgSelect } from 'drizzle-orm/pg-core';
@@ -62,7 +64,7 @@ function cabinetCursor(query: ListCabinetsQuery) {
  * The cabinets of the register, on walls and (for staff) in stock. Sorted by serial, batch or
  * install date (cabinets never installed come last either way), the id breaking ties.
  */
-export async function listCabinets(actor: Actor, query: ListCabinetsQuery) {
+export async function listCabinets(actor: Actor, query: ListCabinetsQuery): Promise<Page<CabinetSummary>> {
   const cursor = cabinetCursor(query);
   const sortColumn = query.sort === 'batch' ? cabinets.batch : query.sort === 'installedOn' ? cabinets.installedOn : cabinets.serial;
   const rows = await withWhereabouts(db()
@@ -107,7 +109,7 @@ export async function listCabinets(actor: Actor, query: ListCabinetsQuery) {
   const page = pageOf(rows, query.limit, (r) => [query.sort === 'batch' ? r.batch : query.sort === 'installedOn' ? r.installedOn : r.serial, r.id]);
   const staff = isStaff(actor);
   return {
-    items: page.items.map((r) => ({
+    items: page.items.map((r): CabinetSummary => ({
       id: r.id,
       serial: r.serial,
       status: r.status,
@@ -131,7 +133,7 @@ export async function listCabinets(actor: Actor, query: ListCabinetsQuery) {
 }
 
 /** A cabinet with its model, where it is, and its whole history. By id or by serial. */
-export async function getCabinet(actor: Actor, by: { id: string } | { serial: string }) {
+export async function getCabinet(actor: Actor, by: { id: string } | { serial: string }): Promise<CabinetDetail> {
   const [row] = await withWhereabouts(db()
     .select({
       cabinet: cabinets,
@@ -194,12 +196,31 @@ export async function getCabinet(actor: Actor, by: { id: string } | { serial: st
     row: c.row,
     position: c.column && c.row ? positionLabel({ column: c.column, row: c.row }) : null,
     stockLocation: isStaff(actor) && c.stockLocationId ? { id: c.stockLocationId, name: r.locationName ?? '' } : null,
-    history: events.map((e) => ({
-      ...e,
-      // Client users see what happened, not who on the staff did it.
-      actorName: isStaff(actor) ? e.actorName : null,
-      createdAt: e.createdAt.toISOString(),
-    })),
+    // Client users see what happened, not who on the staff did it.
+    history: events.map((e) => presentEvent(e, isStaff(actor))),
+  } satisfies CabinetDetail;
+}
+
+/** One event of a cabinet's history; the actor's name for staff only. */
+function presentEvent(e: Omit<CabinetEvent, 'createdAt'> & { createdAt: Date }, staff: boolean): CabinetEvent {
+  return {
+    id: e.id,
+    kind: e.kind,
+    fromWallId: e.fromWallId,
+    fromWallName: e.fromWallName,
+    fromColumn: e.fromColumn,
+    fromRow: e.fromRow,
+    toWallId: e.toWallId,
+    toWallName: e.toWallName,
+    toColumn: e.toColumn,
+    toRow: e.toRow,
+    otherSerial: e.otherSerial,
+    repairId: e.repairId,
+    fromStatus: e.fromStatus,
+    toStatus: e.toStatus,
+    note: e.note,
+    actorName: staff ? e.actorName : null,
+    createdAt: e.createdAt.toISOString(),
   };
 }
 

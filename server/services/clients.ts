@@ -1,3 +1,5 @@
+import type { ClientDetail, ClientSummary, Contact, ServicePlan } from '../../shared/schemas/clients.js';
+import type { Page } from '../../shared/schemas/common.js';
 import { and, asc, desc, eq, ilike, isNotNull, isNull, notInArray, sql } from 'drizzle-orm';
 import type { AnyPgColumn } from 'drizzle-orm/pg-core';
 import type { ClientInput, ClientPatch, ContactInput, ContactPatch, ListClientsQuery } from '../../shared/schemas/register.js';
@@ -21,7 +23,7 @@ export function orderFor(column: AnyPgColumn, id: AnyPgColumn, dir: 'asc' | 'des
 export const cursorValue = (v: unknown) => (v instanceof Date ? v.toISOString() : v);
 
 
-export async function listClients(actor: Actor, query: ListClientsQuery) {
+export async function listClients(actor: Actor, query: ListClientsQuery): Promise<Page<ClientSummary>> {
   const sortColumn = query.sort === 'createdAt' ? clients.createdAt : clients.name;
   const rows = await db()
     .select({
@@ -48,22 +50,38 @@ export async function listClients(actor: Actor, query: ListClientsQuery) {
     .orderBy(...orderFor(sortColumn, clients.id, query.dir))
     .limit(query.limit + 1);
   const page = pageOf(rows, query.limit, (r) => [cursorValue(query.sort === 'createdAt' ? r.createdAt : r.name), r.id]);
+  return { items: page.items.map(presentClientRow), nextCursor: page.nextCursor };
+}
+
+/** A row of the clients list. */
+function presentClientRow(r: {
+  id: string;
+  name: string;
+  servicePlanId: string | null;
+  servicePlanName: string | null;
+  siteCount: number;
+  wallCount: number;
+  openTicketCount: number;
+  archivedAt: Date | null;
+  createdAt: Date;
+}): ClientSummary {
   return {
-    items: page.items.map((r) => ({
-      id: r.id,
-      name: r.name,
-      servicePlan: r.servicePlanId ? { id: r.servicePlanId, name: r.servicePlanName ?? '' } : null,
-      siteCount: r.siteCount,
-      wallCount: r.wallCount,
-      openTicketCount: r.openTicketCount,
-      archived: r.archivedAt !== null,
-      createdAt: r.createdAt.toISOString(),
-    })),
-    nextCursor: page.nextCursor,
+    id: r.id,
+    name: r.name,
+    servicePlan: r.servicePlanId ? { id: r.servicePlanId, name: r.servicePlanName ?? '' } : null,
+    siteCount: r.siteCount,
+    wallCount: r.wallCount,
+    openTicketCount: r.openTicketCount,
+    archived: r.archivedAt !== null,
+    createdAt: r.createdAt.toISOString(),
   };
 }
 
-function presentContact(c: typeof contacts.$inferSelect) {
+export function presentServicePlan(p: typeof servicePlans.$inferSelect): ServicePlan {
+  return { id: p.id, name: p.name, clockMode: p.clockMode, businessDays: p.businessDays, dayStart: p.dayStart, dayEnd: p.dayEnd, targets: p.targets };
+}
+
+function presentContact(c: typeof contacts.$inferSelect): Contact {
   return {
     id: c.id,
     clientId: c.clientId,
@@ -76,7 +94,7 @@ function presentContact(c: typeof contacts.$inferSelect) {
   };
 }
 
-export async function getClient(actor: Actor, id: string) {
+export async function getClient(actor: Actor, id: string): Promise<ClientDetail> {
   const [row] = await db()
     .select({ client: clients, plan: servicePlans })
     .from(clients)
@@ -99,15 +117,13 @@ export async function getClient(actor: Actor, id: string) {
   return {
     id: client.id,
     name: client.name,
-    servicePlan: plan
-      ? { id: plan.id, name: plan.name, clockMode: plan.clockMode, businessDays: plan.businessDays, dayStart: plan.dayStart, dayEnd: plan.dayEnd, targets: plan.targets }
-      : null,
+    servicePlan: plan ? presentServicePlan(plan) : null,
     ...(isStaff(actor) ? { notes: client.notes } : {}),
     archived: client.archivedAt !== null,
     contacts: contactRows.map(presentContact),
-    sites: siteRows,
+    sites: siteRows.map((r) => ({ id: r.id, name: r.name, city: r.city, region: r.region, timeZone: r.timeZone, wallCount: r.wallCount })),
     createdAt: client.createdAt.toISOString(),
-  };
+  } satisfies ClientDetail;
 }
 
 async function assertPlan(tx: DbOrTx, id: string | null | undefined) {
@@ -142,19 +158,9 @@ export async function updateClient(actor: Actor, id: string, input: ClientPatch)
   return getClient(actor, id);
 }
 
-export async function listServicePlans() {
+export async function listServicePlans(): Promise<{ items: ServicePlan[] }> {
   const rows = await db().select().from(servicePlans).orderBy(asc(servicePlans.name));
-  return {
-    items: rows.map((p) => ({
-      id: p.id,
-      name: p.name,
-      clockMode: p.clockMode,
-      businessDays: p.businessDays,
-      dayStart: p.dayStart,
-      dayEnd: p.dayEnd,
-      targets: p.targets,
-    })),
-  };
+  return { items: rows.map(presentServicePlan) };
 }
 
 // ---- contacts ----

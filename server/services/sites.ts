@@ -1,5 +1,7 @@
 import { and, eq, ilike, isNull, or } from 'drizzle-orm';
+import type { Page } from '../../shared/schemas/common.js';
 import type { ListSitesQuery, SiteInput, SitePatch } from '../../shared/schemas/register.js';
+import type { SiteContact, SiteDetail, SiteSummary } from '../../shared/schemas/sites.js';
 import { db } from '../db/client.js';
 import { clients, contacts, sites } from '../db/schema/clients.js';
 import { walls } from '../db/schema/walls.js';
@@ -11,7 +13,7 @@ import { cursorValue, likePattern, orderFor } from './clients.js';
 import { afterCursor, decodeCursor, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 
-export async function listSites(actor: Actor, query: ListSitesQuery) {
+export async function listSites(actor: Actor, query: ListSitesQuery): Promise<Page<SiteSummary>> {
   const sortColumn = query.sort === 'city' ? sites.city : query.sort === 'createdAt' ? sites.createdAt : sites.name;
   const pattern = query.q ? likePattern(query.q) : undefined;
   const rows = await db()
@@ -42,10 +44,31 @@ export async function listSites(actor: Actor, query: ListSitesQuery) {
     .limit(query.limit + 1);
   const key = (r: (typeof rows)[number]) => [cursorValue(query.sort === 'city' ? r.city : query.sort === 'createdAt' ? r.createdAt : r.name), r.id];
   const page = pageOf(rows, query.limit, key);
-  return { items: page.items.map(({ createdAt, ...r }) => ({ ...r, createdAt: createdAt.toISOString() })), nextCursor: page.nextCursor };
+  return { items: page.items.map(presentSiteRow), nextCursor: page.nextCursor };
 }
 
-export async function getSite(actor: Actor, id: string) {
+/** A row of the sites list. */
+function presentSiteRow(r: Omit<SiteSummary, 'createdAt'> & { createdAt: Date }): SiteSummary {
+  return {
+    id: r.id,
+    clientId: r.clientId,
+    clientName: r.clientName,
+    name: r.name,
+    city: r.city,
+    region: r.region,
+    country: r.country,
+    timeZone: r.timeZone,
+    wallCount: r.wallCount,
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
+/** A contact as a site page lists it: the site's own and the organisation's. */
+function presentSiteContact(c: typeof contacts.$inferSelect): SiteContact {
+  return { id: c.id, name: c.name, title: c.title, email: c.email, phone: c.phone, siteId: c.siteId, receivesUpdates: c.receivesUpdates };
+}
+
+export async function getSite(actor: Actor, id: string): Promise<SiteDetail> {
   const [row] = await db()
     .select({ site: sites, clientName: clients.name })
     .from(sites)
@@ -75,9 +98,9 @@ export async function getSite(actor: Actor, id: string) {
     accessNotes: site.accessNotes,
     ...(isStaff(actor) ? { internalNotes: site.internalNotes } : {}),
     archived: site.archivedAt !== null,
-    contacts: siteContacts.map((c) => ({ id: c.id, name: c.name, title: c.title, email: c.email, phone: c.phone, siteId: c.siteId, receivesUpdates: c.receivesUpdates })),
-    walls: siteWalls,
-  };
+    contacts: siteContacts.map(presentSiteContact),
+    walls: siteWalls.map((w) => ({ id: w.id, name: w.name, columns: w.columns, rows: w.rows, mounting: w.mounting })),
+  } satisfies SiteDetail;
 }
 
 export async function createSite(actor: Actor, input: SiteInput) {

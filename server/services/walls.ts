@@ -1,5 +1,7 @@
 import { and, asc, eq, ilike, isNull, notInArray, or, sql } from 'drizzle-orm';
+import type { Page } from '../../shared/schemas/common.js';
 import type { ListWallsQuery, WallInput, WallPatch } from '../../shared/schemas/register.js';
+import type { WallCabinet, WallController, WallDetail, WallSummary } from '../../shared/schemas/walls.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { clients, sites } from '../db/schema/clients.js';
 import { tickets } from '../db/schema/tickets.js';
@@ -14,7 +16,7 @@ import { afterCursor, decodeCursor, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 
 
-export async function listWalls(actor: Actor, query: ListWallsQuery) {
+export async function listWalls(actor: Actor, query: ListWallsQuery): Promise<Page<WallSummary>> {
   const sortColumn = query.sort === 'createdAt' ? walls.createdAt : walls.name;
   const pattern = query.q ? likePattern(query.q) : undefined;
   const rows = await db()
@@ -55,7 +57,7 @@ export async function listWalls(actor: Actor, query: ListWallsQuery) {
     .limit(query.limit + 1);
   const page = pageOf(rows, query.limit, (r) => [cursorValue(query.sort === 'name' ? r.name : r.createdAt), r.id]);
   return {
-    items: page.items.map((r) => ({
+    items: page.items.map((r): WallSummary => ({
       id: r.id,
       name: r.name,
       clientId: r.clientId,
@@ -81,7 +83,7 @@ export async function visibleWall(tx: DbOrTx, actor: Actor, id: string) {
   return found(wall, 'Wall');
 }
 
-export async function getWall(actor: Actor, id: string) {
+export async function getWall(actor: Actor, id: string): Promise<WallDetail> {
   const [row] = await db()
     .select({ wall: walls, model: cabinetModels, siteName: sites.name, siteTimeZone: sites.timeZone, clientName: clients.name })
     .from(walls)
@@ -119,22 +121,19 @@ export async function getWall(actor: Actor, id: string) {
     inputNotes: wall.inputNotes,
     ...(isStaff(actor) ? { internalNotes: wall.internalNotes } : {}),
     cabinetModel: presentModel(model),
-    controllers: wallControllers.map((c) => ({
-      id: c.id,
-      model: c.model,
-      serial: c.serial,
-      firmware: c.firmware,
-      outputs: c.outputs,
-      outputsInUse: c.outputsInUse,
-      pixelsPerOutput: c.pixelsPerOutput,
-    })),
+    controllers: wallControllers.map(presentWallController),
     planSettings: wall.planSettings,
     dataRuns: wall.dataRuns,
     powerRuns: wall.powerRuns,
     installedCabinets: counts?.installed ?? 0,
     openTicketCount: counts?.openTickets ?? 0,
     archived: wall.archivedAt !== null,
-  };
+  } satisfies WallDetail;
+}
+
+/** A controller as the wall page lists it. */
+function presentWallController(c: typeof controllers.$inferSelect): WallController {
+  return { id: c.id, model: c.model, serial: c.serial, firmware: c.firmware, outputs: c.outputs, outputsInUse: c.outputsInUse, pixelsPerOutput: c.pixelsPerOutput };
 }
 
 async function assertModel(tx: DbOrTx, id: string | undefined) {
@@ -172,7 +171,7 @@ export async function updateWall(actor: Actor, id: string, input: WallPatch) {
 }
 
 /** Every cabinet on the wall, for the wall map, with how many open tickets name its cell. */
-export async function wallCabinets(actor: Actor, id: string) {
+export async function wallCabinets(actor: Actor, id: string): Promise<{ items: WallCabinet[] }> {
   await visibleWall(db(), actor, id);
   const [rows, open] = await Promise.all([
     db()
@@ -195,5 +194,18 @@ export async function wallCabinets(actor: Actor, id: string) {
   ]);
   const perCell = new Map<string, number>();
   for (const t of open) for (const c of t.cells) perCell.set(`${c.column}:${c.row}`, (perCell.get(`${c.column}:${c.row}`) ?? 0) + 1);
-  return { items: rows.map((r) => ({ ...r, column: r.column!, row: r.row!, openTickets: perCell.get(`${r.column}:${r.row}`) ?? 0 })) };
+  return {
+    items: rows.map(
+      (r): WallCabinet => ({
+        id: r.id,
+        serial: r.serial,
+        column: r.column!,
+        row: r.row!,
+        batch: r.batch,
+        status: r.status,
+        installedOn: r.installedOn,
+        openTickets: perCell.get(`${r.column}:${r.row}`) ?? 0,
+      }),
+    ),
+  };
 }
