@@ -1,6 +1,3 @@
-import { cabinetsPerRun, generateRuns, runPatterns, type Run, type RunPattern } from '@shared/calc/runs';
-import { planWall } from '@shared/calc/wall-plan';
-import { runLimitsFor, type PlanSettings, type RunKind } from '@shared/schemas/wall-plan';
 import { Save } from 'lucide-react';
 import { useMemo, useState } from 'react';
 import { useWatch } from 'react-hook-form';
@@ -11,25 +8,18 @@ import { Card } from '@/components/ui/card';
 import { Form, useZodForm } from '@/components/ui/form';
 import { PageHeader } from '@/components/ui/page-header';
 import { PlanFigures } from '@/features/planner/components/plan-figures';
-import { cabinetFromModel, CabinetInputs, GridInputs, SupplyInputs } from '@/features/planner/components/planner-inputs';
+import { PlanNeeds } from '@/features/planner/components/plan-needs';
+import { CabinetInputs, GridInputs, SupplyInputs } from '@/features/planner/components/planner-inputs';
 import { PlannerRuns } from '@/features/planner/components/runs-panel';
 import { SavePlanDialog } from '@/features/planner/components/save-plan-dialog';
-import {
-  cabinetOf,
-  defaultPlannerValues,
-  inputOf,
-  patternsOf,
-  planInputOf,
-  plannerFormSchema,
-  type PlannerFormInput,
-} from '@/features/planner/utils/planner-form';
+import { planResult } from '@/features/planner/utils/plan-result';
+import { defaultPlannerValues, inputOf, plannerFormSchema, valuesFromWall, type PlannerFormInput } from '@/features/planner/utils/planner-form';
 import { num } from '@/features/planner/utils/format';
 import { requireUser, staff } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { useQuery } from '@tanstack/react-query';
-import type { WallDetail } from '@shared/schemas/walls';
 import { cabinetModelQueries } from '@/resources/cabinet-models';
 import { wallQueries } from '@/resources/walls';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
@@ -50,46 +40,6 @@ export async function loader({ request }: LoaderFunctionArgs) {
   return null;
 }
 
-const patternOf = (stored: { pattern: string } | null, fallback: RunPattern): RunPattern =>
-  stored && (runPatterns as readonly string[]).includes(stored.pattern) ? (stored.pattern as RunPattern) : fallback;
-
-/** The form filled in from a wall of the register: its model, grid, stored settings and run patterns. */
-function valuesFromWall(wall: WallDetail): PlannerFormInput {
-  const settings = wall.planSettings;
-  const controller = wall.controllers[0];
-  return {
-    ...defaultPlannerValues,
-    modelId: wall.cabinetModel.id,
-    cabinet: cabinetFromModel(wall.cabinetModel),
-    columns: wall.columns,
-    rows: wall.rows,
-    ...(settings
-      ? {
-          supply: { ...settings.supply, powerFactor: settings.supply.powerFactor ?? Number.NaN },
-          outputCapacityPixels: settings.outputCapacityPixels,
-        }
-      : controller
-        ? { outputCapacityPixels: controller.pixelsPerOutput }
-        : {}),
-    processorOutputs: controller?.outputs ?? Number.NaN,
-    dataPattern: patternOf(wall.dataRuns, defaultPlannerValues.dataPattern as RunPattern),
-    powerPattern: patternOf(wall.powerRuns, defaultPlannerValues.powerPattern as RunPattern),
-  };
-}
-
-const fieldNames: Record<string, string> = {
-  cabinet: 'Cabinet',
-  columns: 'Columns',
-  rows: 'Rows',
-  target: 'Target size',
-  supply: 'Supply',
-  outputCapacityPixels: 'Output capacity',
-  input: 'Input',
-  processorOutputs: 'Processor outputs',
-  dataCableToWallM: 'Data cable',
-  cardsPerCabinet: 'Receiving cards',
-};
-
 export function Component() {
   useDocumentTitle('Planner');
   const user = useUser();
@@ -103,23 +53,7 @@ export function Component() {
   const parsed = useMemo(() => plannerFormSchema.safeParse(values), [values]);
   const [saving, setSaving] = useState(false);
 
-  const result = useMemo(() => {
-    if (!parsed.success) return null;
-    const v = parsed.data;
-    const input = planInputOf(v);
-    const plan = planWall(input);
-    const patterns = patternsOf(v);
-    // The chain's limit as the plan worked it out: circuit, connector and maker's count.
-    const settings: PlanSettings = { supply: input.supply, outputCapacityPixels: input.outputCapacityPixels, chainCapacityW: plan.chainLimitW };
-    const cabinet = cabinetOf(v);
-    const limits = { data: runLimitsFor('data', cabinet, settings), power: runLimitsFor('power', cabinet, settings) };
-    // The schema refuses a cabinet over either limit, so every run holds at least one cabinet.
-    const runs: Record<RunKind, Run[]> = {
-      data: cabinetsPerRun(limits.data) >= 1 ? generateRuns(v.columns, v.rows, patterns.data, limits.data) : [],
-      power: cabinetsPerRun(limits.power) >= 1 ? generateRuns(v.columns, v.rows, patterns.power, limits.power) : [],
-    };
-    return { v, plan, patterns, settings, limits, runs };
-  }, [parsed]);
+  const result = useMemo(() => (parsed.success ? planResult(parsed.data) : null), [parsed]);
 
   const modelList = models.data?.items ?? [];
   const model = result ? modelList.find((m) => m.id === result.v.modelId) : undefined;
@@ -165,15 +99,7 @@ export function Component() {
                 input={inputOf(result.v)}
               />
             ) : (
-              <Alert tone="info" title="The plan needs:" live={false}>
-                <ul className="list-disc space-y-0.5 pl-5">
-                  {(parsed.error?.issues ?? []).slice(0, 8).map((issue, i) => (
-                    <li key={i}>
-                      {fieldNames[String(issue.path[0])] ?? 'A field'}: {issue.message}
-                    </li>
-                  ))}
-                </ul>
-              </Alert>
+              <PlanNeeds issues={parsed.error?.issues ?? []} />
             )}
           </Card>
 

@@ -10,31 +10,10 @@ import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { ChoiceGroup } from '@/features/planner/components/choice-group';
 import { difference, num, sizeImperial, sizeMetric } from '@/features/planner/utils/format';
-import { gridOptions, inputPresets, type PlannerFormInput } from '@/features/planner/utils/planner-form';
+import { cabinetFromModel, gridOptions, inputPresets, type PlannerFormInput } from '@/features/planner/utils/planner-form';
 
 const numberField = { type: 'number', inputMode: 'decimal', step: 'any', registerOptions: { valueAsNumber: true } } as const;
 const wholeField = { type: 'number', inputMode: 'numeric', step: 1, registerOptions: { valueAsNumber: true } } as const;
-
-const orEmpty = (v: number | null) => v ?? Number.NaN;
-
-/** The catalogue figures a model puts into the form (a figure the datasheet lacks stays empty). */
-export function cabinetFromModel(m: CabinetModel): PlannerFormInput['cabinet'] {
-  return {
-    widthMm: m.widthMm,
-    heightMm: m.heightMm,
-    pixelsWide: m.pixelsWide,
-    pixelsHigh: m.pixelsHigh,
-    maxPowerW: m.maxPowerW,
-    typicalPowerW: m.typicalPowerW,
-    weightKg: m.weightKg,
-    maxPowerVA: orEmpty(m.maxPowerVA),
-    inputVoltageMinV: m.inputVoltageMinV,
-    inputVoltageMaxV: m.inputVoltageMaxV,
-    passThroughAmps: orEmpty(m.passThroughAmps),
-    maxPerChain: orEmpty(m.maxPerChain),
-    receivingCardPixels: Number.NaN,
-  };
-}
 
 /** "15 A connector · at most 12 per chain · 190 VA", or what the datasheet does not say. */
 export function connectionText(m: Pick<CabinetModel, 'passThroughAmps' | 'maxPerChain' | 'maxPowerVA'>): string {

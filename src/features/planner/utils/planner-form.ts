@@ -5,6 +5,8 @@ import { feetToMm } from '@shared/calc/units';
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS, INPUT_FORMATS } from '@shared/calc/video-signal';
 import { nearestGrids, type CabinetSpec, type GridOption, type WallPlanInput } from '@shared/calc/wall-plan';
 import { cabinetSpecInput, supplyInput, wallPlanRequest, type WallPlanRequest } from '@shared/schemas/calc';
+import type { CabinetModel } from '@shared/schemas/cabinet-models';
+import type { WallDetail } from '@shared/schemas/walls';
 import { z } from 'zod';
 
 export const inputPresets = ['hd', 'uhd', 'custom'] as const;
@@ -217,3 +219,51 @@ export const runPatternLabels: Record<(typeof runPatterns)[number], string> = {
   columns: 'Columns',
   serpentine: 'Serpentine',
 };
+
+const orEmpty = (v: number | null) => v ?? Number.NaN;
+
+/** The catalogue figures a model puts into the form (a figure the datasheet lacks stays empty). */
+export function cabinetFromModel(m: CabinetModel): PlannerFormInput['cabinet'] {
+  return {
+    widthMm: m.widthMm,
+    heightMm: m.heightMm,
+    pixelsWide: m.pixelsWide,
+    pixelsHigh: m.pixelsHigh,
+    maxPowerW: m.maxPowerW,
+    typicalPowerW: m.typicalPowerW,
+    weightKg: m.weightKg,
+    maxPowerVA: orEmpty(m.maxPowerVA),
+    inputVoltageMinV: m.inputVoltageMinV,
+    inputVoltageMaxV: m.inputVoltageMaxV,
+    passThroughAmps: orEmpty(m.passThroughAmps),
+    maxPerChain: orEmpty(m.maxPerChain),
+    receivingCardPixels: Number.NaN,
+  };
+}
+
+const patternOf = (stored: { pattern: string } | null, fallback: RunPattern): RunPattern =>
+  stored && (runPatterns as readonly string[]).includes(stored.pattern) ? (stored.pattern as RunPattern) : fallback;
+
+/** The form filled in from a wall of the register: its model, grid, stored settings and run patterns. */
+export function valuesFromWall(wall: WallDetail): PlannerFormInput {
+  const settings = wall.planSettings;
+  const controller = wall.controllers[0];
+  return {
+    ...defaultPlannerValues,
+    modelId: wall.cabinetModel.id,
+    cabinet: cabinetFromModel(wall.cabinetModel),
+    columns: wall.columns,
+    rows: wall.rows,
+    ...(settings
+      ? {
+          supply: { ...settings.supply, powerFactor: settings.supply.powerFactor ?? Number.NaN },
+          outputCapacityPixels: settings.outputCapacityPixels,
+        }
+      : controller
+        ? { outputCapacityPixels: controller.pixelsPerOutput }
+        : {}),
+    processorOutputs: controller?.outputs ?? Number.NaN,
+    dataPattern: patternOf(wall.dataRuns, defaultPlannerValues.dataPattern as RunPattern),
+    powerPattern: patternOf(wall.powerRuns, defaultPlannerValues.powerPattern as RunPattern),
+  };
+}
