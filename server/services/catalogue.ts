@@ -9,7 +9,8 @@ import type {
 } from '../../shared/schemas/register.js';
 import { vaBelowWatts } from '../../shared/schemas/register.js';
 import { db } from '../db/client.js';
-import { cabinetModels, controllers, walls } from '../db/schema/walls.js';
+import { cabinetModels } from '../db/schema/catalogue.js';
+import { controllers, walls } from '../db/schema/walls.js';
 import { badRequest, validationFailed } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';

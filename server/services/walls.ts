@@ -1,9 +1,10 @@
 import { and, asc, eq, ilike, isNull, notInArray, or, sql } from 'drizzle-orm';
 import type { ListWallsQuery, WallInput, WallPatch } from '../../shared/schemas/register.js';
 import { db, type DbOrTx } from '../db/client.js';
+import { cabinetModels } from '../db/schema/catalogue.js';
 import { clients, sites } from '../db/schema/clients.js';
 import { tickets } from '../db/schema/tickets.js';
-import { cabinetModels, cabinets, controllers, walls } from '../db/schema/walls.js';
+import { cabinets, controllers, walls } from '../db/schema/walls.js';
 import { badRequest } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
