@@ -30,7 +30,7 @@ async function main() {
     running = await startServer({ port, host });
   } catch (err) {
     if ((err as NodeJS.ErrnoException).code === 'EADDRINUSE') {
-      throw new Error(`Port ${port} on ${host} is in use: stop what uses it, or start with PORT=<another port>.`);
+      throw new Error(`Port ${port} on ${host} is in use: stop what uses it, or start with PORT=<another port>.`, { cause: err });
     }
     throw err;
   }

@@ -1,6 +1,7 @@
 // The local S3 fake: s3rver on loopback, keeping objects on disk so they survive a restart.
 // Used by `npm start` / `npm run dev` (data in .data/s3) and by integration tests (a temp folder).
 import fs from 'node:fs';
+import type { Server as HttpServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
@@ -46,7 +47,7 @@ export async function startS3Fake(options: S3FakeOptions = {}): Promise<S3Fake> 
     if (stopped) return;
     stopped = true;
     // Drop keep-alive sockets so close() does not wait for the SDK's idle connections.
-    const http = (server as unknown as { httpServer?: import('node:http').Server }).httpServer;
+    const http = (server as unknown as { httpServer?: HttpServer }).httpServer;
     const closing = server.close();
     http?.closeAllConnections();
     await closing;

@@ -54,10 +54,17 @@ const defaults = {
  * OWASP ASVS 5.0 1.3.11). Other control characters go too; runs of white space become one.
  */
 export function sanitiseHeaderValue(value: string): string {
-  return value
-    .replace(/[\r\n\u0000-\u001f\u007f\u2028\u2029]+/g, ' ')
+  // Each such character becomes a space; the runs of white space they leave then become one.
+  return Array.from(value, (char) => (breaksHeader(char) ? ' ' : char))
+    .join('')
     .replace(/\s{2,}/g, ' ')
     .trim();
+}
+
+/** An ASCII control character (U+0000–U+001F, U+007F; CR and LF among them), or U+2028 / U+2029. */
+function breaksHeader(char: string): boolean {
+  const code = char.charCodeAt(0);
+  return code < 0x20 || code === 0x7f || code === 0x2028 || code === 0x2029;
 }
 
 const singleAddress = /^[^\s@<>()[\]\\,;:"]+@[^\s@<>()[\]\\,;:"]+\.[^\s@<>()[\]\\,;:"]+$/;

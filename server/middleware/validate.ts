@@ -25,37 +25,46 @@ interface Schemas {
   params?: z.ZodType;
 }
 
-declare module 'express-serve-static-core' {
-  interface Request {
-    /** What validate() parsed: read it instead of req.body / req.query. */
-    valid: { body?: unknown; query?: unknown; params?: unknown };
-  }
-}
+/** What `validated()` hands the handler: each part parsed by its schema. */
+export type Parsed<S extends Schemas> = { [K in keyof S]: S[K] extends z.ZodType ? z.output<S[K]> : never };
+
+/** A route handler that receives the request's parsed input. */
+export type ValidatedHandler<S extends Schemas> = (input: Parsed<S>, req: Request, res: Response) => unknown;
 
 /**
- * Validates the request against shared zod schemas. The parsed (normalised) values are put on
- * `req.valid`; use `req.valid.body as Input` or the typed helpers in each route.
+ * Parses the parts that have a schema (params, then query, then body; a missing part counts as
+ * `{}`) and collects every failing field, so one 400 names them all.
  */
-export function validate(schemas: Schemas): RequestHandler {
+function parseParts<S extends Schemas>(schemas: S, req: Request): { input: Parsed<S> } | { fields: FieldErrors } {
+  const fields: FieldErrors = {};
+  const input: { body?: unknown; query?: unknown; params?: unknown } = {};
+  for (const part of ['params', 'query', 'body'] as const) {
+    const schema = schemas[part];
+    if (!schema) continue;
+    const result = schema.safeParse(req[part] ?? {});
+    if (result.success) input[part] = result.data;
+    else Object.assign(fields, fieldErrors(result.error));
+  }
+  if (Object.keys(fields).length) return { fields };
+  // Each part present in S was parsed by its own schema above, so input holds exactly Parsed<S>.
+  return { input: input as Parsed<S> };
+}
+
+/** What the check of a split validated() route parsed, for its handler (never read by routes). */
+const parsedInput = new WeakMap<Request, unknown>();
+
+/**
+ * Validates the request against shared zod schemas: the 400 that names each failing field, or
+ * the parsed (normalised) input kept for the handler of the same route (see `validated()`).
+ */
+function validate<S extends Schemas>(schemas: S): RequestHandler {
   return (req, _res, next) => {
-    const fields: FieldErrors = {};
-    const valid: Request['valid'] = {};
-    for (const part of ['params', 'query', 'body'] as const) {
-      const schema = schemas[part];
-      if (!schema) continue;
-      const result = schema.safeParse(req[part] ?? {});
-      if (result.success) valid[part] = result.data;
-      else Object.assign(fields, fieldErrors(result.error));
-    }
-    if (Object.keys(fields).length) return next(validationFailed(fields));
-    req.valid = valid;
+    const parsed = parseParts(schemas, req);
+    if ('fields' in parsed) return next(validationFailed(parsed.fields));
+    parsedInput.set(req, parsed.input);
     next();
   };
 }
-
-
-/** What `validated()` hands the handler: each part parsed by its schema. */
-export type Parsed<S extends Schemas> = { [K in keyof S]: S[K] extends z.ZodType ? z.output<S[K]> : never };
 
 /**
  * A route handler that receives its parsed input, typed from the shared schemas: no casts in
@@ -64,16 +73,31 @@ export type Parsed<S extends Schemas> = { [K in keyof S]: S[K] extends z.ZodType
  *   router.patch('/:id', office, validated({ params: idParams, body: wallPatch }, async ({ params, body }, req, res) => {
  *     res.json(await walls.updateWall(actorOf(req), params.id, body));
  *   }));
+ *
+ * With a middleware between the schemas and the handler (an upload), that middleware runs after
+ * the check and before the handler, so a bad id is refused before any file is read:
+ *
+ *   router.post('/:id/attachments', validated({ params: idParams }, singleFile(), async ({ params }, req, res) => { … }));
  */
-export function validated<S extends Schemas>(schemas: S, handler: (input: Parsed<S>, req: Request, res: Response) => unknown): RequestHandler {
-  const check = validate(schemas);
-  return (req, res, next) => {
-    let failed: unknown;
-    check(req, res, (err?: unknown) => {
-      failed = err;
-    });
-    if (failed) return next(failed);
-    // validate() parsed each part with its schema, so req.valid holds exactly Parsed<S>.
-    return handler(req.valid as Parsed<S>, req, res);
+export function validated<S extends Schemas>(schemas: S, handler: ValidatedHandler<S>): RequestHandler;
+export function validated<S extends Schemas>(schemas: S, between: RequestHandler, handler: ValidatedHandler<S>): RequestHandler[];
+export function validated<S extends Schemas>(
+  schemas: S,
+  ...rest: [ValidatedHandler<S>] | [RequestHandler, ValidatedHandler<S>]
+): RequestHandler | RequestHandler[] {
+  if (rest.length === 1) {
+    const [handler] = rest;
+    return (req, res, next) => {
+      const parsed = parseParts(schemas, req);
+      if ('fields' in parsed) return next(validationFailed(parsed.fields));
+      return handler(parsed.input, req, res);
+    };
+  }
+  const [between, handler] = rest;
+  const run: RequestHandler = (req, res) => {
+    const input = parsedInput.get(req) as Parsed<S>; // set by validate(schemas) just before
+    parsedInput.delete(req);
+    return handler(input, req, res);
   };
+  return [validate(schemas), between, run];
 }

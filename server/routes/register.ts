@@ -3,7 +3,7 @@ import { idParams } from '../../shared/schemas/common.js';
 import { officeRoles, staffRoles } from '../../shared/schemas/enums.js';
 import * as s from '../../shared/schemas/register.js';
 import { actorOf, requireAuth, requireRole } from '../middleware/auth.js';
-import { validate } from '../middleware/validate.js';
+import { validated } from '../middleware/validate.js';
 import * as cabinets from '../services/cabinets.js';
 import * as catalogue from '../services/catalogue.js';
 import * as clients from '../services/clients.js';
@@ -11,26 +11,39 @@ import { search } from '../services/search.js';
 import * as sites from '../services/sites.js';
 import * as walls from '../services/walls.js';
 
-// Thin routes: who may call → validate → service. Reads are open to every signed-in user and
+// Thin routes: who may call → validated → service. Reads are open to every signed-in user and
 // scoped by the services (client users see only their organisation); writes are the office's.
 const office = requireRole(...officeRoles);
 const staff = requireRole(...staffRoles);
-const id = (req: { valid: { params?: unknown } }) => (req.valid.params as { id: string }).id;
 
 export const clientsRouter = Router();
 clientsRouter.use(requireAuth);
-clientsRouter.get('/', validate({ query: s.listClientsQuery }), async (req, res) => {
-  res.json(await clients.listClients(actorOf(req), req.valid.query as s.ListClientsQuery));
-});
-clientsRouter.get('/:id', validate({ params: idParams }), async (req, res) => {
-  res.json(await clients.getClient(actorOf(req), id(req)));
-});
-clientsRouter.post('/', office, validate({ body: s.clientInput }), async (req, res) => {
-  res.status(201).json(await clients.createClient(actorOf(req), req.valid.body as s.ClientInput));
-});
-clientsRouter.patch('/:id', office, validate({ params: idParams, body: s.clientPatch }), async (req, res) => {
-  res.json(await clients.updateClient(actorOf(req), id(req), req.valid.body as s.ClientPatch));
-});
+clientsRouter.get(
+  '/',
+  validated({ query: s.listClientsQuery }, async ({ query }, req, res) => {
+    res.json(await clients.listClients(actorOf(req), query));
+  }),
+);
+clientsRouter.get(
+  '/:id',
+  validated({ params: idParams }, async ({ params }, req, res) => {
+    res.json(await clients.getClient(actorOf(req), params.id));
+  }),
+);
+clientsRouter.post(
+  '/',
+  office,
+  validated({ body: s.clientInput }, async ({ body }, req, res) => {
+    res.status(201).json(await clients.createClient(actorOf(req), body));
+  }),
+);
+clientsRouter.patch(
+  '/:id',
+  office,
+  validated({ params: idParams, body: s.clientPatch }, async ({ params, body }, req, res) => {
+    res.json(await clients.updateClient(actorOf(req), params.id, body));
+  }),
+);
 
 export const servicePlansRouter = Router();
 servicePlansRouter.get('/', staff, async (_req, res) => {
@@ -39,99 +52,171 @@ servicePlansRouter.get('/', staff, async (_req, res) => {
 
 export const contactsRouter = Router();
 contactsRouter.use(office);
-contactsRouter.post('/', validate({ body: s.contactInput }), async (req, res) => {
-  res.status(201).json(await clients.createContact(actorOf(req), req.valid.body as s.ContactInput));
-});
-contactsRouter.patch('/:id', validate({ params: idParams, body: s.contactPatch }), async (req, res) => {
-  res.json(await clients.updateContact(actorOf(req), id(req), req.valid.body as s.ContactPatch));
-});
-contactsRouter.delete('/:id', validate({ params: idParams }), async (req, res) => {
-  await clients.deleteContact(actorOf(req), id(req));
-  res.status(204).end();
-});
+contactsRouter.post(
+  '/',
+  validated({ body: s.contactInput }, async ({ body }, req, res) => {
+    res.status(201).json(await clients.createContact(actorOf(req), body));
+  }),
+);
+contactsRouter.patch(
+  '/:id',
+  validated({ params: idParams, body: s.contactPatch }, async ({ params, body }, req, res) => {
+    res.json(await clients.updateContact(actorOf(req), params.id, body));
+  }),
+);
+contactsRouter.delete(
+  '/:id',
+  validated({ params: idParams }, async ({ params }, req, res) => {
+    await clients.deleteContact(actorOf(req), params.id);
+    res.status(204).end();
+  }),
+);
 
 export const sitesRouter = Router();
 sitesRouter.use(requireAuth);
-sitesRouter.get('/', validate({ query: s.listSitesQuery }), async (req, res) => {
-  res.json(await sites.listSites(actorOf(req), req.valid.query as s.ListSitesQuery));
-});
-sitesRouter.get('/:id', validate({ params: idParams }), async (req, res) => {
-  res.json(await sites.getSite(actorOf(req), id(req)));
-});
-sitesRouter.post('/', office, validate({ body: s.siteInput }), async (req, res) => {
-  res.status(201).json(await sites.createSite(actorOf(req), req.valid.body as s.SiteInput));
-});
-sitesRouter.patch('/:id', office, validate({ params: idParams, body: s.sitePatch }), async (req, res) => {
-  res.json(await sites.updateSite(actorOf(req), id(req), req.valid.body as s.SitePatch));
-});
+sitesRouter.get(
+  '/',
+  validated({ query: s.listSitesQuery }, async ({ query }, req, res) => {
+    res.json(await sites.listSites(actorOf(req), query));
+  }),
+);
+sitesRouter.get(
+  '/:id',
+  validated({ params: idParams }, async ({ params }, req, res) => {
+    res.json(await sites.getSite(actorOf(req), params.id));
+  }),
+);
+sitesRouter.post(
+  '/',
+  office,
+  validated({ body: s.siteInput }, async ({ body }, req, res) => {
+    res.status(201).json(await sites.createSite(actorOf(req), body));
+  }),
+);
+sitesRouter.patch(
+  '/:id',
+  office,
+  validated({ params: idParams, body: s.sitePatch }, async ({ params, body }, req, res) => {
+    res.json(await sites.updateSite(actorOf(req), params.id, body));
+  }),
+);
 
 export const wallsRouter = Router();
 wallsRouter.use(requireAuth);
-wallsRouter.get('/', validate({ query: s.listWallsQuery }), async (req, res) => {
-  res.json(await walls.listWalls(actorOf(req), req.valid.query as s.ListWallsQuery));
-});
-wallsRouter.get('/:id', validate({ params: idParams }), async (req, res) => {
-  res.json(await walls.getWall(actorOf(req), id(req)));
-});
-wallsRouter.get('/:id/cabinets', validate({ params: idParams }), async (req, res) => {
-  res.json(await walls.wallCabinets(actorOf(req), id(req)));
-});
-wallsRouter.post('/', office, validate({ body: s.wallInput }), async (req, res) => {
-  res.status(201).json(await walls.createWall(actorOf(req), req.valid.body as s.WallInput));
-});
-wallsRouter.patch('/:id', office, validate({ params: idParams, body: s.wallPatch }), async (req, res) => {
-  res.json(await walls.updateWall(actorOf(req), id(req), req.valid.body as s.WallPatch));
-});
-wallsRouter.post('/:id/cabinets', office, validate({ params: idParams, body: s.placeCabinetInput }), async (req, res) => {
-  res.status(201).json(await cabinets.placeCabinet(actorOf(req), id(req), req.valid.body as s.PlaceCabinetInput));
-});
+wallsRouter.get(
+  '/',
+  validated({ query: s.listWallsQuery }, async ({ query }, req, res) => {
+    res.json(await walls.listWalls(actorOf(req), query));
+  }),
+);
+wallsRouter.get(
+  '/:id',
+  validated({ params: idParams }, async ({ params }, req, res) => {
+    res.json(await walls.getWall(actorOf(req), params.id));
+  }),
+);
+wallsRouter.get(
+  '/:id/cabinets',
+  validated({ params: idParams }, async ({ params }, req, res) => {
+    res.json(await walls.wallCabinets(actorOf(req), params.id));
+  }),
+);
+wallsRouter.post(
+  '/',
+  office,
+  validated({ body: s.wallInput }, async ({ body }, req, res) => {
+    res.status(201).json(await walls.createWall(actorOf(req), body));
+  }),
+);
+wallsRouter.patch(
+  '/:id',
+  office,
+  validated({ params: idParams, body: s.wallPatch }, async ({ params, body }, req, res) => {
+    res.json(await walls.updateWall(actorOf(req), params.id, body));
+  }),
+);
+wallsRouter.post(
+  '/:id/cabinets',
+  office,
+  validated({ params: idParams, body: s.placeCabinetInput }, async ({ params, body }, req, res) => {
+    res.status(201).json(await cabinets.placeCabinet(actorOf(req), params.id, body));
+  }),
+);
 wallsRouter.post(
   '/:id/cabinets/import',
   office,
   express.text({ type: ['text/csv', 'text/plain', 'application/csv'], limit: '8mb' }),
-  validate({ params: idParams }),
-  async (req, res) => {
+  validated({ params: idParams }, async ({ params }, req, res) => {
     const csv = typeof req.body === 'string' ? req.body : '';
-    res.status(201).json(await cabinets.importCabinets(actorOf(req), id(req), csv));
-  },
+    res.status(201).json(await cabinets.importCabinets(actorOf(req), params.id, csv));
+  }),
 );
 
 export const cabinetsRouter = Router();
 cabinetsRouter.use(requireAuth);
-cabinetsRouter.get('/', validate({ query: s.listCabinetsQuery }), async (req, res) => {
-  res.json(await cabinets.listCabinets(actorOf(req), req.valid.query as s.ListCabinetsQuery));
-});
+cabinetsRouter.get(
+  '/',
+  validated({ query: s.listCabinetsQuery }, async ({ query }, req, res) => {
+    res.json(await cabinets.listCabinets(actorOf(req), query));
+  }),
+);
 cabinetsRouter.get('/by-serial/:serial', async (req, res) => {
   res.json(await cabinets.getCabinet(actorOf(req), { serial: String(req.params.serial).slice(0, 64) }));
 });
-cabinetsRouter.get('/:id', validate({ params: idParams }), async (req, res) => {
-  res.json(await cabinets.getCabinet(actorOf(req), { id: id(req) }));
-});
+cabinetsRouter.get(
+  '/:id',
+  validated({ params: idParams }, async ({ params }, req, res) => {
+    res.json(await cabinets.getCabinet(actorOf(req), { id: params.id }));
+  }),
+);
 // Technicians move and swap cabinets on site (a cabinet swap is a repair action).
-cabinetsRouter.post('/:id/move', staff, validate({ params: idParams, body: s.moveCabinetInput }), async (req, res) => {
-  res.json(await cabinets.moveCabinet(actorOf(req), id(req), req.valid.body as s.MoveCabinetInput));
-});
-cabinetsRouter.post('/:id/swap', staff, validate({ params: idParams, body: s.swapCabinetInput }), async (req, res) => {
-  res.json(await cabinets.swapCabinets(actorOf(req), id(req), req.valid.body as s.SwapCabinetInput));
-});
-cabinetsRouter.patch('/:id', staff, validate({ params: idParams, body: s.cabinetPatch }), async (req, res) => {
-  res.json(await cabinets.updateCabinet(actorOf(req), id(req), req.valid.body as s.CabinetPatch));
-});
+cabinetsRouter.post(
+  '/:id/move',
+  staff,
+  validated({ params: idParams, body: s.moveCabinetInput }, async ({ params, body }, req, res) => {
+    res.json(await cabinets.moveCabinet(actorOf(req), params.id, body));
+  }),
+);
+cabinetsRouter.post(
+  '/:id/swap',
+  staff,
+  validated({ params: idParams, body: s.swapCabinetInput }, async ({ params, body }, req, res) => {
+    res.json(await cabinets.swapCabinets(actorOf(req), params.id, body));
+  }),
+);
+cabinetsRouter.patch(
+  '/:id',
+  staff,
+  validated({ params: idParams, body: s.cabinetPatch }, async ({ params, body }, req, res) => {
+    res.json(await cabinets.updateCabinet(actorOf(req), params.id, body));
+  }),
+);
 
 export const cabinetModelsRouter = Router();
 cabinetModelsRouter.use(requireAuth);
 cabinetModelsRouter.get('/', async (_req, res) => {
   res.json(await catalogue.listCabinetModels());
 });
-cabinetModelsRouter.get('/:id', validate({ params: idParams }), async (req, res) => {
-  res.json(await catalogue.getCabinetModel(id(req)));
-});
-cabinetModelsRouter.post('/', office, validate({ body: s.cabinetModelInput }), async (req, res) => {
-  res.status(201).json(await catalogue.createCabinetModel(actorOf(req), req.valid.body as s.CabinetModelInput));
-});
-cabinetModelsRouter.patch('/:id', office, validate({ params: idParams, body: s.cabinetModelPatch }), async (req, res) => {
-  res.json(await catalogue.updateCabinetModel(actorOf(req), id(req), req.valid.body as s.CabinetModelPatch));
-});
+cabinetModelsRouter.get(
+  '/:id',
+  validated({ params: idParams }, async ({ params }, _req, res) => {
+    res.json(await catalogue.getCabinetModel(params.id));
+  }),
+);
+cabinetModelsRouter.post(
+  '/',
+  office,
+  validated({ body: s.cabinetModelInput }, async ({ body }, req, res) => {
+    res.status(201).json(await catalogue.createCabinetModel(actorOf(req), body));
+  }),
+);
+cabinetModelsRouter.patch(
+  '/:id',
+  office,
+  validated({ params: idParams, body: s.cabinetModelPatch }, async ({ params, body }, req, res) => {
+    res.json(await catalogue.updateCabinetModel(actorOf(req), params.id, body));
+  }),
+);
 
 export const controllersRouter = Router();
 controllersRouter.use(requireAuth);
@@ -139,17 +224,32 @@ controllersRouter.get('/', async (req, res) => {
   const wallId = typeof req.query.wallId === 'string' && /^[0-9a-f-]{36}$/i.test(req.query.wallId) ? req.query.wallId : undefined;
   res.json(await catalogue.listControllers(actorOf(req), wallId));
 });
-controllersRouter.get('/:id', validate({ params: idParams }), async (req, res) => {
-  res.json(await catalogue.getController(actorOf(req), id(req)));
-});
-controllersRouter.post('/', office, validate({ body: s.controllerInput }), async (req, res) => {
-  res.status(201).json(await catalogue.createController(actorOf(req), req.valid.body as s.ControllerInput));
-});
-controllersRouter.patch('/:id', office, validate({ params: idParams, body: s.controllerPatch }), async (req, res) => {
-  res.json(await catalogue.updateController(actorOf(req), id(req), req.valid.body as s.ControllerPatch));
-});
+controllersRouter.get(
+  '/:id',
+  validated({ params: idParams }, async ({ params }, req, res) => {
+    res.json(await catalogue.getController(actorOf(req), params.id));
+  }),
+);
+controllersRouter.post(
+  '/',
+  office,
+  validated({ body: s.controllerInput }, async ({ body }, req, res) => {
+    res.status(201).json(await catalogue.createController(actorOf(req), body));
+  }),
+);
+controllersRouter.patch(
+  '/:id',
+  office,
+  validated({ params: idParams, body: s.controllerPatch }, async ({ params, body }, req, res) => {
+    res.json(await catalogue.updateController(actorOf(req), params.id, body));
+  }),
+);
 
 export const searchRouter = Router();
-searchRouter.get('/', requireAuth, validate({ query: s.searchQuery }), async (req, res) => {
-  res.json(await search(actorOf(req), (req.valid.query as { q: string }).q));
-});
+searchRouter.get(
+  '/',
+  requireAuth,
+  validated({ query: s.searchQuery }, async ({ query }, req, res) => {
+    res.json(await search(actorOf(req), query.q));
+  }),
+);

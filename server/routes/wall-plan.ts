@@ -1,10 +1,9 @@
 import { Router } from 'express';
-import type { z } from 'zod';
 import { idParams } from '../../shared/schemas/common.js';
 import { officeRoles } from '../../shared/schemas/enums.js';
 import { saveWallPlanRequest } from '../../shared/schemas/wall-plan.js';
 import { actorOf, requireRole } from '../middleware/auth.js';
-import { validate } from '../middleware/validate.js';
+import { validated } from '../middleware/validate.js';
 import { saveWallPlan } from '../services/wall-plan.js';
 
 /**
@@ -13,7 +12,10 @@ import { saveWallPlan } from '../services/wall-plan.js';
  */
 export const wallPlanRouter = Router({ mergeParams: true });
 
-wallPlanRouter.put('/', requireRole(...officeRoles), validate({ params: idParams, body: saveWallPlanRequest }), async (req, res) => {
-  const { id } = req.valid.params as { id: string };
-  res.json(await saveWallPlan(actorOf(req), id, req.valid.body as z.output<typeof saveWallPlanRequest>));
-});
+wallPlanRouter.put(
+  '/',
+  requireRole(...officeRoles),
+  validated({ params: idParams, body: saveWallPlanRequest }, async ({ params, body }, req, res) => {
+    res.json(await saveWallPlan(actorOf(req), params.id, body));
+  }),
+);

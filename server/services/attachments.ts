@@ -46,7 +46,7 @@ export async function sniffType(buffer: Buffer): Promise<string | null> {
   const textDecoder = new TextDecoder('utf-8', { fatal: true });
   try {
     const text = textDecoder.decode(sample.length < buffer.length ? sample.subarray(0, sample.lastIndexOf(0x0a) + 1 || sample.length) : sample);
-    return /[\x00-\x08\x0b\x0c\x0e-\x1f\x7f]/.test(text) ? null : 'text/plain';
+    return hasControlCharacters(text) ? null : 'text/plain';
   } catch {
     return null;
   }
@@ -55,8 +55,23 @@ export async function sniffType(buffer: Buffer): Promise<string | null> {
 /** A file name safe to show and to put in Content-Disposition: no path, no control characters. */
 export function cleanFileName(name: string) {
   const base = name.split(/[\\/]/).pop() ?? 'file';
-  const clean = base.replace(/[\x00-\x1f\x7f"]/g, '').trim().slice(0, 200);
+  const kept = Array.from(base).filter((char) => !isAsciiControl(char.charCodeAt(0)) && char !== '"');
+  const clean = kept.join('').trim().slice(0, 200);
   return clean || 'file';
+}
+
+/** U+0000–U+001F and U+007F. */
+function isAsciiControl(code: number): boolean {
+  return code < 0x20 || code === 0x7f;
+}
+
+/** Whether text holds a control character a text file does not: any but tab, line feed and carriage return. */
+function hasControlCharacters(text: string): boolean {
+  for (let i = 0; i < text.length; i++) {
+    const code = text.charCodeAt(i);
+    if (isAsciiControl(code) && code !== 0x09 && code !== 0x0a && code !== 0x0d) return true;
+  }
+  return false;
 }
 
 export interface Owner {

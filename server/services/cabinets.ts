@@ -17,8 +17,9 @@ import {
 import { db, type DbOrTx, type Tx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
 import { clients, sites } from '../db/schema/clients.js';
+import { cabinetModels } from '../db/schema/catalogue.js';
 import { stockLocations } from '../db/schema/stock.js';
-import { cabinetEvents, cabinetModels, cabinets, walls } from '../db/schema/walls.js';
+import { cabinetEvents, cabinets, walls } from '../db/schema/walls.js';
 import { AppError, badRequest, conflict } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { fieldErrors } from '../middleware/validate.js';

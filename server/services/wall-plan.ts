@@ -13,7 +13,8 @@ import {
   type WallRunsInput,
 } from '../../shared/schemas/wall-plan.js';
 import { db } from '../db/client.js';
-import { cabinetModels, walls, type WallRuns } from '../db/schema/walls.js';
+import { cabinetModels } from '../db/schema/catalogue.js';
+import { walls, type WallRuns } from '../db/schema/walls.js';
 import { AppError, validationFailed } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';

@@ -7,7 +7,8 @@ import { createApp } from '../../server/app.js';
 import { db } from '../../server/db/client.js';
 import { users } from '../../server/db/schema/accounts.js';
 import { clients, servicePlans, sites } from '../../server/db/schema/clients.js';
-import { cabinetModels, walls } from '../../server/db/schema/walls.js';
+import { cabinetModels } from '../../server/db/schema/catalogue.js';
+import { walls } from '../../server/db/schema/walls.js';
 import { hashPassword } from '../../server/services/passwords.js';
 
 export const TEST_PASSWORD = 'correct horse battery staple 42';

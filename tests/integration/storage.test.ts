@@ -2,11 +2,12 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { Readable } from 'node:stream';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type * as Storage from '../../server/integrations/s3.js';
 import { setEnv, startTestS3, type TestS3 } from '../setup/fakes.js';
 
 let s3: TestS3;
 let restoreEnv: () => void;
-let storage: typeof import('../../server/integrations/s3.js');
+let storage: typeof Storage;
 
 async function readAll(stream: Readable): Promise<Buffer> {
   const chunks: Buffer[] = [];

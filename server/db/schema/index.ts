@@ -2,6 +2,7 @@
 export * from './enums.js';
 export * from './accounts.js';
 export * from './clients.js';
+export * from './catalogue.js';
 export * from './walls.js';
 export * from './tickets.js';
 export * from './visits.js';

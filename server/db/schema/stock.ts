@@ -4,7 +4,7 @@ import { at, createdAt, updatedAt } from './columns.js';
 import { partKindEnum, stockLocationKindEnum, stockMovementKindEnum, vendorReturnOutcomeEnum } from './enums.js';
 import { clients, sites } from './clients.js';
 import { users } from './accounts.js';
-import { cabinetModels } from './walls.js';
+import { cabinetModels } from './catalogue.js';
 
 /** A stockable item type. */
 export const parts = pgTable('parts', {
