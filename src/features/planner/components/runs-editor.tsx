@@ -1,28 +1,22 @@
-import { cellLabel, type Cell } from '@shared/calc/grid';
-import { runPatterns, validateRuns, type Run, type RunPattern, type RunProblem } from '@shared/calc/runs';
+import { cellLabel } from '@shared/calc/grid';
+import { runPatterns, type RunPattern, type RunProblem } from '@shared/calc/runs';
 import type { RunKind } from '@shared/schemas/wall-plan';
+import type { WallDetail } from '@shared/schemas/walls';
 import clsx from 'clsx';
 import { ArrowDown, ArrowUp, ListOrdered, Pencil, Plus, Repeat2, Trash2, Undo2 } from 'lucide-react';
-import { useMemo, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
-import { useToast } from '@/components/ui/toast';
-import { useSaveWallPlan } from '@/features/planner/api/mutations';
 import { ChoiceGroup } from '@/features/planner/components/choice-group';
+import { useRunsEditor } from '@/features/planner/hooks/use-runs-editor';
 import { PowerCaution } from '@/features/planner/components/plan-cautions';
 import { kindChoices, RunsMap } from '@/features/planner/components/runs-panel';
 import { num } from '@/features/planner/utils/format';
 import { runPatternLabels } from '@/features/planner/utils/planner-form';
-import { addRun, moveRun, removeRun, renumber, reverseRun, toggleCell } from '@/features/planner/utils/run-edit';
-import { kindLabels, limitsOfWall, pathText, proposeRuns, runSetOfWall, settingsOfWall, withLoads, type RunSet } from '@/features/planner/utils/wall-runs';
+import { addRun, moveRun, removeRun, renumber, reverseRun } from '@/features/planner/utils/run-edit';
+import { kindLabels, pathText } from '@/features/planner/utils/wall-runs';
 import { errorMessage } from '@/lib/errors';
-import type { WallDetail } from '@shared/schemas/walls';
-
-interface EditableSet extends RunSet {
-  edited: boolean;
-}
 
 const MAX_PROBLEMS_SHOWN = 40;
 
@@ -37,74 +31,21 @@ function supplyText(s: { voltage: number; phases: 1 | 3; breakerAmps: number; co
  * renumber), checked live with the same rules the server applies, and saves them.
  */
 export function RunsEditor({ wall, canEdit }: { wall: WallDetail; canEdit: boolean }) {
-  const { settings: storedSettings, stored: settingsStored } = useMemo(() => settingsOfWall(wall), [wall]);
-  const limits = useMemo(
-    () => ({ data: limitsOfWall(wall, 'data', storedSettings), power: limitsOfWall(wall, 'power', storedSettings) }),
-    [wall, storedSettings],
-  );
-  // A chain never carries more than its circuit, connector and maker allow, whatever was stored.
-  const settings = { ...storedSettings, chainCapacityW: limits.power.chainCapacityW };
-  const tightened = storedSettings.chainCapacityW > settings.chainCapacityW * (1 + 1e-9);
-  const initial = () => ({
-    data: { ...runSetOfWall(wall, 'data', settings), edited: false },
-    power: { ...runSetOfWall(wall, 'power', settings), edited: false },
-  });
-  const [sets, setSets] = useState<Record<RunKind, EditableSet>>(initial);
-  const [kind, setKind] = useState<RunKind>('data');
-  const [selected, setSelected] = useState<Record<RunKind, number | null>>({ data: null, power: null });
-  const [editing, setEditing] = useState(false);
-  const [pendingPattern, setPendingPattern] = useState<RunPattern | null>(null);
-  const save = useSaveWallPlan();
-  const toast = useToast();
-
-  const set = sets[kind];
-  const position = selected[kind];
-  const selectedRun = position !== null ? set.runs[position] : undefined;
-  const runs = useMemo(() => withLoads(set.runs, limits[kind]), [set.runs, limits, kind]);
-  const problems = useMemo(
-    () => ({
-      data: validateRuns(wall.columns, wall.rows, sets.data.runs, limits.data),
-      power: validateRuns(wall.columns, wall.rows, sets.power.runs, limits.power),
-    }),
-    [sets, wall.columns, wall.rows, limits],
-  );
-  const unsaved = sets.data.edited || sets.power.edited || !sets.data.stored || !sets.power.stored;
-  const anyProblems = problems.data.length + problems.power.length > 0;
-
-  const update = (next: Run[], keepPattern = false) =>
-    setSets((s) => ({ ...s, [kind]: { ...s[kind], runs: next, edited: true, pattern: keepPattern ? s[kind].pattern : 'custom' } }));
-  const select = (p: number | null) => setSelected((s) => ({ ...s, [kind]: p }));
-
-  const applyPattern = (pattern: RunPattern) => {
-    setSets((s) => ({ ...s, [kind]: { ...s[kind], pattern, runs: proposeRuns(wall.columns, wall.rows, pattern, limits[kind]), edited: true } }));
-    select(null);
-  };
-
-  const onCell = (cell: Cell) => {
-    if (!editing) {
-      const holder = set.runs.findIndex((r) => r.cells.some((c) => c.column === cell.column && c.row === cell.row));
-      select(holder >= 0 && holder !== position ? holder : null);
-      return;
-    }
-    if (position === null) {
-      const holder = set.runs.findIndex((r) => r.cells.some((c) => c.column === cell.column && c.row === cell.row));
-      if (holder >= 0) select(holder);
-      return;
-    }
-    update(toggleCell(set.runs, position, cell));
-  };
-
-  const submit = async () => {
-    const body = (k: RunKind) => ({
-      pattern: sets[k].pattern,
-      runs: sets[k].runs.map((r) => ({ index: r.index, cells: r.cells.map((c) => ({ column: c.column, row: c.row })) })),
-    });
-    await save.mutateAsync({ wallId: wall.id, settings, dataRuns: body('data'), powerRuns: body('power') });
-    setSets((s) => ({ data: { ...s.data, stored: true, edited: false }, power: { ...s.power, stored: true, edited: false } }));
-    setEditing(false);
-    toast('Runs saved.');
-  };
-
+  const editor = useRunsEditor(wall);
+  const {
+    settings,
+    settingsStored,
+    tightened,
+    storedSettings,
+    limits,
+    kind,
+    setKind,
+    editing,
+    setEditing,
+    pendingPattern,
+    setPendingPattern,
+  } = editor;
+  const { set, position, selectedRun, runs, problems, select, applyPattern, onCell } = editor;
   const shownProblems = problems[kind];
 
   return (
@@ -146,42 +87,7 @@ export function RunsEditor({ wall, canEdit }: { wall: WallDetail; canEdit: boole
               </Button>
             ) : null}
           </div>
-          {editing ? (
-            <div className="space-y-3 rounded border border-ink-200 bg-ink-50 p-3">
-              <p className="text-sm text-ink-800">
-                {selectedRun
-                  ? `Run ${selectedRun.index} is selected: click cells to add them to its end in order, or click one of its cells to take it out.`
-                  : 'Pick a run in the list below (or click one of its cells), then click cells to add or take them out.'}
-              </p>
-              <div className="flex flex-wrap gap-2">
-                <Button size="sm" icon={<Plus className="h-4 w-4" aria-hidden="true" />} onClick={() => { update(addRun(set.runs)); select(set.runs.length); }}>
-                  New run
-                </Button>
-                <Button size="sm" disabled={!selectedRun} icon={<Repeat2 className="h-4 w-4" aria-hidden="true" />} onClick={() => position !== null && update(reverseRun(set.runs, position))}>
-                  Reverse
-                </Button>
-                <Button size="sm" disabled={position === null || position === 0} icon={<ArrowUp className="h-4 w-4" aria-hidden="true" />} onClick={() => { if (position !== null) { update(moveRun(set.runs, position, -1)); select(position - 1); } }}>
-                  Move up
-                </Button>
-                <Button size="sm" disabled={position === null || position >= set.runs.length - 1} icon={<ArrowDown className="h-4 w-4" aria-hidden="true" />} onClick={() => { if (position !== null) { update(moveRun(set.runs, position, 1)); select(position + 1); } }}>
-                  Move down
-                </Button>
-                <Button size="sm" disabled={!selectedRun} icon={<Trash2 className="h-4 w-4" aria-hidden="true" />} onClick={() => { if (position !== null) { update(removeRun(set.runs, position)); select(null); } }}>
-                  Delete run
-                </Button>
-                <Button size="sm" icon={<ListOrdered className="h-4 w-4" aria-hidden="true" />} onClick={() => update(renumber(set.runs), true)}>
-                  Renumber 1…{set.runs.length}
-                </Button>
-              </div>
-              <ChoiceGroup
-                legend="Start again from a pattern"
-                size="sm"
-                value={set.pattern === 'custom' ? ('' as RunPattern) : (set.pattern as RunPattern)}
-                onChange={(p) => (set.edited && set.pattern === 'custom' ? setPendingPattern(p) : applyPattern(p))}
-                choices={runPatterns.map((p) => ({ value: p, label: runPatternLabels[p] }))}
-              />
-            </div>
-          ) : null}
+          {editing ? <EditTools editor={editor} /> : null}
 
           <RunsMap
             kind={kind}
@@ -211,33 +117,7 @@ export function RunsEditor({ wall, canEdit }: { wall: WallDetail; canEdit: boole
         </div>
       </Card>
 
-      {canEdit ? (
-        <div className="flex flex-col gap-3 rounded-md border border-stone-200 bg-white p-4 shadow-card sm:flex-row sm:items-center sm:justify-between">
-          <div className="text-sm text-stone-700" aria-live="polite">
-            {anyProblems
-              ? `Fix the problems first: ${problems.data.length} in the data runs, ${problems.power.length} in the power runs.`
-              : unsaved
-                ? 'The data and power runs are sound. Save them to store them on the wall.'
-                : 'Saved: these are the runs stored on the wall.'}
-            {save.isError ? <Alert tone="danger" className="mt-2">{errorMessage(save.error)}</Alert> : null}
-          </div>
-          <div className="flex shrink-0 gap-2">
-            <Button
-              disabled={!(sets.data.edited || sets.power.edited)}
-              icon={<Undo2 className="h-4 w-4" aria-hidden="true" />}
-              onClick={() => {
-                setSets(initial());
-                setSelected({ data: null, power: null });
-              }}
-            >
-              Discard changes
-            </Button>
-            <Button variant="primary" disabled={anyProblems || !unsaved} loading={save.isPending} onClick={() => void submit().catch(() => undefined)}>
-              Save runs
-            </Button>
-          </div>
-        </div>
-      ) : null}
+      {canEdit ? <SaveBar editor={editor} /> : null}
 
       <PowerCaution supply={settings.supply} />
 
@@ -251,7 +131,8 @@ export function RunsEditor({ wall, canEdit }: { wall: WallDetail; canEdit: boole
           if (pendingPattern) applyPattern(pendingPattern);
         }}
       >
-        The {kindLabels[kind].title.toLowerCase()} you edited are replaced by runs laid {pendingPattern ? `by ${runPatternLabels[pendingPattern].toLowerCase()}` : ''}.
+        The {kindLabels[kind].title.toLowerCase()} you edited are replaced by runs laid{' '}
+        {pendingPattern ? `by ${runPatternLabels[pendingPattern].toLowerCase()}` : ''}.
       </ConfirmDialog>
     </div>
   );
@@ -287,6 +168,132 @@ function ProblemList({ problems, kind, onShowRun }: { problems: RunProblem[]; ki
       {problems.length > MAX_PROBLEMS_SHOWN ? (
         <p className="mt-1 text-sm text-stone-700">…and {num(problems.length - MAX_PROBLEMS_SHOWN)} more.</p>
       ) : null}
+    </div>
+  );
+}
+
+type Editor = ReturnType<typeof useRunsEditor>;
+
+/** The hand-editing tools: new, reverse, move, delete and renumber runs, or start again from a pattern. */
+function EditTools({ editor }: { editor: Editor }) {
+  const { set, position, selectedRun, update, select, setPendingPattern, applyPattern } = editor;
+  return (
+    <div className="space-y-3 rounded border border-ink-200 bg-ink-50 p-3">
+      <p className="text-sm text-ink-800">
+        {selectedRun
+          ? `Run ${selectedRun.index} is selected: click cells to add them to its end in order, or click one of its cells to take it out.`
+          : 'Pick a run in the list below (or click one of its cells), then click cells to add or take them out.'}
+      </p>
+      <div className="flex flex-wrap gap-2">
+        <Button
+          size="sm"
+          icon={<Plus className="h-4 w-4" aria-hidden="true" />}
+          onClick={() => {
+            update(addRun(set.runs));
+            select(set.runs.length);
+          }}
+        >
+          New run
+        </Button>
+        <Button
+          size="sm"
+          disabled={!selectedRun}
+          icon={<Repeat2 className="h-4 w-4" aria-hidden="true" />}
+          onClick={() => position !== null && update(reverseRun(set.runs, position))}
+        >
+          Reverse
+        </Button>
+        <Button
+          size="sm"
+          disabled={position === null || position === 0}
+          icon={<ArrowUp className="h-4 w-4" aria-hidden="true" />}
+          onClick={() => {
+            if (position !== null) {
+              update(moveRun(set.runs, position, -1));
+              select(position - 1);
+            }
+          }}
+        >
+          Move up
+        </Button>
+        <Button
+          size="sm"
+          disabled={position === null || position >= set.runs.length - 1}
+          icon={<ArrowDown className="h-4 w-4" aria-hidden="true" />}
+          onClick={() => {
+            if (position !== null) {
+              update(moveRun(set.runs, position, 1));
+              select(position + 1);
+            }
+          }}
+        >
+          Move down
+        </Button>
+        <Button
+          size="sm"
+          disabled={!selectedRun}
+          icon={<Trash2 className="h-4 w-4" aria-hidden="true" />}
+          onClick={() => {
+            if (position !== null) {
+              update(removeRun(set.runs, position));
+              select(null);
+            }
+          }}
+        >
+          Delete run
+        </Button>
+        <Button size="sm" icon={<ListOrdered className="h-4 w-4" aria-hidden="true" />} onClick={() => update(renumber(set.runs), true)}>
+          Renumber 1…{set.runs.length}
+        </Button>
+      </div>
+      <ChoiceGroup
+        legend="Start again from a pattern"
+        size="sm"
+        value={set.pattern === 'custom' ? ('' as RunPattern) : (set.pattern as RunPattern)}
+        onChange={(p) => (set.edited && set.pattern === 'custom' ? setPendingPattern(p) : applyPattern(p))}
+        choices={runPatterns.map((p) => ({ value: p, label: runPatternLabels[p] }))}
+      />
+    </div>
+  );
+}
+
+/** Where the runs stand (problems, unsaved, saved), with discard and save. */
+function SaveBar({ editor }: { editor: Editor }) {
+  const { problems, anyProblems, unsaved, save, sets, setSets, initial, setSelected, submit } = editor;
+  return (
+    <div className="flex flex-col gap-3 rounded-md border border-stone-200 bg-white p-4 shadow-card sm:flex-row sm:items-center sm:justify-between">
+      <div className="text-sm text-stone-700" aria-live="polite">
+        {anyProblems
+          ? `Fix the problems first: ${problems.data.length} in the data runs, ${problems.power.length} in the power runs.`
+          : unsaved
+            ? 'The data and power runs are sound. Save them to store them on the wall.'
+            : 'Saved: these are the runs stored on the wall.'}
+        {save.isError ? (
+          <Alert tone="danger" className="mt-2">
+            {errorMessage(save.error)}
+          </Alert>
+        ) : null}
+      </div>
+      <div className="flex shrink-0 gap-2">
+        <Button
+          disabled={!(sets.data.edited || sets.power.edited)}
+          icon={<Undo2 className="h-4 w-4" aria-hidden="true" />}
+          onClick={() => {
+            setSets(initial());
+            setSelected({ data: null, power: null });
+          }}
+        >
+          Discard changes
+        </Button>
+        <Button
+          variant="primary"
+          disabled={anyProblems || !unsaved}
+          loading={save.isPending}
+          onClick={() => void submit().catch(() => undefined)}
+        >
+          Save runs
+        </Button>
+      </div>
     </div>
   );
 }
