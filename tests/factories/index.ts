@@ -60,24 +60,25 @@ export async function createOrganisation(
   return { plan, client, site, wall };
 }
 
+/** The datasheet of the factory's cabinet model: 500 mm, 192 × 192 pixels, 200 W. */
+export const cabinetModelFigures = {
+  widthMm: 500,
+  heightMm: 500,
+  pixelPitchMm: 2.6,
+  pixelsWide: 192,
+  pixelsHigh: 192,
+  modulesWide: 2,
+  modulesHigh: 2,
+  maxPowerW: 200,
+  typicalPowerW: 70,
+  weightKg: 7.5,
+  brightnessNits: 1000,
+};
+
 export async function createCabinetModel(overrides: Partial<typeof cabinetModels.$inferInsert> = {}) {
   const [model] = await db()
     .insert(cabinetModels)
-    .values({
-      name: unique('Model'),
-      widthMm: 500,
-      heightMm: 500,
-      pixelPitchMm: 2.6,
-      pixelsWide: 192,
-      pixelsHigh: 192,
-      modulesWide: 2,
-      modulesHigh: 2,
-      maxPowerW: 200,
-      typicalPowerW: 70,
-      weightKg: 7.5,
-      brightnessNits: 1000,
-      ...overrides,
-    })
+    .values({ name: unique('Model'), ...cabinetModelFigures, ...overrides })
     .returning();
   return model;
 }

@@ -1,21 +1,9 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { anonymous, createOrganisation, signedIn, type Session } from '../factories/index.js';
+import { anonymous, cabinetModelFigures, createOrganisation, signedIn, type Session } from '../factories/index.js';
 
 // The catalogue's cabinet models carry the datasheet's power input, which the wall plan uses:
 // input voltage range, the power connector's rating, the maker's most cabinets per chain, VA.
-const model = {
-  widthMm: 500,
-  heightMm: 500,
-  pixelPitchMm: 2.604,
-  pixelsWide: 192,
-  pixelsHigh: 192,
-  modulesWide: 2,
-  modulesHigh: 2,
-  maxPowerW: 200,
-  typicalPowerW: 70,
-  weightKg: 7.5,
-  brightnessNits: 1000,
-};
+const model = cabinetModelFigures;
 const name = () => `Test model ${Math.random().toString(36).slice(2, 8)}`;
 
 let office: Session;
