@@ -4,6 +4,7 @@ import { addMonths, addYears, differenceInCalendarDays, parseISO } from 'date-fn
 import type * as schema from '../schema/index.js';
 import type { ChecklistItem } from '../schema/visits.js';
 import { planClock, ticketDueTimes } from '../../services/ticket-clock.js';
+import { cellLabel } from '../../../shared/calc/grid.js';
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../../../shared/calc/video-signal.js';
 import { asBuiltPlan, dataLinesInUse } from './as-built.js';
 import { demoAuditTrail } from './audit-trail.js';
@@ -68,7 +69,6 @@ export interface DemoRows {
 
 const letters = 'ABCDEFGH';
 const pad = (n: number, width: number) => String(n).padStart(width, '0');
-const cellLabel = (column: number, row: number) => `C${column}·R${row}`;
 
 export function buildDemo(now: Date, passwordHash: string): DemoRows {
   const rand = createRandom(0x6b1d2e);
@@ -351,7 +351,7 @@ export function buildDemo(now: Date, passwordHash: string): DemoRows {
     if (!swap) {
       event({
         cabinetId: cabinet.id, kind: 'repaired', repairId, actorId: userId[ctx.tech], createdAt: ctx.performedAt,
-        note: `${spec.component.replace('_', ' ')}: ${spec.action.replace('_', ' ')} (${cellLabel(spec.column, spec.row)}).`,
+        note: `${spec.component.replace('_', ' ')}: ${spec.action.replace('_', ' ')} (${cellLabel(spec)}).`,
       });
     }
     if (spec.fate === 'to_vendor_return' && part) {
@@ -364,11 +364,11 @@ export function buildDemo(now: Date, passwordHash: string): DemoRows {
         quantity: 1, fault: spec.notes, fromLocationId: locationId.warehouse, repairId,
         rmaReference: `TRN-RMA-${rand.int(30000, 39999)}`, sentOn: clock.isoDate(sentOffset), expectedBackOn: clock.isoDate(sentOffset + turnaround),
         outcome: 'pending', backInStockOn: null, backToLocationId: null,
-        notes: `Removed from ${w.name}, ${cellLabel(spec.column, spec.row)}.`, createdAt: sentAt, updatedAt: sentAt,
+        notes: `Removed from ${w.name}, ${cellLabel(spec)}.`, createdAt: sentAt, updatedAt: sentAt,
       });
       moves.push({
         part, batch, kind: 'return_from_wall', to: 'warehouse', quantity: 1, at: clock.hoursFrom(ctx.performedAt, 24), repairId,
-        reason: `Failed unit from ${w.name} ${cellLabel(spec.column, spec.row)}, held for a warranty return`, actorId: userId[ctx.tech],
+        reason: `Failed unit from ${w.name} ${cellLabel(spec)}, held for a warranty return`, actorId: userId[ctx.tech],
       });
       moves.push({ part, batch, kind: 'sent_to_vendor', from: 'warehouse', quantity: 1, at: sentAt, vendorReturnId: vrId, reason: 'Warranty return', actorId: userId.office });
     }

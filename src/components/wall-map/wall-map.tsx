@@ -1,3 +1,4 @@
+import { cellLabel } from '@shared/calc/grid';
 import clsx from 'clsx';
 import { Maximize2, Minus, Plus } from 'lucide-react';
 import {
@@ -33,8 +34,6 @@ import { cellTones, toneStyles, type CellTone } from '@/components/wall-map/wall
 
 export type { GridPosition } from '@/components/wall-map/wall-map-geometry';
 export type { CellTone } from '@/components/wall-map/wall-map-tones';
-/** `C{column}·R{row}`: the one way positions are written (shared with the server). */
-export { positionLabel } from '@shared/schemas/register';
 
 export interface WallMapCell extends GridPosition {
   /** Shown under the position label when the zoom allows. */
@@ -98,7 +97,7 @@ const toneWords = Object.fromEntries(
 /** The accessible name of a cell: "C4·R2, serial ABC123, installed". */
 export function cellName(p: GridPosition, cell: WallMapCell | undefined): string {
   const tone = toneOf(cell);
-  const parts = [`C${p.column}·R${p.row}`];
+  const parts = [cellLabel(p)];
   if (cell?.serial) parts.push(`serial ${cell.serial}`);
   parts.push(toneWords[tone]);
   if (cell?.heat && cell.heat > 0) parts.push(`repair heat ${Math.round(Math.min(1, cell.heat) * 100)} %`);
@@ -152,7 +151,7 @@ const MapRow = memo(function MapRow({ cells, layout, textLevel, textFrom, textTo
   const shapes: ReactNode[] = [];
   const marks: ReactNode[] = [];
   for (const cell of cells) {
-    const { column, row, tone, serial, heat } = cell;
+    const { column, tone, serial, heat } = cell;
     const style = toneStyles[tone];
     const cx = layout.columnCenterX(column);
     const x = cx - width / 2;
@@ -200,7 +199,7 @@ const MapRow = memo(function MapRow({ cells, layout, textLevel, textFrom, textTo
           fontWeight={600}
           className={style.text}
         >
-          {`C${column}·R${row}`}
+          {cellLabel(cell)}
         </text>,
       );
     }
