@@ -14,7 +14,7 @@ import { paths } from '@/config/paths';
 import { useCreateSite } from '@/features/sites/api/create-site';
 import type { SiteDetail } from '@/features/sites/api/types';
 import { useUpdateSite } from '@/features/sites/api/update-site';
-import { localTime } from '@/features/sites/components/site-time';
+import { formatSiteTime } from '@/lib/site-time';
 
 /** Every IANA time zone the browser knows, plus UTC (the server accepts the same list). */
 function timeZoneOptions() {
@@ -32,7 +32,7 @@ function TimeZoneSelect() {
       name="timeZone"
       label="Time zone"
       options={options}
-      hint={zone ? `Local time there now: ${localTime(zone)}. Service-plan clocks count in this zone.` : 'Service-plan clocks count in this zone.'}
+      hint={zone ? `Local time there now: ${formatSiteTime(new Date(), zone)}. Service-plan clocks count in this zone.` : 'Service-plan clocks count in this zone.'}
     />
   );
 }
