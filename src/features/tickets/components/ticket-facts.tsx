@@ -1,4 +1,4 @@
-import { visitStatuses } from '@shared/schemas/enums';
+import type { visitStatuses } from '@shared/schemas/enums';
 import { CalendarDays } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
