@@ -1,3 +1,4 @@
+import { cellLabel } from '@shared/calc/grid';
 import { cabinetPatch } from '@shared/schemas/register';
 import { ArrowLeftRight, Move, Pencil, X } from 'lucide-react';
 import { useState, type ReactNode } from 'react';
@@ -70,7 +71,7 @@ export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, on
   const cabinet = query.data;
   const [editing, setEditing] = useState(false);
   const serial = cabinet?.serial ?? summary?.serial ?? '';
-  const position = cabinet?.position ?? (summary ? `C${summary.column}·R${summary.row}` : null);
+  const position = cabinet?.position ?? (summary ? cellLabel(summary) : null);
   const status = cabinet?.status ?? summary?.status;
 
   return (

@@ -1,5 +1,6 @@
 // A wall's runs as the runs page and the print view show them: the stored ones, or a proposal
 // generated from the wall's model and default settings when none are stored yet.
+import { cellLabel } from '@shared/calc/grid';
 import { cabinetsPerRun, generateRuns, runLoad, type Run, type RunLimits, type RunPattern } from '@shared/calc/runs';
 import { DEFAULT_RUN_PATTERN } from '@shared/calc/wall-plan';
 import {
@@ -56,7 +57,7 @@ export function runSetOfWall(wall: WallDetail, kind: RunKind, settings: PlanSett
 }
 
 /** "C1·R1 → C2·R1 → C3·R1" */
-export const pathText = (run: Run) => run.cells.map((c) => `C${c.column}·R${c.row}`).join(' → ');
+export const pathText = (run: Run) => run.cells.map(cellLabel).join(' → ');
 
 export const kindLabels: Record<RunKind, { title: string; unit: string; limitLabel: string }> = {
   data: { title: 'Data runs', unit: 'px', limitLabel: 'per output' },

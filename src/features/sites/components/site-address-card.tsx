@@ -1,7 +1,7 @@
 import { Clock, MapPin } from 'lucide-react';
 import { Card } from '@/components/ui/card';
 import type { SiteDetail } from '@shared/schemas/sites';
-import { localTime, utcOffset } from '@/features/sites/components/site-time';
+import { formatSiteTime, utcOffset } from '@/lib/site-time';
 
 /** Address and the site's time zone with its local time now. */
 export function SiteAddressCard({ site }: { site: SiteDetail }) {
@@ -38,7 +38,7 @@ export function SiteAddressCard({ site }: { site: SiteDetail }) {
             <span className="block">
               {site.timeZone.replace(/_/g, ' ')} <span className="text-stone-500">({utcOffset(site.timeZone)})</span>
             </span>
-            <span className="text-sm text-stone-600">Local time now: {localTime(site.timeZone)}</span>
+            <span className="text-sm text-stone-600">Local time now: {formatSiteTime(new Date(), site.timeZone)}</span>
           </dd>
         </div>
       </dl>

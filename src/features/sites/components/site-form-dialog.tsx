@@ -11,10 +11,9 @@ import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { useCreateSite } from '@/features/sites/api/mutations';
+import { useCreateSite, useUpdateSite } from '@/features/sites/api/mutations';
 import type { SiteDetail } from '@shared/schemas/sites';
-import { useUpdateSite } from '@/features/sites/api/mutations';
-import { localTime } from '@/features/sites/components/site-time';
+import { formatSiteTime } from '@/lib/site-time';
 
 /** Every IANA time zone the browser knows, plus UTC (the server accepts the same list). */
 function timeZoneOptions() {
@@ -32,7 +31,7 @@ function TimeZoneSelect() {
       name="timeZone"
       label="Time zone"
       options={options}
-      hint={zone ? `Local time there now: ${localTime(zone)}. Service-plan clocks count in this zone.` : 'Service-plan clocks count in this zone.'}
+      hint={zone ? `Local time there now: ${formatSiteTime(new Date(), zone)}. Service-plan clocks count in this zone.` : 'Service-plan clocks count in this zone.'}
     />
   );
 }

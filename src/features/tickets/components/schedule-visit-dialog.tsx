@@ -10,8 +10,8 @@ import { useToast } from '@/components/ui/toast';
 import { useStaff } from '@/features/tickets/api/get-staff';
 import type { TicketDetail } from '@/features/tickets/api/types';
 import { useUpdateTicket } from '@/features/tickets/api/update-ticket';
-import { formatSiteTime, fromLocalInput, toLocalInput, zoneAbbreviation } from '@/features/tickets/components/site-time';
 import { errorMessage } from '@/lib/errors';
+import { formatSiteTime, fromLocalInput, toLocalInput, zoneAbbreviation } from '@/lib/site-time';
 
 interface ScheduleVisitDialogProps {
   open: boolean;

@@ -2,7 +2,7 @@ import type { TicketClockState } from '@shared/schemas/tickets';
 import { Clock } from 'lucide-react';
 import type { TicketDetail } from '@/features/tickets/api/types';
 import { ClockBadge } from '@/features/tickets/components/ticket-status';
-import { formatSiteTime, relativeTime } from '@/features/tickets/components/site-time';
+import { formatSiteTime, relativeTime } from '@/lib/site-time';
 
 interface ClockLineProps {
   title: string;

@@ -1,10 +1,10 @@
-import { visitStatuses } from '@shared/schemas/enums';
+import type { visitStatuses } from '@shared/schemas/enums';
 import { CalendarDays } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
 import type { TicketDetail, TicketVisit } from '@/features/tickets/api/types';
-import { formatSiteTime } from '@/features/tickets/components/site-time';
 import { formatAgo, formatDateTime } from '@/lib/format';
+import { formatSiteTime } from '@/lib/site-time';
 
 const scopeText = { cells: 'Particular cabinets', whole_wall: 'The whole wall', controller: 'Controller / signal', site: 'Something else at the site' } as const;
 const visitStatusText: Record<(typeof visitStatuses)[number], string> = {

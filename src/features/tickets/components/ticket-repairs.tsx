@@ -4,7 +4,7 @@ import { Link } from 'react-router';
 import { Card } from '@/components/ui/card';
 import { paths } from '@/config/paths';
 import type { TicketRepair } from '@/features/tickets/api/types';
-import { formatSiteTime } from '@/features/tickets/components/site-time';
+import { formatSiteTime } from '@/lib/site-time';
 
 const actionText: Record<RepairAction, string> = {
   replaced: 'Replaced',

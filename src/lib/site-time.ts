@@ -12,15 +12,20 @@ export function zoneAbbreviation(date: Date, timeZone: string): string {
 }
 
 /**
- * A moment in the site's local time: "Thu 10 Dec, 09:00 CST". Without a time zone (still
- * loading), the viewer's own time.
+ * A moment in the site's local time: "Thu 10 Dec, 09:00 CST" (the one way the app writes a time
+ * at a site; `formatSiteTime(new Date(), zone)` is the time there now). Without a time zone
+ * (still loading), the viewer's own time; '—' for no moment or a zone the browser does not know.
  */
-export function formatSiteTime(iso: string | null | undefined, timeZone: string | undefined, pattern = 'EEE d MMM, HH:mm'): string {
-  if (!iso) return '—';
-  const d = parseISO(iso);
+export function formatSiteTime(at: Date | string | null | undefined, timeZone: string | undefined, pattern = 'EEE d MMM, HH:mm'): string {
+  if (!at) return '—';
+  const d = typeof at === 'string' ? parseISO(at) : at;
   if (!isValid(d)) return '—';
   if (!timeZone) return format(d, pattern);
-  return `${format(new TZDate(d, timeZone), pattern)} ${zoneAbbreviation(d, timeZone)}`;
+  try {
+    return `${format(new TZDate(d, timeZone), pattern)} ${zoneAbbreviation(d, timeZone)}`;
+  } catch {
+    return '—';
+  }
 }
 
 /** "in 3 hours", "5 minutes ago". */
@@ -42,4 +47,16 @@ export function fromLocalInput(value: string, timeZone: string): string | null {
   const [, y, mo, d, h, mi] = m.map(Number);
   const at = new TZDate(y, mo - 1, d, h, mi, timeZone);
   return isValid(at) ? at.toISOString() : null;
+}
+
+/** The zone's offset from UTC now, e.g. "UTC−05:00". */
+export function utcOffset(timeZone: string, now = new Date()): string {
+  try {
+    const part = new Intl.DateTimeFormat('en-US', { timeZone, timeZoneName: 'longOffset' })
+      .formatToParts(now)
+      .find((p) => p.type === 'timeZoneName')?.value;
+    return part === 'GMT' ? 'UTC±00:00' : (part ?? '').replace('GMT', 'UTC').replace('-', '−');
+  } catch {
+    return '';
+  }
 }

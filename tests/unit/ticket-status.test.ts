@@ -1,6 +1,6 @@
 import { ticketPriorities, ticketStatuses } from '@shared/schemas/enums';
 import { describe, expect, it } from 'vitest';
-import { palette } from '../../../../tailwind.config';
+import { palette } from '../../tailwind.config';
 import { priorityTones, statusTones } from '@/features/tickets/components/ticket-status';
 
 // WCAG 2.2, "relative luminance" and "contrast ratio" definitions (w3.org/TR/WCAG22/#dfn-relative-luminance).

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatSiteTime, fromLocalInput, toLocalInput } from '@/features/tickets/components/site-time';
+import { formatSiteTime, fromLocalInput, toLocalInput, utcOffset } from '@/lib/site-time';
 
 // Offsets from the IANA time zone database: America/Chicago is UTC−6 in winter (CST) and
 // UTC−5 in summer (CDT); America/Phoenix keeps UTC−7 all year (no daylight saving).
@@ -9,6 +9,13 @@ describe('site local time', () => {
     expect(formatSiteTime('2026-07-10T15:00:00Z', 'America/Chicago')).toBe('Fri 10 Jul, 10:00 CDT');
     expect(formatSiteTime('2026-07-10T15:00:00Z', 'America/Phoenix')).toBe('Fri 10 Jul, 08:00 MST');
     expect(formatSiteTime(null, 'America/Chicago')).toBe('—');
+  });
+
+  it('writes the time at the site now in the same format, and a dash for a zone it does not know', () => {
+    expect(formatSiteTime(new Date('2026-12-10T15:00:00Z'), 'America/Chicago')).toBe('Thu 10 Dec, 09:00 CST');
+    expect(formatSiteTime(new Date('2026-12-10T15:00:00Z'), 'Nowhere/Bogus')).toBe('—');
+    expect(utcOffset('America/Chicago', new Date('2026-12-10T15:00:00Z'))).toBe('UTC−06:00');
+    expect(utcOffset('Nowhere/Bogus')).toBe('');
   });
 
   it('reads a datetime-local value as the site’s wall-clock time, and back', () => {

@@ -1,0 +1,73 @@
+import { Link } from 'react-router-dom';
+import { Card } from '@/components/ui/card';
+import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
+import { SerialLookupForm } from '@/features/scan/components/serial-lookup-form';
+import { ticketsPageQueryOptions, useTicketsPage } from '@/features/tickets/api/get-tickets';
+import type { TicketFilters } from '@/features/tickets/api/keys';
+import { TicketCardList } from '@/features/tickets/components/ticket-card-list';
+import { ServiceCaution } from '@/features/walls/components/service-caution';
+import { greeting, HomeSection, MoreLink } from '@/app/routes/app/home-section';
+import { firstName } from '@/lib/format';
+import { queryClient } from '@/lib/query-client';
+
+/** The technician's open tickets, the soonest due first (`GET /api/tickets?assigneeId=me&open=true`). */
+const myOpenTickets: TicketFilters = { assigneeId: 'me', open: 'true', sort: 'resolutionDueAt', dir: 'asc' };
+const myTicketsLimit = 25;
+
+/** Warms the technician's open tickets. */
+export async function prefetchTechnicianHome() {
+  await queryClient.prefetchQuery(ticketsPageQueryOptions(myOpenTickets, myTicketsLimit));
+}
+
+/** The technician's start page: their open tickets, the soonest due first, and a cabinet lookup. */
+export function TechnicianHome({ name }: { name: string }) {
+  const tickets = useTicketsPage(myOpenTickets, myTicketsLimit);
+  return (
+    <>
+      <PageHeader title={`${greeting()}, ${firstName(name)}`} description="Your open tickets, the soonest due first." />
+      <div className="space-y-6">
+        <HomeSection
+          id="home-my-tickets"
+          title={
+            <>
+              My tickets
+              {tickets.data && tickets.data.items.length > 0 ? (
+                <span className="ml-2 rounded-full bg-ink-50 px-2 py-0.5 align-middle text-sm font-medium tabular-nums text-ink-800">
+                  <span className="sr-only">: </span>
+                  {tickets.data.items.length}
+                  {tickets.data.nextCursor ? '+' : ''}
+                  <span className="sr-only"> open</span>
+                </span>
+              ) : null}
+            </>
+          }
+          more={<MoreLink to={paths.tickets.getHref()}>All</MoreLink>}
+        >
+          <TicketCardList
+            label="Open tickets assigned to you"
+            items={tickets.data?.items ?? []}
+            isLoading={tickets.isPending}
+            error={tickets.error}
+            onRetry={() => tickets.refetch()}
+            clock="always"
+            empty={{ title: 'Nothing assigned to you is open', description: 'The office assigns tickets; they appear here.' }}
+          />
+          {tickets.data?.nextCursor ? (
+            <p className="mt-3 text-base text-stone-600">
+              {myTicketsLimit} shown, the soonest due. <Link to={paths.tickets.getHref()} className="link">See them all</Link>
+            </p>
+          ) : null}
+        </HomeSection>
+
+        <HomeSection id="home-open-cabinet" title="Open a cabinet" more={<MoreLink to={paths.scan.getHref()}>Scan</MoreLink>}>
+          <Card>
+            <SerialLookupForm hint="Printed on the cabinet's label, above the QR code." />
+          </Card>
+        </HomeSection>
+
+        <ServiceCaution />
+      </div>
+    </>
+  );
+}
