@@ -13,6 +13,7 @@ import { TicketCardList } from '@/features/tickets/components/ticket-card-list';
 import { filtersFromParams, filtersToRecord } from '@/features/tickets/components/ticket-filters';
 import { TicketsTable } from '@/features/tickets/components/tickets-table';
 import { requireUser } from '@/app/auth-guard';
+import { useLeavingPage } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { audienceOf, useUser, type Audience } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
@@ -60,8 +61,11 @@ const newTicketButton = (
 
 function OfficeTickets() {
   const [params, setParams] = useSearchParams();
+  const leaving = useLeavingPage();
   const filters = filtersFromParams(params);
-  const apply = (next: TicketFilters) => setParams(new URLSearchParams(filtersToRecord(next)), { replace: true });
+  const apply = (next: TicketFilters) => {
+    if (!leaving.current) setParams(new URLSearchParams(filtersToRecord(next)), { replace: true });
+  };
   return (
     <>
       <PageHeader title="Tickets" description="Every service request, with its service-plan clock." actions={newTicketButton} />
@@ -79,12 +83,14 @@ const showChoices: { value: Show; label: string }[] = [
 
 function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
   const [params, setParams] = useSearchParams();
+  const leaving = useLeavingPage();
   const show = showOf(params);
   const filters = filtersFor(audience, params);
   const query = useTickets(filters);
   const items = query.data?.pages.flatMap((p) => p.items) ?? [];
   const isClient = audience === 'client';
-  const update = (key: string, value: string | undefined) =>
+  const update = (key: string, value: string | undefined) => {
+    if (leaving.current) return;
     setParams(
       (prev) => {
         const p = new URLSearchParams(prev);
@@ -94,6 +100,7 @@ function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
       },
       { replace: true },
     );
+  };
 
   return (
     <>
