@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { and, count, desc, eq, gt, isNull, max, ne } from 'drizzle-orm';
-import type { SessionUser } from '../../shared/schemas/auth.js';
+import type { LinkToken, SessionUser } from '../../shared/schemas/auth.js';
 import { config } from '../config.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { authTokens, sessions, signInAttempts, users } from '../db/schema/accounts.js';
@@ -243,7 +243,7 @@ async function liveToken(tx: DbOrTx, token: string, lock: boolean) {
   return row;
 }
 
-export async function describeLinkToken(token: string) {
+export async function describeLinkToken(token: string): Promise<LinkToken> {
   const { kind, email, name } = await liveToken(db(), token, false);
   return { kind, email, name };
 }

@@ -8,13 +8,8 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Spinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { attentionTicketsQueryOptions } from '@/features/board/api/get-attention-tickets';
-import { clockCountsQueryOptions } from '@/features/board/api/get-clock-counts';
-import { waitingTicketsQueryOptions } from '@/features/board/api/get-waiting-tickets';
 import { TodayBoard } from '@/features/board/components/today-board';
 import { SerialLookupForm } from '@/features/scan/components/serial-lookup-form';
-import { ticketsPageQueryOptions, useTicketsPage } from '@/features/tickets/api/get-tickets';
-import type { TicketFilters } from '@/features/tickets/api/keys';
 import { TicketCardList } from '@/features/tickets/components/ticket-card-list';
 import { ServiceCaution } from '@/features/walls/components/service-caution';
 import { WallsBySite } from '@/features/walls/components/walls-by-site';
@@ -26,6 +21,7 @@ import { audienceOf, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { useQuery } from '@tanstack/react-query';
 import { wallQueries } from '@/resources/walls';
+import { ticketQueries, type TicketFilters } from '@/resources/tickets';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 /** The technician's open tickets, the soonest due first (`GET /api/tickets?assigneeId=me&open=true`). */
@@ -42,17 +38,17 @@ export async function loader({ request }: LoaderFunctionArgs) {
   // Warm what the start page shows; anything that fails shows in its own section with the error.
   const audience = audienceOf(user);
   if (audience === 'technician') {
-    await queryClient.prefetchQuery(ticketsPageQueryOptions(myOpenTickets, myTicketsLimit));
+    await queryClient.prefetchQuery(ticketQueries.page(myOpenTickets, myTicketsLimit));
   } else if (audience === 'client') {
     await Promise.all([
       queryClient.prefetchQuery(wallQueries.page({}, clientWallsLimit)),
-      queryClient.prefetchQuery(ticketsPageQueryOptions(clientOpenTickets, clientTicketsLimit)),
+      queryClient.prefetchQuery(ticketQueries.page(clientOpenTickets, clientTicketsLimit)),
     ]);
   } else {
     await Promise.all([
-      queryClient.prefetchQuery(attentionTicketsQueryOptions()),
-      queryClient.prefetchQuery(waitingTicketsQueryOptions()),
-      queryClient.prefetchQuery(clockCountsQueryOptions()),
+      queryClient.prefetchQuery(ticketQueries.attention()),
+      queryClient.prefetchQuery(ticketQueries.waiting()),
+      queryClient.prefetchQuery(ticketQueries.clockCounts()),
     ]);
   }
   return null;
@@ -115,7 +111,7 @@ function OfficeHome({ name }: { name: string }) {
 }
 
 function TechnicianHome({ name }: { name: string }) {
-  const tickets = useTicketsPage(myOpenTickets, myTicketsLimit);
+  const tickets = useQuery(ticketQueries.page(myOpenTickets, myTicketsLimit));
   return (
     <>
       <PageHeader title={`${greeting()}, ${firstName(name)}`} description="Your open tickets, the soonest due first." />
@@ -179,7 +175,7 @@ const reportFaultButton = (
 
 function ClientHome({ name, organisation }: { name: string; organisation: string }) {
   const walls = useQuery(wallQueries.page({}, clientWallsLimit));
-  const tickets = useTicketsPage(clientOpenTickets, clientTicketsLimit);
+  const tickets = useQuery(ticketQueries.page(clientOpenTickets, clientTicketsLimit));
   const wallItems = walls.data?.items ?? [];
   const withTickets = wallItems.filter((w) => w.openTicketCount > 0).length;
   return (

@@ -1,3 +1,4 @@
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
 import { Plus } from 'lucide-react';
 import clsx from 'clsx';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
@@ -6,8 +7,6 @@ import { pagedQueryProps } from '@/components/ui/data-table';
 import { FilterSearch } from '@/components/ui/filters';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
-import { ticketsInfiniteQueryOptions, useTickets } from '@/features/tickets/api/get-tickets';
-import type { TicketFilters } from '@/features/tickets/api/keys';
 import { SavedViews } from '@/features/tickets/components/saved-views';
 import { TicketCardList } from '@/features/tickets/components/ticket-card-list';
 import { filtersFromParams, filtersToRecord } from '@/features/tickets/components/ticket-filters';
@@ -17,6 +16,7 @@ import { useLeavingPage } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { audienceOf, useUser, type Audience } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { ticketQueries, type TicketFilters } from '@/resources/tickets';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 type Show = 'open' | 'done' | 'all';
@@ -42,7 +42,7 @@ export async function loader({ request }: LoaderFunctionArgs) {
   const user = await requireUser(request);
   const filters = filtersFor(audienceOf(user), new URL(request.url).searchParams);
   // Warm the cache; a failure shows in the list (with a retry) rather than instead of the page.
-  await queryClient.ensureInfiniteQueryData(ticketsInfiniteQueryOptions(filters)).catch(() => undefined);
+  await queryClient.ensureInfiniteQueryData(ticketQueries.list(filters)).catch(() => undefined);
   return null;
 }
 
@@ -86,7 +86,7 @@ function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
   const leaving = useLeavingPage();
   const show = showOf(params);
   const filters = filtersFor(audience, params);
-  const query = useTickets(filters);
+  const query = useInfiniteQuery({ ...ticketQueries.list(filters), placeholderData: keepPreviousData });
   const items = query.data?.pages.flatMap((p) => p.items) ?? [];
   const isClient = audience === 'client';
   const update = (key: string, value: string | undefined) => {

@@ -1,4 +1,5 @@
-import type { AuditEventView } from '@shared/schemas/auth';
+import type { AuditEventView } from '@shared/schemas/users';
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
 import { createColumnHelper } from '@tanstack/react-table';
 import { History, X } from 'lucide-react';
 import { useMemo } from 'react';
@@ -6,10 +7,9 @@ import { Badge } from '@/components/ui/badge';
 import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
-import { useAuditEvents } from '@/features/audit/api/get-audit-events';
-import type { AuditFilters } from '@/features/audit/api/keys';
 import { AuditChanges } from '@/features/audit/components/audit-changes';
 import { formatDateTime } from '@/lib/format';
+import { auditQueries, type AuditFilters } from '@/resources/audit';
 
 /** The kinds of record the log speaks of (the server's `entity` names). */
 const entityLabels: Record<string, string> = {
@@ -47,7 +47,7 @@ interface AuditTableProps {
 }
 
 export function AuditTable({ filters, onFiltersChange }: AuditTableProps) {
-  const query = useAuditEvents(filters);
+  const query = useInfiniteQuery({ ...auditQueries.list(filters), placeholderData: keepPreviousData });
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
 
   const columns = useMemo(

@@ -1,3 +1,5 @@
+import type { Attachment } from '@shared/schemas/attachments';
+import { useQuery } from '@tanstack/react-query';
 import { Download, FileText, Image as ImageIcon, Trash2, Upload } from 'lucide-react';
 import { useId, useRef, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
@@ -8,12 +10,10 @@ import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Spinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
-import { useDeleteDocument } from '@/features/documents/api/delete-document';
-import { useWallDocuments } from '@/features/documents/api/get-wall-documents';
-import type { Attachment } from '@/features/documents/api/types';
-import { useUploadWallDocument } from '@/features/documents/api/upload-wall-document';
+import { useDeleteDocument, useUploadWallDocument } from '@/features/documents/api/mutations';
 import { errorMessage } from '@/lib/errors';
 import { formatDateTime } from '@/lib/format';
+import { attachmentQueries } from '@/resources/attachments';
 
 export function fileSize(bytes: number) {
   if (bytes < 1024) return `${bytes} B`;
@@ -33,7 +33,7 @@ interface WallDocumentsProps {
 
 /** As-built drawings, controller configuration files and calibration reports of a wall. */
 export function WallDocuments({ wallId, canUpload, canMarkInternal, canDelete }: WallDocumentsProps) {
-  const query = useWallDocuments(wallId);
+  const query = useQuery(attachmentQueries.ofWall(wallId));
   const remove = useDeleteDocument();
   const toast = useToast();
   const [removing, setRemoving] = useState<Attachment | null>(null);

@@ -1,4 +1,5 @@
 import type { MailboxItem } from '@shared/schemas/auth';
+import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { ArrowLeft, Inbox, MailOpen, Paperclip, RefreshCw } from 'lucide-react';
 import { useState } from 'react';
@@ -6,14 +7,14 @@ import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageSpinner } from '@/components/ui/spinner';
-import { useMailbox } from '@/features/mailbox/api/get-mailbox';
 import { LinkifiedText } from '@/features/mailbox/components/linkified-text';
 import { errorMessage, isNotFound } from '@/lib/errors';
 import { formatAgo, formatDateTime } from '@/lib/format';
+import { mailboxQueries } from '@/resources/mailbox';
 
 /** A list of received messages and a reading pane (one at a time on a phone). */
 export function MailboxView() {
-  const mailbox = useMailbox();
+  const mailbox = useQuery(mailboxQueries.list());
   const [selectedId, setSelectedId] = useState<string | null>(null);
 
   if (mailbox.isPending) return <PageSpinner label="Loading the mailbox" />;
@@ -33,7 +34,7 @@ export function MailboxView() {
     );
   }
 
-  const items = mailbox.data;
+  const items = mailbox.data.items;
   const selected = items.find((m) => m.id === selectedId) ?? null;
 
   return (

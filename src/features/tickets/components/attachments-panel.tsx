@@ -1,3 +1,5 @@
+import type { Attachment } from '@shared/schemas/attachments';
+import { useQuery } from '@tanstack/react-query';
 import { Download, FileText, Lock, Paperclip, PlayCircle } from 'lucide-react';
 import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
@@ -5,21 +7,20 @@ import { buttonClasses } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Dialog } from '@/components/ui/dialog';
 import { Spinner } from '@/components/ui/spinner';
-import { downloadUrl, inlineUrl, useAttachments } from '@/features/tickets/api/get-attachments';
-import type { TicketAttachment } from '@/features/tickets/api/types';
 import { MediaPicker, UploadList } from '@/features/tickets/components/upload-list';
 import { useUploadQueue } from '@/features/tickets/components/use-upload-queue';
 import { errorMessage } from '@/lib/errors';
 import { formatDateTime } from '@/lib/format';
+import { attachmentQueries, downloadUrl, inlineUrl } from '@/resources/attachments';
 
 const sizeText = (bytes: number) => (bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`);
 
 /** Photos, videos and files of a ticket: thumbnails, a larger view, downloads, and adding more. */
 export function AttachmentsPanel({ ticketId, canUpload }: { ticketId: string; canUpload: boolean }) {
-  const attachments = useAttachments(ticketId);
+  const attachments = useQuery(attachmentQueries.ofTicket(ticketId));
   const uploads = useUploadQueue();
-  const [viewing, setViewing] = useState<TicketAttachment | null>(null);
-  const items = attachments.data ?? [];
+  const [viewing, setViewing] = useState<Attachment | null>(null);
+  const items = attachments.data?.items ?? [];
 
   const onFiles = async (files: File[]) => {
     await uploads.sendAll(ticketId, uploads.add(files));

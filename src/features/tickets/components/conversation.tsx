@@ -1,4 +1,5 @@
-import { commentInput } from '@shared/schemas/tickets';
+import { commentInput, type TicketComment } from '@shared/schemas/tickets';
+import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { Globe, Lock, MessagesSquare } from 'lucide-react';
 import { useId } from 'react';
@@ -8,11 +9,10 @@ import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { Spinner } from '@/components/ui/spinner';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { useToast } from '@/components/ui/toast';
-import { useAddComment } from '@/features/tickets/api/add-comment';
-import { useComments } from '@/features/tickets/api/get-comments';
-import type { TicketComment } from '@/features/tickets/api/types';
+import { useAddComment } from '@/features/tickets/api/mutations';
 import { errorMessage } from '@/lib/errors';
 import { formatAgo, formatDateTime, initials } from '@/lib/format';
+import { ticketQueries } from '@/resources/tickets';
 
 export const internalLabel = 'Internal — not visible to the client';
 
@@ -26,8 +26,8 @@ interface ConversationProps {
 
 /** The ticket's conversation, oldest first, and the composer. */
 export function Conversation({ ticketId, staff, closed }: ConversationProps) {
-  const comments = useComments(ticketId);
-  const items = comments.data ?? [];
+  const comments = useQuery(ticketQueries.comments(ticketId));
+  const items = comments.data?.items ?? [];
   return (
     <Card title={<span className="inline-flex items-center gap-2"><MessagesSquare className="h-4 w-4 text-ink-600" aria-hidden="true" />Conversation</span>}>
       <div className="space-y-5">

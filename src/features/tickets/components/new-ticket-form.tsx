@@ -1,7 +1,9 @@
 import type { TicketScope } from '@shared/schemas/enums';
 import { positionLabel, type Position } from '@shared/schemas/register';
-import { createTicketInput, type CreateTicketInput } from '@shared/schemas/tickets';
+import { createTicketInput, type CreateTicketInput, type TicketDetail } from '@shared/schemas/tickets';
+import type { WallSummary } from '@shared/schemas/walls';
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { Building2, Cpu, Grid3x3, LayoutGrid, MapPin, X } from 'lucide-react';
 import { useEffect, useState, type ReactNode } from 'react';
@@ -19,15 +21,14 @@ import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { useCreateTicket } from '@/features/tickets/api/create-ticket';
-import { useSiteOptions } from '@/features/tickets/api/get-site-options';
-import { useWallOptions } from '@/features/tickets/api/get-wall-options';
-import type { TicketDetail, WallOption } from '@/features/tickets/api/types';
+import { useCreateTicket } from '@/features/tickets/api/mutations';
 import { PriorityPicker } from '@/features/tickets/components/priority-picker';
 import { TicketWallMap } from '@/features/tickets/components/ticket-wall-map';
 import { MediaPicker, UploadList } from '@/features/tickets/components/upload-list';
 import { useUploadQueue } from '@/features/tickets/components/use-upload-queue';
 import { errorMessage } from '@/lib/errors';
+import { siteQueries } from '@/resources/sites';
+import { wallQueries } from '@/resources/walls';
 
 /**
  * The shared schema's rules, with words for a person opening a ticket where the generic
@@ -53,7 +54,7 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
   const toast = useToast();
   const create = useCreateTicket();
   const uploads = useUploadQueue();
-  const sites = useSiteOptions();
+  const sites = useQuery(siteQueries.options());
   const [created, setCreated] = useState<TicketDetail | null>(null);
   const [uploadFailures, setUploadFailures] = useState(0);
 
@@ -65,13 +66,13 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
   const wallId = form.watch('wallId');
   const scope = (form.watch('scope') ?? 'cells') as TicketScope;
   const cells = (form.watch('cells') ?? []) as Position[];
-  const walls = useWallOptions(siteId || undefined);
-  const wall = walls.data?.find((w) => w.id === wallId) ?? null;
+  const walls = useQuery({ ...wallQueries.page({ siteId: siteId || undefined }), enabled: Boolean(siteId) });
+  const wall = walls.data?.items.find((w) => w.id === wallId) ?? null;
   const [place, setPlace] = useState<'wall' | 'site' | ''>('');
 
   // One site: nothing to choose.
   useEffect(() => {
-    if (sites.data?.length === 1 && !form.getValues('siteId')) form.setValue('siteId', sites.data[0].id);
+    if (sites.data?.items.length === 1 && !form.getValues('siteId')) form.setValue('siteId', sites.data.items[0].id);
   }, [sites.data, form]);
 
   // A new site: the wall and cells chosen before belong to another site.
@@ -81,7 +82,7 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
     setPlace('');
   }, [siteId, form]);
 
-  const chooseWall = (w: WallOption | null) => {
+  const chooseWall = (w: WallSummary | null) => {
     form.setValue('wallId', w?.id ?? null, { shouldValidate: form.formState.isSubmitted });
     form.setValue('cells', []);
     form.setValue('scope', w ? 'cells' : 'site');
@@ -99,7 +100,7 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
 
   if (sites.isPending) return <p className="flex items-center gap-2 py-10 text-stone-600"><Spinner label="" /> Loading your sites…</p>;
   if (sites.isError) return <Alert tone="danger" title="Your sites could not be loaded.">{errorMessage(sites.error)}</Alert>;
-  if (sites.data.length === 0) {
+  if (sites.data.items.length === 0) {
     return (
       <Alert tone="info" title="No sites yet">
         {forClient ? 'Your organisation has no sites in Gridkeep yet. Call or e-mail the service desk and we will set them up.' : 'Add a client site first.'}
@@ -163,21 +164,21 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
       }}
     >
       <Step number={1} title="Where is the problem?">
-        {sites.data.length > 1 ? (
+        {sites.data.items.length > 1 ? (
           <SelectField
             name="siteId"
             label="Site"
             placeholder="Choose the site…"
-            options={sites.data.map((s) => ({ value: s.id, label: forClient ? `${s.name}${s.city ? ` · ${s.city}` : ''}` : `${s.name} (${s.clientName})` }))}
+            options={sites.data.items.map((s) => ({ value: s.id, label: forClient ? `${s.name}${s.city ? ` · ${s.city}` : ''}` : `${s.name} (${s.clientName})` }))}
           />
         ) : (
           <p className="flex items-center gap-2 text-base text-stone-800">
             <MapPin className="h-4 w-4 text-ink-600" aria-hidden="true" />
-            {sites.data[0].name}
-            {sites.data[0].city ? <span className="text-stone-600">· {sites.data[0].city}</span> : null}
+            {sites.data.items[0].name}
+            {sites.data.items[0].city ? <span className="text-stone-600">· {sites.data.items[0].city}</span> : null}
           </p>
         )}
-        {siteError && sites.data.length === 1 ? <FieldErrorText id="site-error" message={siteError} /> : null}
+        {siteError && sites.data.items.length === 1 ? <FieldErrorText id="site-error" message={siteError} /> : null}
 
         {siteId ? (
           <fieldset className="space-y-2" aria-describedby={wallError ? 'wall-error' : undefined}>
@@ -188,7 +189,7 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
               <Alert tone="danger">{errorMessage(walls.error)}</Alert>
             ) : (
               <div className="grid gap-2 sm:grid-cols-2">
-                {walls.data.map((w) => (
+                {walls.data.items.map((w) => (
                   <ChoiceCard
                     key={w.id}
                     name="wall-choice"

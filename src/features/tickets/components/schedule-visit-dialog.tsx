@@ -1,3 +1,5 @@
+import type { TicketDetail } from '@shared/schemas/tickets';
+import { useQuery } from '@tanstack/react-query';
 import { addDays, isValid, parseISO, set } from 'date-fns';
 import { TZDate } from '@date-fns/tz';
 import { useId, useState } from 'react';
@@ -7,11 +9,10 @@ import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { inputClasses } from '@/components/ui/field';
 import { Spinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
-import { useStaff } from '@/features/tickets/api/get-staff';
-import type { TicketDetail } from '@/features/tickets/api/types';
-import { useUpdateTicket } from '@/features/tickets/api/update-ticket';
+import { useUpdateTicket } from '@/features/tickets/api/mutations';
 import { formatSiteTime, fromLocalInput, toLocalInput, zoneAbbreviation } from '@/features/tickets/components/site-time';
 import { errorMessage } from '@/lib/errors';
+import { userQueries } from '@/resources/users';
 
 interface ScheduleVisitDialogProps {
   open: boolean;
@@ -38,7 +39,7 @@ export function ScheduleVisitDialog({ open, onClose, ticket, timeZone }: Schedul
 }
 
 function ScheduleForm({ ticket, timeZone, onDone }: { ticket: TicketDetail; timeZone: string; onDone: () => void }) {
-  const staff = useStaff();
+  const staff = useQuery(userQueries.staff());
   const update = useUpdateTicket();
   const toast = useToast();
   const initial = defaultWindow(timeZone);
@@ -47,7 +48,7 @@ function ScheduleForm({ ticket, timeZone, onDone }: { ticket: TicketDetail; time
   const [technicianIds, setTechnicianIds] = useState<string[]>(ticket.assignee ? [ticket.assignee.id] : []);
   const [problem, setProblem] = useState<string | null>(null);
   const ids = { start: useId(), end: useId() };
-  const technicians = (staff.data ?? []).filter((u) => u.role === 'technician');
+  const technicians = (staff.data?.items ?? []).filter((u) => u.role === 'technician');
   const zone = zoneAbbreviation(new Date(), timeZone);
 
   const submit = async () => {

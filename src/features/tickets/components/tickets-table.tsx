@@ -1,4 +1,5 @@
-import { priorityGuidance } from '@shared/schemas/tickets';
+import { priorityGuidance, type TicketListItem } from '@shared/schemas/tickets';
+import { keepPreviousData, useInfiniteQuery, useQuery } from '@tanstack/react-query';
 import type { SortingState } from '@tanstack/react-table';
 import { createColumnHelper } from '@tanstack/react-table';
 import { Ticket } from 'lucide-react';
@@ -8,17 +9,15 @@ import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import { paths } from '@/config/paths';
-import { useClientOptions } from '@/features/tickets/api/get-client-options';
-import { useSiteOptions } from '@/features/tickets/api/get-site-options';
-import { useStaff } from '@/features/tickets/api/get-staff';
-import { useTickets } from '@/features/tickets/api/get-tickets';
-import { useWallOptions } from '@/features/tickets/api/get-wall-options';
-import type { TicketFilters } from '@/features/tickets/api/keys';
-import type { TicketListItem } from '@/features/tickets/api/types';
 import { clockFilterOptions, priorityFilterOptions, statusFilterOptions } from '@/features/tickets/components/ticket-filter-options';
 import { hasAnyFilter, statusChoiceOf, withStatusChoice } from '@/features/tickets/components/ticket-filters';
 import { ClockBadge, clockLabels, PriorityBadge, statusText, TicketStatusBadge } from '@/features/tickets/components/ticket-status';
 import { formatAgo, formatDateTime } from '@/lib/format';
+import { clientQueries } from '@/resources/clients';
+import { siteQueries } from '@/resources/sites';
+import { ticketQueries, type TicketFilters } from '@/resources/tickets';
+import { userQueries } from '@/resources/users';
+import { wallQueries } from '@/resources/walls';
 
 const column = createColumnHelper<TicketListItem>();
 
@@ -31,11 +30,11 @@ const dash = <span className="text-stone-400">—</span>;
 
 /** The office's list of every ticket: filters in the address, server-side sort, keyset pages. */
 export function TicketsTable({ filters, onFiltersChange }: TicketsTableProps) {
-  const query = useTickets(filters);
-  const clients = useClientOptions();
-  const sites = useSiteOptions();
-  const walls = useWallOptions(filters.siteId);
-  const staff = useStaff();
+  const query = useInfiniteQuery({ ...ticketQueries.list(filters), placeholderData: keepPreviousData });
+  const clients = useQuery(clientQueries.options());
+  const sites = useQuery(siteQueries.options());
+  const walls = useQuery({ ...wallQueries.page({ siteId: filters.siteId }), enabled: Boolean(filters.siteId) });
+  const staff = useQuery(userQueries.staff());
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
 
   const columns = useMemo(
@@ -128,7 +127,7 @@ export function TicketsTable({ filters, onFiltersChange }: TicketsTableProps) {
   );
 
   const sorting: SortingState = [{ id: filters.sort ?? 'createdAt', desc: (filters.dir ?? 'desc') === 'desc' }];
-  const siteChoices = (sites.data ?? [])
+  const siteChoices = (sites.data?.items ?? [])
     .filter((s) => !filters.clientId || s.clientId === filters.clientId)
     .map((s) => ({ value: s.id, label: filters.clientId ? s.name : `${s.name} (${s.clientName})` }));
   const set = (patch: Partial<TicketFilters>) => onFiltersChange({ ...filters, ...patch });
@@ -159,7 +158,7 @@ export function TicketsTable({ filters, onFiltersChange }: TicketsTableProps) {
             options={[
               { value: 'me', label: 'Me' },
               { value: 'none', label: 'Unassigned' },
-              ...(staff.data ?? []).map((u) => ({ value: u.id, label: u.name })),
+              ...(staff.data?.items ?? []).map((u) => ({ value: u.id, label: u.name })),
             ]}
             value={filters.assigneeId ?? ''}
             onChange={(v) => set({ assigneeId: v || undefined })}
@@ -176,7 +175,7 @@ export function TicketsTable({ filters, onFiltersChange }: TicketsTableProps) {
             <FilterSelect
               label="Wall"
               anyLabel="All walls"
-              options={(walls.data ?? []).map((w) => ({ value: w.id, label: w.name }))}
+              options={(walls.data?.items ?? []).map((w) => ({ value: w.id, label: w.name }))}
               value={filters.wallId ?? ''}
               onChange={(v) => set({ wallId: v || undefined })}
             />

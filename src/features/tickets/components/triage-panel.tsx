@@ -1,5 +1,6 @@
 import { ticketPriorities, type TicketPriority, type TicketStatus } from '@shared/schemas/enums';
-import { priorityGuidance } from '@shared/schemas/tickets';
+import { priorityGuidance, type TicketDetail } from '@shared/schemas/tickets';
+import { useQuery } from '@tanstack/react-query';
 import { CalendarPlus, GitMerge } from 'lucide-react';
 import { useId, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
@@ -7,14 +8,13 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { SelectBox } from '@/components/ui/select-field';
 import { useToast } from '@/components/ui/toast';
-import { useStaff } from '@/features/tickets/api/get-staff';
-import type { TicketDetail } from '@/features/tickets/api/types';
-import { useUpdateTicket } from '@/features/tickets/api/update-ticket';
+import { useUpdateTicket } from '@/features/tickets/api/mutations';
 import { MergeTicketDialog } from '@/features/tickets/components/merge-ticket-dialog';
 import { ScheduleVisitDialog } from '@/features/tickets/components/schedule-visit-dialog';
 import { statusText } from '@/features/tickets/components/ticket-status';
 import { errorMessage } from '@/lib/errors';
 import { roleLabels } from '@/lib/format';
+import { userQueries } from '@/resources/users';
 
 interface TriagePanelProps {
   ticket: TicketDetail;
@@ -31,7 +31,7 @@ export function TriagePanel({ ticket, office, timeZone }: TriagePanelProps) {
 
 function TriageForm({ ticket, office, timeZone }: TriagePanelProps) {
   const update = useUpdateTicket();
-  const staff = useStaff(office);
+  const staff = useQuery({ ...userQueries.staff(), enabled: office });
   const toast = useToast();
   const [status, setStatus] = useState<TicketStatus>(ticket.status);
   const [priority, setPriority] = useState<TicketPriority>(ticket.priority);
@@ -51,7 +51,7 @@ function TriageForm({ ticket, office, timeZone }: TriagePanelProps) {
   const canSchedule = office && !merged && (ticket.status === 'scheduled' || ticket.nextStatuses.includes('scheduled'));
   const canMerge = office && !merged && ticket.status !== 'closed';
 
-  const staffOptions = staff.data ?? [];
+  const staffOptions = staff.data?.items ?? [];
   const assigneeMissing = ticket.assignee && !staffOptions.some((u) => u.id === ticket.assignee!.id);
 
   const save = async () => {

@@ -1,4 +1,5 @@
-import type { UserSummary } from '@shared/schemas/auth';
+import type { UserSummary } from '@shared/schemas/users';
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
 import { createColumnHelper } from '@tanstack/react-table';
 import { Ellipsis, History, Mail, UserCheck, UserX, Users } from 'lucide-react';
 import { useMemo, useState } from 'react';
@@ -12,16 +13,14 @@ import { FilterSearch, FilterSelect } from '@/components/ui/filters';
 import { Popover, popoverItemClasses } from '@/components/ui/popover';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { useUsers } from '@/features/users/api/get-users';
-import type { UserFilters } from '@/features/users/api/keys';
-import { useResendInvite } from '@/features/users/api/resend-invite';
-import { useUpdateUser } from '@/features/users/api/update-user';
+import { useResendInvite, useUpdateUser } from '@/features/users/api/mutations';
 import { EditUserDialog } from '@/features/users/components/edit-user-dialog';
 import { roleDescriptions, roleOptions } from '@/features/users/components/role-options';
 import { UserStatus, userStatusText } from '@/features/users/components/user-status';
 import { errorMessage } from '@/lib/errors';
 import { formatAgo, formatDate, formatDateTime } from '@/lib/format';
 import { useUser } from '@/lib/session';
+import { userQueries, type UserFilters } from '@/resources/users';
 
 const column = createColumnHelper<UserSummary>();
 
@@ -33,7 +32,7 @@ interface UsersTableProps {
 export function UsersTable({ filters, onFiltersChange }: UsersTableProps) {
   const me = useUser();
   const toast = useToast();
-  const query = useUsers(filters);
+  const query = useInfiniteQuery({ ...userQueries.list(filters), placeholderData: keepPreviousData });
   const resend = useResendInvite();
   const update = useUpdateUser();
   const [editing, setEditing] = useState<UserSummary | null>(null);
