@@ -121,3 +121,5 @@ export function useUploadQueue() {
 
   return { items, add, remove, sendAll, retry, clearDone, busy: items.some((i) => i.status === 'uploading') };
 }
+
+export type UploadQueue = ReturnType<typeof useUploadQueue>;
