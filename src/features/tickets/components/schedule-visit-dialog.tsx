@@ -1,4 +1,5 @@
 import type { TicketDetail } from '@shared/schemas/tickets';
+import type { StaffMember } from '@shared/schemas/users';
 import { useQuery } from '@tanstack/react-query';
 import { addDays, isValid, parseISO, set } from 'date-fns';
 import { TZDate } from '@date-fns/tz';
@@ -98,26 +99,7 @@ function ScheduleForm({ ticket, timeZone, onDone }: { ticket: TicketDetail; time
           <input id={ids.end} type="datetime-local" value={end} onChange={(e) => setEnd(e.target.value)} className={inputClasses(false)} required />
         </div>
       </div>
-      <fieldset className="space-y-1">
-        <legend className="mb-1 text-sm font-medium text-stone-800">Technicians</legend>
-        {staff.isPending ? (
-          <Spinner />
-        ) : technicians.length === 0 ? (
-          <p className="text-sm text-stone-600">No technicians in the team yet.</p>
-        ) : (
-          technicians.map((t) => (
-            <label key={t.id} className="flex min-h-touch cursor-pointer items-center gap-3 md:min-h-9">
-              <input
-                type="checkbox"
-                className="h-5 w-5 accent-ink-700"
-                checked={technicianIds.includes(t.id)}
-                onChange={(e) => setTechnicianIds((all) => (e.target.checked ? [...all, t.id] : all.filter((id) => id !== t.id)))}
-              />
-              <span className="text-base">{t.name}</span>
-            </label>
-          ))
-        )}
-      </fieldset>
+      <TechnicianChoice technicians={technicians} loading={staff.isPending} chosen={technicianIds} onChange={setTechnicianIds} />
       <DialogActions>
         <Button onClick={onDone}>Cancel</Button>
         <Button type="submit" variant="primary" loading={update.isPending}>
@@ -125,5 +107,38 @@ function ScheduleForm({ ticket, timeZone, onDone }: { ticket: TicketDetail; time
         </Button>
       </DialogActions>
     </form>
+  );
+}
+
+interface TechnicianChoiceProps {
+  technicians: StaffMember[];
+  loading: boolean;
+  chosen: string[];
+  onChange: (update: (chosen: string[]) => string[]) => void;
+}
+
+/** Who goes: a checkbox per technician of the team. */
+function TechnicianChoice({ technicians, loading, chosen, onChange }: TechnicianChoiceProps) {
+  return (
+    <fieldset className="space-y-1">
+      <legend className="mb-1 text-sm font-medium text-stone-800">Technicians</legend>
+      {loading ? (
+        <Spinner />
+      ) : technicians.length === 0 ? (
+        <p className="text-sm text-stone-600">No technicians in the team yet.</p>
+      ) : (
+        technicians.map((t) => (
+          <label key={t.id} className="flex min-h-touch cursor-pointer items-center gap-3 md:min-h-9">
+            <input
+              type="checkbox"
+              className="h-5 w-5 accent-ink-700"
+              checked={chosen.includes(t.id)}
+              onChange={(e) => onChange((all) => (e.target.checked ? [...all, t.id] : all.filter((id) => id !== t.id)))}
+            />
+            <span className="text-base">{t.name}</span>
+          </label>
+        ))
+      )}
+    </fieldset>
   );
 }
