@@ -191,6 +191,11 @@ export async function listAudit(query: ListAuditQuery): Promise<Page<AuditEventV
   return { items: page.items.map(presentAuditEvent), nextCursor: page.nextCursor };
 }
 
+/** A member of the team as a picker shows them: no e-mail address, phone or password state. */
+function presentStaffMember(u: Pick<typeof users.$inferSelect, 'id' | 'name' | 'role'>): StaffMember {
+  return { id: u.id, name: u.name, role: u.role };
+}
+
 /**
  * The team, for pickers (assignee, technicians of a visit): active staff by name, with only
  * what a picker needs. The full user list stays the admin's.
@@ -201,5 +206,5 @@ export async function listStaff(): Promise<{ items: StaffMember[] }> {
     .from(users)
     .where(and(inArray(users.role, [...staffRoles]), isNull(users.disabledAt)))
     .orderBy(asc(users.name), asc(users.id));
-  return { items: rows };
+  return { items: rows.map(presentStaffMember) };
 }
