@@ -8,5 +8,13 @@ export interface SearchResults {
   sites: { id: string; name: string; clientName: string; city: string }[];
   walls: { id: string; name: string; siteName: string; clientName: string }[];
   /** Serials starting with the words; the wall and cell are null for a cabinet off any wall. */
-  cabinets: { id: string; serial: string; status: CabinetStatus; wallId: string | null; wallName: string | null; column: number | null; row: number | null }[];
+  cabinets: {
+    id: string;
+    serial: string;
+    status: CabinetStatus;
+    wallId: string | null;
+    wallName: string | null;
+    column: number | null;
+    row: number | null;
+  }[];
 }

@@ -63,7 +63,8 @@ const boardRefresh = 60_000;
 
 export const ticketQueries = {
   /** Pages of tickets (keyset paging), filtered and sorted by the server. */
-  list: (filters: TicketFilters) => pagedQueryOptions(ticketKeys.list(filters), (cursor, signal) => getTickets({ ...filters, cursor }, signal)),
+  list: (filters: TicketFilters) =>
+    pagedQueryOptions(ticketKeys.list(filters), (cursor, signal) => getTickets({ ...filters, cursor }, signal)),
   /** One page of at most `limit` tickets. */
   page: ticketsPage,
   /** The today board: open tickets at risk or breached, the soonest due first. */
@@ -113,7 +114,8 @@ export const ticketRequests = {
    * Status, priority, assignee, text; with status `scheduled` and `schedule`, plans a visit and
    * e-mails the client an invitation. A client user may only close a resolved ticket.
    */
-  update: ({ id, ...input }: UpdateTicketInput & { id: string }) => api.patch<TicketDetail>(`/api/tickets/${encodeURIComponent(id)}`, input),
+  update: ({ id, ...input }: UpdateTicketInput & { id: string }) =>
+    api.patch<TicketDetail>(`/api/tickets/${encodeURIComponent(id)}`, input),
   /** Closes a duplicate into the ticket that carries on (office only); notes go on both. */
   merge: ({ id, intoTicketId }: { id: string; intoTicketId: string }) =>
     api.post<TicketDetail>(`/api/tickets/${encodeURIComponent(id)}/merge`, { intoTicketId }),

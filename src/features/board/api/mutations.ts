@@ -5,4 +5,8 @@ import { useWrite } from '@/lib/mutation';
 
 /** Moves a new ticket to "acknowledged": the response clock is met and the client gets an e-mail. */
 export const useAcknowledgeTicket = () =>
-  useWrite((id: string) => ticketRequests.update({ id, status: 'acknowledged' }), [ticketKeys.all], (ticket, set) => set(ticketKeys.detail(ticket.id), ticket));
+  useWrite(
+    (id: string) => ticketRequests.update({ id, status: 'acknowledged' }),
+    [ticketKeys.all],
+    (ticket, set) => set(ticketKeys.detail(ticket.id), ticket),
+  );

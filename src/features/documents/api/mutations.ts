@@ -2,5 +2,6 @@
 import { attachmentKeys, attachmentRequests } from '@/resources/attachments';
 import { useWrite } from '@/lib/mutation';
 
-export const useUploadWallDocument = () => useWrite(attachmentRequests.uploadToWall, (_file, { wallId }) => [attachmentKeys.ofWall(wallId)]);
+export const useUploadWallDocument = () =>
+  useWrite(attachmentRequests.uploadToWall, (_file, { wallId }) => [attachmentKeys.ofWall(wallId)]);
 export const useDeleteDocument = () => useWrite(attachmentRequests.delete, [attachmentKeys.all]);

@@ -19,13 +19,14 @@ export const useMergeTicket = () => useWrite(ticketRequests.merge, owners, (tick
  * ticket itself is left as it is (the triage form on its page keeps what is being edited).
  */
 export const useAddComment = (ticketId: string) =>
-  useWrite((input: { body: string; visibility: CommentVisibility }) => ticketRequests.addComment({ ticketId, ...input }), [
-    ticketKeys.comments(ticketId),
-    ticketKeys.lists(),
-  ]);
+  useWrite(
+    (input: { body: string; visibility: CommentVisibility }) => ticketRequests.addComment({ ticketId, ...input }),
+    [ticketKeys.comments(ticketId), ticketKeys.lists()],
+  );
 
 export const useSaveTicketView = () => useWrite(ticketRequests.saveView, [ticketKeys.views()]);
 export const useDeleteTicketView = () => useWrite(ticketRequests.deleteView, [ticketKeys.views()]);
 
 /** One photo, video or file sent to a ticket; its list of attachments is refreshed after each. */
-export const useUploadTicketAttachment = () => useWrite(attachmentRequests.uploadToTicket, (_file, { ticketId }) => [attachmentKeys.ofTicket(ticketId)]);
+export const useUploadTicketAttachment = () =>
+  useWrite(attachmentRequests.uploadToTicket, (_file, { ticketId }) => [attachmentKeys.ofTicket(ticketId)]);
