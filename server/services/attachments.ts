@@ -1,6 +1,7 @@
 import { fileTypeFromBuffer } from 'file-type';
 import { and, desc, eq, or, type SQL } from 'drizzle-orm';
-import type { attachmentKinds } from '../../shared/schemas/enums.js';
+import type { Attachment } from '../../shared/schemas/attachments.js';
+import type { AttachmentKind } from '../../shared/schemas/enums.js';
 import { db } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
 import { attachments } from '../db/schema/files.js';
@@ -11,10 +12,8 @@ import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 
-type Kind = (typeof attachmentKinds)[number];
-
 /** What each purpose accepts, by the type found in the content (OWASP File Upload Cheat Sheet). */
-const accepted: Record<'document' | 'media', Record<string, Kind>> = {
+const accepted: Record<'document' | 'media', Record<string, AttachmentKind>> = {
   document: {
     'application/pdf': 'document',
     'image/png': 'photo',
@@ -94,7 +93,7 @@ export interface StoreInput {
  * Checks the content, stores the bytes under a random key, then records the file. If recording
  * fails the stored object is removed again: a failed upload leaves nothing half-made.
  */
-export async function storeAttachment(actor: Actor, input: StoreInput, record = db()) {
+export async function storeAttachment(actor: Actor, input: StoreInput, record = db()): Promise<Attachment> {
   const mime = await sniffType(input.file.buffer);
   const kind = mime ? accepted[input.purpose][mime] : undefined;
   if (!mime || !kind) {
@@ -129,7 +128,7 @@ export async function storeAttachment(actor: Actor, input: StoreInput, record = 
   }
 }
 
-export function presentAttachment(a: typeof attachments.$inferSelect & { uploadedByName?: string | null }) {
+export function presentAttachment(a: typeof attachments.$inferSelect & { uploadedByName?: string | null }): Attachment {
   return {
     id: a.id,
     kind: a.kind,
@@ -149,7 +148,7 @@ function visible(actor: Actor): SQL | undefined {
   return and(tenantWhere(actor, attachments.clientId), eq(attachments.internal, false));
 }
 
-export async function listAttachments(actor: Actor, owner: Owner) {
+export async function listAttachments(actor: Actor, owner: Owner): Promise<Attachment[]> {
   const conditions = Object.entries(owner)
     .filter(([, v]) => v)
     .map(([k, v]) => eq(attachments[k as keyof Owner], v as string));

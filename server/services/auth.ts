@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { and, count, desc, eq, gt, isNull, max, ne } from 'drizzle-orm';
-import type { SessionUser } from '../../shared/schemas/auth.js';
+import type { LinkToken, SessionUser } from '../../shared/schemas/auth.js';
 import { config } from '../config.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { authTokens, sessions, signInAttempts, users } from '../db/schema/accounts.js';
@@ -74,6 +74,11 @@ export interface IssuedSession {
   maxAgeMs: number;
 }
 
+/** The signed-in person as the client holds them: who, their role and organisation. */
+function presentSessionUser(u: Pick<typeof users.$inferSelect, 'id' | 'email' | 'name' | 'role' | 'clientId'>, clientName: string | null): SessionUser {
+  return { id: u.id, email: u.email, name: u.name, role: u.role, clientId: u.clientId, clientName };
+}
+
 async function sessionUser(tx: DbOrTx, userId: string): Promise<SessionUser> {
   const [row] = await tx
     .select({
@@ -88,7 +93,7 @@ async function sessionUser(tx: DbOrTx, userId: string): Promise<SessionUser> {
     .leftJoin(clients, eq(clients.id, users.clientId))
     .where(eq(users.id, userId));
   if (!row) throw notFound('User');
-  return row;
+  return presentSessionUser(row, row.clientName);
 }
 
 async function issueSession(tx: DbOrTx, userId: string, meta: { ip: string; userAgent: string }): Promise<IssuedSession> {
@@ -243,9 +248,13 @@ async function liveToken(tx: DbOrTx, token: string, lock: boolean) {
   return row;
 }
 
-export async function describeLinkToken(token: string) {
-  const { kind, email, name } = await liveToken(db(), token, false);
-  return { kind, email, name };
+/** What a link is for, and for whom: never its user id or expiry. */
+function presentLinkToken(t: { kind: LinkToken['kind']; email: string; name: string }): LinkToken {
+  return { kind: t.kind, email: t.email, name: t.name };
+}
+
+export async function describeLinkToken(token: string): Promise<LinkToken> {
+  return presentLinkToken(await liveToken(db(), token, false));
 }
 
 export async function redeemLinkToken(input: { token: string; password: string }, meta: { ip: string; userAgent: string }) {

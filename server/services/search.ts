@@ -1,4 +1,5 @@
 import { and, asc, eq, ilike, isNull, like } from 'drizzle-orm';
+import type { SearchResults } from '../../shared/schemas/search.js';
 import { db } from '../db/client.js';
 import { clients, sites } from '../db/schema/clients.js';
 import { cabinets, walls } from '../db/schema/walls.js';
@@ -9,7 +10,7 @@ import { tenantWhere } from './scope.js';
 const LIMIT = 8;
 
 /** One box for serial prefixes and client, site and wall names, scoped like every other read. */
-export async function search(actor: Actor, q: string) {
+export async function search(actor: Actor, q: string): Promise<SearchResults> {
   const pattern = likePattern(q);
   const serialPrefix = `${q.toUpperCase().replace(/[%_\\]/g, '\\$&')}%`;
   const [clientRows, siteRows, wallRows, cabinetRows] = await Promise.all([
@@ -42,5 +43,10 @@ export async function search(actor: Actor, q: string) {
       .orderBy(asc(cabinets.serial))
       .limit(LIMIT),
   ]);
-  return { clients: clientRows, sites: siteRows, walls: wallRows, cabinets: cabinetRows };
+  return {
+    clients: clientRows.map((c) => ({ id: c.id, name: c.name })),
+    sites: siteRows.map((s) => ({ id: s.id, name: s.name, clientName: s.clientName, city: s.city })),
+    walls: wallRows.map((w) => ({ id: w.id, name: w.name, siteName: w.siteName, clientName: w.clientName })),
+    cabinets: cabinetRows.map((c) => ({ id: c.id, serial: c.serial, status: c.status, wallId: c.wallId, wallName: c.wallName, column: c.column, row: c.row })),
+  };
 }

@@ -1,4 +1,5 @@
 import { aliasedTable, and, asc, eq, ilike, inArray, isNull, or, sql } from 'drizzle-orm';
+import type { Page } from '../../shared/schemas/common.js';
 import type { Role } from '../../shared/schemas/enums.js';
 import {
   allowedNextStatuses,
@@ -7,8 +8,15 @@ import {
   type CommentInput,
   type CreateTicketInput,
   type ListTicketsQuery,
+  type SavedTicketView,
   type SavedViewInput,
+  type TicketClockCounts,
   type TicketClockState,
+  type TicketComment,
+  type TicketDetail,
+  type TicketListItem,
+  type TicketRepair,
+  type TicketVisit,
   type UpdateTicketInput,
 } from '../../shared/schemas/tickets.js';
 import { positionLabel } from '../../shared/schemas/register.js';
@@ -80,7 +88,9 @@ function baseQuery(tx: DbOrTx) {
 
 const iso = (d: Date | null) => d?.toISOString() ?? null;
 
-function presentListRow(r: Awaited<ReturnType<ReturnType<typeof baseQuery>['execute']>>[number]) {
+type ListRow = Awaited<ReturnType<ReturnType<typeof baseQuery>['execute']>>[number];
+
+function presentListRow(r: ListRow): TicketListItem {
   return {
     id: r.id,
     number: r.number,
@@ -103,7 +113,7 @@ function presentListRow(r: Awaited<ReturnType<ReturnType<typeof baseQuery>['exec
   };
 }
 
-export async function listTickets(actor: Actor, query: ListTicketsQuery) {
+export async function listTickets(actor: Actor, query: ListTicketsQuery): Promise<Page<TicketListItem>> {
   const sortColumn = query.sort === 'resolutionDueAt' ? tickets.resolutionDueAt : query.sort === 'updatedAt' ? tickets.updatedAt : tickets.createdAt;
   const pattern = query.q ? likePattern(query.q) : undefined;
   const number = query.q?.match(/^(?:gk-?)?(\d{1,9})$/i)?.[1];
@@ -149,19 +159,10 @@ async function clockFor(tx: DbOrTx, siteId: string) {
   return planClock(row.plan, row.timeZone);
 }
 
-export async function getTicket(actor: Actor, id: string) {
-  const t = await visibleTicket(db(), actor, id);
-  const [row] = await baseQuery(db()).where(eq(tickets.id, id));
-  const wall = t.wallId
-    ? (await db().select({ id: walls.id, name: walls.name, columns: walls.columns, rows: walls.rows }).from(walls).where(eq(walls.id, t.wallId)))[0]
-    : null;
-  const ticketVisits = await db()
-    .select({ id: visits.id, status: visits.status, windowStart: visits.windowStart, windowEnd: visits.windowEnd, kind: visits.kind })
-    .from(visits)
-    .where(eq(visits.ticketId, id))
-    .orderBy(asc(visits.windowStart));
+/** The work done on the wall for this ticket, oldest first, with what the presenter needs. */
+async function repairsOf(ticketId: string) {
   const technician = aliasedTable(users, 'technician');
-  const ticketRepairs = await db()
+  return db()
     .select({
       r: repairs,
       cabinetSerial: cabinets.serial,
@@ -172,10 +173,49 @@ export async function getTicket(actor: Actor, id: string) {
     .leftJoin(cabinets, eq(cabinets.id, repairs.cabinetId))
     .leftJoin(technician, eq(technician.id, repairs.technicianId))
     .leftJoin(parts, eq(parts.id, repairs.partId))
-    .where(eq(repairs.ticketId, id))
+    .where(eq(repairs.ticketId, ticketId))
     .orderBy(asc(repairs.performedAt));
-  const [site] = await db().select({ timeZone: sites.timeZone }).from(sites).where(eq(sites.id, t.siteId));
-  const merged = t.mergedIntoId ? (await db().select({ id: tickets.id, number: tickets.number }).from(tickets).where(eq(tickets.id, t.mergedIntoId)))[0] : null;
+}
+
+/**
+ * A repair line. Clients see what was done and where; the part taken from stock, what became of
+ * the removed one and the technician's notes stay inside.
+ */
+function presentRepair(
+  { r, cabinetSerial, technicianName, partName }: Awaited<ReturnType<typeof repairsOf>>[number],
+  staff: boolean,
+): TicketRepair {
+  return {
+    id: r.id,
+    column: r.column,
+    row: r.row,
+    position: positionLabel(r),
+    module: r.moduleColumn && r.moduleRow ? { column: r.moduleColumn, row: r.moduleRow } : null,
+    component: r.component,
+    fault: r.fault,
+    action: r.action,
+    cabinetSerial,
+    technicianName,
+    performedAt: r.performedAt.toISOString(),
+    ...(staff ? { notes: r.notes, part: partName ? { name: partName, batch: r.partBatch } : null, removedPartFate: r.removedPartFate } : {}),
+  };
+}
+
+function presentVisit(v: Pick<typeof visits.$inferSelect, 'id' | 'status' | 'kind' | 'windowStart' | 'windowEnd'>): TicketVisit {
+  return { id: v.id, status: v.status, kind: v.kind, windowStart: v.windowStart.toISOString(), windowEnd: v.windowEnd.toISOString() };
+}
+
+interface TicketParts {
+  row: ListRow;
+  ticket: typeof tickets.$inferSelect;
+  wall: { id: string; name: string; columns: number; rows: number } | null;
+  siteTimeZone: string;
+  merged: { id: string; number: number } | null;
+  visits: TicketVisit[];
+  repairs: TicketRepair[];
+}
+
+function presentTicket(actor: Actor, { row, ticket: t, wall, siteTimeZone, merged, visits: ticketVisits, repairs: ticketRepairs }: TicketParts): TicketDetail {
   const now = new Date();
   const response = clockStateOf(now, { dueAt: t.responseDueAt, atRiskAt: t.responseAtRiskAt, doneAt: t.acknowledgedAt });
   const resolution = clockStateOf(now, { dueAt: t.resolutionDueAt, atRiskAt: t.resolutionAtRiskAt, doneAt: t.resolvedAt, paused: t.pausedAt !== null });
@@ -185,7 +225,7 @@ export async function getTicket(actor: Actor, id: string) {
     cells: t.cells,
     cellLabels: t.cells.map(positionLabel),
     /** Due times and visit windows are shown in the site's own time zone. */
-    siteTimeZone: site.timeZone,
+    siteTimeZone,
     wall,
     mergedInto: merged ? { id: merged.id, ref: ticketRef(merged.number) } : null,
     acknowledgedAt: iso(t.acknowledgedAt),
@@ -194,25 +234,35 @@ export async function getTicket(actor: Actor, id: string) {
     pausedAt: iso(t.pausedAt),
     clocks: { response, resolution },
     clockState: worstState(response, resolution),
-    visits: ticketVisits.map((v) => ({ ...v, windowStart: v.windowStart.toISOString(), windowEnd: v.windowEnd.toISOString() })),
-    // The work done on the wall for this ticket. Clients see what was done and where; the part
-    // taken from stock, what became of the removed one and the technician's notes stay inside.
-    repairs: ticketRepairs.map(({ r, cabinetSerial, technicianName, partName }) => ({
-      id: r.id,
-      column: r.column,
-      row: r.row,
-      position: positionLabel(r),
-      module: r.moduleColumn && r.moduleRow ? { column: r.moduleColumn, row: r.moduleRow } : null,
-      component: r.component,
-      fault: r.fault,
-      action: r.action,
-      cabinetSerial,
-      technicianName,
-      performedAt: r.performedAt.toISOString(),
-      ...(isStaff(actor) ? { notes: r.notes, part: partName ? { name: partName, batch: r.partBatch } : null, removedPartFate: r.removedPartFate } : {}),
-    })),
+    visits: ticketVisits,
+    repairs: ticketRepairs,
     nextStatuses: actor.role === 'client' ? (t.status === 'resolved' ? ['closed'] : []) : allowedNextStatuses(t.status),
   };
+}
+
+export async function getTicket(actor: Actor, id: string): Promise<TicketDetail> {
+  const t = await visibleTicket(db(), actor, id);
+  const [row] = await baseQuery(db()).where(eq(tickets.id, id));
+  const wall = t.wallId
+    ? (await db().select({ id: walls.id, name: walls.name, columns: walls.columns, rows: walls.rows }).from(walls).where(eq(walls.id, t.wallId)))[0]
+    : null;
+  const ticketVisits = await db()
+    .select({ id: visits.id, status: visits.status, windowStart: visits.windowStart, windowEnd: visits.windowEnd, kind: visits.kind })
+    .from(visits)
+    .where(eq(visits.ticketId, id))
+    .orderBy(asc(visits.windowStart));
+  const ticketRepairs = await repairsOf(id);
+  const [site] = await db().select({ timeZone: sites.timeZone }).from(sites).where(eq(sites.id, t.siteId));
+  const merged = t.mergedIntoId ? (await db().select({ id: tickets.id, number: tickets.number }).from(tickets).where(eq(tickets.id, t.mergedIntoId)))[0] : null;
+  return presentTicket(actor, {
+    row,
+    ticket: t,
+    wall,
+    siteTimeZone: site.timeZone,
+    merged,
+    visits: ticketVisits.map(presentVisit),
+    repairs: ticketRepairs.map((r) => presentRepair(r, isStaff(actor))),
+  });
 }
 
 async function forMail(tx: DbOrTx, id: string): Promise<TicketForMail> {
@@ -231,7 +281,7 @@ async function forMail(tx: DbOrTx, id: string): Promise<TicketForMail> {
   return { ...r.t, siteName: r.siteName, wallName: r.wallName, clientName: r.clientName };
 }
 
-export async function createTicket(actor: Actor, input: CreateTicketInput) {
+export async function createTicket(actor: Actor, input: CreateTicketInput): Promise<TicketDetail> {
   const id = await db().transaction(async (tx) => {
     const [site] = await tx
       .select({ id: sites.id, clientId: sites.clientId })
@@ -287,7 +337,7 @@ function assertMayUpdate(role: Role, current: typeof tickets.$inferSelect, input
   }
 }
 
-export async function updateTicket(actor: Actor, id: string, input: UpdateTicketInput) {
+export async function updateTicket(actor: Actor, id: string, input: UpdateTicketInput): Promise<TicketDetail> {
   await db().transaction(async (tx) => {
     const before = await visibleTicket(tx, actor, id, true);
     assertMayUpdate(actor.role, before, input);
@@ -371,7 +421,7 @@ async function planVisit(tx: Tx, t: typeof tickets.$inferSelect, schedule: NonNu
 }
 
 /** Closes a duplicate into the ticket that carries on, leaving a note on both. */
-export async function mergeTicket(actor: Actor, id: string, intoId: string) {
+export async function mergeTicket(actor: Actor, id: string, intoId: string): Promise<TicketDetail> {
   if (id === intoId) throw badRequest('validation_failed', 'Choose another ticket to merge into.', { intoTicketId: 'The same ticket.' });
   await db().transaction(async (tx) => {
     const dup = await visibleTicket(tx, actor, id, true);
@@ -396,7 +446,17 @@ export async function mergeTicket(actor: Actor, id: string, intoId: string) {
 }
 
 // ---- comments ----
-export async function listComments(actor: Actor, ticketId: string) {
+function presentComment(r: { c: typeof ticketComments.$inferSelect; authorName: string | null; authorRole: Role | null }): TicketComment {
+  return {
+    id: r.c.id,
+    body: r.c.body,
+    visibility: r.c.visibility,
+    author: { name: r.authorName ?? 'Former user', role: r.authorRole, staff: r.authorRole !== 'client' },
+    createdAt: r.c.createdAt.toISOString(),
+  };
+}
+
+export async function listComments(actor: Actor, ticketId: string): Promise<{ items: TicketComment[] }> {
   await visibleTicket(db(), actor, ticketId);
   const rows = await db()
     .select({ c: ticketComments, authorName: users.name, authorRole: users.role })
@@ -404,18 +464,10 @@ export async function listComments(actor: Actor, ticketId: string) {
     .leftJoin(users, eq(users.id, ticketComments.authorId))
     .where(and(eq(ticketComments.ticketId, ticketId), isStaff(actor) ? undefined : eq(ticketComments.visibility, 'public')))
     .orderBy(asc(ticketComments.createdAt));
-  return {
-    items: rows.map((r) => ({
-      id: r.c.id,
-      body: r.c.body,
-      visibility: r.c.visibility,
-      author: { name: r.authorName ?? 'Former user', role: r.authorRole, staff: r.authorRole !== 'client' },
-      createdAt: r.c.createdAt.toISOString(),
-    })),
-  };
+  return { items: rows.map(presentComment) };
 }
 
-export async function addComment(actor: Actor, ticketId: string, input: CommentInput) {
+export async function addComment(actor: Actor, ticketId: string, input: CommentInput): Promise<TicketComment> {
   if (actor.role === 'client' && input.visibility === 'internal') {
     throw forbidden('forbidden', 'Client comments are always visible to the service desk and to you.');
   }
@@ -438,18 +490,24 @@ export async function addComment(actor: Actor, ticketId: string, input: CommentI
 export const ticketForUpload = (actor: Actor, id: string) => visibleTicket(db(), actor, id);
 
 // ---- saved views ----
-export async function listViews(actor: Actor) {
-  const rows = await db().select().from(savedViews).where(eq(savedViews.userId, actor.userId)).orderBy(asc(savedViews.name));
-  return { items: rows.map((v) => ({ id: v.id, name: v.name, filters: v.filters })) };
+/** A saved view; its filters were stored from `savedViewInput`, strings only. */
+function presentView(v: typeof savedViews.$inferSelect): SavedTicketView {
+  const filters = Object.entries(v.filters).filter((entry): entry is [string, string] => typeof entry[1] === 'string');
+  return { id: v.id, name: v.name, filters: Object.fromEntries(filters) };
 }
 
-export async function saveView(actor: Actor, input: SavedViewInput) {
+export async function listViews(actor: Actor): Promise<{ items: SavedTicketView[] }> {
+  const rows = await db().select().from(savedViews).where(eq(savedViews.userId, actor.userId)).orderBy(asc(savedViews.name));
+  return { items: rows.map(presentView) };
+}
+
+export async function saveView(actor: Actor, input: SavedViewInput): Promise<SavedTicketView> {
   const [row] = await db()
     .insert(savedViews)
     .values({ userId: actor.userId, name: input.name, filters: input.filters })
     .onConflictDoUpdate({ target: [savedViews.userId, savedViews.name], set: { filters: input.filters, updatedAt: new Date() } })
     .returning();
-  return { id: row.id, name: row.name, filters: row.filters };
+  return presentView(row);
 }
 
 export async function deleteView(actor: Actor, id: string) {
@@ -457,13 +515,15 @@ export async function deleteView(actor: Actor, id: string) {
   found(row, 'Saved view');
 }
 
-/** For the office board: counts of open tickets by clock state. */
-export async function clockCounts(actor: Actor): Promise<Record<string, number>> {
+/** For the office board: counts of open tickets by clock state, every state present. */
+export async function clockCounts(actor: Actor): Promise<TicketClockCounts> {
   const rows = await db()
     .select({ state: clockStateSql, n: sql<number>`count(*)::int` })
     .from(tickets)
     .where(and(tenantWhere(actor, tickets.clientId), inArray(tickets.status, openStatuses)))
     .groupBy(clockStateSql);
-  return Object.fromEntries(rows.map((r) => [r.state ?? 'none', r.n]));
+  const counts: TicketClockCounts = { on_track: 0, at_risk: 0, breached: 0, paused: 0, met: 0, missed: 0, none: 0 };
+  for (const r of rows) counts[r.state ?? 'none'] += r.n;
+  return counts;
 }
 

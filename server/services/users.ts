@@ -1,7 +1,8 @@
 import { and, asc, desc, eq, ilike, inArray, isNull, or, sql } from 'drizzle-orm';
 import { staffRoles } from '../../shared/schemas/enums.js';
-import type { InviteUserInput, UpdateUserInput, UserSummary } from '../../shared/schemas/auth.js';
-import type { ListAuditQuery, ListUsersQuery } from '../../shared/schemas/users.js';
+import type { InviteUserInput, UpdateUserInput } from '../../shared/schemas/auth.js';
+import type { Page } from '../../shared/schemas/common.js';
+import type { AuditEventView, ListAuditQuery, ListUsersQuery, StaffMember, UserSummary } from '../../shared/schemas/users.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { auditEvents, authTokens, users } from '../db/schema/accounts.js';
 import { clients } from '../db/schema/clients.js';
@@ -32,7 +33,7 @@ type SummaryRow = { [K in keyof typeof summaryColumns]: unknown } & {
   lastSignInAt: Date | null; createdAt: Date;
 };
 
-function present(row: SummaryRow): UserSummary {
+function presentUser(row: SummaryRow): UserSummary {
   return {
     id: row.id,
     email: row.email,
@@ -52,7 +53,7 @@ function selectSummaries(tx: DbOrTx) {
   return tx.select(summaryColumns).from(users).leftJoin(clients, eq(clients.id, users.clientId));
 }
 
-export async function listUsers(query: ListUsersQuery) {
+export async function listUsers(query: ListUsersQuery): Promise<Page<UserSummary>> {
   const cursor = decodeCursor(query.cursor, 2);
   const pattern = query.q ? `%${query.q.replace(/[%_\\]/g, '\\$&')}%` : undefined;
   const rows = await selectSummaries(db())
@@ -67,12 +68,12 @@ export async function listUsers(query: ListUsersQuery) {
     .orderBy(asc(users.email), asc(users.id))
     .limit(query.limit + 1);
   const page = pageOf(rows as SummaryRow[], query.limit, (r) => [r.email, r.id]);
-  return { items: page.items.map(present), nextCursor: page.nextCursor };
+  return { items: page.items.map(presentUser), nextCursor: page.nextCursor };
 }
 
-async function getSummary(tx: DbOrTx, id: string) {
+async function getSummary(tx: DbOrTx, id: string): Promise<UserSummary> {
   const [row] = await selectSummaries(tx).where(eq(users.id, id));
-  return present(found(row as SummaryRow | undefined, 'User'));
+  return presentUser(found(row as SummaryRow | undefined, 'User'));
 }
 
 async function assertClientExists(tx: DbOrTx, clientId: string | null | undefined) {
@@ -81,7 +82,7 @@ async function assertClientExists(tx: DbOrTx, clientId: string | null | undefine
   if (!row) throw badRequest('validation_failed', 'That organisation does not exist.', { clientId: 'Unknown organisation.' });
 }
 
-export async function inviteUser(actor: Actor, input: InviteUserInput) {
+export async function inviteUser(actor: Actor, input: InviteUserInput): Promise<UserSummary> {
   return db().transaction(async (tx) => {
     await assertClientExists(tx, input.clientId);
     const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, input.email));
@@ -106,7 +107,7 @@ export async function resendInvite(actor: Actor, id: string) {
   });
 }
 
-export async function updateUser(actor: Actor, id: string, input: UpdateUserInput) {
+export async function updateUser(actor: Actor, id: string, input: UpdateUserInput): Promise<UserSummary> {
   return db().transaction(async (tx) => {
     const [before] = await tx.select().from(users).where(eq(users.id, id)).for('update');
     found(before, 'User');
@@ -135,20 +136,45 @@ export async function updateUser(actor: Actor, id: string, input: UpdateUserInpu
   });
 }
 
-export async function listAudit(query: ListAuditQuery) {
+const auditColumns = {
+  id: auditEvents.id,
+  actorId: auditEvents.actorId,
+  actorName: users.name,
+  entity: auditEvents.entity,
+  entityId: auditEvents.entityId,
+  action: auditEvents.action,
+  before: auditEvents.before,
+  after: auditEvents.after,
+  createdAt: auditEvents.createdAt,
+};
+
+function presentAuditEvent(r: {
+  id: number;
+  actorId: string | null;
+  actorName: string | null;
+  entity: string;
+  entityId: string;
+  action: string;
+  before: unknown;
+  after: unknown;
+  createdAt: Date;
+}): AuditEventView {
+  return {
+    id: r.id,
+    actor: r.actorId ? { id: r.actorId, name: r.actorName ?? '' } : null,
+    entity: r.entity,
+    entityId: r.entityId,
+    action: r.action,
+    before: r.before,
+    after: r.after,
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
+export async function listAudit(query: ListAuditQuery): Promise<Page<AuditEventView>> {
   const cursor = decodeCursor(query.cursor, 2);
   const rows = await db()
-    .select({
-      id: auditEvents.id,
-      actorId: auditEvents.actorId,
-      actorName: users.name,
-      entity: auditEvents.entity,
-      entityId: auditEvents.entityId,
-      action: auditEvents.action,
-      before: auditEvents.before,
-      after: auditEvents.after,
-      createdAt: auditEvents.createdAt,
-    })
+    .select(auditColumns)
     .from(auditEvents)
     .leftJoin(users, eq(users.id, auditEvents.actorId))
     .where(
@@ -162,30 +188,23 @@ export async function listAudit(query: ListAuditQuery) {
     .orderBy(desc(auditEvents.createdAt), desc(auditEvents.id))
     .limit(query.limit + 1);
   const page = pageOf(rows, query.limit, (r) => [r.createdAt.toISOString(), r.id]);
-  return {
-    items: page.items.map((r) => ({
-      id: r.id,
-      actor: r.actorId ? { id: r.actorId, name: r.actorName ?? '' } : null,
-      entity: r.entity,
-      entityId: r.entityId,
-      action: r.action,
-      before: r.before,
-      after: r.after,
-      createdAt: r.createdAt.toISOString(),
-    })),
-    nextCursor: page.nextCursor,
-  };
+  return { items: page.items.map(presentAuditEvent), nextCursor: page.nextCursor };
+}
+
+/** A member of the team as a picker shows them: no e-mail address, phone or password state. */
+function presentStaffMember(u: Pick<typeof users.$inferSelect, 'id' | 'name' | 'role'>): StaffMember {
+  return { id: u.id, name: u.name, role: u.role };
 }
 
 /**
  * The team, for pickers (assignee, technicians of a visit): active staff by name, with only
  * what a picker needs. The full user list stays the admin's.
  */
-export async function listStaff() {
+export async function listStaff(): Promise<{ items: StaffMember[] }> {
   const rows = await db()
     .select({ id: users.id, name: users.name, role: users.role })
     .from(users)
     .where(and(inArray(users.role, [...staffRoles]), isNull(users.disabledAt)))
     .orderBy(asc(users.name), asc(users.id));
-  return { items: rows };
+  return { items: rows.map(presentStaffMember) };
 }

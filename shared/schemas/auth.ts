@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { email, text } from './common.js';
-import { roles, type Role } from './enums.js';
+import { roles, type AuthTokenKind, type Role } from './enums.js';
 
 /** The header every state-changing API request must carry (CSRF defence). */
 export const csrfHeader = { name: 'X-Requested-With', value: 'gridkeep' } as const;
@@ -19,6 +19,7 @@ export const loginInput = z.object({
 });
 export type LoginInput = z.infer<typeof loginInput>;
 
+/** The signed-in person (`GET /api/auth/me`, and the answer to signing in). */
 export interface SessionUser {
   id: string;
   email: string;
@@ -44,6 +45,14 @@ export const redeemTokenInput = z.object({
 });
 export type RedeemTokenInput = z.infer<typeof redeemTokenInput>;
 
+/** What an invite or reset link is for (`GET /api/auth/tokens/:token`); 404 `link_invalid` once used or expired. */
+export interface LinkToken {
+  kind: AuthTokenKind;
+  email: string;
+  name: string;
+}
+
+// The users' requests (their responses are in users.ts).
 export const inviteUserInput = z
   .object({
     email,
@@ -66,31 +75,7 @@ export const updateUserInput = z.object({
 });
 export type UpdateUserInput = z.infer<typeof updateUserInput>;
 
-export interface UserSummary {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  clientId: string | null;
-  clientName: string | null;
-  phone: string;
-  disabled: boolean;
-  invitePending: boolean;
-  lastSignInAt: string | null;
-  createdAt: string;
-}
-
-export interface AuditEventView {
-  id: number;
-  actor: { id: string; name: string } | null;
-  entity: string;
-  entityId: string;
-  action: string;
-  before: unknown;
-  after: unknown;
-  createdAt: string;
-}
-
+/** A message the local SMTP fake received (`GET /api/dev/mailbox`, admins, development only). */
 export interface MailboxItem {
   id: string;
   to: string;

@@ -41,6 +41,7 @@ export const clockModes = ['business', 'round_the_clock'] as const;
 export type ClockMode = (typeof clockModes)[number];
 
 export const visitKinds = ['ticket', 'maintenance'] as const;
+export type VisitKind = (typeof visitKinds)[number];
 export const visitStatuses = ['planned', 'in_progress', 'completed', 'cancelled'] as const;
 export type VisitStatus = (typeof visitStatuses)[number];
 
@@ -95,5 +96,7 @@ export type VendorReturnOutcome = (typeof vendorReturnOutcomes)[number];
 export const mailStatuses = ['queued', 'sending', 'sent', 'failed'] as const;
 
 export const authTokenKinds = ['invite', 'reset'] as const;
+export type AuthTokenKind = (typeof authTokenKinds)[number];
 
 export const attachmentKinds = ['photo', 'video', 'document'] as const;
+export type AttachmentKind = (typeof attachmentKinds)[number];

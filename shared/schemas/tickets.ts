@@ -1,10 +1,29 @@
 import { z } from 'zod';
 import { pageQuery, requiredText, text } from './common.js';
-import { commentVisibilities, ticketPriorities, ticketScopes, ticketStatuses, type TicketPriority, type TicketStatus } from './enums.js';
-import { position } from './register.js';
+import {
+  commentVisibilities,
+  ticketPriorities,
+  ticketScopes,
+  ticketStatuses,
+  type CommentVisibility,
+  type RemovedPartFate,
+  type RepairAction,
+  type RepairComponent,
+  type RepairFault,
+  type Role,
+  type TicketPriority,
+  type TicketScope,
+  type TicketStatus,
+  type VisitKind,
+  type VisitStatus,
+} from './enums.js';
+import { position, type Position } from './register.js';
 
 export const ticketClockStates = ['on_track', 'at_risk', 'breached', 'paused', 'met', 'missed'] as const;
 export type TicketClockState = (typeof ticketClockStates)[number];
+/** The states the clock of an open ticket can be in (met and missed are for resolved ones). */
+export const openClockStates = ['on_track', 'at_risk', 'breached', 'paused'] as const satisfies readonly TicketClockState[];
+export type OpenClockState = (typeof openClockStates)[number];
 
 /** Plain-language guidance a client reads when choosing how bad it is. */
 export const priorityGuidance: Record<TicketPriority, { label: string; help: string }> = {
@@ -111,3 +130,107 @@ export type SavedViewInput = z.infer<typeof savedViewInput>;
 
 /** GK-1042: the number people say on the phone. */
 export const ticketRef = (n: number) => `GK-${n}`;
+
+// ---- responses (server/services/tickets.ts presenters) ----
+
+/** A record named in a ticket row: its client, site, wall or assignee. */
+export interface NamedRef {
+  id: string;
+  name: string;
+}
+
+/** One row of the tickets list (`GET /api/tickets`). */
+export interface TicketListItem {
+  id: string;
+  number: number;
+  /** `GK-1042`. */
+  ref: string;
+  title: string;
+  status: TicketStatus;
+  priority: TicketPriority;
+  scope: TicketScope;
+  cellCount: number;
+  client: NamedRef;
+  site: NamedRef;
+  wall: NamedRef | null;
+  assignee: NamedRef | null;
+  reporterName: string | null;
+  responseDueAt: string | null;
+  resolutionDueAt: string | null;
+  /** The worse of the response and resolution clocks. */
+  clockState: TicketClockState | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface TicketVisit {
+  id: string;
+  status: VisitStatus;
+  kind: VisitKind;
+  windowStart: string;
+  windowEnd: string;
+}
+
+/** One line of work done for the ticket. `notes`, `part` and `removedPartFate` come to staff only. */
+export interface TicketRepair {
+  id: string;
+  column: number;
+  row: number;
+  /** `C{col}·R{row}`. */
+  position: string;
+  module: Position | null;
+  component: RepairComponent;
+  fault: RepairFault;
+  action: RepairAction;
+  cabinetSerial: string | null;
+  technicianName: string | null;
+  performedAt: string;
+  notes?: string;
+  part?: { name: string; batch: string | null } | null;
+  removedPartFate?: RemovedPartFate;
+}
+
+/** A ticket with its text, cells, clocks, visits and repairs (`GET /api/tickets/:id`). */
+export interface TicketDetail extends TicketListItem {
+  description: string;
+  /** The site's IANA time zone: due times and visit windows are shown in the site's local time. */
+  siteTimeZone: string;
+  cells: Position[];
+  cellLabels: string[];
+  wall: (NamedRef & { columns: number; rows: number }) | null;
+  mergedInto: { id: string; ref: string } | null;
+  acknowledgedAt: string | null;
+  resolvedAt: string | null;
+  closedAt: string | null;
+  pausedAt: string | null;
+  clocks: { response: TicketClockState | null; resolution: TicketClockState | null };
+  /** Oldest window first. */
+  visits: TicketVisit[];
+  /** Oldest first. */
+  repairs: TicketRepair[];
+  /** Where the caller may move the ticket next. */
+  nextStatuses: TicketStatus[];
+}
+
+/** A comment of the conversation; client users get only the public ones. */
+export interface TicketComment {
+  id: string;
+  body: string;
+  visibility: CommentVisibility;
+  /** "Former user" with a null role when the author's account is gone. */
+  author: { name: string; role: Role | null; staff: boolean };
+  createdAt: string;
+}
+
+/** A person's named list filters (`GET /api/ticket-views`): the address's parameters as strings. */
+export interface SavedTicketView {
+  id: string;
+  name: string;
+  filters: Record<string, string>;
+}
+
+/**
+ * Open tickets counted by clock state (`GET /api/tickets/clock-counts`), every state present
+ * (0 when no ticket is in it); `none` counts open tickets without a due time.
+ */
+export type TicketClockCounts = Record<TicketClockState | 'none', number>;

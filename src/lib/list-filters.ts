@@ -14,18 +14,26 @@ export function textParam(params: URLSearchParams, key: string, max: number): st
 }
 
 /**
+ * Whether the person is on their way to another page. A search box writes a moment after typing
+ * stops; when the person has already clicked through to a record meanwhile, that late write must
+ * not pull them back to the list: a list's setter does nothing while this is true.
+ */
+export function useLeavingPage() {
+  const navigation = useNavigation();
+  const location = useLocation();
+  const leaving = useRef(false);
+  leaving.current = navigation.state !== 'idle' && navigation.location?.pathname !== location.pathname;
+  return leaving;
+}
+
+/**
  * A list's filters kept in the address, so that a sorted, filtered list can be bookmarked and
  * shared: `read` makes the filters from the search parameters; the setter writes them back,
  * leaving out empty values and the defaults (`{ sort: 'name', dir: 'asc' }`).
  */
 export function useListFilters<F extends object>(read: (params: URLSearchParams) => F, defaults: Record<string, string> = {}) {
   const [params, setParams] = useSearchParams();
-  // A search box writes a moment after typing stops; when the person has already clicked through
-  // to another page meanwhile, that late write must not pull them back to the list.
-  const navigation = useNavigation();
-  const location = useLocation();
-  const leaving = useRef(false);
-  leaving.current = navigation.state !== 'idle' && navigation.location?.pathname !== location.pathname;
+  const leaving = useLeavingPage();
   const setFilters = (next: F) => {
     if (leaving.current) return;
     setParams(

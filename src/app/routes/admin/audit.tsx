@@ -1,12 +1,11 @@
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
-import { auditInfiniteQueryOptions } from '@/features/audit/api/get-audit-events';
-import type { AuditFilters } from '@/features/audit/api/keys';
 import { AuditTable } from '@/features/audit/components/audit-table';
 import { adminOnly, requireUser } from '@/app/auth-guard';
 import { idParam, textParam, useListFilters } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { auditQueries, type AuditFilters } from '@/resources/audit';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 function filtersFrom(params: URLSearchParams): AuditFilters {
@@ -20,7 +19,7 @@ function filtersFrom(params: URLSearchParams): AuditFilters {
 export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request, adminOnly);
   const filters = filtersFrom(new URL(request.url).searchParams);
-  await queryClient.ensureInfiniteQueryData(auditInfiniteQueryOptions(filters)).catch(() => undefined);
+  await queryClient.ensureInfiniteQueryData(auditQueries.list(filters)).catch(() => undefined);
   return null;
 }
 

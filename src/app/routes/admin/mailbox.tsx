@@ -1,15 +1,15 @@
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
-import { mailboxQueryOptions } from '@/features/mailbox/api/get-mailbox';
 import { MailboxView } from '@/features/mailbox/components/mailbox-view';
 import { adminOnly, requireUser } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { mailboxQueries } from '@/resources/mailbox';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request, adminOnly);
-  await queryClient.ensureQueryData(mailboxQueryOptions()).catch(() => undefined);
+  await queryClient.ensureQueryData(mailboxQueries.list()).catch(() => undefined);
   return null;
 }
 

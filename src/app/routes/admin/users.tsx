@@ -4,13 +4,12 @@ import { useState } from 'react';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
-import { usersInfiniteQueryOptions } from '@/features/users/api/get-users';
-import type { UserFilters } from '@/features/users/api/keys';
 import { InviteUserDialog } from '@/features/users/components/invite-user-dialog';
 import { UsersTable } from '@/features/users/components/users-table';
 import { adminOnly, requireUser } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { userQueries, type UserFilters } from '@/resources/users';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 /** The filters live in the address, so a filtered list can be bookmarked or shared. */
@@ -26,7 +25,7 @@ export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request, adminOnly);
   const filters = filtersFrom(new URL(request.url).searchParams);
   // Warm the cache; a failure shows in the table (with a retry) rather than instead of the page.
-  await queryClient.ensureInfiniteQueryData(usersInfiniteQueryOptions(filters)).catch(() => undefined);
+  await queryClient.ensureInfiniteQueryData(userQueries.list(filters)).catch(() => undefined);
   return null;
 }
 

@@ -3,7 +3,7 @@ import type { LoaderFunctionArgs } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
-import { useLogout } from '@/features/auth/api/logout';
+import { useLogout } from '@/features/auth/api/mutations';
 import { ChangePasswordForm } from '@/features/auth/components/change-password-form';
 import { requireUser } from '@/app/auth-guard';
 import { roleLabels } from '@/lib/format';

@@ -6,8 +6,6 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Spinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { ticketsPageQueryOptions, useTicketsPage } from '@/features/tickets/api/get-tickets';
-import type { TicketFilters } from '@/features/tickets/api/keys';
 import { TicketCardList } from '@/features/tickets/components/ticket-card-list';
 import { WallsBySite } from '@/features/walls/components/walls-by-site';
 import { HomeSection, MoreLink } from '@/app/routes/app/home-section';
@@ -16,6 +14,7 @@ import { firstName } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
 import { useQuery } from '@tanstack/react-query';
 import { wallQueries } from '@/resources/walls';
+import { ticketQueries, type TicketFilters } from '@/resources/tickets';
 
 /** The client's open tickets, the latest news first. */
 const clientOpenTickets: TicketFilters = { open: 'true', sort: 'updatedAt', dir: 'desc' };
@@ -27,7 +26,7 @@ const clientWallsLimit = 200;
 export async function prefetchClientHome() {
   await Promise.all([
     queryClient.prefetchQuery(wallQueries.page({}, clientWallsLimit)),
-    queryClient.prefetchQuery(ticketsPageQueryOptions(clientOpenTickets, clientTicketsLimit)),
+    queryClient.prefetchQuery(ticketQueries.page(clientOpenTickets, clientTicketsLimit)),
   ]);
 }
 
@@ -45,7 +44,7 @@ const reportFaultButton = (
 
 /** The client portal's overview: the organisation's walls by site, its open tickets, and "Report a fault". */
 export function ClientHome({ name, organisation }: { name: string; organisation: string }) {
-  const tickets = useTicketsPage(clientOpenTickets, clientTicketsLimit);
+  const tickets = useQuery(ticketQueries.page(clientOpenTickets, clientTicketsLimit));
   return (
     <>
       <PageHeader title={`Welcome, ${firstName(name)}`} description={`The service overview for ${organisation}.`} actions={reportFaultButton} />

@@ -2,20 +2,18 @@ import { Ticket } from 'lucide-react';
 import { ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
-import { attentionTicketsQueryOptions } from '@/features/board/api/get-attention-tickets';
-import { clockCountsQueryOptions } from '@/features/board/api/get-clock-counts';
-import { waitingTicketsQueryOptions } from '@/features/board/api/get-waiting-tickets';
 import { TodayBoard } from '@/features/board/components/today-board';
 import { greeting } from '@/app/routes/app/home-section';
 import { firstName } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
+import { ticketQueries } from '@/resources/tickets';
 
 /** Warms the today board's three lists. */
 export async function prefetchOfficeHome() {
   await Promise.all([
-    queryClient.prefetchQuery(attentionTicketsQueryOptions()),
-    queryClient.prefetchQuery(waitingTicketsQueryOptions()),
-    queryClient.prefetchQuery(clockCountsQueryOptions()),
+    queryClient.prefetchQuery(ticketQueries.attention()),
+    queryClient.prefetchQuery(ticketQueries.waiting()),
+    queryClient.prefetchQuery(ticketQueries.clockCounts()),
   ]);
 }
 

@@ -1,13 +1,14 @@
+import { useQuery } from '@tanstack/react-query';
 import { Navigate, Outlet, useLocation, useNavigation, type LoaderFunctionArgs } from 'react-router-dom';
 import { ClientLayout } from '@/components/layouts/client-layout';
 import { OfficeLayout } from '@/components/layouts/office-layout';
 import { TechnicianLayout } from '@/components/layouts/technician-layout';
 import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { useMe } from '@/features/auth/api/get-me';
-import { useLogout } from '@/features/auth/api/logout';
+import { useLogout } from '@/features/auth/api/mutations';
 import { requireUser } from '@/app/auth-guard';
 import { audienceOf, SessionProvider } from '@/lib/session';
+import { sessionQueries } from '@/resources/session';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 const shells = { office: OfficeLayout, technician: TechnicianLayout, client: ClientLayout };
@@ -19,7 +20,7 @@ export async function loader({ request }: LoaderFunctionArgs) {
 }
 
 export function Component() {
-  const me = useMe();
+  const me = useQuery(sessionQueries.me());
   const location = useLocation();
   const navigation = useNavigation();
   const logout = useLogout();

@@ -3,13 +3,13 @@ import { Card } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { SerialLookupForm } from '@/features/scan/components/serial-lookup-form';
-import { ticketsPageQueryOptions, useTicketsPage } from '@/features/tickets/api/get-tickets';
-import type { TicketFilters } from '@/features/tickets/api/keys';
 import { TicketCardList } from '@/features/tickets/components/ticket-card-list';
 import { ServiceCaution } from '@/features/walls/components/service-caution';
 import { greeting, HomeSection, MoreLink } from '@/app/routes/app/home-section';
 import { firstName } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
+import { useQuery } from '@tanstack/react-query';
+import { ticketQueries, type TicketFilters } from '@/resources/tickets';
 
 /** The technician's open tickets, the soonest due first (`GET /api/tickets?assigneeId=me&open=true`). */
 const myOpenTickets: TicketFilters = { assigneeId: 'me', open: 'true', sort: 'resolutionDueAt', dir: 'asc' };
@@ -17,12 +17,12 @@ const myTicketsLimit = 25;
 
 /** Warms the technician's open tickets. */
 export async function prefetchTechnicianHome() {
-  await queryClient.prefetchQuery(ticketsPageQueryOptions(myOpenTickets, myTicketsLimit));
+  await queryClient.prefetchQuery(ticketQueries.page(myOpenTickets, myTicketsLimit));
 }
 
 /** The technician's start page: their open tickets, the soonest due first, and a cabinet lookup. */
 export function TechnicianHome({ name }: { name: string }) {
-  const tickets = useTicketsPage(myOpenTickets, myTicketsLimit);
+  const tickets = useQuery(ticketQueries.page(myOpenTickets, myTicketsLimit));
   return (
     <>
       <PageHeader title={`${greeting()}, ${firstName(name)}`} description="Your open tickets, the soonest due first." />

@@ -1,28 +1,29 @@
+import { useQuery } from '@tanstack/react-query';
 import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { AuthLayout } from '@/components/layouts/auth-layout';
 import { Alert } from '@/components/ui/alert';
 import { ButtonLink } from '@/components/ui/button';
 import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { linkTokenQueryOptions, useLinkToken } from '@/features/auth/api/get-link-token';
 import { SetPasswordForm } from '@/features/auth/components/set-password-form';
 import { errorMessage, isNotFound } from '@/lib/errors';
 import { firstName } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { sessionQueries } from '@/resources/session';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 /** Looks the link up before the page shows, so it opens on the right words. */
 export async function loader({ request }: LoaderFunctionArgs) {
   const token = new URL(request.url).searchParams.get('token');
-  if (token) await queryClient.ensureQueryData(linkTokenQueryOptions(token)).catch(() => undefined);
+  if (token) await queryClient.ensureQueryData(sessionQueries.linkToken(token)).catch(() => undefined);
   return null;
 }
 
 export function Component() {
   const [params] = useSearchParams();
   const token = params.get('token') ?? '';
-  const link = useLinkToken(token);
+  const link = useQuery({ ...sessionQueries.linkToken(token), enabled: Boolean(token) });
   useDocumentTitle(link.data?.kind === 'invite' ? 'Welcome' : 'Set a new password');
 
   if (!token || link.isError) {

@@ -1,15 +1,15 @@
 import { redirect, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { AuthLayout } from '@/components/layouts/auth-layout';
 import { safeNext } from '@/config/paths';
-import { meQueryOptions } from '@/features/auth/api/get-me';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { queryClient } from '@/lib/query-client';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { sessionQueries } from '@/resources/session';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 /** Someone already signed in goes straight on. */
 export async function loader({ request }: LoaderFunctionArgs) {
-  const user = await queryClient.ensureQueryData(meQueryOptions()).catch(() => null);
+  const user = await queryClient.ensureQueryData(sessionQueries.me()).catch(() => null);
   if (user) throw redirect(safeNext(new URL(request.url).searchParams.get('next')));
   return null;
 }

@@ -1,16 +1,16 @@
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
-import { searchQueryOptions } from '@/features/search/api/get-search';
 import { SearchResults } from '@/features/search/components/search-results';
 import { requireUser } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { searchQueries } from '@/resources/search';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request);
   const q = new URL(request.url).searchParams.get('q')?.trim() ?? '';
-  if (q) await queryClient.prefetchQuery(searchQueryOptions(q));
+  if (q) await queryClient.prefetchQuery(searchQueries.results(q));
   return null;
 }
 

@@ -1,3 +1,4 @@
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
 import { Plus } from 'lucide-react';
 import clsx from 'clsx';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
@@ -6,16 +7,16 @@ import { pagedQueryProps } from '@/components/ui/data-table';
 import { FilterSearch } from '@/components/ui/filters';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
-import { ticketsInfiniteQueryOptions, useTickets } from '@/features/tickets/api/get-tickets';
-import type { TicketFilters } from '@/features/tickets/api/keys';
 import { SavedViews } from '@/features/tickets/components/saved-views';
 import { TicketCardList } from '@/features/tickets/components/ticket-card-list';
 import { filtersFromParams, filtersToRecord } from '@/features/tickets/components/ticket-filters';
 import { TicketsTable } from '@/features/tickets/components/tickets-table';
 import { requireUser } from '@/app/auth-guard';
+import { useLeavingPage } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { audienceOf, useUser, type Audience } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { ticketQueries, type TicketFilters } from '@/resources/tickets';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 type Show = 'open' | 'done' | 'all';
@@ -41,7 +42,7 @@ export async function loader({ request }: LoaderFunctionArgs) {
   const user = await requireUser(request);
   const filters = filtersFor(audienceOf(user), new URL(request.url).searchParams);
   // Warm the cache; a failure shows in the list (with a retry) rather than instead of the page.
-  await queryClient.ensureInfiniteQueryData(ticketsInfiniteQueryOptions(filters)).catch(() => undefined);
+  await queryClient.ensureInfiniteQueryData(ticketQueries.list(filters)).catch(() => undefined);
   return null;
 }
 
@@ -60,8 +61,11 @@ const newTicketButton = (
 
 function OfficeTickets() {
   const [params, setParams] = useSearchParams();
+  const leaving = useLeavingPage();
   const filters = filtersFromParams(params);
-  const apply = (next: TicketFilters) => setParams(new URLSearchParams(filtersToRecord(next)), { replace: true });
+  const apply = (next: TicketFilters) => {
+    if (!leaving.current) setParams(new URLSearchParams(filtersToRecord(next)), { replace: true });
+  };
   return (
     <>
       <PageHeader title="Tickets" description="Every service request, with its service-plan clock." actions={newTicketButton} />
@@ -79,12 +83,14 @@ const showChoices: { value: Show; label: string }[] = [
 
 function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
   const [params, setParams] = useSearchParams();
+  const leaving = useLeavingPage();
   const show = showOf(params);
   const filters = filtersFor(audience, params);
-  const query = useTickets(filters);
+  const query = useInfiniteQuery({ ...ticketQueries.list(filters), placeholderData: keepPreviousData });
   const items = query.data?.pages.flatMap((p) => p.items) ?? [];
   const isClient = audience === 'client';
-  const update = (key: string, value: string | undefined) =>
+  const update = (key: string, value: string | undefined) => {
+    if (leaving.current) return;
     setParams(
       (prev) => {
         const p = new URLSearchParams(prev);
@@ -94,6 +100,7 @@ function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
       },
       { replace: true },
     );
+  };
 
   return (
     <>

@@ -2,17 +2,17 @@ import { ArrowLeft } from 'lucide-react';
 import { Link, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
-import { siteOptionsQueryOptions } from '@/features/tickets/api/get-site-options';
 import { NewTicketForm } from '@/features/tickets/components/new-ticket-form';
 import { requireUser } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { siteQueries } from '@/resources/sites';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request }: LoaderFunctionArgs) {
   await requireUser(request);
-  await queryClient.ensureQueryData(siteOptionsQueryOptions()).catch(() => undefined);
+  await queryClient.ensureQueryData(siteQueries.options()).catch(() => undefined);
   return null;
 }
 

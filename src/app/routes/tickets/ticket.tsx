@@ -1,3 +1,5 @@
+import type { TicketDetail } from '@shared/schemas/tickets';
+import { useQuery } from '@tanstack/react-query';
 import { ArrowLeft, CircleCheck, GitMerge } from 'lucide-react';
 import { useState } from 'react';
 import { data, Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
@@ -7,11 +9,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { PageSpinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { attachmentsQueryOptions } from '@/features/tickets/api/get-attachments';
-import { commentsQueryOptions } from '@/features/tickets/api/get-comments';
-import { ticketQueryOptions, useTicket } from '@/features/tickets/api/get-ticket';
-import type { TicketDetail } from '@/features/tickets/api/types';
-import { useUpdateTicket } from '@/features/tickets/api/update-ticket';
+import { useUpdateTicket } from '@/features/tickets/api/mutations';
 import { AttachmentsPanel } from '@/features/tickets/components/attachments-panel';
 import { Conversation } from '@/features/tickets/components/conversation';
 import { TicketClocks } from '@/features/tickets/components/ticket-clocks';
@@ -27,6 +25,8 @@ import { audienceOf, isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { useMediaQuery } from '@/lib/use-media-query';
 import { isRecordId } from '@/lib/record-id';
+import { attachmentQueries } from '@/resources/attachments';
+import { ticketQueries } from '@/resources/tickets';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
@@ -36,16 +36,16 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
   if (!isRecordId(id)) throw data('Not found', { status: 404 });
   // The ticket itself must load (a 404 shows "not found"); the rest may load on the page.
   await Promise.all([
-    queryClient.ensureQueryData(ticketQueryOptions(id)),
-    queryClient.prefetchQuery(commentsQueryOptions(id)),
-    queryClient.prefetchQuery(attachmentsQueryOptions(id)),
+    queryClient.ensureQueryData(ticketQueries.detail(id)),
+    queryClient.prefetchQuery(ticketQueries.comments(id)),
+    queryClient.prefetchQuery(attachmentQueries.ofTicket(id)),
   ]);
   return null;
 }
 
 export function Component() {
   const { id = '' } = useParams();
-  const ticket = useTicket(id);
+  const ticket = useQuery(ticketQueries.detail(id));
   useDocumentTitle(ticket.data ? `${ticket.data.ref} ${ticket.data.title}` : 'Ticket');
   if (ticket.isPending) return <PageSpinner label="Loading the ticket" />;
   if (ticket.isError) return <Alert tone="danger" title="The ticket could not be loaded.">{errorMessage(ticket.error)}</Alert>;

@@ -1,4 +1,5 @@
-import type { AuditEventView } from '@shared/schemas/auth';
+import type { AuditEventView } from '@shared/schemas/users';
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
 import { createColumnHelper } from '@tanstack/react-table';
 import { History, X } from 'lucide-react';
 import { useMemo } from 'react';
@@ -6,10 +7,9 @@ import { Badge } from '@/components/ui/badge';
 import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
-import { useAuditEvents } from '@/features/audit/api/get-audit-events';
-import type { AuditFilters } from '@/features/audit/api/keys';
 import { AuditChanges } from '@/features/audit/components/audit-changes';
 import { formatDateTime } from '@/lib/format';
+import { auditQueries, type AuditFilters } from '@/resources/audit';
 
 /** The kinds of record the log speaks of (the server's `entity` names). */
 const entityLabels: Record<string, string> = {
@@ -41,72 +41,71 @@ const actionLabel = (action: string) => {
 
 const column = createColumnHelper<AuditEventView>();
 
+/** The log's columns; a record id narrows the log to that record's history (`onShowRecord`). */
+function auditColumns(onShowRecord: (entity: string, entityId: string) => void) {
+  return [
+    column.accessor('createdAt', {
+      header: 'When',
+      meta: { alwaysVisible: true, className: 'whitespace-nowrap' },
+      cell: (c) => <time dateTime={c.getValue()}>{formatDateTime(c.getValue())}</time>,
+    }),
+    column.accessor((e) => e.actor?.name ?? 'System', {
+      id: 'actor',
+      header: 'Who',
+      meta: { className: 'whitespace-nowrap' },
+      cell: (c) => (c.row.original.actor ? c.getValue() : <span className="italic text-stone-500">System</span>),
+    }),
+    column.accessor('entity', {
+      header: 'Record',
+      meta: { csv: (e) => entityLabel(e.entity) },
+      cell: (c) => <Badge tone="ink">{entityLabel(c.getValue())}</Badge>,
+    }),
+    column.accessor('entityId', {
+      header: 'Record id',
+      meta: { className: 'whitespace-nowrap' },
+      cell: (c) => {
+        const id = c.getValue();
+        // Long ids (uuids) show their first characters; the full id is in the title and the CSV.
+        const short = id.length > 13 ? `${id.slice(0, 8)}…` : id;
+        return (
+          <button
+            type="button"
+            className="font-mono text-xs text-ink-700 underline decoration-ink-200 underline-offset-2 hover:decoration-ink-600"
+            title={`${id}: show only this record's history`}
+            aria-label={`Show only the history of ${entityLabel(c.row.original.entity).toLowerCase()} ${id}`}
+            onClick={() => onShowRecord(c.row.original.entity, id)}
+          >
+            {short}
+          </button>
+        );
+      },
+    }),
+    column.accessor('action', {
+      header: 'Action',
+      meta: { csv: (e) => e.action },
+      cell: (c) => <span className="font-medium">{actionLabel(c.getValue())}</span>,
+    }),
+    column.accessor((e) => JSON.stringify({ before: e.before, after: e.after }), {
+      id: 'changes',
+      header: 'Changes (raw)',
+      meta: { hiddenByDefault: true, className: 'max-w-md truncate font-mono text-xs' },
+    }),
+  ];
+}
+
 interface AuditTableProps {
   filters: AuditFilters;
   onFiltersChange: (filters: AuditFilters) => void;
 }
 
 export function AuditTable({ filters, onFiltersChange }: AuditTableProps) {
-  const query = useAuditEvents(filters);
+  const query = useInfiniteQuery({ ...auditQueries.list(filters), placeholderData: keepPreviousData });
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
 
   const columns = useMemo(
-    () => [
-      column.accessor('createdAt', {
-        header: 'When',
-        meta: { alwaysVisible: true, className: 'whitespace-nowrap' },
-        cell: (c) => <time dateTime={c.getValue()}>{formatDateTime(c.getValue())}</time>,
-      }),
-      column.accessor((e) => e.actor?.name ?? 'System', {
-        id: 'actor',
-        header: 'Who',
-        meta: { className: 'whitespace-nowrap' },
-        cell: (c) => (c.row.original.actor ? c.getValue() : <span className="italic text-stone-500">System</span>),
-      }),
-      column.accessor('entity', {
-        header: 'Record',
-        meta: { csv: (e) => entityLabel(e.entity) },
-        cell: (c) => <Badge tone="ink">{entityLabel(c.getValue())}</Badge>,
-      }),
-      column.accessor('entityId', {
-        header: 'Record id',
-        meta: { className: 'whitespace-nowrap' },
-        cell: (c) => {
-          const id = c.getValue();
-          // Long ids (uuids) show their first characters; the full id is in the title and the CSV.
-          const short = id.length > 13 ? `${id.slice(0, 8)}…` : id;
-          return (
-            <button
-              type="button"
-              className="font-mono text-xs text-ink-700 underline decoration-ink-200 underline-offset-2 hover:decoration-ink-600"
-              title={`${id}: show only this record's history`}
-              aria-label={`Show only the history of ${entityLabel(c.row.original.entity).toLowerCase()} ${id}`}
-              onClick={() => onFiltersChange({ ...filters, entity: c.row.original.entity, entityId: id })}
-            >
-              {short}
-            </button>
-          );
-        },
-      }),
-      column.accessor('action', {
-        header: 'Action',
-        meta: { csv: (e) => e.action },
-        cell: (c) => <span className="font-medium">{actionLabel(c.getValue())}</span>,
-      }),
-      column.accessor((e) => JSON.stringify({ before: e.before, after: e.after }), {
-        id: 'changes',
-        header: 'Changes (raw)',
-        meta: { hiddenByDefault: true, className: 'max-w-md truncate font-mono text-xs' },
-      }),
-    ],
+    () => auditColumns((entity, entityId) => onFiltersChange({ ...filters, entity, entityId })),
     [filters, onFiltersChange],
   );
-
-  const entityOptions = useMemo(() => {
-    const known = Object.entries(entityLabels).map(([value, label]) => ({ value, label }));
-    if (filters.entity && !entityLabels[filters.entity]) known.push({ value: filters.entity, label: filters.entity });
-    return known.sort((a, b) => a.label.localeCompare(b.label));
-  }, [filters.entity]);
 
   const filtered = Boolean(filters.entity || filters.entityId || filters.actorId);
 
@@ -120,34 +119,7 @@ export function AuditTable({ filters, onFiltersChange }: AuditTableProps) {
       {...pagedQueryProps(query)}
       renderExpanded={(e) => <AuditChanges before={e.before} after={e.after} />}
       expandLabel={(e) => `Show changes: ${actionLabel(e.action)} ${entityLabel(e.entity)} ${formatDateTime(e.createdAt)}`}
-      toolbar={
-        <>
-          <FilterSelect
-            label="Record type"
-            anyLabel="All records"
-            options={entityOptions}
-            value={filters.entity ?? ''}
-            onChange={(entity) => onFiltersChange({ ...filters, entity: entity || undefined, entityId: undefined })}
-          />
-          <FilterSearch
-            label="Record id"
-            placeholder="Exact id"
-            value={filters.entityId ?? ''}
-            onChange={(entityId) => onFiltersChange({ ...filters, entityId: entityId.trim() || undefined })}
-          />
-          {filters.actorId ? (
-            <button
-              type="button"
-              onClick={() => onFiltersChange({ ...filters, actorId: undefined })}
-              className="mb-1 inline-flex min-h-9 items-center gap-1.5 rounded-full bg-ink-50 px-3 text-sm text-ink-800 ring-1 ring-ink-200 hover:bg-ink-100"
-            >
-              By one person only
-              <X className="h-3.5 w-3.5" aria-hidden="true" />
-              <span className="sr-only">(remove this filter)</span>
-            </button>
-          ) : null}
-        </>
-      }
+      toolbar={<AuditFilterBar filters={filters} onFiltersChange={onFiltersChange} />}
       empty={
         <EmptyState
           icon={History}
@@ -156,5 +128,42 @@ export function AuditTable({ filters, onFiltersChange }: AuditTableProps) {
         />
       }
     />
+  );
+}
+
+/** The log's filters: the kind of record, one record's id, and (when set from elsewhere) one person. */
+function AuditFilterBar({ filters, onFiltersChange }: AuditTableProps) {
+  const entityOptions = useMemo(() => {
+    const known = Object.entries(entityLabels).map(([value, label]) => ({ value, label }));
+    if (filters.entity && !entityLabels[filters.entity]) known.push({ value: filters.entity, label: filters.entity });
+    return known.sort((a, b) => a.label.localeCompare(b.label));
+  }, [filters.entity]);
+  return (
+    <>
+      <FilterSelect
+        label="Record type"
+        anyLabel="All records"
+        options={entityOptions}
+        value={filters.entity ?? ''}
+        onChange={(entity) => onFiltersChange({ ...filters, entity: entity || undefined, entityId: undefined })}
+      />
+      <FilterSearch
+        label="Record id"
+        placeholder="Exact id"
+        value={filters.entityId ?? ''}
+        onChange={(entityId) => onFiltersChange({ ...filters, entityId: entityId.trim() || undefined })}
+      />
+      {filters.actorId ? (
+        <button
+          type="button"
+          onClick={() => onFiltersChange({ ...filters, actorId: undefined })}
+          className="mb-1 inline-flex min-h-9 items-center gap-1.5 rounded-full bg-ink-50 px-3 text-sm text-ink-800 ring-1 ring-ink-200 hover:bg-ink-100"
+        >
+          By one person only
+          <X className="h-3.5 w-3.5" aria-hidden="true" />
+          <span className="sr-only">(remove this filter)</span>
+        </button>
+      ) : null}
+    </>
   );
 }

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
-import { useChangePassword } from '@/features/auth/api/change-password';
+import { useChangePassword } from '@/features/auth/api/mutations';
 
 export function ChangePasswordForm({ email }: { email: string }) {
   const change = useChangePassword();

@@ -5,7 +5,7 @@ import { Alert } from '@/components/ui/alert';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
 import { paths } from '@/config/paths';
-import { useForgotPassword } from '@/features/auth/api/forgot-password';
+import { useForgotPassword } from '@/features/auth/api/mutations';
 
 export function ForgotPasswordForm({ defaultEmail = '' }: { defaultEmail?: string }) {
   const forgot = useForgotPassword();

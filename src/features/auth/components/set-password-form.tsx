@@ -1,10 +1,9 @@
-import { passwordMinLength, redeemTokenInput } from '@shared/schemas/auth';
+import { passwordMinLength, redeemTokenInput, type LinkToken } from '@shared/schemas/auth';
 import { useNavigate } from 'react-router-dom';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
 import { paths } from '@/config/paths';
-import type { LinkToken } from '@/features/auth/api/get-link-token';
-import { useRedeemToken } from '@/features/auth/api/redeem-token';
+import { useRedeemToken } from '@/features/auth/api/mutations';
 
 export function SetPasswordForm({ token, link }: { token: string; link: LinkToken }) {
   const navigate = useNavigate();

@@ -3,7 +3,7 @@ import { Link, useNavigate } from 'react-router-dom';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
 import { paths, safeNext } from '@/config/paths';
-import { useLogin } from '@/features/auth/api/login';
+import { useLogin } from '@/features/auth/api/mutations';
 
 interface SignInFormProps {
   /** Where to go once signed in (checked to stay inside the app). */

@@ -1,4 +1,5 @@
-import { priorityGuidance, type TicketClockState } from '@shared/schemas/tickets';
+import { priorityGuidance, type OpenClockState, type TicketClockState, type TicketListItem } from '@shared/schemas/tickets';
+import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { AlarmClock, ArrowRight, Inbox, PartyPopper, type LucideIcon } from 'lucide-react';
 import type { ReactNode } from 'react';
@@ -9,13 +10,10 @@ import { Button } from '@/components/ui/button';
 import { Spinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { useAcknowledgeTicket } from '@/features/board/api/acknowledge-ticket';
-import { attentionLimit, useAttentionTickets } from '@/features/board/api/get-attention-tickets';
-import { useClockCounts, type OpenClockState } from '@/features/board/api/get-clock-counts';
-import { useWaitingTickets, waitingLimit } from '@/features/board/api/get-waiting-tickets';
-import type { BoardTicket } from '@/features/board/api/types';
+import { useAcknowledgeTicket } from '@/features/board/api/mutations';
 import { errorMessage } from '@/lib/errors';
 import { formatAgo, formatDateTime } from '@/lib/format';
+import { boardListLimit, ticketQueries } from '@/resources/tickets';
 
 const clockTiles: { state: OpenClockState; label: string; hint: string; tone: string; dot: string }[] = [
   { state: 'breached', label: 'Breached', hint: 'Past a due time', tone: 'border-l-state-breached-dot', dot: 'bg-state-breached-dot' },
@@ -44,7 +42,7 @@ export function TodayBoard() {
 }
 
 function ClockCountTiles() {
-  const counts = useClockCounts();
+  const counts = useQuery(ticketQueries.clockCounts());
   return (
     <section aria-labelledby="board-counts">
       <h2 id="board-counts" className="sr-only">
@@ -110,7 +108,7 @@ function ListState({ isPending, error, empty, count, children }: { isPending: bo
   return <>{children}</>;
 }
 
-function TicketLine({ t, due, action }: { t: BoardTicket; due: ReactNode; action?: ReactNode }) {
+function TicketLine({ t, due, action }: { t: TicketListItem; due: ReactNode; action?: ReactNode }) {
   const p = t.clockState ? pill[t.clockState] : undefined;
   return (
     <li className="flex items-start gap-3 px-4 py-3 sm:px-5">
@@ -151,7 +149,7 @@ function dueText(iso: string | null, what: string) {
 }
 
 function AttentionList() {
-  const query = useAttentionTickets();
+  const query = useQuery(ticketQueries.attention());
   const items = query.data?.items ?? [];
   return (
     <Section
@@ -174,14 +172,14 @@ function AttentionList() {
             <TicketLine key={t.id} t={t} due={t.status === 'new' && t.responseDueAt ? dueText(t.responseDueAt, 'Response') : dueText(t.resolutionDueAt, 'Resolution')} />
           ))}
         </ul>
-        {query.data?.nextCursor ? <p className="border-t border-stone-100 px-5 py-2 text-sm text-stone-600">The {attentionLimit} most urgent are shown.</p> : null}
+        {query.data?.nextCursor ? <p className="border-t border-stone-100 px-5 py-2 text-sm text-stone-600">The {boardListLimit} most urgent are shown.</p> : null}
       </ListState>
     </Section>
   );
 }
 
 function WaitingList() {
-  const query = useWaitingTickets();
+  const query = useQuery(ticketQueries.waiting());
   const acknowledge = useAcknowledgeTicket();
   const toast = useToast();
   const items = query.data?.items ?? [];
@@ -220,7 +218,7 @@ function WaitingList() {
             />
           ))}
         </ul>
-        {query.data?.nextCursor ? <p className="border-t border-stone-100 px-5 py-2 text-sm text-stone-600">The {waitingLimit} oldest are shown.</p> : null}
+        {query.data?.nextCursor ? <p className="border-t border-stone-100 px-5 py-2 text-sm text-stone-600">The {boardListLimit} oldest are shown.</p> : null}
       </ListState>
     </Section>
   );

@@ -1,3 +1,5 @@
+import type { Attachment } from '@shared/schemas/attachments';
+import { useQuery } from '@tanstack/react-query';
 import { Download, FileText, Image as ImageIcon, Trash2, Upload } from 'lucide-react';
 import { useId, useRef, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
@@ -8,12 +10,10 @@ import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Spinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
-import { useDeleteDocument } from '@/features/documents/api/delete-document';
-import { useWallDocuments } from '@/features/documents/api/get-wall-documents';
-import type { Attachment } from '@/features/documents/api/types';
-import { useUploadWallDocument } from '@/features/documents/api/upload-wall-document';
+import { useDeleteDocument, useUploadWallDocument } from '@/features/documents/api/mutations';
 import { errorMessage } from '@/lib/errors';
 import { formatDateTime } from '@/lib/format';
+import { attachmentQueries } from '@/resources/attachments';
 
 export function fileSize(bytes: number) {
   if (bytes < 1024) return `${bytes} B`;
@@ -33,7 +33,7 @@ interface WallDocumentsProps {
 
 /** As-built drawings, controller configuration files and calibration reports of a wall. */
 export function WallDocuments({ wallId, canUpload, canMarkInternal, canDelete }: WallDocumentsProps) {
-  const query = useWallDocuments(wallId);
+  const query = useQuery(attachmentQueries.ofWall(wallId));
   const remove = useDeleteDocument();
   const toast = useToast();
   const [removing, setRemoving] = useState<Attachment | null>(null);
@@ -57,41 +57,9 @@ export function WallDocuments({ wallId, canUpload, canMarkInternal, canDelete }:
           <EmptyState icon={FileText} title="No documents yet" description={canUpload ? 'Upload the as-built drawing first: the next technician will thank you.' : undefined} />
         ) : (
           <ul className="divide-y divide-stone-100">
-            {files.map((f) => {
-              const Icon = f.kind === 'photo' ? ImageIcon : FileText;
-              return (
-                <li key={f.id} className="flex flex-wrap items-center justify-between gap-3 px-4 py-3 sm:px-5">
-                  <div className="flex min-w-0 items-start gap-3">
-                    <Icon className="mt-0.5 h-5 w-5 shrink-0 text-ink-500" aria-hidden="true" />
-                    <div className="min-w-0">
-                      <a href={f.url} className="link break-all" download={f.fileName}>
-                        {f.fileName}
-                      </a>
-                      <p className="text-sm text-stone-600">
-                        {fileSize(f.sizeBytes)} · {formatDateTime(f.createdAt)}
-                        {f.uploadedByName ? ` · ${f.uploadedByName}` : ''}
-                      </p>
-                    </div>
-                    {f.internal ? <Badge tone="amber">Internal</Badge> : null}
-                  </div>
-                  <div className="flex gap-1">
-                    {/^image\/|^application\/pdf$/.test(f.contentType) ? (
-                      <a href={`${f.url}?inline=1`} target="_blank" rel="noreferrer" className="rounded px-2.5 py-1.5 text-sm font-medium text-ink-700 hover:bg-ink-50">
-                        View
-                      </a>
-                    ) : null}
-                    <a href={f.url} download={f.fileName} className="inline-flex items-center gap-1.5 rounded px-2.5 py-1.5 text-sm font-medium text-ink-700 hover:bg-ink-50">
-                      <Download className="h-4 w-4" aria-hidden="true" /> Download
-                    </a>
-                    {canDelete ? (
-                      <Button size="sm" variant="ghost" aria-label={`Remove ${f.fileName}`} onClick={() => setRemoving(f)} icon={<Trash2 className="h-4 w-4" aria-hidden="true" />}>
-                        Remove
-                      </Button>
-                    ) : null}
-                  </div>
-                </li>
-              );
-            })}
+            {files.map((f) => (
+              <DocumentRow key={f.id} file={f} onRemove={canDelete ? setRemoving : undefined} />
+            ))}
           </ul>
         )}
       </Card>
@@ -110,6 +78,49 @@ export function WallDocuments({ wallId, canUpload, canMarkInternal, canDelete }:
         <p>The file is deleted from storage. This cannot be undone.</p>
       </ConfirmDialog>
     </div>
+  );
+}
+
+interface DocumentRowProps {
+  file: Attachment;
+  /** The office removes files; leave out for everyone else. */
+  onRemove?: (file: Attachment) => void;
+}
+
+/** One document: its name (a download), size, date and uploader, and View, Download and Remove. */
+function DocumentRow({ file: f, onRemove }: DocumentRowProps) {
+  const Icon = f.kind === 'photo' ? ImageIcon : FileText;
+  return (
+    <li className="flex flex-wrap items-center justify-between gap-3 px-4 py-3 sm:px-5">
+      <div className="flex min-w-0 items-start gap-3">
+        <Icon className="mt-0.5 h-5 w-5 shrink-0 text-ink-500" aria-hidden="true" />
+        <div className="min-w-0">
+          <a href={f.url} className="link break-all" download={f.fileName}>
+            {f.fileName}
+          </a>
+          <p className="text-sm text-stone-600">
+            {fileSize(f.sizeBytes)} · {formatDateTime(f.createdAt)}
+            {f.uploadedByName ? ` · ${f.uploadedByName}` : ''}
+          </p>
+        </div>
+        {f.internal ? <Badge tone="amber">Internal</Badge> : null}
+      </div>
+      <div className="flex gap-1">
+        {/^image\/|^application\/pdf$/.test(f.contentType) ? (
+          <a href={`${f.url}?inline=1`} target="_blank" rel="noreferrer" className="rounded px-2.5 py-1.5 text-sm font-medium text-ink-700 hover:bg-ink-50">
+            View
+          </a>
+        ) : null}
+        <a href={f.url} download={f.fileName} className="inline-flex items-center gap-1.5 rounded px-2.5 py-1.5 text-sm font-medium text-ink-700 hover:bg-ink-50">
+          <Download className="h-4 w-4" aria-hidden="true" /> Download
+        </a>
+        {onRemove ? (
+          <Button size="sm" variant="ghost" aria-label={`Remove ${f.fileName}`} onClick={() => onRemove(f)} icon={<Trash2 className="h-4 w-4" aria-hidden="true" />}>
+            Remove
+          </Button>
+        ) : null}
+      </div>
+    </li>
   );
 }
 
@@ -183,23 +194,28 @@ function UploadForm({ wallId, canMarkInternal }: { wallId: string; canMarkIntern
           <Button type="submit" variant="primary" disabled={!file} loading={progress !== null} icon={<Upload className="h-4 w-4" aria-hidden="true" />}>
             Upload
           </Button>
-          {progress !== null ? (
-            <div className="flex min-w-[12rem] flex-1 items-center gap-3">
-              <div
-                role="progressbar"
-                aria-label="Uploading"
-                aria-valuemin={0}
-                aria-valuemax={100}
-                aria-valuenow={Math.round(progress * 100)}
-                className="h-2.5 flex-1 overflow-hidden rounded-full bg-stone-200"
-              >
-                <div className="h-full rounded-full bg-ink-600 transition-[width]" style={{ width: `${Math.round(progress * 100)}%` }} />
-              </div>
-              <span className="w-12 text-right text-sm tabular-nums text-stone-700">{Math.round(progress * 100)} %</span>
-            </div>
-          ) : null}
+          {progress !== null ? <UploadProgress fraction={progress} /> : null}
         </div>
       </form>
     </Card>
+  );
+}
+
+/** How much of the file has gone (0..1), as a bar and a percentage. */
+function UploadProgress({ fraction }: { fraction: number }) {
+  return (
+    <div className="flex min-w-[12rem] flex-1 items-center gap-3">
+      <div
+        role="progressbar"
+        aria-label="Uploading"
+        aria-valuemin={0}
+        aria-valuemax={100}
+        aria-valuenow={Math.round(fraction * 100)}
+        className="h-2.5 flex-1 overflow-hidden rounded-full bg-stone-200"
+      >
+        <div className="h-full rounded-full bg-ink-600 transition-[width]" style={{ width: `${Math.round(fraction * 100)}%` }} />
+      </div>
+      <span className="w-12 text-right text-sm tabular-nums text-stone-700">{Math.round(fraction * 100)} %</span>
+    </div>
   );
 }

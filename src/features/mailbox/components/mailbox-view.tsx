@@ -1,4 +1,5 @@
 import type { MailboxItem } from '@shared/schemas/auth';
+import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { ArrowLeft, Inbox, MailOpen, Paperclip, RefreshCw } from 'lucide-react';
 import { useState } from 'react';
@@ -6,14 +7,14 @@ import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageSpinner } from '@/components/ui/spinner';
-import { useMailbox } from '@/features/mailbox/api/get-mailbox';
 import { LinkifiedText } from '@/features/mailbox/components/linkified-text';
 import { errorMessage, isNotFound } from '@/lib/errors';
 import { formatAgo, formatDateTime } from '@/lib/format';
+import { mailboxQueries } from '@/resources/mailbox';
 
 /** A list of received messages and a reading pane (one at a time on a phone). */
 export function MailboxView() {
-  const mailbox = useMailbox();
+  const mailbox = useQuery(mailboxQueries.list());
   const [selectedId, setSelectedId] = useState<string | null>(null);
 
   if (mailbox.isPending) return <PageSpinner label="Loading the mailbox" />;
@@ -33,7 +34,7 @@ export function MailboxView() {
     );
   }
 
-  const items = mailbox.data;
+  const items = mailbox.data.items;
   const selected = items.find((m) => m.id === selectedId) ?? null;
 
   return (
@@ -60,26 +61,7 @@ export function MailboxView() {
           <ul className="min-h-0 flex-1 divide-y divide-stone-100 overflow-y-auto">
             {items.map((m) => (
               <li key={m.id}>
-                <button
-                  type="button"
-                  onClick={() => setSelectedId(m.id)}
-                  aria-current={m.id === selectedId ? 'true' : undefined}
-                  className={clsx(
-                    'block w-full px-4 py-3 text-left hover:bg-stone-50',
-                    m.id === selectedId && 'bg-ink-50 shadow-[inset_3px_0_0_theme(colors.amber.400)]',
-                  )}
-                >
-                  <span className="flex items-baseline justify-between gap-2">
-                    <span className="truncate text-sm text-stone-700">{m.to}</span>
-                    <time dateTime={m.date} className="shrink-0 text-xs text-stone-500">
-                      {formatAgo(m.date)}
-                    </time>
-                  </span>
-                  <span className="mt-0.5 flex items-center gap-1.5">
-                    <span className="truncate font-medium text-ink-950">{m.subject || '(no subject)'}</span>
-                    {m.attachments.length ? <Paperclip className="h-3.5 w-3.5 shrink-0 text-stone-500" aria-label="Has attachments" /> : null}
-                  </span>
-                </button>
+                <MessageLine message={m} selected={m.id === selectedId} onSelect={() => setSelectedId(m.id)} />
               </li>
             ))}
           </ul>
@@ -93,6 +75,29 @@ export function MailboxView() {
         )}
       </section>
     </div>
+  );
+}
+
+/** One received message in the list: to whom, when, its subject; the chosen one marked. */
+function MessageLine({ message: m, selected, onSelect }: { message: MailboxItem; selected: boolean; onSelect: () => void }) {
+  return (
+    <button
+      type="button"
+      onClick={onSelect}
+      aria-current={selected ? 'true' : undefined}
+      className={clsx('block w-full px-4 py-3 text-left hover:bg-stone-50', selected && 'bg-ink-50 shadow-[inset_3px_0_0_theme(colors.amber.400)]')}
+    >
+      <span className="flex items-baseline justify-between gap-2">
+        <span className="truncate text-sm text-stone-700">{m.to}</span>
+        <time dateTime={m.date} className="shrink-0 text-xs text-stone-500">
+          {formatAgo(m.date)}
+        </time>
+      </span>
+      <span className="mt-0.5 flex items-center gap-1.5">
+        <span className="truncate font-medium text-ink-950">{m.subject || '(no subject)'}</span>
+        {m.attachments.length ? <Paperclip className="h-3.5 w-3.5 shrink-0 text-stone-500" aria-label="Has attachments" /> : null}
+      </span>
+    </button>
   );
 }
 

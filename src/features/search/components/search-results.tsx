@@ -1,5 +1,6 @@
 import { positionLabel } from '@shared/schemas/register';
 import type { CabinetStatus } from '@shared/schemas/enums';
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import type { LucideIcon } from 'lucide-react';
 import { Building2, Grid3x3, MapPin, SearchX, Square } from 'lucide-react';
 import type { ReactNode } from 'react';
@@ -9,8 +10,8 @@ import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { useSearch } from '@/features/search/api/get-search';
 import { errorMessage } from '@/lib/errors';
+import { searchQueries } from '@/resources/search';
 
 const statusWords: Record<CabinetStatus, string> = {
   installed: 'installed',
@@ -50,7 +51,7 @@ function Row({ to, primary, secondary }: { to: string; primary: ReactNode; secon
 
 /** Clients, sites and walls by name, and cabinets by serial prefix, grouped by kind. */
 export function SearchResults({ q }: { q: string }) {
-  const query = useSearch(q);
+  const query = useQuery({ ...searchQueries.results(q), enabled: q.trim().length > 0, placeholderData: keepPreviousData });
   if (!q.trim()) {
     return <EmptyState icon={SearchX} title="Type something to search for" description="A client, site or wall name, or the first characters of a serial." />;
   }

@@ -1,18 +1,19 @@
-import { commentInput } from '@shared/schemas/tickets';
+import { commentInput, type CommentInput, type TicketComment } from '@shared/schemas/tickets';
+import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { Globe, Lock, MessagesSquare } from 'lucide-react';
 import { useId } from 'react';
+import { useFormContext } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Card } from '@/components/ui/card';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { Spinner } from '@/components/ui/spinner';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { useToast } from '@/components/ui/toast';
-import { useAddComment } from '@/features/tickets/api/add-comment';
-import { useComments } from '@/features/tickets/api/get-comments';
-import type { TicketComment } from '@/features/tickets/api/types';
+import { useAddComment } from '@/features/tickets/api/mutations';
 import { errorMessage } from '@/lib/errors';
 import { formatAgo, formatDateTime, initials } from '@/lib/format';
+import { ticketQueries } from '@/resources/tickets';
 
 export const internalLabel = 'Internal — not visible to the client';
 
@@ -26,8 +27,8 @@ interface ConversationProps {
 
 /** The ticket's conversation, oldest first, and the composer. */
 export function Conversation({ ticketId, staff, closed }: ConversationProps) {
-  const comments = useComments(ticketId);
-  const items = comments.data ?? [];
+  const comments = useQuery(ticketQueries.comments(ticketId));
+  const items = comments.data?.items ?? [];
   return (
     <Card title={<span className="inline-flex items-center gap-2"><MessagesSquare className="h-4 w-4 text-ink-600" aria-hidden="true" />Conversation</span>}>
       <div className="space-y-5">
@@ -96,7 +97,6 @@ function Composer({ ticketId, staff }: { ticketId: string; staff: boolean }) {
   const form = useZodForm(commentInput, { defaultValues: { body: '', visibility: 'public' } });
   const visibility = form.watch('visibility') ?? 'public';
   const internal = visibility === 'internal';
-  const groupId = useId();
 
   return (
     <Form
@@ -110,34 +110,7 @@ function Composer({ ticketId, staff }: { ticketId: string; staff: boolean }) {
         toast(values.visibility === 'internal' ? 'Internal note added.' : staff ? 'Reply sent. The client gets an e-mail.' : 'Reply sent to the service desk.');
       }}
     >
-      {staff ? (
-        <fieldset>
-          <legend id={groupId} className="sr-only">
-            Who sees this comment
-          </legend>
-          <div className="inline-flex rounded-md border border-stone-300 bg-white p-0.5" role="radiogroup" aria-labelledby={groupId}>
-            {(
-              [
-                { value: 'public', label: 'Public reply', icon: Globe },
-                { value: 'internal', label: 'Internal note', icon: Lock },
-              ] as const
-            ).map((o) => (
-              <label
-                key={o.value}
-                className={clsx(
-                  'flex min-h-touch cursor-pointer items-center gap-1.5 rounded px-3 text-sm font-medium md:min-h-9',
-                  'has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-ink-600',
-                  visibility === o.value ? (o.value === 'internal' ? 'bg-amber-400 text-ink-950' : 'bg-ink-800 text-white') : 'text-ink-800 hover:bg-stone-100',
-                )}
-              >
-                <input type="radio" value={o.value} className="sr-only" {...form.register('visibility')} />
-                <o.icon className="h-4 w-4" aria-hidden="true" />
-                {o.label}
-              </label>
-            ))}
-          </div>
-        </fieldset>
-      ) : null}
+      {staff ? <VisibilityChoice /> : null}
       <TextAreaField
         name="body"
         label={staff ? (internal ? 'Note for the team' : 'Reply to the client') : 'Your reply'}
@@ -164,5 +137,40 @@ function Composer({ ticketId, staff }: { ticketId: string; staff: boolean }) {
         </SubmitButton>
       </div>
     </Form>
+  );
+}
+
+/** Staff choose who sees a comment: a public reply (e-mailed to the client) or an internal note. */
+function VisibilityChoice() {
+  const { register, watch } = useFormContext<CommentInput>();
+  const visibility = watch('visibility') ?? 'public';
+  const groupId = useId();
+  return (
+    <fieldset>
+      <legend id={groupId} className="sr-only">
+        Who sees this comment
+      </legend>
+      <div className="inline-flex rounded-md border border-stone-300 bg-white p-0.5" role="radiogroup" aria-labelledby={groupId}>
+        {(
+          [
+            { value: 'public', label: 'Public reply', icon: Globe },
+            { value: 'internal', label: 'Internal note', icon: Lock },
+          ] as const
+        ).map((o) => (
+          <label
+            key={o.value}
+            className={clsx(
+              'flex min-h-touch cursor-pointer items-center gap-1.5 rounded px-3 text-sm font-medium md:min-h-9',
+              'has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-ink-600',
+              visibility === o.value ? (o.value === 'internal' ? 'bg-amber-400 text-ink-950' : 'bg-ink-800 text-white') : 'text-ink-800 hover:bg-stone-100',
+            )}
+          >
+            <input type="radio" value={o.value} className="sr-only" {...register('visibility')} />
+            <o.icon className="h-4 w-4" aria-hidden="true" />
+            {o.label}
+          </label>
+        ))}
+      </div>
+    </fieldset>
   );
 }

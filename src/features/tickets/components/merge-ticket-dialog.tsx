@@ -1,3 +1,5 @@
+import type { TicketDetail } from '@shared/schemas/tickets';
+import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
@@ -8,12 +10,11 @@ import { FilterSearch } from '@/components/ui/filters';
 import { Spinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
-import { useTicketsPage } from '@/features/tickets/api/get-tickets';
-import { useMergeTicket } from '@/features/tickets/api/merge-ticket';
-import type { TicketDetail } from '@/features/tickets/api/types';
+import { useMergeTicket } from '@/features/tickets/api/mutations';
 import { TicketStatusBadge } from '@/features/tickets/components/ticket-status';
 import { errorMessage } from '@/lib/errors';
 import { formatAgo } from '@/lib/format';
+import { ticketQueries } from '@/resources/tickets';
 
 interface MergeTicketDialogProps {
   open: boolean;
@@ -39,7 +40,7 @@ function MergeForm({ ticket, onDone }: { ticket: TicketDetail; onDone: () => voi
   const [q, setQ] = useState('');
   const [intoId, setIntoId] = useState<string | null>(null);
   const [error, setError] = useState<unknown>(null);
-  const candidates = useTicketsPage({ clientId: ticket.client.id, open: 'true', q: q || undefined, sort: 'updatedAt', dir: 'desc' }, 25);
+  const candidates = useQuery(ticketQueries.page({ clientId: ticket.client.id, open: 'true', q: q || undefined, sort: 'updatedAt', dir: 'desc' }, 25));
   const merge = useMergeTicket();
   const toast = useToast();
   const navigate = useNavigate();

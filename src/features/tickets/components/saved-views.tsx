@@ -1,4 +1,5 @@
-import { savedViewInput } from '@shared/schemas/tickets';
+import { savedViewInput, type SavedTicketView } from '@shared/schemas/tickets';
+import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { BookmarkPlus, X } from 'lucide-react';
 import { useState } from 'react';
@@ -8,12 +9,9 @@ import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { useDeleteTicketView } from '@/features/tickets/api/delete-ticket-view';
-import { useTicketViews } from '@/features/tickets/api/get-ticket-views';
-import type { TicketFilters } from '@/features/tickets/api/keys';
-import { useSaveTicketView } from '@/features/tickets/api/save-ticket-view';
-import type { SavedTicketView } from '@/features/tickets/api/types';
+import { useDeleteTicketView, useSaveTicketView } from '@/features/tickets/api/mutations';
 import { filtersFromParams, filtersToRecord, hasAnyFilter, sameFilters } from '@/features/tickets/components/ticket-filters';
+import { ticketQueries, type TicketFilters } from '@/resources/tickets';
 
 interface SavedViewsProps {
   filters: TicketFilters;
@@ -24,12 +22,12 @@ const chip = 'inline-flex min-h-touch items-center rounded-full border px-3 text
 
 /** One-tap filter sets a person saved for themselves ("My breached", "Arena this week"). */
 export function SavedViews({ filters, onApply }: SavedViewsProps) {
-  const views = useTicketViews();
+  const views = useQuery(ticketQueries.views());
   const [saving, setSaving] = useState(false);
   const [removing, setRemoving] = useState<SavedTicketView | null>(null);
   const remove = useDeleteTicketView();
   const toast = useToast();
-  const items = views.data ?? [];
+  const items = views.data?.items ?? [];
   const current = items.find((v) => sameFilters(filtersFromParams(new URLSearchParams(v.filters)), filters));
 
   return (

@@ -1,3 +1,6 @@
+import type { TicketDetail } from '@shared/schemas/tickets';
+import type { StaffMember } from '@shared/schemas/users';
+import { useQuery } from '@tanstack/react-query';
 import { addDays, isValid, parseISO, set } from 'date-fns';
 import { TZDate } from '@date-fns/tz';
 import { useId, useState } from 'react';
@@ -7,11 +10,10 @@ import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { inputClasses } from '@/components/ui/field';
 import { Spinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
-import { useStaff } from '@/features/tickets/api/get-staff';
-import type { TicketDetail } from '@/features/tickets/api/types';
-import { useUpdateTicket } from '@/features/tickets/api/update-ticket';
+import { useUpdateTicket } from '@/features/tickets/api/mutations';
 import { errorMessage } from '@/lib/errors';
 import { formatSiteTime, fromLocalInput, toLocalInput, zoneAbbreviation } from '@/lib/site-time';
+import { userQueries } from '@/resources/users';
 
 interface ScheduleVisitDialogProps {
   open: boolean;
@@ -38,7 +40,7 @@ export function ScheduleVisitDialog({ open, onClose, ticket, timeZone }: Schedul
 }
 
 function ScheduleForm({ ticket, timeZone, onDone }: { ticket: TicketDetail; timeZone: string; onDone: () => void }) {
-  const staff = useStaff();
+  const staff = useQuery(userQueries.staff());
   const update = useUpdateTicket();
   const toast = useToast();
   const initial = defaultWindow(timeZone);
@@ -47,7 +49,7 @@ function ScheduleForm({ ticket, timeZone, onDone }: { ticket: TicketDetail; time
   const [technicianIds, setTechnicianIds] = useState<string[]>(ticket.assignee ? [ticket.assignee.id] : []);
   const [problem, setProblem] = useState<string | null>(null);
   const ids = { start: useId(), end: useId() };
-  const technicians = (staff.data ?? []).filter((u) => u.role === 'technician');
+  const technicians = (staff.data?.items ?? []).filter((u) => u.role === 'technician');
   const zone = zoneAbbreviation(new Date(), timeZone);
 
   const submit = async () => {
@@ -97,26 +99,7 @@ function ScheduleForm({ ticket, timeZone, onDone }: { ticket: TicketDetail; time
           <input id={ids.end} type="datetime-local" value={end} onChange={(e) => setEnd(e.target.value)} className={inputClasses(false)} required />
         </div>
       </div>
-      <fieldset className="space-y-1">
-        <legend className="mb-1 text-sm font-medium text-stone-800">Technicians</legend>
-        {staff.isPending ? (
-          <Spinner />
-        ) : technicians.length === 0 ? (
-          <p className="text-sm text-stone-600">No technicians in the team yet.</p>
-        ) : (
-          technicians.map((t) => (
-            <label key={t.id} className="flex min-h-touch cursor-pointer items-center gap-3 md:min-h-9">
-              <input
-                type="checkbox"
-                className="h-5 w-5 accent-ink-700"
-                checked={technicianIds.includes(t.id)}
-                onChange={(e) => setTechnicianIds((all) => (e.target.checked ? [...all, t.id] : all.filter((id) => id !== t.id)))}
-              />
-              <span className="text-base">{t.name}</span>
-            </label>
-          ))
-        )}
-      </fieldset>
+      <TechnicianChoice technicians={technicians} loading={staff.isPending} chosen={technicianIds} onChange={setTechnicianIds} />
       <DialogActions>
         <Button onClick={onDone}>Cancel</Button>
         <Button type="submit" variant="primary" loading={update.isPending}>
@@ -124,5 +107,38 @@ function ScheduleForm({ ticket, timeZone, onDone }: { ticket: TicketDetail; time
         </Button>
       </DialogActions>
     </form>
+  );
+}
+
+interface TechnicianChoiceProps {
+  technicians: StaffMember[];
+  loading: boolean;
+  chosen: string[];
+  onChange: (update: (chosen: string[]) => string[]) => void;
+}
+
+/** Who goes: a checkbox per technician of the team. */
+function TechnicianChoice({ technicians, loading, chosen, onChange }: TechnicianChoiceProps) {
+  return (
+    <fieldset className="space-y-1">
+      <legend className="mb-1 text-sm font-medium text-stone-800">Technicians</legend>
+      {loading ? (
+        <Spinner />
+      ) : technicians.length === 0 ? (
+        <p className="text-sm text-stone-600">No technicians in the team yet.</p>
+      ) : (
+        technicians.map((t) => (
+          <label key={t.id} className="flex min-h-touch cursor-pointer items-center gap-3 md:min-h-9">
+            <input
+              type="checkbox"
+              className="h-5 w-5 accent-ink-700"
+              checked={chosen.includes(t.id)}
+              onChange={(e) => onChange((all) => (e.target.checked ? [...all, t.id] : all.filter((id) => id !== t.id)))}
+            />
+            <span className="text-base">{t.name}</span>
+          </label>
+        ))
+      )}
+    </fieldset>
   );
 }

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Spinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import type { TicketListItem } from '@/features/tickets/api/types';
+import type { TicketListItem } from '@shared/schemas/tickets';
 import { ClockBadge, PriorityBadge, TicketStatusBadge } from '@/features/tickets/components/ticket-status';
 import { errorMessage } from '@/lib/errors';
 import { formatAgo, formatDateTime } from '@/lib/format';

@@ -1,6 +1,6 @@
 import type { TicketClockState } from '@shared/schemas/tickets';
 import { Clock } from 'lucide-react';
-import type { TicketDetail } from '@/features/tickets/api/types';
+import type { TicketDetail } from '@shared/schemas/tickets';
 import { ClockBadge } from '@/features/tickets/components/ticket-status';
 import { formatSiteTime, relativeTime } from '@/lib/site-time';
 

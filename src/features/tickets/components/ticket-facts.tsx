@@ -2,7 +2,7 @@ import type { visitStatuses } from '@shared/schemas/enums';
 import { CalendarDays } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
-import type { TicketDetail, TicketVisit } from '@/features/tickets/api/types';
+import type { TicketDetail, TicketVisit } from '@shared/schemas/tickets';
 import { formatAgo, formatDateTime } from '@/lib/format';
 import { formatSiteTime } from '@/lib/site-time';
 

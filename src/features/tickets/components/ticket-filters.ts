@@ -1,6 +1,6 @@
 import { ticketPriorities, ticketStatuses } from '@shared/schemas/enums';
 import { ticketClockStates } from '@shared/schemas/tickets';
-import type { TicketFilters } from '@/features/tickets/api/keys';
+import type { TicketFilters } from '@/resources/tickets';
 import { isRecordId } from '@/lib/record-id';
 
 

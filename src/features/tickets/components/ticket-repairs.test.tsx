@@ -1,7 +1,7 @@
 import { renderToStaticMarkup } from 'react-dom/server';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 import { describe, expect, it } from 'vitest';
-import type { TicketRepair } from '@/features/tickets/api/types';
+import type { TicketRepair } from '@shared/schemas/tickets';
 import { repairHeadline, TicketRepairs } from '@/features/tickets/components/ticket-repairs';
 
 const base: TicketRepair = {

@@ -3,7 +3,7 @@ import { Wrench } from 'lucide-react';
 import { Link } from 'react-router';
 import { Card } from '@/components/ui/card';
 import { paths } from '@/config/paths';
-import type { TicketRepair } from '@/features/tickets/api/types';
+import type { TicketRepair } from '@shared/schemas/tickets';
 import { formatSiteTime } from '@/lib/site-time';
 
 const actionText: Record<RepairAction, string> = {

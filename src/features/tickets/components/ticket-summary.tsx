@@ -1,7 +1,7 @@
 import { positionLabel } from '@shared/schemas/register';
 import { Cpu, Grid3x3, MapPin } from 'lucide-react';
 import { Card } from '@/components/ui/card';
-import type { TicketDetail } from '@/features/tickets/api/types';
+import type { TicketDetail } from '@shared/schemas/tickets';
 import { TicketWallMap } from '@/features/tickets/components/ticket-wall-map';
 
 /** What was reported: the description and, on a wall, the reported cells on the map. */

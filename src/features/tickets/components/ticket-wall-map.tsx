@@ -1,8 +1,12 @@
 import type { Position } from '@shared/schemas/register';
+import type { WallDetail } from '@shared/schemas/walls';
+import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { WallMap, WallViewToggle, type WallMapCell } from '@/components/wall-map/wall-map';
-import { useWallCabinets } from '@/features/tickets/api/get-wall-cabinets';
-import { useWallShape } from '@/features/tickets/api/get-wall-shape';
+import { wallQueries } from '@/resources/walls';
+
+/** A cabinet's height ÷ width, so the map draws cells the shape they are. */
+const cellAspectOf = ({ cabinetModel: { widthMm, heightMm } }: WallDetail) => (widthMm > 0 && heightMm > 0 ? heightMm / widthMm : 1);
 
 interface TicketWallMapProps {
   wall: { id: string; name: string; columns: number; rows: number };
@@ -16,11 +20,11 @@ interface TicketWallMapProps {
 /** The wall map for a ticket: cabinets with their serials, the reported cells highlighted, front/rear. */
 export function TicketWallMap({ wall, selected, onToggle, markOpenTickets = false }: TicketWallMapProps) {
   const [view, setView] = useState<'front' | 'rear'>('front');
-  const cabinets = useWallCabinets(wall.id);
-  const shape = useWallShape(wall.id);
+  const cabinets = useQuery(wallQueries.cabinets(wall.id));
+  const cellAspect = useQuery({ ...wallQueries.detail(wall.id), select: cellAspectOf });
   const cells = useMemo<WallMapCell[]>(
     () =>
-      (cabinets.data ?? []).map((c) => ({
+      (cabinets.data?.items ?? []).map((c) => ({
         column: c.column,
         row: c.row,
         serial: c.serial,
@@ -35,7 +39,7 @@ export function TicketWallMap({ wall, selected, onToggle, markOpenTickets = fals
         columns={wall.columns}
         rows={wall.rows}
         cells={cells}
-        cellAspect={shape.data?.cellAspect}
+        cellAspect={cellAspect.data}
         view={view}
         selected={selected}
         onCellActivate={onToggle}

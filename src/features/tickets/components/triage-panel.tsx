@@ -1,5 +1,6 @@
 import { ticketPriorities, type TicketPriority, type TicketStatus } from '@shared/schemas/enums';
-import { priorityGuidance } from '@shared/schemas/tickets';
+import { priorityGuidance, type TicketDetail } from '@shared/schemas/tickets';
+import { useQuery } from '@tanstack/react-query';
 import { CalendarPlus, GitMerge } from 'lucide-react';
 import { useId, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
@@ -7,14 +8,13 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { SelectBox } from '@/components/ui/select-field';
 import { useToast } from '@/components/ui/toast';
-import { useStaff } from '@/features/tickets/api/get-staff';
-import type { TicketDetail } from '@/features/tickets/api/types';
-import { useUpdateTicket } from '@/features/tickets/api/update-ticket';
+import { useUpdateTicket } from '@/features/tickets/api/mutations';
 import { MergeTicketDialog } from '@/features/tickets/components/merge-ticket-dialog';
 import { ScheduleVisitDialog } from '@/features/tickets/components/schedule-visit-dialog';
 import { statusText } from '@/features/tickets/components/ticket-status';
 import { errorMessage } from '@/lib/errors';
 import { roleLabels } from '@/lib/format';
+import { userQueries } from '@/resources/users';
 
 interface TriagePanelProps {
   ticket: TicketDetail;
@@ -31,14 +31,12 @@ export function TriagePanel({ ticket, office, timeZone }: TriagePanelProps) {
 
 function TriageForm({ ticket, office, timeZone }: TriagePanelProps) {
   const update = useUpdateTicket();
-  const staff = useStaff(office);
+  const staff = useQuery({ ...userQueries.staff(), enabled: office });
   const toast = useToast();
   const [status, setStatus] = useState<TicketStatus>(ticket.status);
   const [priority, setPriority] = useState<TicketPriority>(ticket.priority);
   const [assigneeId, setAssigneeId] = useState<string>(ticket.assignee?.id ?? '');
   const [error, setError] = useState<unknown>(null);
-  const [scheduling, setScheduling] = useState(false);
-  const [merging, setMerging] = useState(false);
   const ids = { status: useId(), priority: useId(), assignee: useId() };
 
   const changes = {
@@ -51,7 +49,7 @@ function TriageForm({ ticket, office, timeZone }: TriagePanelProps) {
   const canSchedule = office && !merged && (ticket.status === 'scheduled' || ticket.nextStatuses.includes('scheduled'));
   const canMerge = office && !merged && ticket.status !== 'closed';
 
-  const staffOptions = staff.data ?? [];
+  const staffOptions = staff.data?.items ?? [];
   const assigneeMissing = ticket.assignee && !staffOptions.some((u) => u.id === ticket.assignee!.id);
 
   const save = async () => {
@@ -95,13 +93,7 @@ function TriageForm({ ticket, office, timeZone }: TriagePanelProps) {
               </option>
             ))}
           </SelectBox>
-          {status === 'waiting_client' && ticket.status !== 'waiting_client' ? (
-            <p className="text-sm text-stone-600">The resolution clock pauses until the ticket moves on.</p>
-          ) : status === 'resolved' && ticket.status !== 'resolved' ? (
-            <p className="text-sm text-stone-600">The client gets an e-mail and can close the ticket.</p>
-          ) : status === 'scheduled' && ticket.status !== 'scheduled' ? (
-            <p className="text-sm text-stone-600">To plan the visit and send the client an invitation, use “Schedule a visit”.</p>
-          ) : null}
+          <StatusHint from={ticket.status} to={status} />
         </div>
         {office ? (
           <>
@@ -139,6 +131,33 @@ function TriageForm({ ticket, office, timeZone }: TriagePanelProps) {
         </Button>
       </form>
 
+      <TriageActions ticket={ticket} canSchedule={canSchedule} canMerge={canMerge} timeZone={timeZone} />
+    </Card>
+  );
+}
+
+/** What moving to the chosen status will do, when it does more than change the status. */
+function StatusHint({ from, to }: { from: TicketStatus; to: TicketStatus }) {
+  if (to === from) return null;
+  if (to === 'waiting_client') return <p className="text-sm text-stone-600">The resolution clock pauses until the ticket moves on.</p>;
+  if (to === 'resolved') return <p className="text-sm text-stone-600">The client gets an e-mail and can close the ticket.</p>;
+  if (to === 'scheduled') return <p className="text-sm text-stone-600">To plan the visit and send the client an invitation, use “Schedule a visit”.</p>;
+  return null;
+}
+
+interface TriageActionsProps {
+  ticket: TicketDetail;
+  canSchedule: boolean;
+  canMerge: boolean;
+  timeZone?: string;
+}
+
+/** The office's further actions on a ticket, each in its own dialog: schedule a visit, merge into another ticket. */
+function TriageActions({ ticket, canSchedule, canMerge, timeZone }: TriageActionsProps) {
+  const [scheduling, setScheduling] = useState(false);
+  const [merging, setMerging] = useState(false);
+  return (
+    <>
       {canSchedule || canMerge ? (
         <div className="mt-4 flex flex-col gap-2 border-t border-stone-100 pt-4">
           {canSchedule ? (
@@ -156,6 +175,6 @@ function TriageForm({ ticket, office, timeZone }: TriagePanelProps) {
 
       <ScheduleVisitDialog open={scheduling} onClose={() => setScheduling(false)} ticket={ticket} timeZone={timeZone} />
       <MergeTicketDialog open={merging} onClose={() => setMerging(false)} ticket={ticket} />
-    </Card>
+    </>
   );
 }

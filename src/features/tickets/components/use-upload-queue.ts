@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { useUploadTicketAttachment } from '@/features/tickets/api/upload-attachment';
+import { useUploadTicketAttachment } from '@/features/tickets/api/mutations';
 import { errorMessage } from '@/lib/errors';
 
 export type UploadStatus = 'waiting' | 'uploading' | 'done' | 'failed';
@@ -32,7 +32,7 @@ let nextKey = 1;
  * time (kinder to a phone's connection); a failed one can be tried again.
  */
 export function useUploadQueue() {
-  const upload = useUploadTicketAttachment();
+  const { mutateAsync: upload } = useUploadTicketAttachment();
   const [items, setItems] = useState<QueuedFile[]>([]);
   const itemsRef = useRef(items);
   itemsRef.current = items;
@@ -78,7 +78,7 @@ export function useUploadQueue() {
     async (ticketId: string, item: QueuedFile) => {
       patch(item.key, { status: 'uploading', progress: 0, error: undefined });
       try {
-        await upload(ticketId, item.file, { onProgress: (progress) => patch(item.key, { progress }) });
+        await upload({ ticketId, file: item.file, onProgress: (progress) => patch(item.key, { progress }) });
         patch(item.key, { status: 'done', progress: 1 });
         return true;
       } catch (error) {
@@ -121,3 +121,5 @@ export function useUploadQueue() {
 
   return { items, add, remove, sendAll, retry, clearDone, busy: items.some((i) => i.status === 'uploading') };
 }
+
+export type UploadQueue = ReturnType<typeof useUploadQueue>;

@@ -1,4 +1,5 @@
-import { updateUserInput, type UserSummary } from '@shared/schemas/auth';
+import { updateUserInput } from '@shared/schemas/auth';
+import type { UserSummary } from '@shared/schemas/users';
 import { useEffect } from 'react';
 import { Button } from '@/components/ui/button';
 import { Dialog, DialogActions } from '@/components/ui/dialog';
@@ -6,7 +7,7 @@ import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { useUpdateUser } from '@/features/users/api/update-user';
+import { useUpdateUser } from '@/features/users/api/mutations';
 import { OrganisationSelect } from '@/features/users/components/organisation-select';
 import { roleDescriptions, roleOptions } from '@/features/users/components/role-options';
 

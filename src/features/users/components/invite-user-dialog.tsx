@@ -6,7 +6,7 @@ import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { useInviteUser } from '@/features/users/api/invite-user';
+import { useInviteUser } from '@/features/users/api/mutations';
 import { OrganisationSelect } from '@/features/users/components/organisation-select';
 import { roleDescriptions, roleOptions } from '@/features/users/components/role-options';
 

@@ -1,11 +1,12 @@
+import { useQuery } from '@tanstack/react-query';
 import { useFormContext } from 'react-hook-form';
 import { SelectField } from '@/components/ui/select-field';
-import { useOrganisationOptions } from '@/features/users/api/get-organisation-options';
 import { errorMessage } from '@/lib/errors';
+import { clientQueries } from '@/resources/clients';
 
 /** The client organisation of a client user; '' in the select means "none" (null). */
 export function OrganisationSelect({ name = 'clientId' }: { name?: string }) {
-  const organisations = useOrganisationOptions();
+  const organisations = useQuery(clientQueries.options());
   const { formState } = useFormContext();
   const options = (organisations.data ?? []).map((o) => ({ value: o.id, label: o.name }));
   const hint = organisations.isPending

@@ -1,4 +1,4 @@
-import type { UserSummary } from '@shared/schemas/auth';
+import type { UserSummary } from '@shared/schemas/users';
 import { Badge } from '@/components/ui/badge';
 
 export function userStatusText(user: Pick<UserSummary, 'disabled' | 'invitePending'>) {

@@ -1,0 +1,20 @@
+// The search resource: what one search box finds (`GET /api/search?q=`, server/services/search.ts).
+// The query schema, `searchQuery`, is in register.ts.
+import type { CabinetStatus } from './enums.js';
+
+export interface SearchResults {
+  /** Client names containing the words. */
+  clients: { id: string; name: string }[];
+  sites: { id: string; name: string; clientName: string; city: string }[];
+  walls: { id: string; name: string; siteName: string; clientName: string }[];
+  /** Serials starting with the words; the wall and cell are null for a cabinet off any wall. */
+  cabinets: {
+    id: string;
+    serial: string;
+    status: CabinetStatus;
+    wallId: string | null;
+    wallName: string | null;
+    column: number | null;
+    row: number | null;
+  }[];
+}
