@@ -1,7 +1,13 @@
 import express, { Router } from 'express';
 import { idParams } from '../../shared/schemas/common.js';
 import { officeRoles, staffRoles } from '../../shared/schemas/enums.js';
-import * as s from '../../shared/schemas/register.js';
+import { cabinetModelInput, cabinetModelPatch } from '../../shared/schemas/cabinet-models.js';
+import { cabinetPatch, listCabinetsQuery, moveCabinetInput, placeCabinetInput, swapCabinetInput } from '../../shared/schemas/cabinets.js';
+import { clientInput, clientPatch, contactInput, contactPatch, listClientsQuery } from '../../shared/schemas/clients.js';
+import { controllerInput, controllerPatch } from '../../shared/schemas/controllers.js';
+import { searchQuery } from '../../shared/schemas/search.js';
+import { listSitesQuery, siteInput, sitePatch } from '../../shared/schemas/sites.js';
+import { listWallsQuery, wallInput, wallPatch } from '../../shared/schemas/walls.js';
 import { actorOf, requireAuth, requireRole } from '../middleware/auth.js';
 import { validated } from '../middleware/validate.js';
 import * as cabinets from '../services/cabinets.js';
@@ -20,7 +26,7 @@ export const clientsRouter = Router();
 clientsRouter.use(requireAuth);
 clientsRouter.get(
   '/',
-  validated({ query: s.listClientsQuery }, async ({ query }, req, res) => {
+  validated({ query: listClientsQuery }, async ({ query }, req, res) => {
     res.json(await clients.listClients(actorOf(req), query));
   }),
 );
@@ -33,14 +39,14 @@ clientsRouter.get(
 clientsRouter.post(
   '/',
   office,
-  validated({ body: s.clientInput }, async ({ body }, req, res) => {
+  validated({ body: clientInput }, async ({ body }, req, res) => {
     res.status(201).json(await clients.createClient(actorOf(req), body));
   }),
 );
 clientsRouter.patch(
   '/:id',
   office,
-  validated({ params: idParams, body: s.clientPatch }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: clientPatch }, async ({ params, body }, req, res) => {
     res.json(await clients.updateClient(actorOf(req), params.id, body));
   }),
 );
@@ -54,13 +60,13 @@ export const contactsRouter = Router();
 contactsRouter.use(office);
 contactsRouter.post(
   '/',
-  validated({ body: s.contactInput }, async ({ body }, req, res) => {
+  validated({ body: contactInput }, async ({ body }, req, res) => {
     res.status(201).json(await clients.createContact(actorOf(req), body));
   }),
 );
 contactsRouter.patch(
   '/:id',
-  validated({ params: idParams, body: s.contactPatch }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: contactPatch }, async ({ params, body }, req, res) => {
     res.json(await clients.updateContact(actorOf(req), params.id, body));
   }),
 );
@@ -76,7 +82,7 @@ export const sitesRouter = Router();
 sitesRouter.use(requireAuth);
 sitesRouter.get(
   '/',
-  validated({ query: s.listSitesQuery }, async ({ query }, req, res) => {
+  validated({ query: listSitesQuery }, async ({ query }, req, res) => {
     res.json(await sites.listSites(actorOf(req), query));
   }),
 );
@@ -89,14 +95,14 @@ sitesRouter.get(
 sitesRouter.post(
   '/',
   office,
-  validated({ body: s.siteInput }, async ({ body }, req, res) => {
+  validated({ body: siteInput }, async ({ body }, req, res) => {
     res.status(201).json(await sites.createSite(actorOf(req), body));
   }),
 );
 sitesRouter.patch(
   '/:id',
   office,
-  validated({ params: idParams, body: s.sitePatch }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: sitePatch }, async ({ params, body }, req, res) => {
     res.json(await sites.updateSite(actorOf(req), params.id, body));
   }),
 );
@@ -105,7 +111,7 @@ export const wallsRouter = Router();
 wallsRouter.use(requireAuth);
 wallsRouter.get(
   '/',
-  validated({ query: s.listWallsQuery }, async ({ query }, req, res) => {
+  validated({ query: listWallsQuery }, async ({ query }, req, res) => {
     res.json(await walls.listWalls(actorOf(req), query));
   }),
 );
@@ -124,21 +130,21 @@ wallsRouter.get(
 wallsRouter.post(
   '/',
   office,
-  validated({ body: s.wallInput }, async ({ body }, req, res) => {
+  validated({ body: wallInput }, async ({ body }, req, res) => {
     res.status(201).json(await walls.createWall(actorOf(req), body));
   }),
 );
 wallsRouter.patch(
   '/:id',
   office,
-  validated({ params: idParams, body: s.wallPatch }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: wallPatch }, async ({ params, body }, req, res) => {
     res.json(await walls.updateWall(actorOf(req), params.id, body));
   }),
 );
 wallsRouter.post(
   '/:id/cabinets',
   office,
-  validated({ params: idParams, body: s.placeCabinetInput }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: placeCabinetInput }, async ({ params, body }, req, res) => {
     res.status(201).json(await cabinets.placeCabinet(actorOf(req), params.id, body));
   }),
 );
@@ -156,7 +162,7 @@ export const cabinetsRouter = Router();
 cabinetsRouter.use(requireAuth);
 cabinetsRouter.get(
   '/',
-  validated({ query: s.listCabinetsQuery }, async ({ query }, req, res) => {
+  validated({ query: listCabinetsQuery }, async ({ query }, req, res) => {
     res.json(await cabinets.listCabinets(actorOf(req), query));
   }),
 );
@@ -173,21 +179,21 @@ cabinetsRouter.get(
 cabinetsRouter.post(
   '/:id/move',
   staff,
-  validated({ params: idParams, body: s.moveCabinetInput }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: moveCabinetInput }, async ({ params, body }, req, res) => {
     res.json(await cabinets.moveCabinet(actorOf(req), params.id, body));
   }),
 );
 cabinetsRouter.post(
   '/:id/swap',
   staff,
-  validated({ params: idParams, body: s.swapCabinetInput }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: swapCabinetInput }, async ({ params, body }, req, res) => {
     res.json(await cabinets.swapCabinets(actorOf(req), params.id, body));
   }),
 );
 cabinetsRouter.patch(
   '/:id',
   staff,
-  validated({ params: idParams, body: s.cabinetPatch }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: cabinetPatch }, async ({ params, body }, req, res) => {
     res.json(await cabinets.updateCabinet(actorOf(req), params.id, body));
   }),
 );
@@ -206,14 +212,14 @@ cabinetModelsRouter.get(
 cabinetModelsRouter.post(
   '/',
   office,
-  validated({ body: s.cabinetModelInput }, async ({ body }, req, res) => {
+  validated({ body: cabinetModelInput }, async ({ body }, req, res) => {
     res.status(201).json(await catalogue.createCabinetModel(actorOf(req), body));
   }),
 );
 cabinetModelsRouter.patch(
   '/:id',
   office,
-  validated({ params: idParams, body: s.cabinetModelPatch }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: cabinetModelPatch }, async ({ params, body }, req, res) => {
     res.json(await catalogue.updateCabinetModel(actorOf(req), params.id, body));
   }),
 );
@@ -233,14 +239,14 @@ controllersRouter.get(
 controllersRouter.post(
   '/',
   office,
-  validated({ body: s.controllerInput }, async ({ body }, req, res) => {
+  validated({ body: controllerInput }, async ({ body }, req, res) => {
     res.status(201).json(await catalogue.createController(actorOf(req), body));
   }),
 );
 controllersRouter.patch(
   '/:id',
   office,
-  validated({ params: idParams, body: s.controllerPatch }, async ({ params, body }, req, res) => {
+  validated({ params: idParams, body: controllerPatch }, async ({ params, body }, req, res) => {
     res.json(await catalogue.updateController(actorOf(req), params.id, body));
   }),
 );
@@ -249,7 +255,7 @@ export const searchRouter = Router();
 searchRouter.get(
   '/',
   requireAuth,
-  validated({ query: s.searchQuery }, async ({ query }, req, res) => {
+  validated({ query: searchQuery }, async ({ query }, req, res) => {
     res.json(await search(actorOf(req), query.q));
   }),
 );

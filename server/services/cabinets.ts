@@ -3,17 +3,8 @@ import type { Page } from '../../shared/schemas/common.js';
 import Papa from 'papaparse';
 import { aliasedTable, and, desc, eq, inArray, like, sql } from 'drizzle-orm';
 import type { PgSelect } from 'drizzle-orm/pg-core';
-import {
-  importRow,
-  positionLabel,
-  type CabinetPatch,
-  type ImportResult,
-  type ImportRowError,
-  type ListCabinetsQuery,
-  type MoveCabinetInput,
-  type PlaceCabinetInput,
-  type SwapCabinetInput,
-} from '../../shared/schemas/register.js';
+import { importRow, type CabinetPatch, type ImportResult, type ImportRowError, type ListCabinetsQuery, type MoveCabinetInput, type PlaceCabinetInput, type SwapCabinetInput } from '../../shared/schemas/cabinets.js';
+import { cellLabel } from '../../shared/calc/grid.js';
 import { db, type DbOrTx, type Tx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
 import { clients, sites } from '../db/schema/clients.js';
@@ -195,7 +186,7 @@ export async function getCabinet(actor: Actor, by: { id: string } | { serial: st
       : null,
     column: c.column,
     row: c.row,
-    position: c.column && c.row ? positionLabel({ column: c.column, row: c.row }) : null,
+    position: c.column && c.row ? cellLabel({ column: c.column, row: c.row }) : null,
     stockLocation: isStaff(actor) && c.stockLocationId ? { id: c.stockLocationId, name: r.locationName ?? '' } : null,
     // Client users see what happened, not who on the staff did it.
     history: events.map((e) => presentEvent(e, isStaff(actor))),
@@ -232,7 +223,7 @@ async function lockCabinet(tx: Tx, id: string) {
 
 function assertInsideGrid(wall: { columns: number; rows: number }, column: number, row: number) {
   if (column > wall.columns || row > wall.rows) {
-    throw new AppError(400, 'outside_grid', `${positionLabel({ column, row })} is outside the wall’s ${wall.columns} × ${wall.rows} grid.`, {
+    throw new AppError(400, 'outside_grid', `${cellLabel({ column, row })} is outside the wall’s ${wall.columns} × ${wall.rows} grid.`, {
       ...(column > wall.columns ? { column: `At most ${wall.columns}.` } : {}),
       ...(row > wall.rows ? { row: `At most ${wall.rows}.` } : {}),
     });
@@ -248,7 +239,7 @@ async function occupant(tx: DbOrTx, wallId: string, column: number, row: number)
 }
 
 function positionTaken(serialThere: string, column: number, row: number) {
-  return conflict('position_taken', `${positionLabel({ column, row })} already holds cabinet ${serialThere}. Swap them instead, or move that one first.`, {
+  return conflict('position_taken', `${cellLabel({ column, row })} already holds cabinet ${serialThere}. Swap them instead, or move that one first.`, {
     column: 'Occupied.',
     row: 'Occupied.',
   });
@@ -423,7 +414,7 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
     }
     const r = result.data;
     if (r.column > wall.columns || r.row > wall.rows) {
-      errors.push({ line: lineOf(index), serial: r.serial, message: `position ${positionLabel(r)} is outside the wall’s ${wall.columns} × ${wall.rows} grid` });
+      errors.push({ line: lineOf(index), serial: r.serial, message: `position ${cellLabel(r)} is outside the wall’s ${wall.columns} × ${wall.rows} grid` });
       return;
     }
     rows.push({ line: lineOf(index), ...r });
@@ -437,7 +428,7 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
     else bySerial.set(r.serial, r.line);
     const cell = `${r.column}:${r.row}`;
     const other = byCell.get(cell);
-    if (other) errors.push({ line: r.line, serial: r.serial, message: `two serials in one cell: ${positionLabel(r)} is also given to ${other.serial} on line ${other.line}` });
+    if (other) errors.push({ line: r.line, serial: r.serial, message: `two serials in one cell: ${cellLabel(r)} is also given to ${other.serial} on line ${other.line}` });
     else byCell.set(cell, { line: r.line, serial: r.serial });
   }
 
@@ -449,7 +440,7 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
       .from(cabinets)
       .where(inArray(cabinets.serial, serials.slice(i, i + 5000)));
     for (const e of existing) {
-      const where = e.wallId === wallId && e.column && e.row ? ` (already on this wall at ${positionLabel({ column: e.column, row: e.row })})` : '';
+      const where = e.wallId === wallId && e.column && e.row ? ` (already on this wall at ${cellLabel({ column: e.column, row: e.row })})` : '';
       errors.push({ line: bySerial.get(e.serial)!, serial: e.serial, message: `duplicate serial: already registered${where}` });
     }
   }
@@ -460,7 +451,7 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
   for (const o of occupied) {
     const incoming = byCell.get(`${o.column}:${o.row}`);
     if (incoming && incoming.serial !== o.serial) {
-      errors.push({ line: incoming.line, serial: incoming.serial, message: `two serials in one cell: ${positionLabel({ column: o.column!, row: o.row! })} already holds ${o.serial}` });
+      errors.push({ line: incoming.line, serial: incoming.serial, message: `two serials in one cell: ${cellLabel({ column: o.column!, row: o.row! })} already holds ${o.serial}` });
     }
   }
 

@@ -1,8 +1,9 @@
 import { and, asc, eq, isNull } from 'drizzle-orm';
-import type { CabinetModelInput, CabinetModelPatch, ControllerInput, ControllerPatch } from '../../shared/schemas/register.js';
+import type { CabinetModelInput, CabinetModelPatch } from '../../shared/schemas/cabinet-models.js';
+import type { ControllerInput, ControllerPatch } from '../../shared/schemas/controllers.js';
 import type { CabinetModel } from '../../shared/schemas/cabinet-models.js';
 import type { Controller } from '../../shared/schemas/controllers.js';
-import { vaBelowWatts } from '../../shared/schemas/register.js';
+import { vaBelowWatts } from '../../shared/schemas/cabinet-models.js';
 import { db } from '../db/client.js';
 import { cabinetModels } from '../db/schema/catalogue.js';
 import { controllers, walls } from '../db/schema/walls.js';

@@ -2,7 +2,7 @@ import type { ClientDetail, ClientSummary, Contact, ServicePlan } from '../../sh
 import type { Page } from '../../shared/schemas/common.js';
 import { and, asc, desc, eq, ilike, isNotNull, isNull, notInArray, sql } from 'drizzle-orm';
 import type { AnyPgColumn } from 'drizzle-orm/pg-core';
-import type { ClientInput, ClientPatch, ContactInput, ContactPatch, ListClientsQuery } from '../../shared/schemas/register.js';
+import type { ClientInput, ClientPatch, ContactInput, ContactPatch, ListClientsQuery } from '../../shared/schemas/clients.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { clients, contacts, servicePlans, sites } from '../db/schema/clients.js';
 import { badRequest } from '../errors.js';

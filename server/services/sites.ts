@@ -1,6 +1,6 @@
 import { and, eq, ilike, isNull, or } from 'drizzle-orm';
 import type { Page } from '../../shared/schemas/common.js';
-import type { ListSitesQuery, SiteInput, SitePatch } from '../../shared/schemas/register.js';
+import type { ListSitesQuery, SiteInput, SitePatch } from '../../shared/schemas/sites.js';
 import type { SiteContact, SiteDetail, SiteSummary } from '../../shared/schemas/sites.js';
 import { db } from '../db/client.js';
 import { clients, contacts, sites } from '../db/schema/clients.js';

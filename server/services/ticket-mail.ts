@@ -3,7 +3,7 @@
 import { createEvent } from 'ics';
 import { eq } from 'drizzle-orm';
 import { statusLabels, ticketRef } from '../../shared/schemas/tickets.js';
-import { positionLabel } from '../../shared/schemas/register.js';
+import { cellLabel } from '../../shared/calc/grid.js';
 import { config } from '../config.js';
 import type { DbOrTx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
@@ -32,7 +32,7 @@ const ticketLink = (id: string) => `${config().APP_URL}/tickets/${id}`;
 
 function summary(t: TicketForMail) {
   const where = [t.clientName, t.siteName, t.wallName].filter(Boolean).join(' · ');
-  const cells = t.cells.length ? `\nCells: ${t.cells.map(positionLabel).join(', ')}` : '';
+  const cells = t.cells.length ? `\nCells: ${t.cells.map(cellLabel).join(', ')}` : '';
   return `${ticketRef(t.number)} — ${t.title}\n${where}\nPriority: ${t.priority}${cells}`;
 }
 

@@ -19,7 +19,7 @@ import {
   type TicketVisit,
   type UpdateTicketInput,
 } from '../../shared/schemas/tickets.js';
-import { positionLabel } from '../../shared/schemas/register.js';
+import { cellLabel } from '../../shared/calc/grid.js';
 import { db, type DbOrTx, type Tx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
 import { clients, servicePlans, sites } from '../db/schema/clients.js';
@@ -189,7 +189,7 @@ function presentRepair(
     id: r.id,
     column: r.column,
     row: r.row,
-    position: positionLabel(r),
+    position: cellLabel(r),
     module: r.moduleColumn && r.moduleRow ? { column: r.moduleColumn, row: r.moduleRow } : null,
     component: r.component,
     fault: r.fault,
@@ -223,7 +223,7 @@ function presentTicket(actor: Actor, { row, ticket: t, wall, siteTimeZone, merge
     ...presentListRow(row),
     description: t.description,
     cells: t.cells,
-    cellLabels: t.cells.map(positionLabel),
+    cellLabels: t.cells.map(cellLabel),
     /** Due times and visit windows are shown in the site's own time zone. */
     siteTimeZone,
     wall,
@@ -294,7 +294,7 @@ export async function createTicket(actor: Actor, input: CreateTicketInput): Prom
       if (!wall) throw badRequest('validation_failed', 'That wall is not at this site.', { wallId: 'Not a wall of this site.' });
       const outside = cells.filter((c) => c.column > wall.columns || c.row > wall.rows);
       if (outside.length) {
-        throw badRequest('validation_failed', `${outside.map(positionLabel).join(', ')} ${outside.length === 1 ? 'is' : 'are'} outside the wall.`, { cells: 'Outside the grid.' });
+        throw badRequest('validation_failed', `${outside.map(cellLabel).join(', ')} ${outside.length === 1 ? 'is' : 'are'} outside the wall.`, { cells: 'Outside the grid.' });
       }
       const unique = new Map(cells.map((c) => [`${c.column}:${c.row}`, c]));
       cells = [...unique.values()].sort((a, b) => a.row - b.row || a.column - b.column);

@@ -1,6 +1,6 @@
 import { and, asc, eq, ilike, isNull, notInArray, or, sql } from 'drizzle-orm';
 import type { Page } from '../../shared/schemas/common.js';
-import type { ListWallsQuery, WallInput, WallPatch } from '../../shared/schemas/register.js';
+import type { ListWallsQuery, WallInput, WallPatch } from '../../shared/schemas/walls.js';
 import type { WallCabinet, WallController, WallDetail, WallSummary } from '../../shared/schemas/walls.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { cabinetModels } from '../db/schema/catalogue.js';

@@ -1,5 +1,90 @@
-// The cabinets resource: what the API answers with (a wall's cabinets are in walls.ts).
+// The cabinets resource: serials and positions, the writes (place, move, swap, edit, CSV import),
+// the list query and the responses (a wall's cabinets are in walls.ts).
 import type { CabinetEventKind, CabinetStatus } from './enums.js';
+import { z } from 'zod';
+import { nullableDate, optionalId, pageQuery, sortDir, text } from './common.js';
+import { cabinetStatuses } from './enums.js';
+
+// ---- requests ----
+/** Serials are stored trimmed and upper-cased, so a scan and a typed serial match. */
+export const serial = z
+  .string()
+  .trim()
+  .min(1, 'Required.')
+  .max(64, 'At most 64 characters.')
+  .regex(/^[A-Za-z0-9][A-Za-z0-9._\-/]*$/, 'Letters, digits and . _ - / only.')
+  .transform((s) => s.toUpperCase());
+export const position = z.object({
+  column: z.number().int('Whole positions only.').min(1, 'Columns count from 1.'),
+  row: z.number().int('Whole positions only.').min(1, 'Rows count from 1.'),
+});
+export type Position = z.infer<typeof position>;
+
+export const placeCabinetInput = position.extend({
+  serial,
+  batch: text(40).optional(),
+  cabinetModelId: z.uuid().optional(),
+  installedOn: nullableDate,
+  notes: text(2000).optional(),
+});
+export type PlaceCabinetInput = z.infer<typeof placeCabinetInput>;
+
+export const moveCabinetInput = z.object({
+  wallId: z.uuid(),
+  column: position.shape.column,
+  row: position.shape.row,
+  note: text(500).optional(),
+});
+export type MoveCabinetInput = z.infer<typeof moveCabinetInput>;
+
+export const swapCabinetInput = z.object({ otherCabinetId: z.uuid(), note: text(500).optional() });
+export type SwapCabinetInput = z.infer<typeof swapCabinetInput>;
+
+export const cabinetPatch = z.object({
+  batch: text(40).optional(),
+  notes: text(2000).optional(),
+  /** Taking a cabinet off its wall (to the bench, back to the maker, retired) frees its position. */
+  status: z.enum(cabinetStatuses).optional(),
+  stockLocationId: z.uuid().nullable().optional(),
+  note: text(500).optional(),
+});
+export type CabinetPatch = z.infer<typeof cabinetPatch>;
+
+export const listCabinetsQuery = pageQuery.extend({
+  /** A serial prefix (a scan or the first characters typed). */
+  serial: z.string().trim().max(64).optional(),
+  wallId: optionalId,
+  /** Cabinets on the walls of this client or site (a cabinet in stock belongs to neither). */
+  clientId: optionalId,
+  siteId: optionalId,
+  /** The cabinet's own model. */
+  modelId: optionalId,
+  status: z.enum(cabinetStatuses).optional(),
+  /** A production batch, matched whole (any case): the filter of a batch recall. */
+  batch: z.string().trim().max(40).optional(),
+  sort: z.enum(['serial', 'batch', 'installedOn']).default('serial'),
+  dir: sortDir,
+});
+export type ListCabinetsQuery = z.infer<typeof listCabinetsQuery>;
+
+/** One CSV row of a cabinet import; line numbers count the header as line 1. */
+export const importRow = z.object({
+  serial,
+  column: z.coerce.number({ error: 'column must be a whole number' }).int('column must be a whole number').min(1, 'column counts from 1'),
+  row: z.coerce.number({ error: 'row must be a whole number' }).int('row must be a whole number').min(1, 'row counts from 1'),
+  batch: z.string().trim().max(40).default(''),
+});
+export interface ImportRowError {
+  line: number;
+  serial?: string;
+  message: string;
+}
+export interface ImportResult {
+  imported: number;
+  errors: ImportRowError[];
+}
+
+// ---- responses ----
 
 /** One row of the cabinets list: where the cabinet is, whether on a wall or in stock. */
 export interface CabinetSummary {

@@ -17,7 +17,10 @@ const positive = (label: string, max: number) =>
     .max(max, `${label} must be at most ${count.format(max)}.`);
 const positiveInt = (label: string, max: number) => positive(label, max).int(`${label} must be a whole number.`);
 const share = (label: string) =>
-  z.number({ error: `${label} must be a number.` }).gt(0, `${label} must be more than 0.`).max(1, `${label} must be at most 1.`);
+  z
+    .number({ error: `${label} must be a number.` })
+    .gt(0, `${label} must be more than 0.`)
+    .max(1, `${label} must be at most 1.`);
 
 /**
  * Cross-field rules that compute with several fields run only once every field is valid on
@@ -103,8 +106,16 @@ export function checkChain(
   const over = `One cabinet (${count.format(cabinet.maxPowerW)} W) is over`;
   ctx.addIssue(
     limit.chainLimitedBy === 'connector'
-      ? { code: 'custom', path: ['cabinet', 'passThroughAmps'], message: `${over} what its power connector may carry (${count.format(limit.chainLimitW)} W).` }
-      : { code: 'custom', path: [...at, 'breakerAmps'], message: `${over} the circuit's continuous capacity (${count.format(limit.circuitCapacityW)} W).` },
+      ? {
+          code: 'custom',
+          path: ['cabinet', 'passThroughAmps'],
+          message: `${over} what its power connector may carry (${count.format(limit.chainLimitW)} W).`,
+        }
+      : {
+          code: 'custom',
+          path: [...at, 'breakerAmps'],
+          message: `${over} the circuit's continuous capacity (${count.format(limit.circuitCapacityW)} W).`,
+        },
   );
 }
 
@@ -115,13 +126,15 @@ export const wallPlanRequest = z
     rows,
     supply: supplyInput,
     outputCapacityPixels: positiveInt('Output capacity', 100_000_000).default(DEFAULT_OUTPUT_CAPACITY_PIXELS),
-    input: z
-      .object({ width: positiveInt('Input width', 100_000), height: positiveInt('Input height', 100_000) })
-      .optional(),
+    input: z.object({ width: positiveInt('Input width', 100_000), height: positiveInt('Input height', 100_000) }).optional(),
     dataPattern: runPattern('Data pattern').default(DEFAULT_RUN_PATTERN),
     powerPattern: runPattern('Power pattern').default(DEFAULT_RUN_PATTERN),
     processor: processorInput.optional(),
-    dataCableToWallM: z.number({ error: 'Cable length must be a number.' }).min(0, 'Cable length cannot be negative.').max(10_000, 'Cable length must be at most 10,000 m.').optional(),
+    dataCableToWallM: z
+      .number({ error: 'Cable length must be a number.' })
+      .min(0, 'Cable length cannot be negative.')
+      .max(10_000, 'Cable length must be at most 10,000 m.')
+      .optional(),
   })
   .superRefine((v, ctx) => {
     const cabinetPixels = v.cabinet.pixelsWide * v.cabinet.pixelsHigh;
@@ -163,7 +176,9 @@ type LimitFields = {
 /** The limits a data or power run has, or null when a field it needs is missing. */
 function limitsOf(v: LimitFields): RunLimits | null {
   if (v.kind === 'data') {
-    return v.cabinetPixels === undefined ? null : { kind: 'data', cabinetPixels: v.cabinetPixels, outputCapacityPixels: v.outputCapacityPixels };
+    return v.cabinetPixels === undefined
+      ? null
+      : { kind: 'data', cabinetPixels: v.cabinetPixels, outputCapacityPixels: v.outputCapacityPixels };
   }
   return v.cabinetMaxPowerW === undefined || v.chainCapacityW === undefined
     ? null
@@ -182,8 +197,16 @@ function checkCapacity(v: LimitFields, ctx: z.RefinementCtx) {
   if (!limits || cabinetsPerRun(limits) >= 1) return;
   ctx.addIssue(
     limits.kind === 'data'
-      ? { code: 'custom', path: ['outputCapacityPixels'], message: `One cabinet (${count.format(limits.cabinetPixels)} pixels) is over the output capacity.` }
-      : { code: 'custom', path: ['chainCapacityW'], message: `One cabinet (${count.format(limits.cabinetMaxPowerW)} W) is over the chain capacity.` },
+      ? {
+          code: 'custom',
+          path: ['outputCapacityPixels'],
+          message: `One cabinet (${count.format(limits.cabinetPixels)} pixels) is over the output capacity.`,
+        }
+      : {
+          code: 'custom',
+          path: ['chainCapacityW'],
+          message: `One cabinet (${count.format(limits.cabinetMaxPowerW)} W) is over the chain capacity.`,
+        },
   );
 }
 
@@ -287,7 +310,8 @@ export const dueRequest = z
   })
   .refine(
     (v) => {
-      const weeklyHours = v.mode === 'business' ? (v.calendar.days.length * (minutes(v.calendar.end) - minutes(v.calendar.start))) / 60 : 168;
+      const weeklyHours =
+        v.mode === 'business' ? (v.calendar.days.length * (minutes(v.calendar.end) - minutes(v.calendar.start))) / 60 : 168;
       return v.hours / weeklyHours <= MAX_CLOCK_WEEKS;
     },
     { path: ['hours'], message: 'That is more than ten years of clock time.', ...whenFieldsValid },

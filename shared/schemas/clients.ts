@@ -1,6 +1,46 @@
-// The clients resource (with its contacts and the service plans it can be on): what the API
-// answers with. Request schemas: register.ts, until the register's contracts are split.
+// The clients resource, with its contacts and the service plans a client can be on: the
+// request schemas (forms and server alike), the list query and the responses.
 import type { ClockMode, TicketPriority } from './enums.js';
+import { z } from 'zod';
+import { email, pageQuery, requiredText, sortDir, text } from './common.js';
+
+// ---- requests ----
+export const clientInput = z.object({
+  name: requiredText(120),
+  servicePlanId: z.uuid().nullable().optional(),
+  notes: text(5000).optional(),
+});
+export type ClientInput = z.infer<typeof clientInput>;
+export const clientPatch = clientInput.partial().extend({ archived: z.boolean().optional() });
+export type ClientPatch = z.infer<typeof clientPatch>;
+export const listClientsQuery = pageQuery.extend({
+  q: z.string().trim().max(100).optional(),
+  sort: z.enum(['name', 'createdAt']).default('name'),
+  dir: sortDir,
+  archived: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((v) => v === 'true'),
+});
+export type ListClientsQuery = z.infer<typeof listClientsQuery>;
+
+export const contactInput = z.object({
+  clientId: z.uuid(),
+  siteId: z.uuid().nullable().optional(),
+  name: requiredText(120),
+  title: text(120).optional(),
+  email: email
+    .nullable()
+    .optional()
+    .or(z.literal('').transform(() => null)),
+  phone: text(40).optional(),
+  receivesUpdates: z.boolean().optional(),
+});
+export type ContactInput = z.infer<typeof contactInput>;
+export const contactPatch = contactInput.omit({ clientId: true }).partial();
+export type ContactPatch = z.infer<typeof contactPatch>;
+
+// ---- responses ----
 
 export interface ServicePlan {
   id: string;

@@ -45,26 +45,10 @@ export type VisitKind = (typeof visitKinds)[number];
 export const visitStatuses = ['planned', 'in_progress', 'completed', 'cancelled'] as const;
 export type VisitStatus = (typeof visitStatuses)[number];
 
-export const repairComponents = [
-  'module',
-  'power_supply',
-  'receiving_card',
-  'data_cable',
-  'power_cable',
-  'fan',
-  'whole_cabinet',
-] as const;
+export const repairComponents = ['module', 'power_supply', 'receiving_card', 'data_cable', 'power_cable', 'fan', 'whole_cabinet'] as const;
 export type RepairComponent = (typeof repairComponents)[number];
 
-export const repairFaults = [
-  'dead_module',
-  'dead_pixels',
-  'colour_shift',
-  'flicker',
-  'no_signal',
-  'physical_damage',
-  'other',
-] as const;
+export const repairFaults = ['dead_module', 'dead_pixels', 'colour_shift', 'flicker', 'no_signal', 'physical_damage', 'other'] as const;
 export type RepairFault = (typeof repairFaults)[number];
 
 export const repairActions = ['replaced', 'reseated', 'recalibrated', 'cabinet_swapped', 'cleaned'] as const;

@@ -1,6 +1,11 @@
 // The search resource: what one search box finds (`GET /api/search?q=`, server/services/search.ts).
-// The query schema, `searchQuery`, is in register.ts.
 import type { CabinetStatus } from './enums.js';
+import { z } from 'zod';
+
+// ---- request ----
+export const searchQuery = z.object({ q: z.string().trim().min(1, 'Type something to search for.').max(100) });
+
+// ---- response ----
 
 export interface SearchResults {
   /** Client names containing the words. */

@@ -17,7 +17,7 @@ import {
   type VisitKind,
   type VisitStatus,
 } from './enums.js';
-import { position, type Position } from './register.js';
+import { position, type Position } from './cabinets.js';
 
 export const ticketClockStates = ['on_track', 'at_risk', 'breached', 'paused', 'met', 'missed'] as const;
 export type TicketClockState = (typeof ticketClockStates)[number];

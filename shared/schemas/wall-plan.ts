@@ -46,7 +46,11 @@ export const wallRunsInput = z.object({
   runs: z
     .array(
       z.object({
-        index: z.number({ error: 'Run number must be a number.' }).int('Run number must be a whole number.').min(1, 'Run numbers start at 1.').max(1_000_000),
+        index: z
+          .number({ error: 'Run number must be a number.' })
+          .int('Run number must be a whole number.')
+          .min(1, 'Run numbers start at 1.')
+          .max(1_000_000),
         cells: z.array(cellInput).max(250_000, 'Too many cells in one run.'),
       }),
     )
@@ -143,7 +147,11 @@ export function runLimitsFor<K extends RunKind>(
   const limits: RunLimits =
     kind === 'data'
       ? { kind: 'data', cabinetPixels: cabinet.pixelsWide * cabinet.pixelsHigh, outputCapacityPixels: settings.outputCapacityPixels }
-      : { kind: 'power', cabinetMaxPowerW: cabinet.maxPowerW, chainCapacityW: Math.min(settings.chainCapacityW, safeChainCapacityW(settings.supply, cabinet)) };
+      : {
+          kind: 'power',
+          cabinetMaxPowerW: cabinet.maxPowerW,
+          chainCapacityW: Math.min(settings.chainCapacityW, safeChainCapacityW(settings.supply, cabinet)),
+        };
   return limits as Extract<RunLimits, { kind: K }>;
 }
 

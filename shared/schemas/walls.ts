@@ -1,9 +1,41 @@
-// The walls resource: what the API answers with, including a wall's cabinets as the wall map
-// draws them (GET /api/walls/:id/cabinets).
+// The walls resource: request schemas, the list query and the responses, including a wall's
+// cabinets as the wall map draws them (GET /api/walls/:id/cabinets).
 import type { CabinetModel } from './cabinet-models.js';
 import type { Controller } from './controllers.js';
 import type { CabinetStatus, Mounting } from './enums.js';
 import type { StoredPlanSettings, StoredWallRuns } from './wall-plan.js';
+import { z } from 'zod';
+import { nullableDate, optionalId, pageQuery, requiredText, sortDir, text } from './common.js';
+import { mountings } from './enums.js';
+
+// ---- requests ----
+export const wallInput = z.object({
+  siteId: z.uuid(),
+  name: requiredText(120),
+  cabinetModelId: z.uuid(),
+  columns: z.number().int('Whole cabinets only.').min(1, 'At least one column.').max(500, 'At most 500 columns.'),
+  rows: z.number().int('Whole cabinets only.').min(1, 'At least one row.').max(500, 'At most 500 rows.'),
+  mounting: z.enum(mountings).default('wall_fixed'),
+  installDate: nullableDate,
+  warrantyEnd: nullableDate,
+  calibrationDate: nullableDate,
+  inputNotes: text(5000).optional(),
+  internalNotes: text(5000).optional(),
+});
+export type WallInput = z.infer<typeof wallInput>;
+export const wallPatch = wallInput.omit({ siteId: true }).partial().extend({ archived: z.boolean().optional() });
+export type WallPatch = z.infer<typeof wallPatch>;
+export const listWallsQuery = pageQuery.extend({
+  q: z.string().trim().max(100).optional(),
+  clientId: optionalId,
+  siteId: optionalId,
+  cabinetModelId: optionalId,
+  sort: z.enum(['name', 'createdAt']).default('name'),
+  dir: sortDir,
+});
+export type ListWallsQuery = z.infer<typeof listWallsQuery>;
+
+// ---- responses ----
 
 export interface WallSummary {
   id: string;

@@ -4,7 +4,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { CabinetModel } from '@shared/schemas/cabinet-models';
 import type { Page } from '@shared/schemas/common';
-import type { CabinetModelInput, CabinetModelPatch } from '@shared/schemas/register';
+import type { CabinetModelInput, CabinetModelPatch } from '@shared/schemas/cabinet-models';
 import { api } from '@/lib/api-client';
 
 export const cabinetModelKeys = {

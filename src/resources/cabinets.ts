@@ -4,7 +4,7 @@ import { queryOptions } from '@tanstack/react-query';
 import type { CabinetDetail, CabinetSummary } from '@shared/schemas/cabinets';
 import type { Page } from '@shared/schemas/common';
 import type { CabinetStatus } from '@shared/schemas/enums';
-import type { CabinetPatch, ImportResult, ImportRowError, MoveCabinetInput, PlaceCabinetInput, SwapCabinetInput } from '@shared/schemas/register';
+import type { CabinetPatch, ImportResult, ImportRowError, MoveCabinetInput, PlaceCabinetInput, SwapCabinetInput } from '@shared/schemas/cabinets';
 import { ApiError, api, isApiError } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';
 import { uploadWithProgress } from '@/lib/upload-with-progress';

@@ -3,7 +3,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { ClientDetail, ClientOption, ClientSummary, Contact, ServicePlan } from '@shared/schemas/clients';
 import type { Page } from '@shared/schemas/common';
-import type { ClientInput, ClientPatch, ContactInput, ContactPatch } from '@shared/schemas/register';
+import type { ClientInput, ClientPatch, ContactInput, ContactPatch } from '@shared/schemas/clients';
 import { api } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';
 

@@ -1,7 +1,7 @@
 // The controllers resource: query keys, the list query and the write requests.
 import { queryOptions } from '@tanstack/react-query';
 import type { Controller } from '@shared/schemas/controllers';
-import type { ControllerInput, ControllerPatch } from '@shared/schemas/register';
+import type { ControllerInput, ControllerPatch } from '@shared/schemas/controllers';
 import { api } from '@/lib/api-client';
 
 export const controllerKeys = {

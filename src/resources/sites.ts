@@ -1,7 +1,7 @@
 // The sites resource: query keys, one query per read endpoint, one request per write.
 import { queryOptions } from '@tanstack/react-query';
 import type { Page } from '@shared/schemas/common';
-import type { SiteInput, SitePatch } from '@shared/schemas/register';
+import type { SiteInput, SitePatch } from '@shared/schemas/sites';
 import type { SiteDetail, SiteSummary } from '@shared/schemas/sites';
 import { api } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';

@@ -2,7 +2,7 @@
 // views and pickers, a wall, its cabinets as the wall map draws them) and one request per write.
 import { queryOptions } from '@tanstack/react-query';
 import type { Page } from '@shared/schemas/common';
-import type { WallInput, WallPatch } from '@shared/schemas/register';
+import type { WallInput, WallPatch } from '@shared/schemas/walls';
 import type { SaveWallPlanRequest } from '@shared/schemas/wall-plan';
 import type { WallCabinet, WallDetail, WallSummary } from '@shared/schemas/walls';
 import { api } from '@/lib/api-client';

@@ -1,4 +1,4 @@
-import type { Position } from '@shared/schemas/register';
+import type { Position } from '@shared/schemas/cabinets';
 import clsx from 'clsx';
 import { Cable, Pencil, Plus, QrCode } from 'lucide-react';
 import { useState } from 'react';

@@ -1,5 +1,5 @@
 import { cellLabel } from '@shared/calc/grid';
-import { cabinetPatch } from '@shared/schemas/register';
+import { cabinetPatch } from '@shared/schemas/cabinets';
 import { ArrowLeftRight, Move, Pencil, X } from 'lucide-react';
 import { useState, type ReactNode } from 'react';
 import { Alert } from '@/components/ui/alert';

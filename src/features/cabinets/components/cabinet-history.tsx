@@ -1,10 +1,10 @@
-import { positionLabel } from '@shared/schemas/register';
+import { cellLabel } from '@shared/calc/grid';
 import { ArrowLeftRight, ArrowRight, CircleDot, FileUp, MapPin, PackageMinus, RefreshCw, Wrench } from 'lucide-react';
 import type { CabinetEvent } from '@shared/schemas/cabinets';
 import { cabinetStatusLabels } from '@/features/cabinets/components/cabinet-status';
 import { formatDateTime } from '@/lib/format';
 
-const pos = (column: number | null, row: number | null) => (column && row ? positionLabel({ column, row }) : null);
+const pos = (column: number | null, row: number | null) => (column && row ? cellLabel({ column, row }) : null);
 
 /** Where on which wall, naming the wall only when the move crossed walls. */
 function place(wallName: string | null, column: number | null, row: number | null, showWall: boolean) {

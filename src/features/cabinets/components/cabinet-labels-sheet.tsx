@@ -1,4 +1,4 @@
-import { positionLabel } from '@shared/schemas/register';
+import { cellLabel } from '@shared/calc/grid';
 import QRCode from 'qrcode';
 import { useEffect, useState } from 'react';
 import { Spinner } from '@/components/ui/spinner';
@@ -76,7 +76,7 @@ export function CabinetLabelsSheet({ wall, cabinets, origin }: CabinetLabelsShee
                     dangerouslySetInnerHTML={{ __html: codes.get(url) ?? '' }}
                   />
                   <div className="min-w-0 flex-1 leading-tight">
-                    <p className="text-[16pt] font-bold text-black">{positionLabel(c)}</p>
+                    <p className="text-[16pt] font-bold text-black">{cellLabel(c)}</p>
                     <p className="mt-1 line-clamp-2 text-[8pt] text-stone-800">{wall.name}</p>
                     <p className="mt-0.5 line-clamp-2 text-[7pt] text-stone-600">
                       {wall.siteName} · {wall.clientName}

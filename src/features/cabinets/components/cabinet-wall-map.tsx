@@ -1,4 +1,5 @@
-import { moveCabinetInput, positionLabel, type Position } from '@shared/schemas/register';
+import { moveCabinetInput, type Position } from '@shared/schemas/cabinets';
+import { cellLabel } from '@shared/calc/grid';
 import { MousePointerClick } from 'lucide-react';
 import { useMemo, useState, type ReactNode } from 'react';
 import { Alert } from '@/components/ui/alert';
@@ -99,10 +100,10 @@ export function CabinetWallMap({ wall, selected: selectedInAddress, onSelect: se
     if (same(p, source)) return;
     const there = occupant(p);
     if (mode.kind === 'move') {
-      if (there) toast(`${positionLabel(p)} holds ${there.serial}. Choose a free position, or use Swap.`, 'danger');
+      if (there) toast(`${cellLabel(p)} holds ${there.serial}. Choose a free position, or use Swap.`, 'danger');
       else setPending({ kind: 'move', cabinet: mode.cabinet, to: p });
     } else if (!there) {
-      toast(`${positionLabel(p)} is empty. Choose a cabinet to swap with, or use Move.`, 'danger');
+      toast(`${cellLabel(p)} is empty. Choose a cabinet to swap with, or use Move.`, 'danger');
     } else {
       setPending({ kind: 'swap', cabinet: mode.cabinet, other: there });
     }
@@ -210,7 +211,7 @@ export function CabinetWallMap({ wall, selected: selectedInAddress, onSelect: se
         <Dialog
           open={selected !== null && mode === null}
           onClose={() => onSelect(null)}
-          title={selected ? (current ? `Cabinet at ${positionLabel(selected)}` : `${positionLabel(selected)}: empty position`) : 'Cabinet'}
+          title={selected ? (current ? `Cabinet at ${cellLabel(selected)}` : `${cellLabel(selected)}: empty position`) : 'Cabinet'}
         >
           {selected ? panel : null}
         </Dialog>
@@ -288,12 +289,12 @@ function ConfirmMoveForm({
         {pending.kind === 'move' ? (
           <>
             <span className="font-mono font-semibold">{cabinet.serial}</span> goes from {cabinet.position} to{' '}
-            <strong>{positionLabel(pending.to)}</strong>. The move is kept in its history.
+            <strong>{cellLabel(pending.to)}</strong>. The move is kept in its history.
           </>
         ) : (
           <>
             <span className="font-mono font-semibold">{cabinet.serial}</span> ({cabinet.position}) and{' '}
-            <span className="font-mono font-semibold">{pending.other.serial}</span> ({positionLabel(pending.other)}) take each other’s positions.
+            <span className="font-mono font-semibold">{pending.other.serial}</span> ({cellLabel(pending.other)}) take each other’s positions.
             Both histories keep the swap.
           </>
         )}
@@ -301,7 +302,7 @@ function ConfirmMoveForm({
       <TextField name="note" label="Reason" autoComplete="off" hint="Optional, e.g. moved to match the module batch of its neighbours." />
       <div className="flex justify-end gap-2">
         <Button onClick={onCancel}>Cancel</Button>
-        <SubmitButton>{pending.kind === 'move' ? `Move to ${positionLabel(pending.to)}` : 'Swap them'}</SubmitButton>
+        <SubmitButton>{pending.kind === 'move' ? `Move to ${cellLabel(pending.to)}` : 'Swap them'}</SubmitButton>
       </div>
     </Form>
   );

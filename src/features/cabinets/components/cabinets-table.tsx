@@ -2,7 +2,7 @@ import { createColumnHelper, type SortingState } from '@tanstack/react-table';
 import { Square } from 'lucide-react';
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
-import { positionLabel } from '@shared/schemas/register';
+import { cellLabel } from '@shared/calc/grid';
 import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
@@ -19,7 +19,7 @@ const column = createColumnHelper<CabinetSummary>();
 const sortable = ['serial', 'batch', 'installedOn'] as const;
 type CabinetSort = (typeof sortable)[number];
 
-const position = (c: CabinetSummary) => (c.column && c.row ? positionLabel({ column: c.column, row: c.row }) : null);
+const position = (c: CabinetSummary) => (c.column && c.row ? cellLabel({ column: c.column, row: c.row }) : null);
 const none = <span className="text-stone-500">—</span>;
 
 interface CabinetsTableProps {

@@ -1,4 +1,5 @@
-import { placeCabinetInput, positionLabel, type Position } from '@shared/schemas/register';
+import { placeCabinetInput, type Position } from '@shared/schemas/cabinets';
+import { cellLabel } from '@shared/calc/grid';
 import { SquareDashed, X } from 'lucide-react';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
@@ -17,7 +18,7 @@ interface EmptyCellCardProps {
 
 /** A position with no cabinet: the office can register one here. */
 export function EmptyCellCard({ wallId, position, canRegister, onClose, titled = false }: EmptyCellCardProps) {
-  const label = positionLabel(position);
+  const label = cellLabel(position);
   return (
     <article aria-labelledby={titled ? undefined : 'empty-cell-title'} aria-label={titled ? label : undefined} className="space-y-4" data-testid="empty-cell-card">
       <header className="flex items-start justify-between gap-3">
@@ -65,7 +66,7 @@ function PlaceCabinetForm({ wallId, position }: { wallId: string; position: Posi
   return (
     <Form
       form={form}
-      aria-label={`Register a cabinet at ${positionLabel(position)}`}
+      aria-label={`Register a cabinet at ${cellLabel(position)}`}
       className="space-y-4 border-t border-stone-200 pt-4"
       onSubmit={async (values) => {
         const cabinet = await place.mutateAsync({ wallId, ...values, ...position });
@@ -81,7 +82,7 @@ function PlaceCabinetForm({ wallId, position }: { wallId: string; position: Posi
         type="date"
         registerOptions={{ setValueAs: (v: unknown) => (v === '' || v === undefined ? null : v) }}
       />
-      <SubmitButton>Register at {positionLabel(position)}</SubmitButton>
+      <SubmitButton>Register at {cellLabel(position)}</SubmitButton>
     </Form>
   );
 }

@@ -1,4 +1,4 @@
-import { cabinetModelInput, cabinetModelPatch } from '@shared/schemas/register';
+import { cabinetModelInput, cabinetModelPatch } from '@shared/schemas/cabinet-models';
 import type { CabinetModel } from '@shared/schemas/cabinet-models';
 import { useFormContext } from 'react-hook-form';
 import { Button } from '@/components/ui/button';

@@ -1,4 +1,4 @@
-import { controllerInput, controllerPatch } from '@shared/schemas/register';
+import { controllerInput, controllerPatch } from '@shared/schemas/controllers';
 import type { Controller } from '@shared/schemas/controllers';
 import { useEffect } from 'react';
 import { useFormContext } from 'react-hook-form';

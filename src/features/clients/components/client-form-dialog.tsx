@@ -1,4 +1,4 @@
-import { clientInput, clientPatch } from '@shared/schemas/register';
+import { clientInput, clientPatch } from '@shared/schemas/clients';
 import { useEffect } from 'react';
 import { useFormContext } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';

@@ -1,4 +1,4 @@
-import { contactInput, contactPatch } from '@shared/schemas/register';
+import { contactInput, contactPatch } from '@shared/schemas/clients';
 import { Mail, Pencil, Phone, Trash2, UserPlus, Users } from 'lucide-react';
 import { useState } from 'react';
 import { Badge } from '@/components/ui/badge';

@@ -1,4 +1,4 @@
-import { serial } from '@shared/schemas/register';
+import { serial } from '@shared/schemas/cabinets';
 import { ArrowRight } from 'lucide-react';
 import type { ChangeEvent } from 'react';
 import { useFormContext } from 'react-hook-form';

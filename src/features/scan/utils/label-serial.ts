@@ -1,4 +1,4 @@
-import { serial as serialSchema } from '@shared/schemas/register';
+import { serial as serialSchema } from '@shared/schemas/cabinets';
 
 /**
  * The cabinet serial a scanned QR code names, or null when the code is not a Gridkeep label.

@@ -1,4 +1,4 @@
-import { positionLabel } from '@shared/schemas/register';
+import { cellLabel } from '@shared/calc/grid';
 import type { CabinetStatus } from '@shared/schemas/enums';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import type { LucideIcon } from 'lucide-react';
@@ -92,7 +92,7 @@ export function SearchResults({ q }: { q: string }) {
             to={c.wallId && c.column && c.row ? paths.wall.getHref(c.wallId, { col: c.column, row: c.row }) : paths.cabinetLabel.getHref(c.serial)}
             primary={<span className="font-mono">{c.serial}</span>}
             secondary={
-              c.wallName && c.column && c.row ? `${c.wallName} · ${positionLabel({ column: c.column, row: c.row })} · ${statusWords[c.status]}` : statusWords[c.status]
+              c.wallName && c.column && c.row ? `${c.wallName} · ${cellLabel({ column: c.column, row: c.row })} · ${statusWords[c.status]}` : statusWords[c.status]
             }
           />
         ))}

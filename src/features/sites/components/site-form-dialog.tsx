@@ -1,4 +1,4 @@
-import { siteInput, sitePatch } from '@shared/schemas/register';
+import { siteInput, sitePatch } from '@shared/schemas/sites';
 import { useMemo } from 'react';
 import { useFormContext } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';

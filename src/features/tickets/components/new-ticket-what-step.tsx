@@ -1,5 +1,6 @@
 import type { TicketScope } from '@shared/schemas/enums';
-import { positionLabel, type Position } from '@shared/schemas/register';
+import { cellLabel } from '@shared/calc/grid';
+import type { Position } from '@shared/schemas/cabinets';
 import type { WallSummary } from '@shared/schemas/walls';
 import { Cpu, Grid3x3, LayoutGrid, X } from 'lucide-react';
 import { useFormContext } from 'react-hook-form';
@@ -78,13 +79,13 @@ function SelectedCells({ cells, onUnselect, onClear }: { cells: Position[]; onUn
           </span>
           {cells.map((c) => (
             <button
-              key={positionLabel(c)}
+              key={cellLabel(c)}
               type="button"
               onClick={() => onUnselect(c)}
               className="inline-flex min-h-8 items-center gap-1 rounded-full border border-amber-500 bg-amber-50 pl-2.5 pr-1.5 text-sm font-medium text-amber-900 hover:bg-amber-100"
-              aria-label={`Unselect ${positionLabel(c)}`}
+              aria-label={`Unselect ${cellLabel(c)}`}
             >
-              {positionLabel(c)}
+              {cellLabel(c)}
               <X className="h-3.5 w-3.5" aria-hidden="true" />
             </button>
           ))}

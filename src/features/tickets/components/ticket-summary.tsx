@@ -1,4 +1,4 @@
-import { positionLabel } from '@shared/schemas/register';
+import { cellLabel } from '@shared/calc/grid';
 import { Cpu, Grid3x3, MapPin } from 'lucide-react';
 import { Card } from '@/components/ui/card';
 import type { TicketDetail } from '@shared/schemas/tickets';
@@ -38,7 +38,7 @@ export function TicketSummary({ ticket }: { ticket: TicketDetail }) {
             <p className="flex items-center gap-2 rounded-md bg-stone-100 px-3 py-2 text-sm font-medium text-stone-800">
               {ticket.scope === 'controller' ? <Cpu className="h-4 w-4" aria-hidden="true" /> : <Grid3x3 className="h-4 w-4" aria-hidden="true" />}
               {ticket.scope === 'controller' ? 'The controller or the signal' : 'The whole wall'}
-              {ticket.cells.length ? ` · ${ticket.cells.map(positionLabel).join(', ')}` : ''}
+              {ticket.cells.length ? ` · ${ticket.cells.map(cellLabel).join(', ')}` : ''}
             </p>
           )
         ) : null}

@@ -1,4 +1,4 @@
-import type { Position } from '@shared/schemas/register';
+import type { Position } from '@shared/schemas/cabinets';
 import type { WallDetail } from '@shared/schemas/walls';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';

@@ -1,5 +1,5 @@
 import { formatFeetInches } from '@shared/calc/units';
-import { wallInput, wallPatch } from '@shared/schemas/register';
+import { wallInput, wallPatch } from '@shared/schemas/walls';
 import { useEffect } from 'react';
 import { useFormContext } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
