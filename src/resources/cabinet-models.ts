@@ -2,9 +2,8 @@
 // one request per write. Every screen that lists models (catalogue, planner, wall forms) reads
 // the same cache entry, so an edit anywhere shows everywhere.
 import { queryOptions } from '@tanstack/react-query';
-import type { CabinetModel } from '@shared/schemas/cabinet-models';
+import type { CabinetModel, CabinetModelInput, CabinetModelPatch } from '@shared/schemas/cabinet-models';
 import type { Page } from '@shared/schemas/common';
-import type { CabinetModelInput, CabinetModelPatch } from '@shared/schemas/cabinet-models';
 import { api } from '@/lib/api-client';
 
 export const cabinetModelKeys = {

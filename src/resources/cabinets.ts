@@ -1,26 +1,25 @@
 // The cabinets resource: query keys, one query per read endpoint (the list, a cabinet by id or
 // by the serial on its label) and one request per write, the CSV import with its progress.
 import { queryOptions } from '@tanstack/react-query';
-import type { CabinetDetail, CabinetSummary } from '@shared/schemas/cabinets';
+import type { z } from 'zod';
+import type {
+  CabinetDetail,
+  CabinetPatch,
+  CabinetSummary,
+  ImportResult,
+  ImportRowError,
+  listCabinetsQuery,
+  MoveCabinetInput,
+  PlaceCabinetInput,
+  SwapCabinetInput,
+} from '@shared/schemas/cabinets';
 import type { Page } from '@shared/schemas/common';
-import type { CabinetStatus } from '@shared/schemas/enums';
-import type { CabinetPatch, ImportResult, ImportRowError, MoveCabinetInput, PlaceCabinetInput, SwapCabinetInput } from '@shared/schemas/cabinets';
 import { ApiError, api, isApiError } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';
 import { uploadWithProgress } from '@/lib/upload-with-progress';
 
 /** The cabinets list's filters and sort (the API's query parameters). */
-export interface CabinetFilters {
-  /** A serial prefix. */
-  serial?: string;
-  clientId?: string;
-  siteId?: string;
-  status?: CabinetStatus;
-  batch?: string;
-  modelId?: string;
-  sort?: 'serial' | 'batch' | 'installedOn';
-  dir?: 'asc' | 'desc';
-}
+export type CabinetFilters = Omit<z.input<typeof listCabinetsQuery>, 'cursor' | 'limit' | 'wallId'>;
 
 export const cabinetsPageSize = 100;
 
@@ -38,10 +37,14 @@ const getCabinets = (filters: CabinetFilters & { cursor?: string }, signal?: Abo
 
 export const cabinetQueries = {
   /** Pages of cabinets, filtered and sorted by the server. */
-  list: (filters: CabinetFilters) => pagedQueryOptions(cabinetKeys.list(filters), (cursor, signal) => getCabinets({ ...filters, cursor }, signal)),
+  list: (filters: CabinetFilters) =>
+    pagedQueryOptions(cabinetKeys.list(filters), (cursor, signal) => getCabinets({ ...filters, cursor }, signal)),
   /** A cabinet with its model, where it is, and its whole history (newest first). */
   detail: (id: string) =>
-    queryOptions({ queryKey: cabinetKeys.detail(id), queryFn: ({ signal }) => api.get<CabinetDetail>(`/api/cabinets/${encodeURIComponent(id)}`, { signal }) }),
+    queryOptions({
+      queryKey: cabinetKeys.detail(id),
+      queryFn: ({ signal }) => api.get<CabinetDetail>(`/api/cabinets/${encodeURIComponent(id)}`, { signal }),
+    }),
   /** The cabinet a QR label names (serials are matched trimmed and upper-cased). */
   bySerial: (serial: string) =>
     queryOptions({
@@ -84,9 +87,11 @@ export const cabinetRequests = {
   place: ({ wallId, ...input }: PlaceCabinetInput & { wallId: string }) =>
     api.post<CabinetDetail>(`/api/walls/${encodeURIComponent(wallId)}/cabinets`, input),
   /** Moves a cabinet to a free position (recorded in its history, never overwritten). */
-  move: ({ id, ...input }: MoveCabinetInput & { id: string }) => api.post<CabinetDetail>(`/api/cabinets/${encodeURIComponent(id)}/move`, input),
+  move: ({ id, ...input }: MoveCabinetInput & { id: string }) =>
+    api.post<CabinetDetail>(`/api/cabinets/${encodeURIComponent(id)}/move`, input),
   /** Exchanges the positions of two installed cabinets. */
-  swap: ({ id, ...input }: SwapCabinetInput & { id: string }) => api.post<CabinetDetail>(`/api/cabinets/${encodeURIComponent(id)}/swap`, input),
+  swap: ({ id, ...input }: SwapCabinetInput & { id: string }) =>
+    api.post<CabinetDetail>(`/api/cabinets/${encodeURIComponent(id)}/swap`, input),
   /** Batch, notes and status; a status other than installed takes the cabinet off its wall. */
   update: ({ id, ...input }: CabinetPatch & { id: string }) => api.patch<CabinetDetail>(`/api/cabinets/${encodeURIComponent(id)}`, input),
   /**

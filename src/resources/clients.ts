@@ -1,9 +1,18 @@
 // The clients resource, with the contacts and service plans that belong to a client: query keys,
 // one query per read endpoint, one request per write.
 import { queryOptions } from '@tanstack/react-query';
-import type { ClientDetail, ClientOption, ClientSummary, Contact, ServicePlan } from '@shared/schemas/clients';
+import type {
+  ClientDetail,
+  ClientInput,
+  ClientOption,
+  ClientPatch,
+  ClientSummary,
+  Contact,
+  ContactInput,
+  ContactPatch,
+  ServicePlan,
+} from '@shared/schemas/clients';
 import type { Page } from '@shared/schemas/common';
-import type { ClientInput, ClientPatch, ContactInput, ContactPatch } from '@shared/schemas/clients';
 import { api } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';
 
@@ -35,17 +44,22 @@ const getClients = (filters: ClientFilters & { cursor?: string; limit?: number }
 
 export const clientQueries = {
   /** Pages of client organisations, sorted and searched by the server. */
-  list: (filters: ClientFilters) => pagedQueryOptions(clientKeys.list(filters), (cursor, signal) => getClients({ ...filters, cursor }, signal)),
+  list: (filters: ClientFilters) =>
+    pagedQueryOptions(clientKeys.list(filters), (cursor, signal) => getClients({ ...filters, cursor }, signal)),
   /** Every client by name (the first 500), for a filter's or a form's choices. */
   options: () =>
     queryOptions({
       queryKey: clientKeys.options(),
-      queryFn: async ({ signal }): Promise<ClientOption[]> => (await getClients({ limit: 500 }, signal)).items.map(({ id, name }) => ({ id, name })),
+      queryFn: async ({ signal }): Promise<ClientOption[]> =>
+        (await getClients({ limit: 500 }, signal)).items.map(({ id, name }) => ({ id, name })),
       staleTime: 5 * 60_000,
     }),
   /** A client with its service plan, contacts and sites (notes for staff only). */
   detail: (id: string) =>
-    queryOptions({ queryKey: clientKeys.detail(id), queryFn: ({ signal }) => api.get<ClientDetail>(`/api/clients/${encodeURIComponent(id)}`, { signal }) }),
+    queryOptions({
+      queryKey: clientKeys.detail(id),
+      queryFn: ({ signal }) => api.get<ClientDetail>(`/api/clients/${encodeURIComponent(id)}`, { signal }),
+    }),
   /** The service plans a client can be on (staff only). */
   servicePlans: () =>
     queryOptions({

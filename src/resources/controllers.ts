@@ -1,7 +1,6 @@
 // The controllers resource: query keys, the list query and the write requests.
 import { queryOptions } from '@tanstack/react-query';
-import type { Controller } from '@shared/schemas/controllers';
-import type { ControllerInput, ControllerPatch } from '@shared/schemas/controllers';
+import type { Controller, ControllerInput, ControllerPatch } from '@shared/schemas/controllers';
 import { api } from '@/lib/api-client';
 
 export const controllerKeys = {
@@ -20,5 +19,6 @@ export const controllerQueries = {
 
 export const controllerRequests = {
   create: (input: ControllerInput) => api.post<Controller>('/api/controllers', input),
-  update: ({ id, ...input }: ControllerPatch & { id: string }) => api.patch<Controller>(`/api/controllers/${encodeURIComponent(id)}`, input),
+  update: ({ id, ...input }: ControllerPatch & { id: string }) =>
+    api.patch<Controller>(`/api/controllers/${encodeURIComponent(id)}`, input),
 };

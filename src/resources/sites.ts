@@ -1,18 +1,13 @@
 // The sites resource: query keys, one query per read endpoint, one request per write.
 import { queryOptions } from '@tanstack/react-query';
+import type { z } from 'zod';
 import type { Page } from '@shared/schemas/common';
-import type { SiteInput, SitePatch } from '@shared/schemas/sites';
-import type { SiteDetail, SiteSummary } from '@shared/schemas/sites';
+import type { listSitesQuery, SiteDetail, SiteInput, SitePatch, SiteSummary } from '@shared/schemas/sites';
 import { api } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';
 
 /** The sites list's search, client and sort (the API's query parameters). */
-export interface SiteFilters {
-  q?: string;
-  clientId?: string;
-  sort?: 'name' | 'city' | 'createdAt';
-  dir?: 'asc' | 'desc';
-}
+export type SiteFilters = Omit<z.input<typeof listSitesQuery>, 'cursor' | 'limit'>;
 
 export const sitesPageSize = 50;
 /** Enough sites for the choices of a filter or a form. */
@@ -41,7 +36,10 @@ export const siteQueries = {
     }),
   /** A site with its access notes, contacts and walls (internal notes for staff only). */
   detail: (id: string) =>
-    queryOptions({ queryKey: siteKeys.detail(id), queryFn: ({ signal }) => api.get<SiteDetail>(`/api/sites/${encodeURIComponent(id)}`, { signal }) }),
+    queryOptions({
+      queryKey: siteKeys.detail(id),
+      queryFn: ({ signal }) => api.get<SiteDetail>(`/api/sites/${encodeURIComponent(id)}`, { signal }),
+    }),
 };
 
 export const siteRequests = {

@@ -1,22 +1,15 @@
 // The walls resource: query keys, one query per read endpoint (the list, a page of it for short
 // views and pickers, a wall, its cabinets as the wall map draws them) and one request per write.
 import { queryOptions } from '@tanstack/react-query';
+import type { z } from 'zod';
 import type { Page } from '@shared/schemas/common';
-import type { WallInput, WallPatch } from '@shared/schemas/walls';
+import type { listWallsQuery, WallCabinet, WallDetail, WallInput, WallPatch, WallSummary } from '@shared/schemas/walls';
 import type { SaveWallPlanRequest } from '@shared/schemas/wall-plan';
-import type { WallCabinet, WallDetail, WallSummary } from '@shared/schemas/walls';
 import { api } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';
 
 /** The walls list's search, place, model and sort (the API's query parameters). */
-export interface WallFilters {
-  q?: string;
-  clientId?: string;
-  siteId?: string;
-  cabinetModelId?: string;
-  sort?: 'name' | 'createdAt';
-  dir?: 'asc' | 'desc';
-}
+export type WallFilters = Omit<z.input<typeof listWallsQuery>, 'cursor' | 'limit'>;
 
 export const wallsPageSize = 50;
 /** The most walls a picker offers (plenty for one site, one client or one model). */
@@ -42,7 +35,10 @@ export const wallQueries = {
     queryOptions({ queryKey: wallKeys.list({ ...filters, limit }), queryFn: ({ signal }) => getWalls({ ...filters, limit }, signal) }),
   /** A wall with its cabinet model, controllers, stored plan and counts (internal notes for staff only). */
   detail: (id: string) =>
-    queryOptions({ queryKey: wallKeys.detail(id), queryFn: ({ signal }) => api.get<WallDetail>(`/api/walls/${encodeURIComponent(id)}`, { signal }) }),
+    queryOptions({
+      queryKey: wallKeys.detail(id),
+      queryFn: ({ signal }) => api.get<WallDetail>(`/api/walls/${encodeURIComponent(id)}`, { signal }),
+    }),
   /** Every cabinet on the wall with its position, state and open tickets: what the wall map draws. */
   cabinets: (id: string) =>
     queryOptions({
