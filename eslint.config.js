@@ -8,7 +8,10 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
-const features = fs.readdirSync('src/features', { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
+const features = fs
+  .readdirSync('src/features', { withFileTypes: true })
+  .filter((d) => d.isDirectory())
+  .map((d) => d.name);
 
 /** One restriction: an import specifier matching `regex` is refused with `message`. */
 const refuse = (regex, message) => ({ regex, message });
@@ -28,7 +31,10 @@ export default tseslint.config(
     files: ['**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser, ...globals.node } },
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' },
+      ],
       '@typescript-eslint/consistent-type-imports': ['error', { fixStyle: 'inline-type-imports' }],
       eqeqeq: ['error', 'always', { null: 'ignore' }],
       'no-console': ['error', { allow: ['warn', 'error'] }],
@@ -52,7 +58,10 @@ export default tseslint.config(
       [
         serverCode,
         appCode,
-        refuse(`^@/features/(?!${feature}/)`, `A feature never imports another feature: move what ${feature} needs into a resource, a primitive or shared/.`),
+        refuse(
+          `^@/features/(?!${feature}/)`,
+          `A feature never imports another feature: move what ${feature} needs into a resource, a primitive or shared/.`,
+        ),
         refuse('^\\.\\./\\.\\./', 'Import other parts of the client by their alias (@/…), not by climbing out of the feature.'),
       ],
     ),

@@ -65,9 +65,16 @@ async function main() {
   // 1. CSV import: 10,000 rows onto a 100 × 100 wall, three times on fresh walls.
   const importTimes: number[] = [];
   for (let round = 0; round < (runs('import') ? 3 : 0); round++) {
-    const wall = await api('POST', '/api/walls', { siteId, name: `Bench import ${round} ${Date.now()}`, cabinetModelId: modelId, columns: 100, rows: 100 });
+    const wall = await api('POST', '/api/walls', {
+      siteId,
+      name: `Bench import ${round} ${Date.now()}`,
+      cabinetModelId: modelId,
+      columns: 100,
+      rows: 100,
+    });
     const lines = ['serial,column,row,batch'];
-    for (let r = 1; r <= 100; r++) for (let c = 1; c <= 100; c++) lines.push(`BN${round}-${Date.now() % 100000}-${c}-${r},${c},${r},B${r % 3}`);
+    for (let r = 1; r <= 100; r++)
+      for (let c = 1; c <= 100; c++) lines.push(`BN${round}-${Date.now() % 100000}-${c}-${r},${c},${r},B${r % 3}`);
     const started = performance.now();
     const result = await api('POST', `/api/walls/${wall.id}/cabinets/import`, lines.join('\n'), 'text/csv');
     importTimes.push(performance.now() - started);
@@ -76,7 +83,13 @@ async function main() {
   if (runs('import')) results.push({ name: 'import 10,000-row CSV (median of 3)', value: median(importTimes), unit: 'ms', target: 3000 });
 
   // A 2,000-cabinet wall (50 × 40) for the map and the read throughput.
-  const bigWall = await api('POST', '/api/walls', { siteId, name: `Bench map ${Date.now()}`, cabinetModelId: modelId, columns: 50, rows: 40 });
+  const bigWall = await api('POST', '/api/walls', {
+    siteId,
+    name: `Bench map ${Date.now()}`,
+    cabinetModelId: modelId,
+    columns: 50,
+    rows: 40,
+  });
   const rows = ['serial,column,row,batch'];
   for (let r = 1; r <= 40; r++) for (let c = 1; c <= 50; c++) rows.push(`MAP-${Date.now() % 100000}-${c}-${r},${c},${r},B1`);
   await api('POST', `/api/walls/${bigWall.id}/cabinets/import`, rows.join('\n'), 'text/csv');
@@ -90,7 +103,12 @@ async function main() {
     const { measureWallMap } = await import('./lib/bench-map.js');
     const map = await measureWallMap(base, { email: 'office@gridkeep.test', password: 'gridkeep-demo' }, bigWall.id, 2000);
     results.push({ name: 'wall map, 2,000 cabinets: data to all cells drawn (median of 5)', value: map.renderMs, unit: 'ms', target: 200 });
-    results.push({ name: 'wall map, 2,000 cabinets: front/rear toggle to redrawn (median of 5)', value: map.toggleMs, unit: 'ms', target: 200 });
+    results.push({
+      name: 'wall map, 2,000 cabinets: front/rear toggle to redrawn (median of 5)',
+      value: map.toggleMs,
+      unit: 'ms',
+      target: 200,
+    });
     results.push({ name: 'wall map, 2,000 cabinets: cell tap to cabinet card (median of 5)', value: map.cardMs, unit: 'ms', target: 200 });
   }
 
@@ -102,7 +120,11 @@ async function main() {
   ];
   for (const [name, url] of runs('api') ? reads : []) {
     const out = await autocannon({ url: `${base}${url}`, connections: 20, duration: 5, headers: { Cookie: cookie } });
-    results.push({ name: `${name}: requests/s (20 connections, 5 s; p99 ${out.latency.p99} ms)`, value: out.requests.average, unit: 'req/s' });
+    results.push({
+      name: `${name}: requests/s (20 connections, 5 s; p99 ${out.latency.p99} ms)`,
+      value: out.requests.average,
+      unit: 'req/s',
+    });
     if (out.non2xx > 0) throw new Error(`${name}: ${out.non2xx} non-2xx answers`);
   }
 }
@@ -114,7 +136,9 @@ main()
     for (const r of results) {
       const ok = r.target === undefined || r.value <= r.target;
       if (!ok) failed++;
-      log(`${ok ? 'ok  ' : 'SLOW'} ${r.name}: ${Math.round(r.value).toLocaleString('en')} ${r.unit}${r.target ? ` (target ≤ ${r.target} ${r.unit})` : ''}`);
+      log(
+        `${ok ? 'ok  ' : 'SLOW'} ${r.name}: ${Math.round(r.value).toLocaleString('en')} ${r.unit}${r.target ? ` (target ≤ ${r.target} ${r.unit})` : ''}`,
+      );
     }
     process.exit(failed ? 1 : 0);
   })

@@ -96,7 +96,8 @@ async function main(): Promise<number> {
     ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestJson}`, ...args],
     baseEnv,
   );
-  const v = readJson(vitestJson) as { numPassedTests?: number; numFailedTests?: number; numPendingTests?: number; numTodoTests?: number } | undefined;
+  const v = readJson(vitestJson) as
+    { numPassedTests?: number; numFailedTests?: number; numPendingTests?: number; numTodoTests?: number } | undefined;
   tallies.push({
     name: 'vitest',
     passed: v?.numPassedTests ?? 0,
@@ -108,7 +109,7 @@ async function main(): Promise<number> {
   // Playwright: against the app started by its webServer, exactly as `npm start` runs it
   if (!interrupted && args.length === 0 && hasSpecs(path.join(projectRoot, 'tests/e2e'))) {
     if (!fs.existsSync('/usr/bin/chromium')) {
-      console.log('The browser tests need Debian\'s Chromium: apt-get install chromium (never `playwright install`).');
+      console.log("The browser tests need Debian's Chromium: apt-get install chromium (never `playwright install`).");
     }
     const pwJson = path.join(tmp, 'playwright.json');
     const e2eDataDir = path.join(tmp, 'e2e-data');

@@ -17,17 +17,14 @@ export class AppError extends Error {
   }
 }
 
-export const badRequest = (code: string, message: string, fields?: FieldErrors) =>
-  new AppError(400, code, message, fields);
+export const badRequest = (code: string, message: string, fields?: FieldErrors) => new AppError(400, code, message, fields);
 export const validationFailed = (fields: FieldErrors, message = 'Some fields are not valid.') =>
   new AppError(400, 'validation_failed', message, fields);
 export const unauthorized = (message = 'Sign in to continue.') => new AppError(401, 'unauthenticated', message);
-export const forbidden = (code = 'forbidden', message = 'You do not have permission to do that.') =>
-  new AppError(403, code, message);
+export const forbidden = (code = 'forbidden', message = 'You do not have permission to do that.') => new AppError(403, code, message);
 /** Also what a client user gets for another organisation's record: never confirm that it exists. */
 export const notFound = (what = 'Record') => new AppError(404, 'not_found', `${what} not found.`);
-export const conflict = (code: string, message: string, fields?: FieldErrors) =>
-  new AppError(409, code, message, fields);
+export const conflict = (code: string, message: string, fields?: FieldErrors) => new AppError(409, code, message, fields);
 export const tooManyRequests = (message: string, retryAfterSeconds: number) =>
   new AppError(429, 'too_many_requests', message, undefined, { 'Retry-After': String(retryAfterSeconds) });
 export const serviceUnavailable = (code: string, message: string) => new AppError(503, code, message);

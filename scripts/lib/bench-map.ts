@@ -5,10 +5,24 @@ import { chromium } from 'playwright-core';
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
-export async function measureWallMap(base: string, account: { email: string; password: string }, wallId: string, cabinets: number, rounds = 5) {
+export async function measureWallMap(
+  base: string,
+  account: { email: string; password: string },
+  wallId: string,
+  cabinets: number,
+  rounds = 5,
+) {
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   try {
     const context = await browser.newContext({ viewport: { width: 1366, height: 800 } });
@@ -52,16 +66,17 @@ export async function measureWallMap(base: string, account: { email: string; pas
         });
       render.push(
         await page.evaluate((id) => {
-          const entry = performance
-            .getEntriesByType('resource')
-            .find((e) => e.name.includes(`/api/walls/${id}/cabinets`)) as PerformanceResourceTiming | undefined;
+          const entry = performance.getEntriesByType('resource').find((e) => e.name.includes(`/api/walls/${id}/cabinets`)) as
+            PerformanceResourceTiming | undefined;
           if (!entry) throw new Error('the wall map data request was not seen');
           return (window as unknown as { __mapReadyAt: number }).__mapReadyAt - entry.responseEnd;
         }, wallId),
       );
       toggle.push(
         await page.evaluate(async () => {
-          const button = [...document.querySelectorAll('[aria-label="Wall view"] button')].find((b) => b.textContent?.includes('Rear')) as HTMLButtonElement;
+          const button = [...document.querySelectorAll('[aria-label="Wall view"] button')].find((b) =>
+            b.textContent?.includes('Rear'),
+          ) as HTMLButtonElement;
           const frame = () => new Promise((r) => requestAnimationFrame(() => r(null)));
           const started = performance.now();
           button.click();
@@ -77,7 +92,8 @@ export async function measureWallMap(base: string, account: { email: string; pas
           const frame = () => new Promise((r) => requestAnimationFrame(() => r(null)));
           const started = performance.now();
           cell.dispatchEvent(new MouseEvent('click', { bubbles: true }));
-          const shown = () => [...document.querySelectorAll('aside[aria-label="Cabinet"], [role="dialog"]')].some((e) => e.textContent?.includes(serial));
+          const shown = () =>
+            [...document.querySelectorAll('aside[aria-label="Cabinet"], [role="dialog"]')].some((e) => e.textContent?.includes(serial));
           let frames = 0;
           while (!shown()) {
             if (performance.now() - started > 10_000) throw new Error('the cabinet card did not open');

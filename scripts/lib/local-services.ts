@@ -13,10 +13,33 @@ export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.u
 
 /** Every setting the server reads (server/config.ts); an empty value counts as unset. */
 const settingNames = [
-  'NODE_ENV', 'PORT', 'HOST', 'DATABASE_URL', 'DATABASE_POOL_SIZE', 'APP_URL', 'JWT_SECRET', 'SESSION_HOURS',
-  'COOKIE_SECURE', 'TRUST_PROXY', 'S3_ENDPOINT', 'S3_REGION', 'S3_BUCKET', 'S3_ACCESS_KEY_ID',
-  'S3_SECRET_ACCESS_KEY', 'S3_FORCE_PATH_STYLE', 'UPLOAD_MAX_BYTES', 'SMTP_HOST', 'SMTP_PORT', 'SMTP_SECURE',
-  'SMTP_USER', 'SMTP_PASS', 'MAIL_FROM', 'OFFICE_EMAIL', 'DEV_MAILBOX_DIR', 'MAIL_WORKER', 'MAIL_POLL_MS',
+  'NODE_ENV',
+  'PORT',
+  'HOST',
+  'DATABASE_URL',
+  'DATABASE_POOL_SIZE',
+  'APP_URL',
+  'JWT_SECRET',
+  'SESSION_HOURS',
+  'COOKIE_SECURE',
+  'TRUST_PROXY',
+  'S3_ENDPOINT',
+  'S3_REGION',
+  'S3_BUCKET',
+  'S3_ACCESS_KEY_ID',
+  'S3_SECRET_ACCESS_KEY',
+  'S3_FORCE_PATH_STYLE',
+  'UPLOAD_MAX_BYTES',
+  'SMTP_HOST',
+  'SMTP_PORT',
+  'SMTP_SECURE',
+  'SMTP_USER',
+  'SMTP_PASS',
+  'MAIL_FROM',
+  'OFFICE_EMAIL',
+  'DEV_MAILBOX_DIR',
+  'MAIL_WORKER',
+  'MAIL_POLL_MS',
 ];
 
 export const demoPassword = 'gridkeep-demo';
@@ -142,10 +165,7 @@ async function demoAccounts(): Promise<{ email: string; role: string }[]> {
   return rows;
 }
 
-export async function startLocalServices(
-  shutdown: Shutdown,
-  log: (line: string) => void = console.log,
-): Promise<LocalServices> {
+export async function startLocalServices(shutdown: Shutdown, log: (line: string) => void = console.log): Promise<LocalServices> {
   for (const name of settingNames) if (process.env[name] === '') delete process.env[name];
   const dataDir = path.resolve(process.env.DATA_DIR || path.join(projectRoot, '.data'));
   fs.mkdirSync(dataDir, { recursive: true });
@@ -188,7 +208,9 @@ export async function startLocalServices(
     const smtp: SmtpFake = await startSmtpFake({ dir: path.join(dataDir, 'mailbox'), port: await freePort(2525) });
     shutdown.add('the SMTP fake', () => smtp.stop());
     Object.assign(process.env, { SMTP_HOST: smtp.host, SMTP_PORT: String(smtp.port), DEV_MAILBOX_DIR: smtp.dir });
-    summary.push(`mail      SMTP fake at ${smtp.host}:${smtp.port} (messages in ${shortPath(smtp.dir)}, readable by admins in the development mailbox)`);
+    summary.push(
+      `mail      SMTP fake at ${smtp.host}:${smtp.port} (messages in ${shortPath(smtp.dir)}, readable by admins in the development mailbox)`,
+    );
   }
 
   // The server reads its configuration once, on first use: every setting is in place now.
@@ -210,8 +232,5 @@ export async function startLocalServices(
 export function accountLines(accounts: { email: string; role: string }[]): string[] {
   if (accounts.length === 0) return ['No demo accounts in the database.'];
   const width = Math.max(...accounts.map((a) => a.email.length));
-  return [
-    `Demo accounts (password ${demoPassword}):`,
-    ...accounts.map((a) => `  ${a.email.padEnd(width)}  ${a.role}`),
-  ];
+  return [`Demo accounts (password ${demoPassword}):`, ...accounts.map((a) => `  ${a.email.padEnd(width)}  ${a.role}`)];
 }

@@ -36,7 +36,7 @@ export function ensurePostgres(log: (line: string) => void = console.log): strin
         '(Debian/Ubuntu), or set DATABASE_URL to a server you already run.',
     );
   }
-  log('PostgreSQL is missing: installing Debian\'s postgresql package (apt-get)…');
+  log("PostgreSQL is missing: installing Debian's postgresql package (apt-get)…");
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
   for (const args of [['update'], ['install', '-y', '--no-install-recommends', 'postgresql']]) {
     const r = spawnSync('apt-get', args, { stdio: 'inherit', env });
@@ -202,7 +202,16 @@ function guardCluster(dataDir: string, removeDir?: string, socketDir?: string) {
   ].join('\n');
   const child = spawn(
     'sh',
-    ['-c', script, 'gridkeep-pg-guard', String(process.pid), postmasterPid, path.join(dataDir, 'postmaster.pid'), removeDir ?? '', socketDir ?? ''],
+    [
+      '-c',
+      script,
+      'gridkeep-pg-guard',
+      String(process.pid),
+      postmasterPid,
+      path.join(dataDir, 'postmaster.pid'),
+      removeDir ?? '',
+      socketDir ?? '',
+    ],
     { detached: true, stdio: 'ignore' },
   );
   child.on('error', () => {});

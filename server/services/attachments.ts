@@ -44,7 +44,9 @@ export async function sniffType(buffer: Buffer): Promise<string | null> {
   const sample = buffer.subarray(0, 64 * 1024);
   const textDecoder = new TextDecoder('utf-8', { fatal: true });
   try {
-    const text = textDecoder.decode(sample.length < buffer.length ? sample.subarray(0, sample.lastIndexOf(0x0a) + 1 || sample.length) : sample);
+    const text = textDecoder.decode(
+      sample.length < buffer.length ? sample.subarray(0, sample.lastIndexOf(0x0a) + 1 || sample.length) : sample,
+    );
     return hasControlCharacters(text) ? null : 'text/plain';
   } catch {
     return null;
@@ -98,10 +100,15 @@ export async function storeAttachment(actor: Actor, input: StoreInput, record = 
   const kind = mime ? accepted[input.purpose][mime] : undefined;
   if (!mime || !kind) {
     const allowed = Object.keys(accepted[input.purpose]).join(', ');
-    throw new AppError(415, 'file_type_not_allowed', `That kind of file cannot be uploaded here. Accepted: ${allowed}.`, { file: 'Not an accepted type.' });
+    throw new AppError(415, 'file_type_not_allowed', `That kind of file cannot be uploaded here. Accepted: ${allowed}.`, {
+      file: 'Not an accepted type.',
+    });
   }
   const fileName = cleanFileName(input.file.originalname);
-  const ownerPrefix = Object.entries(input.owner).find(([, v]) => v)?.join('/') ?? 'misc';
+  const ownerPrefix =
+    Object.entries(input.owner)
+      .find(([, v]) => v)
+      ?.join('/') ?? 'misc';
   const { key, sizeBytes } = await putObject(newStorageKey(ownerPrefix.replace('Id/', 's/')), input.file.buffer, mime);
   try {
     return await record.transaction(async (tx) => {
@@ -119,7 +126,13 @@ export async function storeAttachment(actor: Actor, input: StoreInput, record = 
           uploadedById: actor.userId,
         })
         .returning();
-      await recordAudit(tx, { actor, entity: 'attachment', entityId: row.id, action: 'uploaded', after: { ...input.owner, fileName, contentType: mime, sizeBytes } });
+      await recordAudit(tx, {
+        actor,
+        entity: 'attachment',
+        entityId: row.id,
+        action: 'uploaded',
+        after: { ...input.owner, fileName, contentType: mime, sizeBytes },
+      });
       return presentAttachment({ ...row, uploadedByName: actor.name });
     });
   } catch (err) {
@@ -162,14 +175,20 @@ export async function listAttachments(actor: Actor, owner: Owner): Promise<Attac
 }
 
 export async function openAttachment(actor: Actor, id: string) {
-  const [row] = await db().select().from(attachments).where(and(eq(attachments.id, id), visible(actor)));
+  const [row] = await db()
+    .select()
+    .from(attachments)
+    .where(and(eq(attachments.id, id), visible(actor)));
   const a = found(row, 'File');
   return { attachment: a, stream: await getObjectStream(a.storageKey) };
 }
 
 export async function deleteAttachment(actor: Actor, id: string) {
   const key = await db().transaction(async (tx) => {
-    const [row] = await tx.delete(attachments).where(and(eq(attachments.id, id), visible(actor))).returning();
+    const [row] = await tx
+      .delete(attachments)
+      .where(and(eq(attachments.id, id), visible(actor)))
+      .returning();
     found(row, 'File');
     await recordAudit(tx, { actor, entity: 'attachment', entityId: id, action: 'deleted', before: row });
     return row.storageKey;

@@ -14,8 +14,7 @@ import { recordAudit } from './audit.js';
 import { passwordWeakness } from './common-passwords.js';
 import { decoyHash, hashPassword, verifyPassword } from './passwords.js';
 
-const invalidCredentials = () =>
-  new AppError(401, 'invalid_credentials', 'The e-mail address or password is not right.');
+const invalidCredentials = () => new AppError(401, 'invalid_credentials', 'The e-mail address or password is not right.');
 
 // ---------------------------------------------------------------------------------------------
 // Throttling: growing delays after repeated failures, per account and per address. Never a
@@ -52,10 +51,12 @@ async function failuresSince(where: ReturnType<typeof eq>) {
 /** Seconds until this e-mail / address may try again; 0 when it may try now. */
 export async function retryAfterSeconds(email: string, ip: string): Promise<number> {
   const waits = await Promise.all(
-    ([
-      [eq(signInAttempts.email, email), throttlePolicy.account],
-      [eq(signInAttempts.ip, ip), throttlePolicy.address],
-    ] as const).map(async ([where, policy]) => {
+    (
+      [
+        [eq(signInAttempts.email, email), throttlePolicy.account],
+        [eq(signInAttempts.ip, ip), throttlePolicy.address],
+      ] as const
+    ).map(async ([where, policy]) => {
       const { failures, last } = await failuresSince(where);
       const delay = throttleDelaySeconds(failures, policy);
       if (!delay || !last) return 0;
@@ -75,7 +76,10 @@ export interface IssuedSession {
 }
 
 /** The signed-in person as the client holds them: who, their role and organisation. */
-function presentSessionUser(u: Pick<typeof users.$inferSelect, 'id' | 'email' | 'name' | 'role' | 'clientId'>, clientName: string | null): SessionUser {
+function presentSessionUser(
+  u: Pick<typeof users.$inferSelect, 'id' | 'email' | 'name' | 'role' | 'clientId'>,
+  clientName: string | null,
+): SessionUser {
   return { id: u.id, email: u.email, name: u.name, role: u.role, clientId: u.clientId, clientName };
 }
 
@@ -114,10 +118,7 @@ export async function revokeSessions(tx: DbOrTx, userId: string, keep?: string) 
     .where(and(eq(sessions.userId, userId), isNull(sessions.revokedAt), keep ? ne(sessions.id, keep) : undefined));
 }
 
-export async function signIn(
-  input: { email: string; password: string },
-  meta: { ip: string; userAgent: string },
-): Promise<IssuedSession> {
+export async function signIn(input: { email: string; password: string }, meta: { ip: string; userAgent: string }): Promise<IssuedSession> {
   const wait = await retryAfterSeconds(input.email, meta.ip);
   if (wait > 0) {
     logger.warn('sign-in throttled', { email: input.email, ip: meta.ip, retryAfter: wait });
@@ -147,7 +148,11 @@ export async function signOut(actor: Actor) {
 
 export const currentUser = (actor: Actor) => sessionUser(db(), actor.userId);
 
-export async function changePassword(actor: Actor, input: { currentPassword: string; newPassword: string }, meta: { ip: string; userAgent: string }) {
+export async function changePassword(
+  actor: Actor,
+  input: { currentPassword: string; newPassword: string },
+  meta: { ip: string; userAgent: string },
+) {
   const [user] = await db().select().from(users).where(eq(users.id, actor.userId));
   if (!user || !(await verifyPassword(user.passwordHash, input.currentPassword))) {
     throw badRequest('wrong_password', 'Your current password is not right.', { currentPassword: 'Not right.' });
@@ -291,4 +296,3 @@ export async function recentSignInAttempts(limit = 100) {
     .orderBy(desc(signInAttempts.createdAt))
     .limit(limit);
 }
-

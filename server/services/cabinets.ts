@@ -3,7 +3,16 @@ import type { Page } from '../../shared/schemas/common.js';
 import Papa from 'papaparse';
 import { aliasedTable, and, desc, eq, inArray, like, sql } from 'drizzle-orm';
 import type { PgSelect } from 'drizzle-orm/pg-core';
-import { importRow, type CabinetPatch, type ImportResult, type ImportRowError, type ListCabinetsQuery, type MoveCabinetInput, type PlaceCabinetInput, type SwapCabinetInput } from '../../shared/schemas/cabinets.js';
+import {
+  importRow,
+  type CabinetPatch,
+  type ImportResult,
+  type ImportRowError,
+  type ListCabinetsQuery,
+  type MoveCabinetInput,
+  type PlaceCabinetInput,
+  type SwapCabinetInput,
+} from '../../shared/schemas/cabinets.js';
 import { cellLabel } from '../../shared/calc/grid.js';
 import { db, type DbOrTx, type Tx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
@@ -45,7 +54,8 @@ function cabinetCursor(query: ListCabinetsQuery) {
   const cursor = decodeCursor(query.cursor, 2);
   if (!cursor) return null;
   const [value, id] = cursor;
-  const valueOk = query.sort === 'installedOn' ? value === null || (typeof value === 'string' && isoDatePattern.test(value)) : typeof value === 'string';
+  const valueOk =
+    query.sort === 'installedOn' ? value === null || (typeof value === 'string' && isoDatePattern.test(value)) : typeof value === 'string';
   if (!valueOk || typeof id !== 'string' || !uuidPattern.test(id)) {
     throw badRequest('bad_cursor', 'The page cursor is not valid; start from the first page.', { cursor: 'Not valid.' });
   }
@@ -59,27 +69,29 @@ function cabinetCursor(query: ListCabinetsQuery) {
 export async function listCabinets(actor: Actor, query: ListCabinetsQuery): Promise<Page<CabinetSummary>> {
   const cursor = cabinetCursor(query);
   const sortColumn = query.sort === 'batch' ? cabinets.batch : query.sort === 'installedOn' ? cabinets.installedOn : cabinets.serial;
-  const rows = await withWhereabouts(db()
-    .select({
-      id: cabinets.id,
-      serial: cabinets.serial,
-      status: cabinets.status,
-      batch: cabinets.batch,
-      installedOn: cabinets.installedOn,
-      column: cabinets.column,
-      row: cabinets.row,
-      wallId: cabinets.wallId,
-      wallName: walls.name,
-      siteId: walls.siteId,
-      siteName: sites.name,
-      clientId: walls.clientId,
-      clientName: clients.name,
-      modelId: cabinets.cabinetModelId,
-      modelName: cabinetModels.name,
-      locationName: stockLocations.name,
-    })
-    .from(cabinets)
-    .$dynamic())
+  const rows = await withWhereabouts(
+    db()
+      .select({
+        id: cabinets.id,
+        serial: cabinets.serial,
+        status: cabinets.status,
+        batch: cabinets.batch,
+        installedOn: cabinets.installedOn,
+        column: cabinets.column,
+        row: cabinets.row,
+        wallId: cabinets.wallId,
+        wallName: walls.name,
+        siteId: walls.siteId,
+        siteName: sites.name,
+        clientId: walls.clientId,
+        clientName: clients.name,
+        modelId: cabinets.cabinetModelId,
+        modelName: cabinetModels.name,
+        locationName: stockLocations.name,
+      })
+      .from(cabinets)
+      .$dynamic(),
+  )
     .where(
       and(
         visibleCabinets(actor),
@@ -96,9 +108,14 @@ export async function listCabinets(actor: Actor, query: ListCabinetsQuery): Prom
           : afterCursor(sortColumn, cabinets.id, cursor, query.dir),
       ),
     )
-    .orderBy(...(query.sort === 'installedOn' ? orderNullsLast(sortColumn, cabinets.id, query.dir) : orderFor(sortColumn, cabinets.id, query.dir)))
+    .orderBy(
+      ...(query.sort === 'installedOn' ? orderNullsLast(sortColumn, cabinets.id, query.dir) : orderFor(sortColumn, cabinets.id, query.dir)),
+    )
     .limit(query.limit + 1);
-  const page = pageOf(rows, query.limit, (r) => [query.sort === 'batch' ? r.batch : query.sort === 'installedOn' ? r.installedOn : r.serial, r.id]);
+  const page = pageOf(rows, query.limit, (r) => [
+    query.sort === 'batch' ? r.batch : query.sort === 'installedOn' ? r.installedOn : r.serial,
+    r.id,
+  ]);
   const staff = isStaff(actor);
   return {
     items: page.items.map((r): CabinetSummary => ({
@@ -126,21 +143,28 @@ export async function listCabinets(actor: Actor, query: ListCabinetsQuery): Prom
 
 /** A cabinet with its model, where it is, and its whole history. By id or by serial. */
 export async function getCabinet(actor: Actor, by: { id: string } | { serial: string }): Promise<CabinetDetail> {
-  const [row] = await withWhereabouts(db()
-    .select({
-      cabinet: cabinets,
-      model: { id: cabinetModels.id, name: cabinetModels.name, pixelPitchMm: cabinetModels.pixelPitchMm, modulesWide: cabinetModels.modulesWide, modulesHigh: cabinetModels.modulesHigh },
-      wallName: walls.name,
-      wallColumns: walls.columns,
-      wallRows: walls.rows,
-      siteId: walls.siteId,
-      siteName: sites.name,
-      clientName: clients.name,
-      locationName: stockLocations.name,
-    })
-    .from(cabinets)
-    .$dynamic())
-    .where(and('id' in by ? eq(cabinets.id, by.id) : eq(cabinets.serial, by.serial.trim().toUpperCase()), visibleCabinets(actor)));
+  const [row] = await withWhereabouts(
+    db()
+      .select({
+        cabinet: cabinets,
+        model: {
+          id: cabinetModels.id,
+          name: cabinetModels.name,
+          pixelPitchMm: cabinetModels.pixelPitchMm,
+          modulesWide: cabinetModels.modulesWide,
+          modulesHigh: cabinetModels.modulesHigh,
+        },
+        wallName: walls.name,
+        wallColumns: walls.columns,
+        wallRows: walls.rows,
+        siteId: walls.siteId,
+        siteName: sites.name,
+        clientName: clients.name,
+        locationName: stockLocations.name,
+      })
+      .from(cabinets)
+      .$dynamic(),
+  ).where(and('id' in by ? eq(cabinets.id, by.id) : eq(cabinets.serial, by.serial.trim().toUpperCase()), visibleCabinets(actor)));
   const r = found(row, 'Cabinet');
   const fromWall = aliasedTable(walls, 'from_wall');
   const toWall = aliasedTable(walls, 'to_wall');
@@ -182,7 +206,15 @@ export async function getCabinet(actor: Actor, by: { id: string } | { serial: st
     ...(isStaff(actor) ? { notes: c.notes } : {}),
     model: r.model,
     wall: c.wallId
-      ? { id: c.wallId, name: r.wallName!, columns: r.wallColumns!, rows: r.wallRows!, siteId: r.siteId!, siteName: r.siteName!, clientName: r.clientName! }
+      ? {
+          id: c.wallId,
+          name: r.wallName!,
+          columns: r.wallColumns!,
+          rows: r.wallRows!,
+          siteId: r.siteId!,
+          siteName: r.siteName!,
+          clientName: r.clientName!,
+        }
       : null,
     column: c.column,
     row: c.row,
@@ -239,10 +271,14 @@ async function occupant(tx: DbOrTx, wallId: string, column: number, row: number)
 }
 
 function positionTaken(serialThere: string, column: number, row: number) {
-  return conflict('position_taken', `${cellLabel({ column, row })} already holds cabinet ${serialThere}. Swap them instead, or move that one first.`, {
-    column: 'Occupied.',
-    row: 'Occupied.',
-  });
+  return conflict(
+    'position_taken',
+    `${cellLabel({ column, row })} already holds cabinet ${serialThere}. Swap them instead, or move that one first.`,
+    {
+      column: 'Occupied.',
+      row: 'Occupied.',
+    },
+  );
 }
 
 /** Registers a new cabinet at a position of the wall. */
@@ -266,7 +302,17 @@ export async function placeCabinet(actor: Actor, wallId: string, input: PlaceCab
         notes: input.notes ?? '',
       })
       .returning();
-    await tx.insert(cabinetEvents).values({ cabinetId: row.id, kind: 'placed', toWallId: wallId, toColumn: input.column, toRow: input.row, toStatus: 'installed', actorId: actor.userId });
+    await tx
+      .insert(cabinetEvents)
+      .values({
+        cabinetId: row.id,
+        kind: 'placed',
+        toWallId: wallId,
+        toColumn: input.column,
+        toRow: input.row,
+        toStatus: 'installed',
+        actorId: actor.userId,
+      });
     await recordAudit(tx, { actor, entity: 'cabinet', entityId: row.id, action: 'placed', after: row });
     return row.id;
   });
@@ -308,7 +354,8 @@ export async function moveCabinet(actor: Actor, id: string, input: MoveCabinetIn
 
 /** Exchanges the positions of two installed cabinets (on one wall or two). */
 export async function swapCabinets(actor: Actor, id: string, input: SwapCabinetInput) {
-  if (id === input.otherCabinetId) throw badRequest('validation_failed', 'Choose another cabinet to swap with.', { otherCabinetId: 'The same cabinet.' });
+  if (id === input.otherCabinetId)
+    throw badRequest('validation_failed', 'Choose another cabinet to swap with.', { otherCabinetId: 'The same cabinet.' });
   await db().transaction(async (tx) => {
     // Lock in id order so two swaps of the same pair cannot deadlock.
     const [firstId, secondId] = [id, input.otherCabinetId].sort();
@@ -324,11 +371,49 @@ export async function swapCabinets(actor: Actor, id: string, input: SwapCabinetI
     await tx.update(cabinets).set({ wallId: b.wallId, column: b.column, row: b.row, status: 'installed' }).where(eq(cabinets.id, a.id));
     const note = input.note ?? '';
     await tx.insert(cabinetEvents).values([
-      { cabinetId: a.id, kind: 'swapped', fromWallId: a.wallId, fromColumn: a.column, fromRow: a.row, toWallId: b.wallId, toColumn: b.column, toRow: b.row, otherCabinetId: b.id, note, actorId: actor.userId },
-      { cabinetId: b.id, kind: 'swapped', fromWallId: b.wallId, fromColumn: b.column, fromRow: b.row, toWallId: a.wallId, toColumn: a.column, toRow: a.row, otherCabinetId: a.id, note, actorId: actor.userId },
+      {
+        cabinetId: a.id,
+        kind: 'swapped',
+        fromWallId: a.wallId,
+        fromColumn: a.column,
+        fromRow: a.row,
+        toWallId: b.wallId,
+        toColumn: b.column,
+        toRow: b.row,
+        otherCabinetId: b.id,
+        note,
+        actorId: actor.userId,
+      },
+      {
+        cabinetId: b.id,
+        kind: 'swapped',
+        fromWallId: b.wallId,
+        fromColumn: b.column,
+        fromRow: b.row,
+        toWallId: a.wallId,
+        toColumn: a.column,
+        toRow: a.row,
+        otherCabinetId: a.id,
+        note,
+        actorId: actor.userId,
+      },
     ]);
-    await recordAudit(tx, { actor, entity: 'cabinet', entityId: a.id, action: 'swapped', before: a, after: { ...a, wallId: b.wallId, column: b.column, row: b.row } });
-    await recordAudit(tx, { actor, entity: 'cabinet', entityId: b.id, action: 'swapped', before: b, after: { ...b, wallId: a.wallId, column: a.column, row: a.row } });
+    await recordAudit(tx, {
+      actor,
+      entity: 'cabinet',
+      entityId: a.id,
+      action: 'swapped',
+      before: a,
+      after: { ...a, wallId: b.wallId, column: b.column, row: b.row },
+    });
+    await recordAudit(tx, {
+      actor,
+      entity: 'cabinet',
+      entityId: b.id,
+      action: 'swapped',
+      before: b,
+      after: { ...b, wallId: a.wallId, column: a.column, row: a.row },
+    });
   });
   return getCabinet(actor, { id });
 }
@@ -393,10 +478,14 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
   const headers = parsed.meta.fields ?? [];
   const missing = ['serial', 'column', 'row'].filter((h) => !headers.includes(h));
   if (missing.length) {
-    throw badRequest('import_bad_header', `The first line must name the columns serial, column, row and batch (missing: ${missing.join(', ')}).`);
+    throw badRequest(
+      'import_bad_header',
+      `The first line must name the columns serial, column, row and batch (missing: ${missing.join(', ')}).`,
+    );
   }
   if (parsed.data.length === 0) throw badRequest('import_empty', 'The file has no cabinet rows.');
-  if (parsed.data.length > MAX_IMPORT_ROWS) throw badRequest('import_too_large', `At most ${MAX_IMPORT_ROWS.toLocaleString('en')} rows per file.`);
+  if (parsed.data.length > MAX_IMPORT_ROWS)
+    throw badRequest('import_too_large', `At most ${MAX_IMPORT_ROWS.toLocaleString('en')} rows per file.`);
 
   const errors: ImportRowError[] = [];
   const rows: { line: number; serial: string; column: number; row: number; batch: string }[] = [];
@@ -409,12 +498,22 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
     const result = importRow.safeParse(raw);
     if (!result.success) {
       const fields = fieldErrors(result.error);
-      errors.push({ line: lineOf(index), serial: raw.serial, message: Object.entries(fields).map(([k, v]) => `${k}: ${v}`).join('; ') });
+      errors.push({
+        line: lineOf(index),
+        serial: raw.serial,
+        message: Object.entries(fields)
+          .map(([k, v]) => `${k}: ${v}`)
+          .join('; '),
+      });
       return;
     }
     const r = result.data;
     if (r.column > wall.columns || r.row > wall.rows) {
-      errors.push({ line: lineOf(index), serial: r.serial, message: `position ${cellLabel(r)} is outside the wall’s ${wall.columns} × ${wall.rows} grid` });
+      errors.push({
+        line: lineOf(index),
+        serial: r.serial,
+        message: `position ${cellLabel(r)} is outside the wall’s ${wall.columns} × ${wall.rows} grid`,
+      });
       return;
     }
     rows.push({ line: lineOf(index), ...r });
@@ -428,7 +527,12 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
     else bySerial.set(r.serial, r.line);
     const cell = `${r.column}:${r.row}`;
     const other = byCell.get(cell);
-    if (other) errors.push({ line: r.line, serial: r.serial, message: `two serials in one cell: ${cellLabel(r)} is also given to ${other.serial} on line ${other.line}` });
+    if (other)
+      errors.push({
+        line: r.line,
+        serial: r.serial,
+        message: `two serials in one cell: ${cellLabel(r)} is also given to ${other.serial} on line ${other.line}`,
+      });
     else byCell.set(cell, { line: r.line, serial: r.serial });
   }
 
@@ -440,7 +544,8 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
       .from(cabinets)
       .where(inArray(cabinets.serial, serials.slice(i, i + 5000)));
     for (const e of existing) {
-      const where = e.wallId === wallId && e.column && e.row ? ` (already on this wall at ${cellLabel({ column: e.column, row: e.row })})` : '';
+      const where =
+        e.wallId === wallId && e.column && e.row ? ` (already on this wall at ${cellLabel({ column: e.column, row: e.row })})` : '';
       errors.push({ line: bySerial.get(e.serial)!, serial: e.serial, message: `duplicate serial: already registered${where}` });
     }
   }
@@ -451,7 +556,11 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
   for (const o of occupied) {
     const incoming = byCell.get(`${o.column}:${o.row}`);
     if (incoming && incoming.serial !== o.serial) {
-      errors.push({ line: incoming.line, serial: incoming.serial, message: `two serials in one cell: ${cellLabel({ column: o.column!, row: o.row! })} already holds ${o.serial}` });
+      errors.push({
+        line: incoming.line,
+        serial: incoming.serial,
+        message: `two serials in one cell: ${cellLabel({ column: o.column!, row: o.row! })} already holds ${o.serial}`,
+      });
     }
   }
 
@@ -473,14 +582,33 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
       const chunk = rows.slice(i, i + IMPORT_CHUNK);
       const inserted = await tx
         .insert(cabinets)
-        .values(chunk.map((r) => ({ serial: r.serial, cabinetModelId: wall.cabinetModelId, wallId, column: r.column, row: r.row, batch: r.batch, status: 'installed' as const })))
+        .values(
+          chunk.map((r) => ({
+            serial: r.serial,
+            cabinetModelId: wall.cabinetModelId,
+            wallId,
+            column: r.column,
+            row: r.row,
+            batch: r.batch,
+            status: 'installed' as const,
+          })),
+        )
         .returning({ id: cabinets.id, column: cabinets.column, row: cabinets.row });
-      await tx.insert(cabinetEvents).values(
-        inserted.map((c) => ({ cabinetId: c.id, kind: 'imported' as const, toWallId: wallId, toColumn: c.column, toRow: c.row, toStatus: 'installed' as const, actorId: actor.userId })),
-      );
+      await tx
+        .insert(cabinetEvents)
+        .values(
+          inserted.map((c) => ({
+            cabinetId: c.id,
+            kind: 'imported' as const,
+            toWallId: wallId,
+            toColumn: c.column,
+            toRow: c.row,
+            toStatus: 'installed' as const,
+            actorId: actor.userId,
+          })),
+        );
     }
     await recordAudit(tx, { actor, entity: 'wall', entityId: wallId, action: 'cabinets_imported', after: { count: rows.length } });
   });
   return { imported: rows.length, errors: [] };
 }
-

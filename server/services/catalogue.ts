@@ -133,7 +133,10 @@ async function assertWall(wallId: string | null | undefined) {
 export async function createController(actor: Actor, input: ControllerInput) {
   await assertWall(input.wallId);
   const id = await db().transaction(async (tx) => {
-    const [row] = await tx.insert(controllers).values({ ...input, wallId: input.wallId ?? null }).returning();
+    const [row] = await tx
+      .insert(controllers)
+      .values({ ...input, wallId: input.wallId ?? null })
+      .returning();
     await recordAudit(tx, { actor, entity: 'controller', entityId: row.id, action: 'created', after: row });
     return row.id;
   });
@@ -147,7 +150,9 @@ export async function updateController(actor: Actor, id: string, input: Controll
     found(before, 'Controller');
     const { archived, ...fields } = input;
     if (fields.outputsInUse !== undefined && fields.outputsInUse > before.outputs) {
-      throw badRequest('validation_failed', 'Cannot use more outputs than the controller has.', { outputsInUse: `At most ${before.outputs}.` });
+      throw badRequest('validation_failed', 'Cannot use more outputs than the controller has.', {
+        outputsInUse: `At most ${before.outputs}.`,
+      });
     }
     const [after] = await tx
       .update(controllers)

@@ -22,7 +22,6 @@ export function orderFor(column: AnyPgColumn, id: AnyPgColumn, dir: 'asc' | 'des
 
 export const cursorValue = (v: unknown) => (v instanceof Date ? v.toISOString() : v);
 
-
 export async function listClients(actor: Actor, query: ListClientsQuery): Promise<Page<ClientSummary>> {
   const sortColumn = query.sort === 'createdAt' ? clients.createdAt : clients.name;
   const rows = await db()
@@ -78,7 +77,15 @@ function presentClientRow(r: {
 }
 
 export function presentServicePlan(p: typeof servicePlans.$inferSelect): ServicePlan {
-  return { id: p.id, name: p.name, clockMode: p.clockMode, businessDays: p.businessDays, dayStart: p.dayStart, dayEnd: p.dayEnd, targets: p.targets };
+  return {
+    id: p.id,
+    name: p.name,
+    clockMode: p.clockMode,
+    businessDays: p.businessDays,
+    dayStart: p.dayStart,
+    dayEnd: p.dayEnd,
+    targets: p.targets,
+  };
 }
 
 function presentContact(c: typeof contacts.$inferSelect): Contact {
@@ -135,7 +142,10 @@ async function assertPlan(tx: DbOrTx, id: string | null | undefined) {
 export async function createClient(actor: Actor, input: ClientInput) {
   const id = await db().transaction(async (tx) => {
     await assertPlan(tx, input.servicePlanId);
-    const [row] = await tx.insert(clients).values({ name: input.name, servicePlanId: input.servicePlanId ?? null, notes: input.notes ?? '' }).returning();
+    const [row] = await tx
+      .insert(clients)
+      .values({ name: input.name, servicePlanId: input.servicePlanId ?? null, notes: input.notes ?? '' })
+      .returning();
     await recordAudit(tx, { actor, entity: 'client', entityId: row.id, action: 'created', after: row });
     return row.id;
   });
@@ -166,7 +176,10 @@ export async function listServicePlans(): Promise<{ items: ServicePlan[] }> {
 // ---- contacts ----
 async function assertSiteOfClient(tx: DbOrTx, siteId: string | null | undefined, clientId: string) {
   if (!siteId) return;
-  const [site] = await tx.select({ id: sites.id }).from(sites).where(and(eq(sites.id, siteId), eq(sites.clientId, clientId)));
+  const [site] = await tx
+    .select({ id: sites.id })
+    .from(sites)
+    .where(and(eq(sites.id, siteId), eq(sites.clientId, clientId)));
   if (!site) throw badRequest('validation_failed', 'That site does not belong to this client.', { siteId: 'Not a site of this client.' });
 }
 

@@ -36,7 +36,15 @@ export async function search(actor: Actor, q: string): Promise<SearchResults> {
       .orderBy(asc(walls.name))
       .limit(LIMIT),
     db()
-      .select({ id: cabinets.id, serial: cabinets.serial, status: cabinets.status, wallId: walls.id, wallName: walls.name, column: cabinets.column, row: cabinets.row })
+      .select({
+        id: cabinets.id,
+        serial: cabinets.serial,
+        status: cabinets.status,
+        wallId: walls.id,
+        wallName: walls.name,
+        column: cabinets.column,
+        row: cabinets.row,
+      })
       .from(cabinets)
       .leftJoin(walls, eq(walls.id, cabinets.wallId))
       .where(and(actor.role === 'client' ? tenantWhere(actor, walls.clientId) : undefined, like(cabinets.serial, serialPrefix)))
@@ -47,6 +55,14 @@ export async function search(actor: Actor, q: string): Promise<SearchResults> {
     clients: clientRows.map((c) => ({ id: c.id, name: c.name })),
     sites: siteRows.map((s) => ({ id: s.id, name: s.name, clientName: s.clientName, city: s.city })),
     walls: wallRows.map((w) => ({ id: w.id, name: w.name, siteName: w.siteName, clientName: w.clientName })),
-    cabinets: cabinetRows.map((c) => ({ id: c.id, serial: c.serial, status: c.status, wallId: c.wallId, wallName: c.wallName, column: c.column, row: c.row })),
+    cabinets: cabinetRows.map((c) => ({
+      id: c.id,
+      serial: c.serial,
+      status: c.status,
+      wallId: c.wallId,
+      wallName: c.wallName,
+      column: c.column,
+      row: c.row,
+    })),
   };
 }

@@ -42,7 +42,10 @@ export async function listSites(actor: Actor, query: ListSitesQuery): Promise<Pa
     )
     .orderBy(...orderFor(sortColumn, sites.id, query.dir))
     .limit(query.limit + 1);
-  const key = (r: (typeof rows)[number]) => [cursorValue(query.sort === 'city' ? r.city : query.sort === 'createdAt' ? r.createdAt : r.name), r.id];
+  const key = (r: (typeof rows)[number]) => [
+    cursorValue(query.sort === 'city' ? r.city : query.sort === 'createdAt' ? r.createdAt : r.name),
+    r.id,
+  ];
   const page = pageOf(rows, query.limit, key);
   return { items: page.items.map(presentSiteRow), nextCursor: page.nextCursor };
 }

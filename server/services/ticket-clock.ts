@@ -22,8 +22,19 @@ export function planClock(
   plan: { clockMode: ClockMode; businessDays: number[]; dayStart: string; dayEnd: string; targets: PlanTargets } | null,
   timeZone: string,
 ): PlanClock {
-  if (!plan) return { mode: 'round_the_clock', calendar: { days: [1, 2, 3, 4, 5, 6, 7], start: '00:00', end: '24:00' }, timeZone, targets: defaultTargets };
-  return { mode: plan.clockMode, calendar: { days: plan.businessDays, start: plan.dayStart, end: plan.dayEnd }, timeZone, targets: plan.targets };
+  if (!plan)
+    return {
+      mode: 'round_the_clock',
+      calendar: { days: [1, 2, 3, 4, 5, 6, 7], start: '00:00', end: '24:00' },
+      timeZone,
+      targets: defaultTargets,
+    };
+  return {
+    mode: plan.clockMode,
+    calendar: { days: plan.businessDays, start: plan.dayStart, end: plan.dayEnd },
+    timeZone,
+    targets: plan.targets,
+  };
 }
 
 const due = (clock: PlanClock, start: Date, hours: number) =>

@@ -40,7 +40,10 @@ function summary(t: TicketForMail) {
 async function clientRecipients(tx: DbOrTx, t: TicketForMail, excludeEmail?: string) {
   const list = await updateRecipients(tx, t.clientId, t.siteId);
   if (t.reporterId) {
-    const [reporter] = await tx.select({ email: users.email, role: users.role, disabledAt: users.disabledAt }).from(users).where(eq(users.id, t.reporterId));
+    const [reporter] = await tx
+      .select({ email: users.email, role: users.role, disabledAt: users.disabledAt })
+      .from(users)
+      .where(eq(users.id, t.reporterId));
     if (reporter && reporter.role === 'client' && !reporter.disabledAt) list.unshift(reporter.email);
   }
   return [...new Set(list)].filter((e) => e !== excludeEmail);
@@ -85,7 +88,8 @@ function calendarInvite(t: TicketForMail, u: Extract<ClientUpdate, { kind: 'sche
 
 function formatWindow(start: Date, end: Date, timeZone: string) {
   const day = new Intl.DateTimeFormat('en-US', { timeZone, weekday: 'long', month: 'long', day: 'numeric', year: 'numeric' }).format(start);
-  const time = (d: Date) => new Intl.DateTimeFormat('en-US', { timeZone, hour: 'numeric', minute: '2-digit', timeZoneName: 'short' }).format(d);
+  const time = (d: Date) =>
+    new Intl.DateTimeFormat('en-US', { timeZone, hour: 'numeric', minute: '2-digit', timeZoneName: 'short' }).format(d);
   return `${day}, ${time(start)} – ${time(end)}`;
 }
 

@@ -114,37 +114,56 @@ function presentListRow(r: ListRow): TicketListItem {
 }
 
 export async function listTickets(actor: Actor, query: ListTicketsQuery): Promise<Page<TicketListItem>> {
-  const sortColumn = query.sort === 'resolutionDueAt' ? tickets.resolutionDueAt : query.sort === 'updatedAt' ? tickets.updatedAt : tickets.createdAt;
+  const sortColumn =
+    query.sort === 'resolutionDueAt' ? tickets.resolutionDueAt : query.sort === 'updatedAt' ? tickets.updatedAt : tickets.createdAt;
   const pattern = query.q ? likePattern(query.q) : undefined;
   const number = query.q?.match(/^(?:gk-?)?(\d{1,9})$/i)?.[1];
   const assigneeFilter =
-    query.assigneeId === 'none' ? isNull(tickets.assigneeId) : query.assigneeId === 'me' ? eq(tickets.assigneeId, actor.userId) : query.assigneeId ? eq(tickets.assigneeId, query.assigneeId) : undefined;
+    query.assigneeId === 'none'
+      ? isNull(tickets.assigneeId)
+      : query.assigneeId === 'me'
+        ? eq(tickets.assigneeId, actor.userId)
+        : query.assigneeId
+          ? eq(tickets.assigneeId, query.assigneeId)
+          : undefined;
   const rows = await baseQuery(db())
     .where(
       and(
         tenantWhere(actor, tickets.clientId),
         query.status ? inArray(tickets.status, query.status) : undefined,
-        query.open === 'true' ? inArray(tickets.status, openStatuses) : query.open === 'false' ? inArray(tickets.status, ['resolved', 'closed']) : undefined,
+        query.open === 'true'
+          ? inArray(tickets.status, openStatuses)
+          : query.open === 'false'
+            ? inArray(tickets.status, ['resolved', 'closed'])
+            : undefined,
         query.priority ? inArray(tickets.priority, query.priority) : undefined,
         query.clock ? inArray(clockStateSql, query.clock) : undefined,
         query.clientId ? eq(tickets.clientId, query.clientId) : undefined,
         query.siteId ? eq(tickets.siteId, query.siteId) : undefined,
         query.wallId ? eq(tickets.wallId, query.wallId) : undefined,
         isStaff(actor) ? assigneeFilter : undefined,
-        pattern ? or(ilike(tickets.title, pattern), ilike(tickets.description, pattern), number ? eq(tickets.number, Number(number)) : undefined) : undefined,
+        pattern
+          ? or(ilike(tickets.title, pattern), ilike(tickets.description, pattern), number ? eq(tickets.number, Number(number)) : undefined)
+          : undefined,
         afterCursor(sortColumn, tickets.id, decodeCursor(query.cursor, 2), query.dir),
       ),
     )
     .orderBy(...orderFor(sortColumn, tickets.id, query.dir))
     .limit(query.limit + 1);
-  const key = (r: (typeof rows)[number]) => [cursorValue(query.sort === 'resolutionDueAt' ? r.resolutionDueAt : query.sort === 'updatedAt' ? r.updatedAt : r.createdAt), r.id];
+  const key = (r: (typeof rows)[number]) => [
+    cursorValue(query.sort === 'resolutionDueAt' ? r.resolutionDueAt : query.sort === 'updatedAt' ? r.updatedAt : r.createdAt),
+    r.id,
+  ];
   const page = pageOf(rows, query.limit, key);
   return { items: page.items.map(presentListRow), nextCursor: page.nextCursor };
 }
 
 /** The ticket row the caller may see, or 404. */
 async function visibleTicket(tx: DbOrTx, actor: Actor, id: string, lock = false) {
-  const q = tx.select().from(tickets).where(and(eq(tickets.id, id), tenantWhere(actor, tickets.clientId)));
+  const q = tx
+    .select()
+    .from(tickets)
+    .where(and(eq(tickets.id, id), tenantWhere(actor, tickets.clientId)));
   const [row] = lock ? await q.for('update') : await q;
   return found(row, 'Ticket');
 }
@@ -197,7 +216,9 @@ function presentRepair(
     cabinetSerial,
     technicianName,
     performedAt: r.performedAt.toISOString(),
-    ...(staff ? { notes: r.notes, part: partName ? { name: partName, batch: r.partBatch } : null, removedPartFate: r.removedPartFate } : {}),
+    ...(staff
+      ? { notes: r.notes, part: partName ? { name: partName, batch: r.partBatch } : null, removedPartFate: r.removedPartFate }
+      : {}),
   };
 }
 
@@ -215,10 +236,18 @@ interface TicketParts {
   repairs: TicketRepair[];
 }
 
-function presentTicket(actor: Actor, { row, ticket: t, wall, siteTimeZone, merged, visits: ticketVisits, repairs: ticketRepairs }: TicketParts): TicketDetail {
+function presentTicket(
+  actor: Actor,
+  { row, ticket: t, wall, siteTimeZone, merged, visits: ticketVisits, repairs: ticketRepairs }: TicketParts,
+): TicketDetail {
   const now = new Date();
   const response = clockStateOf(now, { dueAt: t.responseDueAt, atRiskAt: t.responseAtRiskAt, doneAt: t.acknowledgedAt });
-  const resolution = clockStateOf(now, { dueAt: t.resolutionDueAt, atRiskAt: t.resolutionAtRiskAt, doneAt: t.resolvedAt, paused: t.pausedAt !== null });
+  const resolution = clockStateOf(now, {
+    dueAt: t.resolutionDueAt,
+    atRiskAt: t.resolutionAtRiskAt,
+    doneAt: t.resolvedAt,
+    paused: t.pausedAt !== null,
+  });
   return {
     ...presentListRow(row),
     description: t.description,
@@ -244,7 +273,12 @@ export async function getTicket(actor: Actor, id: string): Promise<TicketDetail>
   const t = await visibleTicket(db(), actor, id);
   const [row] = await baseQuery(db()).where(eq(tickets.id, id));
   const wall = t.wallId
-    ? (await db().select({ id: walls.id, name: walls.name, columns: walls.columns, rows: walls.rows }).from(walls).where(eq(walls.id, t.wallId)))[0]
+    ? (
+        await db()
+          .select({ id: walls.id, name: walls.name, columns: walls.columns, rows: walls.rows })
+          .from(walls)
+          .where(eq(walls.id, t.wallId))
+      )[0]
     : null;
   const ticketVisits = await db()
     .select({ id: visits.id, status: visits.status, windowStart: visits.windowStart, windowEnd: visits.windowEnd, kind: visits.kind })
@@ -253,7 +287,9 @@ export async function getTicket(actor: Actor, id: string): Promise<TicketDetail>
     .orderBy(asc(visits.windowStart));
   const ticketRepairs = await repairsOf(id);
   const [site] = await db().select({ timeZone: sites.timeZone }).from(sites).where(eq(sites.id, t.siteId));
-  const merged = t.mergedIntoId ? (await db().select({ id: tickets.id, number: tickets.number }).from(tickets).where(eq(tickets.id, t.mergedIntoId)))[0] : null;
+  const merged = t.mergedIntoId
+    ? (await db().select({ id: tickets.id, number: tickets.number }).from(tickets).where(eq(tickets.id, t.mergedIntoId)))[0]
+    : null;
   return presentTicket(actor, {
     row,
     ticket: t,
@@ -290,11 +326,18 @@ export async function createTicket(actor: Actor, input: CreateTicketInput): Prom
     if (!site) throw badRequest('validation_failed', 'Choose one of your sites.', { siteId: 'Unknown site.' });
     let cells = input.cells ?? [];
     if (input.wallId) {
-      const [wall] = await tx.select().from(walls).where(and(eq(walls.id, input.wallId), eq(walls.siteId, site.id)));
+      const [wall] = await tx
+        .select()
+        .from(walls)
+        .where(and(eq(walls.id, input.wallId), eq(walls.siteId, site.id)));
       if (!wall) throw badRequest('validation_failed', 'That wall is not at this site.', { wallId: 'Not a wall of this site.' });
       const outside = cells.filter((c) => c.column > wall.columns || c.row > wall.rows);
       if (outside.length) {
-        throw badRequest('validation_failed', `${outside.map(cellLabel).join(', ')} ${outside.length === 1 ? 'is' : 'are'} outside the wall.`, { cells: 'Outside the grid.' });
+        throw badRequest(
+          'validation_failed',
+          `${outside.map(cellLabel).join(', ')} ${outside.length === 1 ? 'is' : 'are'} outside the wall.`,
+          { cells: 'Outside the grid.' },
+        );
       }
       const unique = new Map(cells.map((c) => [`${c.column}:${c.row}`, c]));
       cells = [...unique.values()].sort((a, b) => a.row - b.row || a.column - b.column);
@@ -330,7 +373,8 @@ function assertMayUpdate(role: Role, current: typeof tickets.$inferSelect, input
   if (role === 'client') {
     const onlyClosing = input.status === 'closed' && Object.keys(input).every((k) => k === 'status');
     if (!onlyClosing) throw forbidden('forbidden', 'You can close a resolved ticket; the service desk changes everything else.');
-    if (current.status !== 'resolved') throw conflict('bad_transition', 'Only a resolved ticket can be closed.', { status: 'Not resolved yet.' });
+    if (current.status !== 'resolved')
+      throw conflict('bad_transition', 'Only a resolved ticket can be closed.', { status: 'Not resolved yet.' });
   }
   if (role === 'technician' && (input.priority || input.assigneeId !== undefined || input.schedule)) {
     throw forbidden('forbidden', 'Priority, assignment and scheduling are set by the office.');
@@ -352,7 +396,9 @@ export async function updateTicket(actor: Actor, id: string, input: UpdateTicket
     const status = input.status ?? before.status;
     if (input.status && input.status !== before.status) {
       if (!allowedNextStatuses(before.status).includes(input.status)) {
-        throw conflict('bad_transition', `A ${before.status.replace('_', ' ')} ticket cannot move to ${input.status.replace('_', ' ')}.`, { status: 'Not allowed from the current status.' });
+        throw conflict('bad_transition', `A ${before.status.replace('_', ' ')} ticket cannot move to ${input.status.replace('_', ' ')}.`, {
+          status: 'Not allowed from the current status.',
+        });
       }
       changes.status = input.status;
       if (before.status === 'new' && !before.acknowledgedAt) changes.acknowledgedAt = now;
@@ -375,11 +421,15 @@ export async function updateTicket(actor: Actor, id: string, input: UpdateTicket
     }
     if (input.priority && input.priority !== before.priority) {
       changes.priority = input.priority;
-      Object.assign(changes, ticketDueTimes(clock, input.priority, before.createdAt, (changes.pausedSeconds ?? before.pausedSeconds) * 1000));
+      Object.assign(
+        changes,
+        ticketDueTimes(clock, input.priority, before.createdAt, (changes.pausedSeconds ?? before.pausedSeconds) * 1000),
+      );
     }
     let scheduled: { visitId: string; start: Date; end: Date; technicianNames: string[] } | undefined;
     if (input.schedule) {
-      if (status !== 'scheduled') throw badRequest('validation_failed', 'A visit is planned with the status “scheduled”.', { status: 'Set to scheduled.' });
+      if (status !== 'scheduled')
+        throw badRequest('validation_failed', 'A visit is planned with the status “scheduled”.', { status: 'Set to scheduled.' });
       scheduled = await planVisit(tx, before, input.schedule);
     }
     const [after] = await tx.update(tickets).set(changes).where(eq(tickets.id, id)).returning();
@@ -399,7 +449,8 @@ export async function updateTicket(actor: Actor, id: string, input: UpdateTicket
 async function assertAssignable(tx: Tx, userId: string | null) {
   if (!userId) return null;
   const [u] = await tx.select({ role: users.role, disabledAt: users.disabledAt }).from(users).where(eq(users.id, userId));
-  if (!u || u.role === 'client' || u.disabledAt) throw badRequest('validation_failed', 'Assign the ticket to an active staff member.', { assigneeId: 'Not a staff member.' });
+  if (!u || u.role === 'client' || u.disabledAt)
+    throw badRequest('validation_failed', 'Assign the ticket to an active staff member.', { assigneeId: 'Not a staff member.' });
   return userId;
 }
 
@@ -414,7 +465,15 @@ async function planVisit(tx: Tx, t: typeof tickets.$inferSelect, schedule: NonNu
   const end = new Date(schedule.end);
   const [visit] = await tx
     .insert(visits)
-    .values({ clientId: t.clientId, siteId: t.siteId, wallId: t.wallId, ticketId: t.id, kind: 'ticket', windowStart: start, windowEnd: end })
+    .values({
+      clientId: t.clientId,
+      siteId: t.siteId,
+      wallId: t.wallId,
+      ticketId: t.id,
+      kind: 'ticket',
+      windowStart: start,
+      windowEnd: end,
+    })
     .returning({ id: visits.id });
   if (techs.length) await tx.insert(visitTechnicians).values(techs.map((u) => ({ visitId: visit.id, userId: u.id })));
   return { visitId: visit.id, start, end, technicianNames: techs.map((u) => u.name) };
@@ -426,8 +485,10 @@ export async function mergeTicket(actor: Actor, id: string, intoId: string): Pro
   await db().transaction(async (tx) => {
     const dup = await visibleTicket(tx, actor, id, true);
     const into = await visibleTicket(tx, actor, intoId, true);
-    if (dup.clientId !== into.clientId) throw badRequest('validation_failed', 'Tickets of different clients cannot be merged.', { intoTicketId: 'Another client.' });
-    if (into.mergedIntoId || into.status === 'closed') throw conflict('bad_transition', 'Merge into an open ticket.', { intoTicketId: 'Closed or merged.' });
+    if (dup.clientId !== into.clientId)
+      throw badRequest('validation_failed', 'Tickets of different clients cannot be merged.', { intoTicketId: 'Another client.' });
+    if (into.mergedIntoId || into.status === 'closed')
+      throw conflict('bad_transition', 'Merge into an open ticket.', { intoTicketId: 'Closed or merged.' });
     const now = new Date();
     const [after] = await tx
       .update(tickets)
@@ -435,9 +496,18 @@ export async function mergeTicket(actor: Actor, id: string, intoId: string): Pro
       .where(eq(tickets.id, dup.id))
       .returning();
     const cells = new Map([...into.cells, ...dup.cells].map((c) => [`${c.column}:${c.row}`, c]));
-    if (dup.wallId && dup.wallId === into.wallId) await tx.update(tickets).set({ cells: [...cells.values()] }).where(eq(tickets.id, into.id));
+    if (dup.wallId && dup.wallId === into.wallId)
+      await tx
+        .update(tickets)
+        .set({ cells: [...cells.values()] })
+        .where(eq(tickets.id, into.id));
     await tx.insert(ticketComments).values([
-      { ticketId: dup.id, authorId: actor.userId, visibility: 'public', body: `Merged into ${ticketRef(into.number)}: the same fault is followed there.` },
+      {
+        ticketId: dup.id,
+        authorId: actor.userId,
+        visibility: 'public',
+        body: `Merged into ${ticketRef(into.number)}: the same fault is followed there.`,
+      },
       { ticketId: into.id, authorId: actor.userId, visibility: 'internal', body: `${ticketRef(dup.number)} was merged into this ticket.` },
     ]);
     await recordAudit(tx, { actor, entity: 'ticket', entityId: dup.id, action: 'merged', before: dup, after });
@@ -473,12 +543,27 @@ export async function addComment(actor: Actor, ticketId: string, input: CommentI
   }
   const id = await db().transaction(async (tx) => {
     const t = await visibleTicket(tx, actor, ticketId);
-    const [row] = await tx.insert(ticketComments).values({ ticketId, authorId: actor.userId, body: input.body, visibility: input.visibility }).returning();
+    const [row] = await tx
+      .insert(ticketComments)
+      .values({ ticketId, authorId: actor.userId, body: input.body, visibility: input.visibility })
+      .returning();
     await tx.update(tickets).set({ updatedAt: new Date() }).where(eq(tickets.id, ticketId));
-    await recordAudit(tx, { actor, entity: 'ticket', entityId: ticketId, action: `comment_${input.visibility}`, after: { commentId: row.id } });
+    await recordAudit(tx, {
+      actor,
+      entity: 'ticket',
+      entityId: ticketId,
+      action: `comment_${input.visibility}`,
+      after: { commentId: row.id },
+    });
     if (input.visibility === 'public') {
       const mail = await forMail(tx, t.id);
-      await mailClientUpdate(tx, mail, { kind: 'comment', commentId: row.id, authorName: actor.name, body: input.body, excludeEmail: actor.email });
+      await mailClientUpdate(tx, mail, {
+        kind: 'comment',
+        commentId: row.id,
+        authorName: actor.name,
+        body: input.body,
+        excludeEmail: actor.email,
+      });
     }
     return row.id;
   });
@@ -511,7 +596,10 @@ export async function saveView(actor: Actor, input: SavedViewInput): Promise<Sav
 }
 
 export async function deleteView(actor: Actor, id: string) {
-  const [row] = await db().delete(savedViews).where(and(eq(savedViews.id, id), eq(savedViews.userId, actor.userId))).returning();
+  const [row] = await db()
+    .delete(savedViews)
+    .where(and(eq(savedViews.id, id), eq(savedViews.userId, actor.userId)))
+    .returning();
   found(row, 'Saved view');
 }
 
@@ -526,4 +614,3 @@ export async function clockCounts(actor: Actor): Promise<TicketClockCounts> {
   for (const r of rows) counts[r.state ?? 'none'] += r.n;
   return counts;
 }
-

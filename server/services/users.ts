@@ -28,9 +28,17 @@ const summaryColumns = {
 };
 
 type SummaryRow = { [K in keyof typeof summaryColumns]: unknown } & {
-  id: string; email: string; name: string; role: UserSummary['role']; clientId: string | null;
-  clientName: string | null; phone: string; disabledAt: Date | null; hasPassword: boolean;
-  lastSignInAt: Date | null; createdAt: Date;
+  id: string;
+  email: string;
+  name: string;
+  role: UserSummary['role'];
+  clientId: string | null;
+  clientName: string | null;
+  phone: string;
+  disabledAt: Date | null;
+  hasPassword: boolean;
+  lastSignInAt: Date | null;
+  createdAt: Date;
 };
 
 function presentUser(row: SummaryRow): UserSummary {
@@ -78,7 +86,10 @@ async function getSummary(tx: DbOrTx, id: string): Promise<UserSummary> {
 
 async function assertClientExists(tx: DbOrTx, clientId: string | null | undefined) {
   if (!clientId) return;
-  const [row] = await tx.select({ id: clients.id }).from(clients).where(and(eq(clients.id, clientId), isNull(clients.archivedAt)));
+  const [row] = await tx
+    .select({ id: clients.id })
+    .from(clients)
+    .where(and(eq(clients.id, clientId), isNull(clients.archivedAt)));
   if (!row) throw badRequest('validation_failed', 'That organisation does not exist.', { clientId: 'Unknown organisation.' });
 }
 
@@ -129,7 +140,10 @@ export async function updateUser(actor: Actor, id: string, input: UpdateUserInpu
     // Disabling, or moving someone to another organisation or role, ends their sessions now.
     if (disabledAt || role !== before.role || clientId !== before.clientId) await revokeSessions(tx, id);
     if (disabledAt && !before.disabledAt) {
-      await tx.update(authTokens).set({ usedAt: new Date() }).where(and(eq(authTokens.userId, id), isNull(authTokens.usedAt)));
+      await tx
+        .update(authTokens)
+        .set({ usedAt: new Date() })
+        .where(and(eq(authTokens.userId, id), isNull(authTokens.usedAt)));
     }
     await recordAudit(tx, { actor, entity: 'user', entityId: id, action: 'updated', before, after });
     return getSummary(tx, id);

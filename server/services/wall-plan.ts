@@ -23,7 +23,11 @@ import { getWall, visibleWall } from './walls.js';
 
 type SaveWallPlan = z.output<typeof saveWallPlanRequest>;
 
-const chainLimitWords = { circuit: 'its circuit', connector: "the cabinet's power connector", maker: "the maker's most cabinets per chain" } as const;
+const chainLimitWords = {
+  circuit: 'its circuit',
+  connector: "the cabinet's power connector",
+  maker: "the maker's most cabinets per chain",
+} as const;
 
 /**
  * The settings as stored: the supply must be able to feed the wall's cabinets, and a chain may
@@ -48,7 +52,11 @@ const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
 function storedRuns(input: Pick<WallRunsInput, 'pattern' | 'runs'>, limits: RunLimits): WallRuns {
   return {
     pattern: input.pattern,
-    runs: input.runs.map((r) => ({ index: r.index, cells: r.cells.map((c) => ({ column: c.column, row: c.row })), ...runLoad(limits, r.cells.length) })),
+    runs: input.runs.map((r) => ({
+      index: r.index,
+      cells: r.cells.map((c) => ({ column: c.column, row: c.row })),
+      ...runLoad(limits, r.cells.length),
+    })),
     limit: limits.kind === 'data' ? limits.outputCapacityPixels : limits.chainCapacityW,
   };
 }
@@ -72,7 +80,8 @@ export async function saveWallPlan(actor: Actor, wallId: string, input: SaveWall
     const powerLimits = runLimitsFor('power', cabinet, settings);
     const fields: Record<string, string> = {};
     if (cabinetsPerRun(dataLimits) < 1) {
-      fields['settings.outputCapacityPixels'] = `One cabinet (${count.format(dataLimits.cabinetPixels)} pixels) is over the output capacity.`;
+      fields['settings.outputCapacityPixels'] =
+        `One cabinet (${count.format(dataLimits.cabinetPixels)} pixels) is over the output capacity.`;
     }
     if (cabinetsPerRun(powerLimits) < 1) {
       fields['settings.chainCapacityW'] = `One cabinet (${count.format(powerLimits.cabinetMaxPowerW)} W) is over the chain capacity.`;

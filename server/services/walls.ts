@@ -16,7 +16,6 @@ import { cursorValue, likePattern, orderFor } from './clients.js';
 import { afterCursor, decodeCursor, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 
-
 export async function listWalls(actor: Actor, query: ListWallsQuery): Promise<Page<WallSummary>> {
   const sortColumn = query.sort === 'createdAt' ? walls.createdAt : walls.name;
   const pattern = query.q ? likePattern(query.q) : undefined;
@@ -80,7 +79,10 @@ export async function listWalls(actor: Actor, query: ListWallsQuery): Promise<Pa
 
 /** The wall a caller may see, or 404. */
 export async function visibleWall(tx: DbOrTx, actor: Actor, id: string) {
-  const [wall] = await tx.select().from(walls).where(and(eq(walls.id, id), tenantWhere(actor, walls.clientId)));
+  const [wall] = await tx
+    .select()
+    .from(walls)
+    .where(and(eq(walls.id, id), tenantWhere(actor, walls.clientId)));
   return found(wall, 'Wall');
 }
 
@@ -134,7 +136,15 @@ export async function getWall(actor: Actor, id: string): Promise<WallDetail> {
 
 /** A controller as the wall page lists it. */
 function presentWallController(c: typeof controllers.$inferSelect): WallController {
-  return { id: c.id, model: c.model, serial: c.serial, firmware: c.firmware, outputs: c.outputs, outputsInUse: c.outputsInUse, pixelsPerOutput: c.pixelsPerOutput };
+  return {
+    id: c.id,
+    model: c.model,
+    serial: c.serial,
+    firmware: c.firmware,
+    outputs: c.outputs,
+    outputsInUse: c.outputsInUse,
+    pixelsPerOutput: c.pixelsPerOutput,
+  };
 }
 
 async function assertModel(tx: DbOrTx, id: string | undefined) {
@@ -148,7 +158,10 @@ export async function createWall(actor: Actor, input: WallInput) {
     const [site] = await tx.select({ clientId: sites.clientId }).from(sites).where(eq(sites.id, input.siteId));
     if (!site) throw badRequest('validation_failed', 'That site does not exist.', { siteId: 'Unknown site.' });
     await assertModel(tx, input.cabinetModelId);
-    const [row] = await tx.insert(walls).values({ ...input, clientId: site.clientId }).returning();
+    const [row] = await tx
+      .insert(walls)
+      .values({ ...input, clientId: site.clientId })
+      .returning();
     await recordAudit(tx, { actor, entity: 'wall', entityId: row.id, action: 'created', after: row });
     return row.id;
   });
@@ -196,17 +209,15 @@ export async function wallCabinets(actor: Actor, id: string): Promise<{ items: W
   const perCell = new Map<string, number>();
   for (const t of open) for (const c of t.cells) perCell.set(`${c.column}:${c.row}`, (perCell.get(`${c.column}:${c.row}`) ?? 0) + 1);
   return {
-    items: rows.map(
-      (r): WallCabinet => ({
-        id: r.id,
-        serial: r.serial,
-        column: r.column!,
-        row: r.row!,
-        batch: r.batch,
-        status: r.status,
-        installedOn: r.installedOn,
-        openTickets: perCell.get(`${r.column}:${r.row}`) ?? 0,
-      }),
-    ),
+    items: rows.map((r): WallCabinet => ({
+      id: r.id,
+      serial: r.serial,
+      column: r.column!,
+      row: r.row!,
+      batch: r.batch,
+      status: r.status,
+      installedOn: r.installedOn,
+      openTickets: perCell.get(`${r.column}:${r.row}`) ?? 0,
+    })),
   };
 }

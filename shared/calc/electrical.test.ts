@@ -67,7 +67,10 @@ describe('three-phase supplies: each chain is one single-phase branch circuit', 
   });
 
   it('counts whole cabinets on one 230.9 V circuit: 400 V, 16 A, 0.8, 340 W → 8 per circuit (2,956 W), not 26 from √3 × 400 × 16 × 0.8', () => {
-    const limit = chainLimit({ voltage: 400, phases: 3, breakerAmps: 16, continuousFactor: 0.8, powerFactor: 1 }, { maxPowerW: 340, ...universal });
+    const limit = chainLimit(
+      { voltage: 400, phases: 3, breakerAmps: 16, continuousFactor: 0.8, powerFactor: 1 },
+      { maxPowerW: 340, ...universal },
+    );
     expect(limit.circuitCapacityW).toBeCloseTo((400 / Math.sqrt(3)) * 16 * 0.8, 9);
     expect(limit.circuitCapacityW).toBeCloseTo(2956.0, 1);
     expect(limit.cabinetsPerChain).toBe(8);
@@ -152,7 +155,9 @@ describe('power factor', () => {
     expect(pf.source).toBe('datasheet');
     expect(pf.value).toBeCloseTo(180 / 190, 12);
     // 120 V × 20 A × 0.8 = 1,920 VA ÷ 190 VA = 10.1 → 10 cabinets.
-    expect(chainLimit({ voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8 }, { maxPowerW: 180, maxPowerVA: 190 }).cabinetsPerChain).toBe(10);
+    expect(
+      chainLimit({ voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8 }, { maxPowerW: 180, maxPowerVA: 190 }).cabinetsPerChain,
+    ).toBe(10);
   });
 
   it('uses a given power factor when the datasheet has none', () => {
@@ -212,7 +217,9 @@ describe('the continuous-load rule is labelled', () => {
   });
 
   it('and defers to the local code on 230/400 V supplies', () => {
-    expect(continuousLoadNote({ voltage: 230, phases: 1, continuousFactor: 0.8 })).toContain('On a 230/400 V supply the local wiring code, not the NEC, sets this figure.');
+    expect(continuousLoadNote({ voltage: 230, phases: 1, continuousFactor: 0.8 })).toContain(
+      'On a 230/400 V supply the local wiring code, not the NEC, sets this figure.',
+    );
     expect(continuousLoadNote({ voltage: 400, phases: 3, continuousFactor: 0.8 })).toContain('local wiring code');
     expect(continuousLoadNote({ voltage: 400, phases: 3, continuousFactor: 1 })).toContain('as typed');
   });

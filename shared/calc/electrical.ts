@@ -156,7 +156,8 @@ export type ChainLimitedBy = 'circuit' | 'connector' | 'maker';
 
 /** The power factor a plan uses and where it came from: the datasheet's VA, the request, or 0.95. */
 export function powerFactorOf(supply: Pick<Supply, 'powerFactor'>, cabinet: CabinetPower): { value: number; source: PowerFactorSource } {
-  if (cabinet.maxPowerVA !== undefined && cabinet.maxPowerVA > 0) return { value: Math.min(1, cabinet.maxPowerW / cabinet.maxPowerVA), source: 'datasheet' };
+  if (cabinet.maxPowerVA !== undefined && cabinet.maxPowerVA > 0)
+    return { value: Math.min(1, cabinet.maxPowerW / cabinet.maxPowerVA), source: 'datasheet' };
   if (supply.powerFactor !== undefined) return { value: supply.powerFactor, source: 'given' };
   return { value: DEFAULT_POWER_FACTOR, source: 'default' };
 }

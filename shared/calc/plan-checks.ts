@@ -60,9 +60,15 @@ function powerNotes(plan: WallPlanInput, f: Figures): PlanCheck[] {
     note('supply_branch', branch),
     note('continuous_load', continuousLoadNote(supply)),
     note('power_factor', pf),
-    note('chain_limit', `A chain carries at most ${n(f.chainLimitW)} W (${plural(f.cabinetsPerCircuit, 'cabinet')} at ${n(cabinet.maxPowerW, 1)} W), set by ${by}.`),
+    note(
+      'chain_limit',
+      `A chain carries at most ${n(f.chainLimitW)} W (${plural(f.cabinetsPerCircuit, 'cabinet')} at ${n(cabinet.maxPowerW, 1)} W), set by ${by}.`,
+    ),
   ];
-  if (range.assumed) notes.push(note('input_range', `The cabinet's input range is not given; ${rangeText} (universal input) is assumed. Check the datasheet.`));
+  if (range.assumed)
+    notes.push(
+      note('input_range', `The cabinet's input range is not given; ${rangeText} (universal input) is assumed. Check the datasheet.`),
+    );
   if (f.phaseCurrentsA) {
     const [a, b, c] = f.phaseCurrentsA;
     const high = Math.max(a, b, c);
@@ -92,22 +98,40 @@ function signalChecks(plan: WallPlanInput, f: Figures): PlanCheck[] {
     const fewest = Math.ceil(f.cabinetCount / f.cabinetsPerOutput);
     const ok = f.outputsNeeded <= processor.outputs;
     const hint = ok ? '' : fewest <= processor.outputs ? ` Laid serpentine the wall needs ${n(fewest)}.` : ' Add a processor or outputs.';
-    checks.push(verdict('processor_outputs', ok, `The data runs need ${plural(f.outputsNeeded, 'output')}; the processor has ${n(processor.outputs)}.${hint}`));
+    checks.push(
+      verdict(
+        'processor_outputs',
+        ok,
+        `The data runs need ${plural(f.outputsNeeded, 'output')}; the processor has ${n(processor.outputs)}.${hint}`,
+      ),
+    );
   }
   const capacity = processor.pixelCapacity ?? (processor.outputs !== undefined ? processor.outputs * plan.outputCapacityPixels : undefined);
   if (capacity !== undefined) {
-    checks.push(verdict('processor_pixels', f.totalPixels <= capacity, `The wall has ${n(f.totalPixels)} pixels; the processor drives up to ${n(capacity)}.`));
+    checks.push(
+      verdict(
+        'processor_pixels',
+        f.totalPixels <= capacity,
+        `The wall has ${n(f.totalPixels)} pixels; the processor drives up to ${n(capacity)}.`,
+      ),
+    );
   }
   if (processor.maxWidth !== undefined || processor.maxHeight !== undefined) {
     const ok = f.pixelsWide <= (processor.maxWidth ?? Infinity) && f.pixelsHigh <= (processor.maxHeight ?? Infinity);
-    const limits = [processor.maxWidth !== undefined ? `${n(processor.maxWidth)} px wide` : '', processor.maxHeight !== undefined ? `${n(processor.maxHeight)} px tall` : '']
+    const limits = [
+      processor.maxWidth !== undefined ? `${n(processor.maxWidth)} px wide` : '',
+      processor.maxHeight !== undefined ? `${n(processor.maxHeight)} px tall` : '',
+    ]
       .filter(Boolean)
       .join(' and ');
-    checks.push(verdict('processor_size', ok, `The wall is ${n(f.pixelsWide)} × ${n(f.pixelsHigh)} px; the processor's canvas is at most ${limits}.`));
+    checks.push(
+      verdict('processor_size', ok, `The wall is ${n(f.pixelsWide)} × ${n(f.pixelsHigh)} px; the processor's canvas is at most ${limits}.`),
+    );
   }
   const fit = f.inputFit;
   const input = plan.input ?? { width: 1920, height: 1080 };
-  const scale = Math.abs(fit.scaleX - fit.scaleY) < 1e-9 ? `×${n(fit.scaleX, 3)}` : `×${n(fit.scaleX, 3)} across and ×${n(fit.scaleY, 3)} down`;
+  const scale =
+    Math.abs(fit.scaleX - fit.scaleY) < 1e-9 ? `×${n(fit.scaleX, 3)}` : `×${n(fit.scaleX, 3)} across and ×${n(fit.scaleY, 3)} down`;
   checks.push(
     note(
       'input_scale',
@@ -138,7 +162,13 @@ function cableChecks(f: Figures): PlanCheck[] {
   const longest = lengths.reduce((a, b) => ((b.homeRunM ?? 0) > (a.homeRunM ?? 0) ? b : a));
   const over = lengths.filter((o) => (o.homeRunM ?? 0) > TWISTED_PAIR_CHANNEL_M);
   if (!over.length) {
-    return [verdict('data_cable_length', true, `The longest home run is ${n(longest.homeRunM ?? 0, 1)} m (output ${longest.output}), within ${TWISTED_PAIR_CHANNEL_M} m for twisted-pair Ethernet (TIA-568 channel).`)];
+    return [
+      verdict(
+        'data_cable_length',
+        true,
+        `The longest home run is ${n(longest.homeRunM ?? 0, 1)} m (output ${longest.output}), within ${TWISTED_PAIR_CHANNEL_M} m for twisted-pair Ethernet (TIA-568 channel).`,
+      ),
+    ];
   }
   const which = over.length === 1 ? `Output ${over[0].output} has a home run` : `${n(over.length)} outputs have home runs`;
   return [

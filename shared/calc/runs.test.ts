@@ -28,9 +28,7 @@ describe('generateRuns on the 12 × 6 wall of 500 mm cabinets', () => {
   });
 
   it('daisy-chains cabinet to cabinet from C1 (left as seen from the audience)', () => {
-    expect(labels(generateRuns(12, 6, 'rows', data)[1])).toBe(
-      'C1·R2 C2·R2 C3·R2 C4·R2 C5·R2 C6·R2 C7·R2 C8·R2 C9·R2 C10·R2 C11·R2 C12·R2',
-    );
+    expect(labels(generateRuns(12, 6, 'rows', data)[1])).toBe('C1·R2 C2·R2 C3·R2 C4·R2 C5·R2 C6·R2 C7·R2 C8·R2 C9·R2 C10·R2 C11·R2 C12·R2');
   });
 
   it('serpentine reaches the fewest outputs the wall plan counts: ceil(72 ÷ 17) = 5', () => {
@@ -60,11 +58,7 @@ describe('generateRuns on the 12 × 6 wall of 500 mm cabinets', () => {
     const limits: RunLimits = { kind: 'power', cabinetMaxPowerW: 150, chainCapacityW: 750 };
     const runs = generateRuns(12, 6, 'rows', limits);
     expect(runs).toHaveLength(18);
-    expect(runs.slice(0, 3).map(labels)).toEqual([
-      'C1·R1 C2·R1 C3·R1 C4·R1',
-      'C5·R1 C6·R1 C7·R1 C8·R1',
-      'C9·R1 C10·R1 C11·R1 C12·R1',
-    ]);
+    expect(runs.slice(0, 3).map(labels)).toEqual(['C1·R1 C2·R1 C3·R1 C4·R1', 'C5·R1 C6·R1 C7·R1 C8·R1', 'C9·R1 C10·R1 C11·R1 C12·R1']);
     expect(runs[0].watts).toBe(600);
   });
 
@@ -86,7 +80,14 @@ describe('validateRuns', () => {
 
   it('names a cell in two runs, and one listed twice in a run', () => {
     const runs: Run[] = [
-      { index: 1, cells: [{ column: 1, row: 1 }, { column: 2, row: 1 }, { column: 1, row: 1 }] },
+      {
+        index: 1,
+        cells: [
+          { column: 1, row: 1 },
+          { column: 2, row: 1 },
+          { column: 1, row: 1 },
+        ],
+      },
       { index: 2, cells: [{ column: 2, row: 1 }] },
     ];
     const messages = validateRuns(2, 1, runs, data).map((p) => p.message);
@@ -95,7 +96,17 @@ describe('validateRuns', () => {
   });
 
   it('names cells that are not next to the one before them', () => {
-    const runs: Run[] = [{ index: 1, cells: [{ column: 1, row: 1 }, { column: 2, row: 2 }, { column: 2, row: 1 }, { column: 1, row: 2 }] }];
+    const runs: Run[] = [
+      {
+        index: 1,
+        cells: [
+          { column: 1, row: 1 },
+          { column: 2, row: 2 },
+          { column: 2, row: 1 },
+          { column: 1, row: 2 },
+        ],
+      },
+    ];
     const problems = validateRuns(2, 2, runs, data);
     expect(problems).toEqual([
       { run: 1, cell: { column: 2, row: 2 }, message: 'Run 1: C2·R2 is not next to C1·R1, the cell before it.' },
@@ -118,7 +129,14 @@ describe('validateRuns', () => {
 
   it('names cells outside the grid, empty runs and runs with the same number', () => {
     const runs: Run[] = [
-      { index: 1, cells: [{ column: 1, row: 1 }, { column: 2, row: 1 }, { column: 3, row: 1 }] },
+      {
+        index: 1,
+        cells: [
+          { column: 1, row: 1 },
+          { column: 2, row: 1 },
+          { column: 3, row: 1 },
+        ],
+      },
       { index: 1, cells: [] },
     ];
     expect(validateRuns(2, 1, runs, data)).toEqual([

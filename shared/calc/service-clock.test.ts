@@ -70,7 +70,13 @@ describe('dueAt, business hours', () => {
 describe('dueAt, round the clock', () => {
   it('adds elapsed hours, whatever the local clock does', () => {
     // Saturday 7 March 2026, 12:00 CST (18:00Z) + 24 h = Sunday 18:00Z, which reads 13:00 CDT.
-    const at = dueAt({ start: new Date('2026-03-07T12:00:00-06:00'), hours: 24, mode: 'round_the_clock', timeZone: chicago, calendar: weekdays });
+    const at = dueAt({
+      start: new Date('2026-03-07T12:00:00-06:00'),
+      hours: 24,
+      mode: 'round_the_clock',
+      timeZone: chicago,
+      calendar: weekdays,
+    });
     expect(at.toISOString()).toBe('2026-03-08T18:00:00.000Z');
   });
 });
@@ -118,8 +124,12 @@ describe('businessMsBetween', () => {
 
   it('refuses a calendar whose day does not close after it opens', () => {
     const a = new Date('2026-03-07T12:00:00Z');
-    expect(() => businessMsBetween(a, new Date('2026-03-09T12:00:00Z'), chicago, { days: [1], start: '18:00', end: '08:00' })).toThrow(RangeError);
-    expect(() => businessMsBetween(a, new Date('2026-03-09T12:00:00Z'), chicago, { days: [], start: '08:00', end: '18:00' })).toThrow(RangeError);
+    expect(() => businessMsBetween(a, new Date('2026-03-09T12:00:00Z'), chicago, { days: [1], start: '18:00', end: '08:00' })).toThrow(
+      RangeError,
+    );
+    expect(() => businessMsBetween(a, new Date('2026-03-09T12:00:00Z'), chicago, { days: [], start: '08:00', end: '18:00' })).toThrow(
+      RangeError,
+    );
   });
 });
 

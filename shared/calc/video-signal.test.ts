@@ -41,12 +41,30 @@ describe('fitInput', () => {
   });
 
   it('fills a 3840 × 2160 wall with HD at scale 2 and UHD at scale 1, without bars', () => {
-    expect(fitInput(INPUT_FORMATS.hd, { width: 3840, height: 2160 })).toEqual({ scaleX: 2, scaleY: 2, scaledWidth: 3840, scaledHeight: 2160, bars: 'none' });
-    expect(fitInput(INPUT_FORMATS.uhd, { width: 3840, height: 2160 })).toEqual({ scaleX: 1, scaleY: 1, scaledWidth: 3840, scaledHeight: 2160, bars: 'none' });
+    expect(fitInput(INPUT_FORMATS.hd, { width: 3840, height: 2160 })).toEqual({
+      scaleX: 2,
+      scaleY: 2,
+      scaledWidth: 3840,
+      scaledHeight: 2160,
+      bars: 'none',
+    });
+    expect(fitInput(INPUT_FORMATS.uhd, { width: 3840, height: 2160 })).toEqual({
+      scaleX: 1,
+      scaleY: 1,
+      scaledWidth: 3840,
+      scaledHeight: 2160,
+      bars: 'none',
+    });
   });
 
   it('letterboxes HD on a square wall: 1920 × 1920 → 1920 × 1080, bars top and bottom', () => {
-    expect(fitInput(INPUT_FORMATS.hd, { width: 1920, height: 1920 })).toEqual({ scaleX: 1, scaleY: 1, scaledWidth: 1920, scaledHeight: 1080, bars: 'top-bottom' });
+    expect(fitInput(INPUT_FORMATS.hd, { width: 1920, height: 1920 })).toEqual({
+      scaleX: 1,
+      scaleY: 1,
+      scaledWidth: 1920,
+      scaledHeight: 1080,
+      bars: 'top-bottom',
+    });
   });
 
   it('counts a leftover of a whole pixel as bars, and less than that as none', () => {

@@ -4,7 +4,15 @@ import { nearestGrids, planWall, type CabinetSpec } from './wall-plan.js';
 
 // An invented 500 × 500 mm indoor cabinet: 192 × 192 pixels (2.604 mm pitch), 150 W maximum,
 // 50 W typical, 8 kg.
-const cabinet: CabinetSpec = { widthMm: 500, heightMm: 500, pixelsWide: 192, pixelsHigh: 192, maxPowerW: 150, typicalPowerW: 50, weightKg: 8 };
+const cabinet: CabinetSpec = {
+  widthMm: 500,
+  heightMm: 500,
+  pixelsWide: 192,
+  pixelsHigh: 192,
+  maxPowerW: 150,
+  typicalPowerW: 50,
+  weightKg: 8,
+};
 const us20A: Supply = { voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8, powerFactor: 1 };
 
 describe('planWall: 12 × 6 of 500 mm cabinets', () => {
@@ -89,7 +97,14 @@ describe('planWall: 12 × 6 of 500 mm cabinets', () => {
   });
 
   it('fits a given UHD input (SMPTE ST 2036-1) at scale 1152/2160', () => {
-    const uhd = planWall({ cabinet, columns: 12, rows: 6, supply: us20A, outputCapacityPixels: 650_000, input: { width: 3840, height: 2160 } });
+    const uhd = planWall({
+      cabinet,
+      columns: 12,
+      rows: 6,
+      supply: us20A,
+      outputCapacityPixels: 650_000,
+      input: { width: 3840, height: 2160 },
+    });
     expect(uhd.inputFit.scaleY).toBeCloseTo(1152 / 2160, 12);
     expect(uhd.inputFit.scaledWidth).toBe(2048);
   });
@@ -124,7 +139,11 @@ describe('planWall: supplies', () => {
   });
 
   it('balances an odd count of whole circuits as well as whole circuits allow: 7 rows at 400 V → A gets three', () => {
-    const plan = planWall({ ...base, rows: 7, supply: { voltage: 400, phases: 3, breakerAmps: 16, continuousFactor: 0.8, powerFactor: 1 } });
+    const plan = planWall({
+      ...base,
+      rows: 7,
+      supply: { voltage: 400, phases: 3, breakerAmps: 16, continuousFactor: 0.8, powerFactor: 1 },
+    });
     expect(plan.circuits.map((c) => c.phase)).toEqual(['A', 'B', 'C', 'A', 'B', 'C', 'A']);
     const [a, b, c] = plan.phaseCurrentsA!;
     expect(a).toBeCloseTo(1.5 * b, 9);
@@ -132,7 +151,11 @@ describe('planWall: supplies', () => {
   });
 
   it('with the default power factor of 0.95, 120 V 20 A carries 1,824 W; a row of 12 × 180 W = 2,160 W takes two circuits', () => {
-    const plan = planWall({ ...base, cabinet: { ...cabinet, maxPowerW: 180 }, supply: { voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8 } });
+    const plan = planWall({
+      ...base,
+      cabinet: { ...cabinet, maxPowerW: 180 },
+      supply: { voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8 },
+    });
     expect(plan.powerFactor).toBe(0.95);
     expect(plan.powerFactorSource).toBe('default');
     expect(plan.circuitCapacityW).toBeCloseTo(1824, 9);
@@ -163,7 +186,9 @@ describe('planWall: supplies', () => {
 
   it('refuses a supply outside the cabinet’s input range, and a cabinet alone over the circuit or the output', () => {
     expect(() => planWall({ ...base, supply: { ...us20A, voltage: 480 } })).toThrow(/outside the cabinet's 100 V–240 V input range/);
-    expect(() => planWall({ cabinet: { ...cabinet, maxPowerW: 2000 }, columns: 1, rows: 1, supply: us20A, outputCapacityPixels: 650_000 })).toThrow(RangeError);
+    expect(() =>
+      planWall({ cabinet: { ...cabinet, maxPowerW: 2000 }, columns: 1, rows: 1, supply: us20A, outputCapacityPixels: 650_000 }),
+    ).toThrow(RangeError);
     expect(() => planWall({ cabinet, columns: 1, rows: 1, supply: us20A, outputCapacityPixels: 30_000 })).toThrow(RangeError);
   });
 

@@ -159,7 +159,11 @@ const ends = (run: Run) => ({ from: cellLabel(run.cells[0]), to: cellLabel(run.c
 
 /** The branch circuits: the power runs of the chosen pattern, each on its phase. */
 function planCircuits(plan: WallPlanInput, pattern: RunPattern, limit: ChainLimit) {
-  const runs = generateRuns(plan.columns, plan.rows, pattern, { kind: 'power', cabinetMaxPowerW: plan.cabinet.maxPowerW, chainCapacityW: limit.chainLimitW });
+  const runs = generateRuns(plan.columns, plan.rows, pattern, {
+    kind: 'power',
+    cabinetMaxPowerW: plan.cabinet.maxPowerW,
+    chainCapacityW: limit.chainLimitW,
+  });
   const amps = runs.map((r) => branchCurrentA(limit, r.cells.length * plan.cabinet.maxPowerW));
   const { phases, phaseCurrentsA } = assignPhases(amps, limit.branch.kind);
   const circuits: PlanCircuit[] = runs.map((r, i) => ({
@@ -250,7 +254,11 @@ export function planWall(plan: WallPlanInput): WallPlan {
     outputs,
     receivingCards: measured.cabinetCount * cards,
     pixelsPerReceivingCard: (cabinet.pixelsWide * cabinet.pixelsHigh) / cards,
-    inputFit: fitInput(input, { width: measured.pixelsWide, height: measured.pixelsHigh }, { xMm: measured.pixelPitchMm, yMm: measured.pixelPitchVerticalMm }),
+    inputFit: fitInput(
+      input,
+      { width: measured.pixelsWide, height: measured.pixelsHigh },
+      { xMm: measured.pixelPitchMm, yMm: measured.pixelPitchVerticalMm },
+    ),
   };
   return { ...result, checks: planChecks(plan, result) };
 }
@@ -258,9 +266,28 @@ export function planWall(plan: WallPlanInput): WallPlan {
 /** What a wall is by its grid alone: size, pixels, total power and heat, weight, viewing distances. */
 export type WallMeasures = Pick<
   WallPlan,
-  | 'cabinetCount' | 'widthMm' | 'heightMm' | 'widthFt' | 'heightFt' | 'widthFeetInches' | 'heightFeetInches' | 'areaM2'
-  | 'pixelsWide' | 'pixelsHigh' | 'totalPixels' | 'pixelPitchMm' | 'pixelPitchVerticalMm' | 'pixelsPerM2' | 'aspectRatio'
-  | 'maxPowerW' | 'typicalPowerW' | 'heatBtuPerHour' | 'weightKg' | 'weightLb' | 'minViewingDistanceM' | 'acuityDistanceM'
+  | 'cabinetCount'
+  | 'widthMm'
+  | 'heightMm'
+  | 'widthFt'
+  | 'heightFt'
+  | 'widthFeetInches'
+  | 'heightFeetInches'
+  | 'areaM2'
+  | 'pixelsWide'
+  | 'pixelsHigh'
+  | 'totalPixels'
+  | 'pixelPitchMm'
+  | 'pixelPitchVerticalMm'
+  | 'pixelsPerM2'
+  | 'aspectRatio'
+  | 'maxPowerW'
+  | 'typicalPowerW'
+  | 'heatBtuPerHour'
+  | 'weightKg'
+  | 'weightLb'
+  | 'minViewingDistanceM'
+  | 'acuityDistanceM'
 >;
 
 /**
@@ -333,7 +360,11 @@ function wholeCounts(targetMm: number, cabinetMm: number): number[] {
  * of target ÷ cabinet size (up to four), closest first (by `errorMm`, then fewer cabinets).
  * 20 ft × 10 ft (6,096 × 3,048 mm) of 500 mm cabinets → 12 × 6 first.
  */
-export function nearestGrids(cabinet: Pick<CabinetSpec, 'widthMm' | 'heightMm'>, targetWidthMm: number, targetHeightMm: number): GridOption[] {
+export function nearestGrids(
+  cabinet: Pick<CabinetSpec, 'widthMm' | 'heightMm'>,
+  targetWidthMm: number,
+  targetHeightMm: number,
+): GridOption[] {
   if (!(cabinet.widthMm > 0 && cabinet.heightMm > 0 && targetWidthMm > 0 && targetHeightMm > 0)) {
     throw new RangeError('Cabinet and target sizes must be positive.');
   }

@@ -59,9 +59,8 @@ export const paths = {
   /** Every cabinet, with list filters; `?batch=` is the list of a batch recall. */
   cabinets: {
     path: '/cabinets',
-    getHref: (
-      filters: { serial?: string; clientId?: string; siteId?: string; status?: string; batch?: string; modelId?: string } = {},
-    ) => withParams('/cabinets', filters),
+    getHref: (filters: { serial?: string; clientId?: string; siteId?: string; status?: string; batch?: string; modelId?: string } = {}) =>
+      withParams('/cabinets', filters),
   },
   /** A printable sheet of QR labels, one per cabinet of the wall. */
   wallLabels: { path: '/walls/:id/labels', getHref: (id: string) => `/walls/${encodeURIComponent(id)}/labels` },
@@ -98,8 +97,7 @@ export const paths = {
     },
     audit: {
       path: '/admin/audit',
-      getHref: (filters: { entity?: string; entityId?: string; actorId?: string } = {}) =>
-        withParams('/admin/audit', filters),
+      getHref: (filters: { entity?: string; entityId?: string; actorId?: string } = {}) => withParams('/admin/audit', filters),
     },
     mailbox: { path: '/admin/mailbox', getHref: () => '/admin/mailbox' },
   },

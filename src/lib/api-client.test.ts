@@ -13,7 +13,12 @@ describe('readResponse', () => {
 
   it("turns the server's error body into an ApiError with its code, fields, details and request id", () => {
     const body = JSON.stringify({
-      error: { code: 'validation_failed', message: 'Some rows are not valid.', fields: { serial: 'Required.' }, details: { errors: [{ line: 3 }] } },
+      error: {
+        code: 'validation_failed',
+        message: 'Some rows are not valid.',
+        fields: { serial: 'Required.' },
+        details: { errors: [{ line: 3 }] },
+      },
     });
     let caught: unknown;
     try {

@@ -4,7 +4,9 @@ import { format, formatDistanceToNowStrict, isValid, parseISO } from 'date-fns';
 /** "CST", "EDT" or "GMT+2": the short name of a time zone at a moment. */
 export function zoneAbbreviation(date: Date, timeZone: string): string {
   try {
-    const part = new Intl.DateTimeFormat('en-US', { timeZone, timeZoneName: 'short' }).formatToParts(date).find((p) => p.type === 'timeZoneName');
+    const part = new Intl.DateTimeFormat('en-US', { timeZone, timeZoneName: 'short' })
+      .formatToParts(date)
+      .find((p) => p.type === 'timeZoneName');
     return part?.value ?? timeZone;
   } catch {
     return timeZone;

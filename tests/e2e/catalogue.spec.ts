@@ -19,7 +19,20 @@ test('a cabinet model renamed in the catalogue shows in the planner without a re
   const name = `Test cabinet ${stamp}`;
   const created = await page.request.post('/api/cabinet-models', {
     headers: { 'X-Requested-With': 'gridkeep' },
-    data: { name, widthMm: 500, heightMm: 500, pixelPitchMm: 2.604, pixelsWide: 192, pixelsHigh: 192, modulesWide: 2, modulesHigh: 2, maxPowerW: 180, typicalPowerW: 60, weightKg: 7.5, brightnessNits: 1000 },
+    data: {
+      name,
+      widthMm: 500,
+      heightMm: 500,
+      pixelPitchMm: 2.604,
+      pixelsWide: 192,
+      pixelsHigh: 192,
+      modulesWide: 2,
+      modulesHigh: 2,
+      maxPowerW: 180,
+      typicalPowerW: 60,
+      weightKg: 7.5,
+      brightnessNits: 1000,
+    },
   });
   expect(created.status()).toBe(201);
 

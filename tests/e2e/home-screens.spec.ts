@@ -27,7 +27,9 @@ interface Wall {
   openTicketCount: number;
 }
 
-test('a client sees their walls by site with open tickets, their open tickets, and reports a fault from the overview', async ({ browser }, testInfo) => {
+test('a client sees their walls by site with open tickets, their open tickets, and reports a fault from the overview', async ({
+  browser,
+}, testInfo) => {
   // A client user of the demo data whose organisation has walls, found as the admin.
   const admin = await signIn(browser, 'admin@gridkeep.test', desktop);
   const users = (await (await admin.page.request.get('/api/users?role=client&limit=100')).json()) as {
@@ -51,7 +53,11 @@ test('a client sees their walls by site with open tickets, their open tickets, a
     await expect(row).toHaveCount(1);
     await expect(row).toHaveAttribute('href', `/walls/${wall.id}`);
     await expect(row).toContainText(
-      wall.openTicketCount === 0 ? 'No open tickets' : wall.openTicketCount === 1 ? '1 open ticket' : `${wall.openTicketCount} open tickets`,
+      wall.openTicketCount === 0
+        ? 'No open tickets'
+        : wall.openTicketCount === 1
+          ? '1 open ticket'
+          : `${wall.openTicketCount} open tickets`,
     );
   }
 

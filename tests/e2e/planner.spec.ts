@@ -72,7 +72,11 @@ for (const viewport of [
     await expect(figures.locator('[data-figure="size"]')).toContainText('6.00 m × 3.00 m');
     // 6,000 mm ÷ 25.4 = 236.22 in = 19' 8-1/4" to the nearest eighth (1 in = 25.4 mm, NIST Handbook 44).
     await expect(figures.locator('[data-figure="size"]')).toContainText(`19' 8-1/4"`);
-    await expect(page.getByText('circuits and connections are designed and signed off by a licensed electrician under the local code', { exact: false }).first()).toBeVisible();
+    await expect(
+      page
+        .getByText('circuits and connections are designed and signed off by a licensed electrician under the local code', { exact: false })
+        .first(),
+    ).toBeVisible();
     await page.screenshot({ path: testInfo.outputPath(`planner-${viewport.name}.png`), fullPage: true });
 
     // 20 ft × 10 ft = 6,096 × 3,048 mm: 12.19 × 6.10 cabinets of 500 mm, so 12 × 6 comes closest.
@@ -126,7 +130,9 @@ for (const viewport of [
   });
 }
 
-test('plans the power of a three-phase supply, refuses a supply the cabinet cannot take, and refuses a chain over its limit', async ({ page }, testInfo) => {
+test('plans the power of a three-phase supply, refuses a supply the cabinet cannot take, and refuses a chain over its limit', async ({
+  page,
+}, testInfo) => {
   test.setTimeout(120_000);
   const errors: string[] = [];
   page.on('pageerror', (err) => errors.push(err.message));
@@ -164,7 +170,10 @@ test('plans the power of a three-phase supply, refuses a supply the cabinet cann
 
   // The wall as built: 208 V three-phase, one data line and one power chain per row (12 cabinets
   // of 180 W = 2,160 W, exactly the maker's 12 per chain).
-  const rowRuns = Array.from({ length: 6 }, (_, r) => ({ index: r + 1, cells: Array.from({ length: 12 }, (_, c) => ({ column: c + 1, row: r + 1 })) }));
+  const rowRuns = Array.from({ length: 6 }, (_, r) => ({
+    index: r + 1,
+    cells: Array.from({ length: 12 }, (_, c) => ({ column: c + 1, row: r + 1 })),
+  }));
   const saved = await page.request.put(`/api/walls/${wall.id}/plan`, {
     headers: { 'X-Requested-With': 'gridkeep' },
     data: {

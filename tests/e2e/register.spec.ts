@@ -35,7 +35,9 @@ async function leftEdge(locator: Locator) {
 }
 
 test.describe('wall map', () => {
-  test('opens from the walls list; the rear view mirrors the cells and keeps their labels; a cell opens its cabinet card', async ({ page }) => {
+  test('opens from the walls list; the rear view mirrors the cells and keeps their labels; a cell opens its cabinet card', async ({
+    page,
+  }) => {
     await signIn(page);
     await page.goto('/walls');
     await page.getByRole('link', { name: 'Main hall centre wall' }).click();
@@ -113,7 +115,8 @@ test.describe('cabinets list', () => {
     return { batch, serials };
   }
 
-  const rowSerials = async (page: Page) => (await page.locator('table tbody tr td:first-child').allInnerTexts()).map((s) => s.trim()).sort();
+  const rowSerials = async (page: Page) =>
+    (await page.locator('table tbody tr td:first-child').allInnerTexts()).map((s) => s.trim()).sort();
 
   test('the office finds every cabinet of a batch (a recall) and opens one from its serial', async ({ page }, testInfo) => {
     await signIn(page);

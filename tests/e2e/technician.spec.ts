@@ -40,13 +40,16 @@ async function demoCabinet(page: Page): Promise<Cabinet> {
 test('a technician on a phone sees their open tickets, and opens a cabinet by typing its serial', async ({ browser }, testInfo) => {
   const page = await signInOnPhone(browser);
   const shot = async (name: string) =>
-    testInfo.attach(name, { body: await page.screenshot({ fullPage: true, path: testInfo.outputPath(`${name}.png`) }), contentType: 'image/png' });
+    testInfo.attach(name, {
+      body: await page.screenshot({ fullPage: true, path: testInfo.outputPath(`${name}.png`) }),
+      contentType: 'image/png',
+    });
 
   // ---- start page: "My tickets" holds the open tickets assigned to them, the soonest due first ----
   await expect(page.getByRole('heading', { name: 'My tickets' })).toBeVisible();
-  const mine = (await (
-    await page.request.get('/api/tickets?assigneeId=me&open=true&sort=resolutionDueAt&dir=asc&limit=25')
-  ).json()) as { items: { id: string; ref: string; title: string }[] };
+  const mine = (await (await page.request.get('/api/tickets?assigneeId=me&open=true&sort=resolutionDueAt&dir=asc&limit=25')).json()) as {
+    items: { id: string; ref: string; title: string }[];
+  };
   const cards = page.getByRole('list', { name: 'Open tickets assigned to you' }).getByRole('listitem');
   if (mine.items.length > 0) {
     await expect(cards).toHaveCount(mine.items.length);

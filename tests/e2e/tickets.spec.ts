@@ -39,7 +39,10 @@ test('a client opens a ticket with a photo and tapped cells; the office replies;
   test.setTimeout(180_000);
   // Phone pages scroll as a whole (full page); the office shell keeps its bars in place (the screen as seen).
   const shot = async (page: Page, name: string, fullPage = true) =>
-    testInfo.attach(name, { body: await page.screenshot({ fullPage, path: testInfo.outputPath(`${name}.png`) }), contentType: 'image/png' });
+    testInfo.attach(name, {
+      body: await page.screenshot({ fullPage, path: testInfo.outputPath(`${name}.png`) }),
+      contentType: 'image/png',
+    });
 
   // ---- a client user of the demo data, found as the admin ----
   const adminSession = await signIn(browser, admin);

@@ -44,10 +44,18 @@ export async function createOrganisation(
   options: { withWall?: boolean; timeZone?: string; model?: Partial<typeof cabinetModels.$inferInsert> } = {},
 ) {
   const plan = await createServicePlan();
-  const [client] = await db().insert(clients).values({ name: unique('Client'), servicePlanId: plan.id, notes: 'internal note' }).returning();
+  const [client] = await db()
+    .insert(clients)
+    .values({ name: unique('Client'), servicePlanId: plan.id, notes: 'internal note' })
+    .returning();
   const [site] = await db()
     .insert(sites)
-    .values({ clientId: client.id, name: unique('Site'), timeZone: options.timeZone ?? 'America/Chicago', internalNotes: 'internal site note' })
+    .values({
+      clientId: client.id,
+      name: unique('Site'),
+      timeZone: options.timeZone ?? 'America/Chicago',
+      internalNotes: 'internal site note',
+    })
     .returning();
   let wall: typeof walls.$inferSelect | undefined;
   if (options.withWall) {

@@ -51,14 +51,20 @@ describe('sign-in', () => {
 
   it('normalises the e-mail address (case and spaces)', async () => {
     const user = await createUser({ role: 'coordinator' });
-    const res = await anonymous().post('/api/auth/login').set(csrf).send({ email: `  ${user.email.toUpperCase()} `, password: TEST_PASSWORD });
+    const res = await anonymous()
+      .post('/api/auth/login')
+      .set(csrf)
+      .send({ email: `  ${user.email.toUpperCase()} `, password: TEST_PASSWORD });
     expect(res.status).toBe(200);
   });
 
   it('says the same thing for a wrong password and an unknown address', async () => {
     const user = await createUser({ role: 'technician' });
     const wrong = await anonymous().post('/api/auth/login').set(csrf).send({ email: user.email, password: 'not the password' });
-    const unknown = await anonymous().post('/api/auth/login').set(csrf).send({ email: `${unique('nobody')}@example.test`, password: 'whatever1' });
+    const unknown = await anonymous()
+      .post('/api/auth/login')
+      .set(csrf)
+      .send({ email: `${unique('nobody')}@example.test`, password: 'whatever1' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body).toEqual(unknown.body);
@@ -114,7 +120,8 @@ describe('session tokens (RFC 8725)', () => {
   it('stops working after sign-out', async () => {
     const session = await signedIn('coordinator');
     expect((await session.get('/api/auth/me')).status).toBe(200);
-    const stolen = (await session.agent.jar.getCookie('gridkeep_session', { path: '/', domain: '127.0.0.1', secure: false, script: false }))?.value;
+    const stolen = (await session.agent.jar.getCookie('gridkeep_session', { path: '/', domain: '127.0.0.1', secure: false, script: false }))
+      ?.value;
     expect((await session.post('/api/auth/logout')).status).toBe(204);
     expect((await session.get('/api/auth/me')).status).toBe(401);
     if (stolen) {
@@ -188,7 +195,10 @@ describe('throttling', () => {
   it('slows an account down after repeated failures, with a Retry-After', async () => {
     const user = await createUser({ role: 'technician' });
     for (let i = 0; i < throttlePolicy.account.freeFailures; i++) {
-      const res = await anonymous().post('/api/auth/login').set(csrf).send({ email: user.email, password: `wrong-${i}-guess` });
+      const res = await anonymous()
+        .post('/api/auth/login')
+        .set(csrf)
+        .send({ email: user.email, password: `wrong-${i}-guess` });
       expect(res.status).toBe(401);
     }
     // Even the right password waits now: the delay, not the password, answers.
@@ -202,7 +212,10 @@ describe('throttling', () => {
   it('lets the account in again once the delay has passed', async () => {
     const user = await createUser({ role: 'technician' });
     for (let i = 0; i < throttlePolicy.account.freeFailures; i++) {
-      await anonymous().post('/api/auth/login').set(csrf).send({ email: user.email, password: `wrong-${i}-guess` });
+      await anonymous()
+        .post('/api/auth/login')
+        .set(csrf)
+        .send({ email: user.email, password: `wrong-${i}-guess` });
     }
     // Move the failures back in time past the delay rather than waiting for it.
     await db()
@@ -227,10 +240,14 @@ describe('throttling', () => {
     await db().delete(signInAttempts).where(eq(signInAttempts.ip, ip));
     await db()
       .insert(signInAttempts)
-      .values(Array.from({ length: throttlePolicy.address.freeFailures }, (_, i) => ({ email: `spray${i}@example.test`, ip, succeeded: false })));
+      .values(
+        Array.from({ length: throttlePolicy.address.freeFailures }, (_, i) => ({ email: `spray${i}@example.test`, ip, succeeded: false })),
+      );
     expect(await retryAfterSeconds(`${unique('fresh')}@example.test`, ip)).toBeGreaterThan(0);
     const user = await createUser({ role: 'coordinator' });
-    await expect(signInService({ email: user.email, password: TEST_PASSWORD }, { ip, userAgent: 'test' })).rejects.toMatchObject({ status: 429 });
+    await expect(signInService({ email: user.email, password: TEST_PASSWORD }, { ip, userAgent: 'test' })).rejects.toMatchObject({
+      status: 429,
+    });
     await db().delete(signInAttempts).where(eq(signInAttempts.ip, ip));
   });
 });
@@ -261,7 +278,10 @@ describe('invite and reset links', () => {
     const email = `${unique('late')}@example.test`;
     const created = await admin.post('/api/users', { email, name: 'Late Tech', role: 'technician' });
     const token = await linkFromLatestMail(email);
-    await db().update(authTokens).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(authTokens.userId, created.body.id));
+    await db()
+      .update(authTokens)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(authTokens.userId, created.body.id));
     expect((await anonymous().get(`/api/auth/tokens/${token}`)).status).toBe(404);
     const res = await anonymous().post('/api/auth/redeem').set(csrf).send({ token, password: 'my own long passphrase' });
     expect(res.status).toBe(404);
@@ -271,7 +291,10 @@ describe('invite and reset links', () => {
     const user = await createUser({ role: 'technician' });
     const session = await signIn(user);
     const known = await anonymous().post('/api/auth/forgot').set(csrf).send({ email: user.email });
-    const unknown = await anonymous().post('/api/auth/forgot').set(csrf).send({ email: `${unique('ghost')}@example.test` });
+    const unknown = await anonymous()
+      .post('/api/auth/forgot')
+      .set(csrf)
+      .send({ email: `${unique('ghost')}@example.test` });
     expect(known.status).toBe(202);
     expect(unknown.status).toBe(202);
     expect(known.body).toEqual(unknown.body);

@@ -58,7 +58,15 @@ describe('POST /api/calc/wall-plan', () => {
     expect(res.body.circuitCapacityW).toBeCloseTo(1824, 6);
     expect(res.body.chainLimitW).toBeCloseTo(1824, 6);
     expect(res.body.maxCurrentA).toBeCloseTo(94.74, 2);
-    expect(res.body.circuits[0]).toEqual({ circuit: 1, phase: null, cabinets: 12, watts: 1800, amps: expect.closeTo(15.79, 2), from: 'C1·R1', to: 'C12·R1' });
+    expect(res.body.circuits[0]).toEqual({
+      circuit: 1,
+      phase: null,
+      cabinets: 12,
+      watts: 1800,
+      amps: expect.closeTo(15.79, 2),
+      from: 'C1·R1',
+      to: 'C12·R1',
+    });
     expect(res.body.checks.find((c: { code: string }) => c.code === 'continuous_load').message).toContain('NEC 210.19(A), 210.20(A)');
     // 1 W = 3.412142 BTU/h (NIST SP 811).
     expect(res.body.heatBtuPerHour).toBeCloseTo(36_851.13, 2);
@@ -104,7 +112,11 @@ describe('POST /api/calc/wall-plan: supplies, chains and phases', () => {
   const big = { ...cabinet, maxPowerW: 1000, typicalPowerW: 300, inputVoltageMinV: 100, inputVoltageMaxV: 240 };
 
   it('gives a chain on 208 V three-phase one 208 V line-to-line circuit: 3 × 1,000 W at 20 A, not 5', async () => {
-    const res = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: big, supply: { voltage: 208, phases: 3, breakerAmps: 20, powerFactor: 1 } });
+    const res = await tech.post('/api/calc/wall-plan', {
+      ...wallPlan,
+      cabinet: big,
+      supply: { voltage: 208, phases: 3, breakerAmps: 20, powerFactor: 1 },
+    });
     expect(res.status).toBe(200);
     // 208 V × 20 A × 0.8 = 3,328 W (NEC 210.19(A)(1), 210.20(A)): three whole 1,000 W cabinets.
     expect(res.body).toMatchObject({ branchKind: 'line-to-line', branchVoltageV: 208, cabinetsPerCircuit: 3 });
@@ -134,26 +146,46 @@ describe('POST /api/calc/wall-plan: supplies, chains and phases', () => {
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields)).toEqual(['supply.voltage']);
     expect(res.body.error.fields['supply.voltage']).toContain("outside the cabinet's 100 V–240 V input range");
-    const three = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: big, supply: { voltage: 480, phases: 3, breakerAmps: 20 } });
+    const three = await tech.post('/api/calc/wall-plan', {
+      ...wallPlan,
+      cabinet: big,
+      supply: { voltage: 480, phases: 3, breakerAmps: 20 },
+    });
     expect(three.body.error.fields['supply.voltage']).toContain('277.1 V line-to-neutral');
   });
 
   it('holds a chain to the connector rating and the maker’s count', async () => {
     const supply = { voltage: 230, phases: 1, breakerAmps: 32, powerFactor: 1 };
-    const connector = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, maxPowerW: 340, passThroughAmps: 16 }, supply });
+    const connector = await tech.post('/api/calc/wall-plan', {
+      ...wallPlan,
+      cabinet: { ...cabinet, maxPowerW: 340, passThroughAmps: 16 },
+      supply,
+    });
     expect(connector.status).toBe(200);
     // 230 V × 16 A = 3,680 W through the connector, under the 32 A circuit's 5,888 W: 10 cabinets of 340 W.
     expect(connector.body).toMatchObject({ chainLimitedBy: 'connector', cabinetsPerCircuit: 10 });
     expect(connector.body.chainLimitW).toBeCloseTo(3680, 6);
-    const maker = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, maxPowerW: 340, passThroughAmps: 16, maxPerChain: 8 }, supply });
+    const maker = await tech.post('/api/calc/wall-plan', {
+      ...wallPlan,
+      cabinet: { ...cabinet, maxPowerW: 340, passThroughAmps: 16, maxPerChain: 8 },
+      supply,
+    });
     expect(maker.body).toMatchObject({ chainLimitedBy: 'maker', chainLimitW: 2720, cabinetsPerCircuit: 8 });
-    const tooSmall = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, passThroughAmps: 0.5 }, supply: { voltage: 120, phases: 1, breakerAmps: 20 } });
+    const tooSmall = await tech.post('/api/calc/wall-plan', {
+      ...wallPlan,
+      cabinet: { ...cabinet, passThroughAmps: 0.5 },
+      supply: { voltage: 120, phases: 1, breakerAmps: 20 },
+    });
     expect(tooSmall.status).toBe(400);
     expect(tooSmall.body.error.fields).toHaveProperty(['cabinet.passThroughAmps']);
   });
 
   it('takes the power factor from the datasheet’s volt-amperes and says so', async () => {
-    const res = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, maxPowerVA: 160 }, supply: { voltage: 120, phases: 1, breakerAmps: 20 } });
+    const res = await tech.post('/api/calc/wall-plan', {
+      ...wallPlan,
+      cabinet: { ...cabinet, maxPowerVA: 160 },
+      supply: { voltage: 120, phases: 1, breakerAmps: 20 },
+    });
     expect(res.body.powerFactorSource).toBe('datasheet');
     expect(res.body.powerFactor).toBeCloseTo(150 / 160, 9);
     const bad = await tech.post('/api/calc/wall-plan', { ...wallPlan, cabinet: { ...cabinet, maxPowerVA: 100 } });
@@ -169,7 +201,13 @@ describe('POST /api/calc/wall-plan: supplies, chains and phases', () => {
     });
     expect(res.status).toBe(200);
     const status = Object.fromEntries(res.body.checks.map((c: { code: string; status: string }) => [c.code, c.status]));
-    expect(status).toMatchObject({ processor_outputs: 'fail', processor_pixels: 'fail', receiving_card: 'fail', data_cable_length: 'fail', inrush: 'note' });
+    expect(status).toMatchObject({
+      processor_outputs: 'fail',
+      processor_pixels: 'fail',
+      receiving_card: 'fail',
+      data_cable_length: 'fail',
+      inrush: 'note',
+    });
   });
 });
 
@@ -183,7 +221,14 @@ describe('POST /api/calc/runs', () => {
   });
 
   it('lays power runs in a serpentine within the chain capacity', async () => {
-    const res = await tech.post('/api/calc/runs', { columns: 12, rows: 6, kind: 'power', pattern: 'serpentine', cabinetMaxPowerW: 150, chainCapacityW: 1000 });
+    const res = await tech.post('/api/calc/runs', {
+      columns: 12,
+      rows: 6,
+      kind: 'power',
+      pattern: 'serpentine',
+      cabinetMaxPowerW: 150,
+      chainCapacityW: 1000,
+    });
     expect(res.status).toBe(200);
     // 6 cabinets of 150 W per 1,000 W chain: ceil(72 ÷ 6) = 12 runs of 900 W.
     expect(res.body.runs).toHaveLength(12);
@@ -196,7 +241,14 @@ describe('POST /api/calc/runs', () => {
     expect(pattern.body.error.fields).toHaveProperty('pattern');
     const missing = await tech.post('/api/calc/runs', { columns: 12, rows: 6, kind: 'power', pattern: 'rows', cabinetMaxPowerW: 150 });
     expect(missing.body.error.fields).toHaveProperty('chainCapacityW');
-    const over = await tech.post('/api/calc/runs', { columns: 12, rows: 6, kind: 'power', pattern: 'rows', cabinetMaxPowerW: 150, chainCapacityW: 100 });
+    const over = await tech.post('/api/calc/runs', {
+      columns: 12,
+      rows: 6,
+      kind: 'power',
+      pattern: 'rows',
+      cabinetMaxPowerW: 150,
+      chainCapacityW: 100,
+    });
     expect(over.status).toBe(400);
     expect(over.body.error.fields).toEqual({ chainCapacityW: expect.stringContaining('over the chain capacity') });
     const data = await tech.post('/api/calc/runs', { columns: 12, rows: 6, kind: 'data', pattern: 'rows', cabinetPixels: 700_000 });
@@ -218,8 +270,20 @@ describe('POST /api/calc/runs/validate', () => {
       kind: 'data',
       cabinetPixels: 36_864,
       runs: [
-        { index: 1, cells: [{ column: 1, row: 1 }, { column: 2, row: 2 }] },
-        { index: 2, cells: [{ column: 2, row: 2 }, { column: 3, row: 2 }] },
+        {
+          index: 1,
+          cells: [
+            { column: 1, row: 1 },
+            { column: 2, row: 2 },
+          ],
+        },
+        {
+          index: 2,
+          cells: [
+            { column: 2, row: 2 },
+            { column: 3, row: 2 },
+          ],
+        },
       ],
     });
     expect(res.status).toBe(200);
@@ -261,13 +325,25 @@ describe('POST /api/calc/due', () => {
   it('counts business hours across a weekend and the spring-forward change in the site’s zone', async () => {
     // Friday 6 March 2026 16:00 CST: 2 h on Friday, then Monday 9 March from 08:00 CDT (13:00Z)
     // for 2 h → 10:00 CDT = 15:00Z (US daylight saving starts Sunday 8 March 2026).
-    const res = await tech.post('/api/calc/due', { start: '2026-03-06T16:00:00-06:00', hours: 4, mode: 'business', timeZone: 'America/Chicago', calendar: weekdays });
+    const res = await tech.post('/api/calc/due', {
+      start: '2026-03-06T16:00:00-06:00',
+      hours: 4,
+      mode: 'business',
+      timeZone: 'America/Chicago',
+      calendar: weekdays,
+    });
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ due: '2026-03-09T15:00:00.000Z' });
   });
 
   it('counts round-the-clock hours as elapsed time', async () => {
-    const res = await tech.post('/api/calc/due', { start: '2026-03-07T12:00:00-06:00', hours: 24, mode: 'round-the-clock', timeZone: 'America/Chicago', calendar: weekdays });
+    const res = await tech.post('/api/calc/due', {
+      start: '2026-03-07T12:00:00-06:00',
+      hours: 24,
+      mode: 'round-the-clock',
+      timeZone: 'America/Chicago',
+      calendar: weekdays,
+    });
     expect(res.body).toEqual({ due: '2026-03-08T18:00:00.000Z' });
   });
 
@@ -281,9 +357,21 @@ describe('POST /api/calc/due', () => {
     });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['calendar.days.1', 'start', 'timeZone']);
-    const window = await tech.post('/api/calc/due', { start: '2026-03-06T16:00:00Z', hours: 4, mode: 'business', timeZone: 'UTC', calendar: { days: [1], start: '18:00', end: '08:00' } });
+    const window = await tech.post('/api/calc/due', {
+      start: '2026-03-06T16:00:00Z',
+      hours: 4,
+      mode: 'business',
+      timeZone: 'UTC',
+      calendar: { days: [1], start: '18:00', end: '08:00' },
+    });
     expect(window.body.error.fields).toHaveProperty(['calendar.end']);
-    const hours = await tech.post('/api/calc/due', { start: '2026-03-06T16:00:00Z', hours: -1, mode: 'weekly', timeZone: 'UTC', calendar: weekdays });
+    const hours = await tech.post('/api/calc/due', {
+      start: '2026-03-06T16:00:00Z',
+      hours: -1,
+      mode: 'weekly',
+      timeZone: 'UTC',
+      calendar: weekdays,
+    });
     expect(Object.keys(hours.body.error.fields).sort()).toEqual(['hours', 'mode']);
   });
 });

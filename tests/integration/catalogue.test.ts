@@ -15,11 +15,25 @@ beforeAll(async () => {
 
 describe('cabinet models: power input', () => {
   it('creates a model with its power input, and leaves unknown figures empty', async () => {
-    const res = await office.post('/api/cabinet-models', { ...model, name: name(), inputVoltageMinV: 200, inputVoltageMaxV: 240, passThroughAmps: 16, maxPerChain: 10, maxPowerVA: 210 });
+    const res = await office.post('/api/cabinet-models', {
+      ...model,
+      name: name(),
+      inputVoltageMinV: 200,
+      inputVoltageMaxV: 240,
+      passThroughAmps: 16,
+      maxPerChain: 10,
+      maxPowerVA: 210,
+    });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body).toMatchObject({ inputVoltageMinV: 200, inputVoltageMaxV: 240, passThroughAmps: 16, maxPerChain: 10, maxPowerVA: 210 });
     const bare = await office.post('/api/cabinet-models', { ...model, name: name() });
-    expect(bare.body).toMatchObject({ inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: null, maxPerChain: null, maxPowerVA: null });
+    expect(bare.body).toMatchObject({
+      inputVoltageMinV: 100,
+      inputVoltageMaxV: 240,
+      passThroughAmps: null,
+      maxPerChain: null,
+      maxPowerVA: null,
+    });
   });
 
   it('refuses volt-amperes below the watts and a reversed voltage range, naming the field', async () => {
@@ -43,7 +57,10 @@ describe('cabinet models: power input', () => {
     expect(patched.body).toMatchObject({ passThroughAmps: 10, maxPerChain: null });
     // 120 V × 10 A × 1 = 1,200 W through the connector, under the circuit's 120 × 20 × 0.8 = 1,920 W.
     const saved = await office.put(`/api/walls/${wall!.id}/plan`, {
-      settings: { supply: { voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8, powerFactor: 1 }, outputCapacityPixels: 650_000 },
+      settings: {
+        supply: { voltage: 120, phases: 1, breakerAmps: 20, continuousFactor: 0.8, powerFactor: 1 },
+        outputCapacityPixels: 650_000,
+      },
     });
     expect(saved.status).toBe(200);
     expect(saved.body.planSettings.chainCapacityW).toBeCloseTo(1200, 9);
@@ -51,7 +68,14 @@ describe('cabinet models: power input', () => {
   });
 
   it('is the office’s to change: 401 signed out, 403 for a technician', async () => {
-    expect((await anonymous().post('/api/cabinet-models').set('X-Requested-With', 'gridkeep').send({ ...model, name: name() })).status).toBe(401);
+    expect(
+      (
+        await anonymous()
+          .post('/api/cabinet-models')
+          .set('X-Requested-With', 'gridkeep')
+          .send({ ...model, name: name() })
+      ).status,
+    ).toBe(401);
     expect((await tech.post('/api/cabinet-models', { ...model, name: name() })).status).toBe(403);
   });
 });

@@ -22,7 +22,11 @@ let database: Awaited<ReturnType<typeof createIsolatedDatabase>>;
 const fast = { backoffBaseMs: 20, backoffMaxMs: 80 };
 
 beforeAll(async () => {
-  [smtp, s3, database] = await Promise.all([startTestSmtp(), startTestS3(`gridkeep-mail-${Date.now()}`), createIsolatedDatabase('gridkeep_mail')]);
+  [smtp, s3, database] = await Promise.all([
+    startTestSmtp(),
+    startTestS3(`gridkeep-mail-${Date.now()}`),
+    createIsolatedDatabase('gridkeep_mail'),
+  ]);
   // The server reads its settings once, on first use: everything points at the fakes before that.
   restoreEnv = setEnv({ DATABASE_URL: database.url, ...smtp.env, ...s3.env, MAIL_FROM: 'Gridkeep <service@gridkeep.test>' });
   await ensureBucket();
@@ -106,7 +110,7 @@ describe('queueing and sending', () => {
     expect(byName['visit.ics'].content.toString()).toBe(calendar);
   });
 
-  it('queues nothing when the caller\'s transaction rolls back', async () => {
+  it("queues nothing when the caller's transaction rolls back", async () => {
     const subject = `Rolled back ${randomUUID()}`;
     await expect(
       db().transaction(async (tx) => {

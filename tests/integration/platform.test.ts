@@ -94,10 +94,11 @@ async function queueRawMail(subject: string) {
   await client.connect();
   try {
     await client.query('begin');
-    await client.query(
-      `insert into outbound_mail (message_id, "to", subject, text) values ($1, $2, $3, 'x')`,
-      [`<${subject.replace(/\W+/g, '-')}@gridkeep.test>`, ['office@example.test'], subject],
-    );
+    await client.query(`insert into outbound_mail (message_id, "to", subject, text) values ($1, $2, $3, 'x')`, [
+      `<${subject.replace(/\W+/g, '-')}@gridkeep.test>`,
+      ['office@example.test'],
+      subject,
+    ]);
     await client.query(`select pg_notify('outbound_mail', '')`);
     await client.query('commit');
   } finally {
@@ -141,10 +142,14 @@ describe('the server process and its database', () => {
 
   it('answers 200 again after PostgreSQL is back, without a restart of its own', async () => {
     cluster = await startCluster({ dataDir: cluster.dataDir, port: cluster.port, fast: true, log: () => {} });
-    const back = await until(async () => {
-      const h = await health();
-      return h.status === 200 ? h : undefined;
-    }, 15_000, 'health 200 after the restart');
+    const back = await until(
+      async () => {
+        const h = await health();
+        return h.status === 200 ? h : undefined;
+      },
+      15_000,
+      'health 200 after the restart',
+    );
     expect(back.body).toEqual({ status: 'ok', database: 'ok' });
     expect(child.exitCode).toBeNull();
   });

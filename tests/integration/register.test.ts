@@ -16,7 +16,14 @@ beforeAll(async () => {
 async function newWall(columns = 4, rows = 3) {
   const { client, site } = await createOrganisation();
   const model = await createCabinetModel();
-  const res = await office.post('/api/walls', { siteId: site.id, name: unique('Wall'), cabinetModelId: model.id, columns, rows, mounting: 'flown' });
+  const res = await office.post('/api/walls', {
+    siteId: site.id,
+    name: unique('Wall'),
+    cabinetModelId: model.id,
+    columns,
+    rows,
+    mounting: 'flown',
+  });
   expect(res.status).toBe(201);
   return { client, site, model, wall: res.body as { id: string; columns: number; rows: number } };
 }
@@ -29,13 +36,30 @@ describe('clients, sites and walls', () => {
     const client = await office.post('/api/clients', { name: `  ${name}  `, notes: 'Pays on 30 days' });
     expect(client.status).toBe(201);
     expect(client.body.name).toBe(name);
-    const site = await office.post('/api/sites', { clientId: client.body.id, name: 'North campus', timeZone: 'America/Denver', accessNotes: 'Dock B, ring bell' });
+    const site = await office.post('/api/sites', {
+      clientId: client.body.id,
+      name: 'North campus',
+      timeZone: 'America/Denver',
+      accessNotes: 'Dock B, ring bell',
+    });
     expect(site.status).toBe(201);
     const model = await createCabinetModel();
-    const wall = await office.post('/api/walls', { siteId: site.body.id, name: 'Main hall centre wall', cabinetModelId: model.id, columns: 12, rows: 6 });
+    const wall = await office.post('/api/walls', {
+      siteId: site.body.id,
+      name: 'Main hall centre wall',
+      cabinetModelId: model.id,
+      columns: 12,
+      rows: 6,
+    });
     expect(wall.status).toBe(201);
     const read = await office.get(`/api/walls/${wall.body.id}`);
-    expect(read.body).toMatchObject({ columns: 12, rows: 6, clientId: client.body.id, siteName: 'North campus', cabinetModel: { id: model.id, widthMm: 500 } });
+    expect(read.body).toMatchObject({
+      columns: 12,
+      rows: 6,
+      clientId: client.body.id,
+      siteName: 'North campus',
+      cabinetModel: { id: model.id, widthMm: 500 },
+    });
     const list = await office.get(`/api/walls?clientId=${client.body.id}`);
     expect(list.body.items.map((w: { id: string }) => w.id)).toEqual([wall.body.id]);
     const detail = await office.get(`/api/clients/${client.body.id}`);
@@ -49,18 +73,33 @@ describe('clients, sites and walls', () => {
     expect(second.status).toBe(201);
     const a = (await office.post(`/api/walls/${wall.id}/cabinets`, { serial: unique('CNT'), column: 1, row: 1 })).body;
     await office.post(`/api/walls/${wall.id}/cabinets`, { serial: unique('CNT'), column: 2, row: 1 });
-    const ticket = await office.post('/api/tickets', { siteId: site.id, wallId: wall.id, cells: [{ column: 1, row: 1 }], title: 'Dark cabinet', priority: 'high' });
+    const ticket = await office.post('/api/tickets', {
+      siteId: site.id,
+      wallId: wall.id,
+      cells: [{ column: 1, row: 1 }],
+      title: 'Dark cabinet',
+      priority: 'high',
+    });
     expect(ticket.status).toBe(201);
     // A ticket on another wall at the same cell must not count here.
     const other = await newWall(3, 2);
-    await office.post('/api/tickets', { siteId: other.site.id, wallId: other.wall.id, cells: [{ column: 2, row: 1 }], title: 'Elsewhere', priority: 'low' });
+    await office.post('/api/tickets', {
+      siteId: other.site.id,
+      wallId: other.wall.id,
+      cells: [{ column: 2, row: 1 }],
+      title: 'Elsewhere',
+      priority: 'low',
+    });
 
     const clients = await office.get(`/api/clients?q=${encodeURIComponent(client.name)}`);
     expect(clients.body.items).toEqual([expect.objectContaining({ id: client.id, siteCount: 2, wallCount: 1, openTicketCount: 1 })]);
     const walls = await office.get(`/api/walls?clientId=${client.id}`);
     expect(walls.body.items).toEqual([expect.objectContaining({ id: wall.id, openTicketCount: 1 })]);
     const sites = await office.get(`/api/sites?clientId=${client.id}`);
-    expect(Object.fromEntries(sites.body.items.map((s: { name: string; wallCount: number }) => [s.name, s.wallCount]))).toEqual({ [site.name]: 1, Annex: 0 });
+    expect(Object.fromEntries(sites.body.items.map((s: { name: string; wallCount: number }) => [s.name, s.wallCount]))).toEqual({
+      [site.name]: 1,
+      Annex: 0,
+    });
     const detail = await office.get(`/api/clients/${client.id}`);
     expect(detail.body.sites.find((s: { id: string }) => s.id === site.id).wallCount).toBe(1);
     const map = await office.get(`/api/walls/${wall.id}/cabinets`);
@@ -267,11 +306,23 @@ describe('the cabinets list', () => {
     expect(site.status).toBe(201);
     siteB = site.body;
     modelB = await createCabinetModel();
-    const wall = await office.post('/api/walls', { siteId: siteB.id, name: unique('Foyer'), cabinetModelId: modelB.id, columns: 3, rows: 2 });
+    const wall = await office.post('/api/walls', {
+      siteId: siteB.id,
+      name: unique('Foyer'),
+      cabinetModelId: modelB.id,
+      columns: 3,
+      rows: 2,
+    });
     expect(wall.status).toBe(201);
     wallB = wall.body;
     const place = async (wallId: string, n: number, column: number, row: number, b: string, installedOn?: string) => {
-      const res = await office.post(`/api/walls/${wallId}/cabinets`, { serial: `${tag}-${String(n).padStart(2, '0')}`, column, row, batch: b, installedOn });
+      const res = await office.post(`/api/walls/${wallId}/cabinets`, {
+        serial: `${tag}-${String(n).padStart(2, '0')}`,
+        column,
+        row,
+        batch: b,
+        installedOn,
+      });
       expect(res.status).toBe(201);
       return res.body as { id: string; serial: string };
     };
@@ -283,9 +334,16 @@ describe('the cabinets list', () => {
     await place(wallB.id, 7, 1, 1, batch.a, '2025-01-15');
     await place(wallB.id, 3, 2, 1, batch.c);
     await place(wallB.id, 5, 3, 1, '', '2024-03-01');
-    [location] = await db().insert(stockLocations).values({ name: unique('Shelf'), kind: 'warehouse' }).returning();
+    [location] = await db()
+      .insert(stockLocations)
+      .values({ name: unique('Shelf'), kind: 'warehouse' })
+      .returning();
     spare = await place(wallB.id, 8, 1, 2, batch.a, '2025-01-15');
-    const off = await office.patch(`/api/cabinets/${spare.id}`, { status: 'spare', stockLocationId: location.id, note: 'Kept as attic stock' });
+    const off = await office.patch(`/api/cabinets/${spare.id}`, {
+      status: 'spare',
+      stockLocationId: location.id,
+      note: 'Kept as attic stock',
+    });
     expect(off.status).toBe(200);
   });
 
@@ -309,9 +367,24 @@ describe('the cabinets list', () => {
     expect(await list(office, `batch=${encodeURIComponent(batch.a.toLowerCase())}`)).toEqual(byBatch);
     expect(await list(office, `batch=${encodeURIComponent(batch.a.slice(0, -1))}`)).toEqual([]);
     const inStock = byBatch.find((c) => c.id === spare.id);
-    expect(inStock).toMatchObject({ wallId: null, column: null, row: null, clientName: null, siteName: null, locationName: location.name, installedOn: '2025-01-15' });
+    expect(inStock).toMatchObject({
+      wallId: null,
+      column: null,
+      row: null,
+      clientName: null,
+      siteName: null,
+      locationName: location.name,
+      installedOn: '2025-01-15',
+    });
     const onWall = byBatch.find((c) => c.serial === `${tag}-07`);
-    expect(onWall).toMatchObject({ wallId: wallB.id, column: 1, row: 1, siteName: siteB.name, clientName: org.client.name, installedOn: '2025-01-15' });
+    expect(onWall).toMatchObject({
+      wallId: wallB.id,
+      column: 1,
+      row: 1,
+      siteName: siteB.name,
+      clientName: org.client.name,
+      installedOn: '2025-01-15',
+    });
 
     const combined = await list(office, `clientId=${org.client.id}&batch=${encodeURIComponent(batch.a)}&modelId=${org.model.id}`);
     expect(combined.map((c) => c.serial).sort()).toEqual([`${tag}-02`, `${tag}-04`]);

@@ -23,7 +23,10 @@ afterAll(async () => {
 
 const suffix = () => randomBytes(5).toString('hex');
 
-interface PgError { code?: string; constraint?: string }
+interface PgError {
+  code?: string;
+  constraint?: string;
+}
 
 /** The PostgreSQL error behind a refused statement (drizzle wraps it in `cause`). */
 async function refusal(statement: PromiseLike<unknown>): Promise<PgError> {
@@ -36,7 +39,10 @@ async function refusal(statement: PromiseLike<unknown>): Promise<PgError> {
 }
 
 async function makeClient() {
-  const [client] = await db.insert(schema.clients).values({ name: `Constraint test client ${suffix()}` }).returning();
+  const [client] = await db
+    .insert(schema.clients)
+    .values({ name: `Constraint test client ${suffix()}` })
+    .returning();
   const [site] = await db
     .insert(schema.sites)
     .values({ clientId: client.id, name: `Site ${suffix()}`, timeZone: 'America/Denver' })
@@ -48,8 +54,18 @@ async function makeModel() {
   const [model] = await db
     .insert(schema.cabinetModels)
     .values({
-      name: `Test cabinet ${suffix()}`, widthMm: 500, heightMm: 500, pixelPitchMm: 2.604, pixelsWide: 192, pixelsHigh: 192,
-      modulesWide: 2, modulesHigh: 2, maxPowerW: 180, typicalPowerW: 60, weightKg: 7.5, brightnessNits: 1000,
+      name: `Test cabinet ${suffix()}`,
+      widthMm: 500,
+      heightMm: 500,
+      pixelPitchMm: 2.604,
+      pixelsWide: 192,
+      pixelsHigh: 192,
+      modulesWide: 2,
+      modulesHigh: 2,
+      maxPowerW: 180,
+      typicalPowerW: 60,
+      weightKg: 7.5,
+      brightnessNits: 1000,
     })
     .returning();
   return model;
@@ -66,13 +82,28 @@ async function makeWall(columns = 4, rows = 3) {
 }
 
 const cabinet = (wall: { id: string; cabinetModelId: string }, column: number, row: number, serial = `SN-${suffix()}`) => ({
-  serial, cabinetModelId: wall.cabinetModelId, wallId: wall.id, column, row, batch: 'B1', status: 'installed' as const,
+  serial,
+  cabinetModelId: wall.cabinetModelId,
+  wallId: wall.id,
+  column,
+  row,
+  batch: 'B1',
+  status: 'installed' as const,
 });
 
 async function makePartAndLocations() {
-  const [part] = await db.insert(schema.parts).values({ sku: `TEST-${suffix()}`, name: 'Test part', kind: 'fan' }).returning();
-  const [warehouse] = await db.insert(schema.stockLocations).values({ name: `Warehouse ${suffix()}`, kind: 'warehouse' }).returning();
-  const [shelf] = await db.insert(schema.stockLocations).values({ name: `Shelf ${suffix()}`, kind: 'warehouse' }).returning();
+  const [part] = await db
+    .insert(schema.parts)
+    .values({ sku: `TEST-${suffix()}`, name: 'Test part', kind: 'fan' })
+    .returning();
+  const [warehouse] = await db
+    .insert(schema.stockLocations)
+    .values({ name: `Warehouse ${suffix()}`, kind: 'warehouse' })
+    .returning();
+  const [shelf] = await db
+    .insert(schema.stockLocations)
+    .values({ name: `Shelf ${suffix()}`, kind: 'warehouse' })
+    .returning();
   return { part, warehouse, shelf };
 }
 
@@ -96,16 +127,21 @@ describe('cabinets', () => {
     const { wall } = await makeWall(4, 3);
     await db.insert(schema.cabinets).values(cabinet(wall, 4, 3));
     expect(await refusal(db.insert(schema.cabinets).values(cabinet(wall, 5, 1)))).toMatchObject({
-      code: '23514', constraint: 'cabinets_position_inside_grid',
+      code: '23514',
+      constraint: 'cabinets_position_inside_grid',
     });
     expect(await refusal(db.insert(schema.cabinets).values(cabinet(wall, 1, 4)))).toMatchObject({
-      code: '23514', constraint: 'cabinets_position_inside_grid',
+      code: '23514',
+      constraint: 'cabinets_position_inside_grid',
     });
   });
 
   it('refuses moving a placed cabinet outside the grid', async () => {
     const { wall } = await makeWall(4, 3);
-    const [c] = await db.insert(schema.cabinets).values(cabinet(wall, 1, 1)).returning();
+    const [c] = await db
+      .insert(schema.cabinets)
+      .values(cabinet(wall, 1, 1))
+      .returning();
     const err = await refusal(db.update(schema.cabinets).set({ column: 9 }).where(eq(schema.cabinets.id, c.id)));
     expect(err).toMatchObject({ code: '23514', constraint: 'cabinets_position_inside_grid' });
   });
@@ -122,12 +158,14 @@ describe('walls', () => {
     expect([after.columns, after.rows]).toEqual([3, 2]);
   });
 
-  it('refuses a wall whose client is not its site\'s client', async () => {
+  it("refuses a wall whose client is not its site's client", async () => {
     const { site } = await makeClient();
     const { client: other } = await makeClient();
     const model = await makeModel();
     const err = await refusal(
-      db.insert(schema.walls).values({ clientId: other.id, siteId: site.id, name: `Wall ${suffix()}`, cabinetModelId: model.id, columns: 2, rows: 2 }),
+      db
+        .insert(schema.walls)
+        .values({ clientId: other.id, siteId: site.id, name: `Wall ${suffix()}`, cabinetModelId: model.id, columns: 2, rows: 2 }),
     );
     expect(err).toMatchObject({ code: '23503', constraint: 'walls_site_client_fk' });
   });
@@ -136,7 +174,9 @@ describe('walls', () => {
     const { wall } = await makeWall();
     const { client: other, site: otherSite } = await makeClient();
     const err = await refusal(
-      db.insert(schema.tickets).values({ clientId: other.id, siteId: otherSite.id, wallId: wall.id, title: 'Dead module', priority: 'normal' }),
+      db
+        .insert(schema.tickets)
+        .values({ clientId: other.id, siteId: otherSite.id, wallId: wall.id, title: 'Dead module', priority: 'normal' }),
     );
     expect(err).toMatchObject({ code: '23503', constraint: 'tickets_wall_client_fk' });
   });
@@ -146,7 +186,9 @@ describe('stock', () => {
   it('refuses a movement of zero or a negative quantity', async () => {
     const { part, warehouse } = await makePartAndLocations();
     for (const quantity of [0, -1]) {
-      const err = await refusal(db.insert(schema.stockMovements).values({ partId: part.id, kind: 'receipt', toLocationId: warehouse.id, quantity }));
+      const err = await refusal(
+        db.insert(schema.stockMovements).values({ partId: part.id, kind: 'receipt', toLocationId: warehouse.id, quantity }),
+      );
       expect(err).toMatchObject({ code: '23514', constraint: 'stock_movements_quantity_positive' });
     }
   });
@@ -179,7 +221,8 @@ describe('stock', () => {
       expect(err, kind).toMatchObject({ code: '23514', constraint: 'stock_movements_kind_locations' });
     }
     expect(await refusal(move('transfer', warehouse.id, warehouse.id))).toMatchObject({
-      code: '23514', constraint: 'stock_movements_distinct_locations',
+      code: '23514',
+      constraint: 'stock_movements_distinct_locations',
     });
     await move('receipt', null, warehouse.id);
     await move('transfer', warehouse.id, shelf.id);
@@ -195,10 +238,14 @@ describe('users', () => {
     );
     expect(clientUser).toMatchObject({ code: '23514', constraint: 'users_client_role' });
     const staff = await refusal(
-      db.insert(schema.users).values({ email: `tech-${suffix()}@example.test`, name: 'Staff with org', role: 'technician', clientId: client.id }),
+      db
+        .insert(schema.users)
+        .values({ email: `tech-${suffix()}@example.test`, name: 'Staff with org', role: 'technician', clientId: client.id }),
     );
     expect(staff).toMatchObject({ code: '23514', constraint: 'users_client_role' });
-    await db.insert(schema.users).values({ email: `client-${suffix()}@example.test`, name: 'Client user', role: 'client', clientId: client.id });
+    await db
+      .insert(schema.users)
+      .values({ email: `client-${suffix()}@example.test`, name: 'Client user', role: 'client', clientId: client.id });
   });
 
   it('refuses an e-mail address that is not lower-case', async () => {

@@ -83,7 +83,10 @@ describe('demo data', () => {
     const zones = new Set(sites.map((s) => s.timeZone));
     expect(zones.size).toBeGreaterThanOrEqual(3);
     expect([...zones].some((z) => z !== 'America/Chicago')).toBe(true);
-    const siteContacts = await db.select().from(schema.contacts).where(sql`${schema.contacts.siteId} is not null`);
+    const siteContacts = await db
+      .select()
+      .from(schema.contacts)
+      .where(sql`${schema.contacts.siteId} is not null`);
     expect(new Set(siteContacts.map((c) => c.siteId)).size).toBe(sites.length);
   });
 
@@ -108,7 +111,9 @@ describe('demo data', () => {
       .from(schema.walls)
       .innerJoin(schema.cabinetModels, sql`${schema.cabinetModels.id} = ${schema.walls.cabinetModelId}`);
     expect(walls).toHaveLength(12);
-    const centre = walls.filter(({ wall, model }) => wall.columns === 12 && wall.rows === 6 && model.widthMm === 500 && model.heightMm === 500);
+    const centre = walls.filter(
+      ({ wall, model }) => wall.columns === 12 && wall.rows === 6 && model.widthMm === 500 && model.heightMm === 500,
+    );
     expect(centre).toHaveLength(1);
     expect(centre[0].wall.name).toBe('Main hall centre wall');
     expect(new Set(walls.map(({ wall }) => wall.mounting)).size).toBeGreaterThanOrEqual(3);
@@ -156,7 +161,12 @@ describe('demo data', () => {
     const walls = await db.select().from(schema.walls);
     const cabinets = await db.select().from(schema.cabinets);
     const placed = new Set(
-      (await db.select().from(schema.cabinetEvents).where(sql`${schema.cabinetEvents.kind} = 'placed'`)).map((e) => e.cabinetId),
+      (
+        await db
+          .select()
+          .from(schema.cabinetEvents)
+          .where(sql`${schema.cabinetEvents.kind} = 'placed'`)
+      ).map((e) => e.cabinetId),
     );
     for (const c of cabinets) {
       expect(c.serial.trim()).not.toBe('');
@@ -192,7 +202,10 @@ describe('demo data', () => {
     expect(await argon2.verify(hash!, 'not-the-password')).toBe(false);
     const clients = await db.select().from(schema.clients);
     for (const c of clients) {
-      expect(users.some((u) => u.role === 'client' && u.clientId === c.id), c.name).toBe(true);
+      expect(
+        users.some((u) => u.role === 'client' && u.clientId === c.id),
+        c.name,
+      ).toBe(true);
     }
   });
 
@@ -235,7 +248,10 @@ describe('demo data', () => {
 
   it('books one consumption per repair that used a part, from the same part, batch and location', async () => {
     const repairs = await db.select().from(schema.repairs);
-    const moves = await db.select().from(schema.stockMovements).where(sql`${schema.stockMovements.kind} = 'consumption'`);
+    const moves = await db
+      .select()
+      .from(schema.stockMovements)
+      .where(sql`${schema.stockMovements.kind} = 'consumption'`);
     const withPart = repairs.filter((r) => r.partId);
     expect(withPart.length).toBeGreaterThanOrEqual(20);
     expect(moves).toHaveLength(withPart.length);
@@ -244,7 +260,10 @@ describe('demo data', () => {
       expect(m).toHaveLength(1);
       expect(m[0]).toMatchObject({ partId: r.partId, batch: r.partBatch ?? '', fromLocationId: r.fromLocationId, quantity: 1 });
     }
-    const repaired = await db.select().from(schema.cabinetEvents).where(sql`${schema.cabinetEvents.kind} = 'repaired'`);
+    const repaired = await db
+      .select()
+      .from(schema.cabinetEvents)
+      .where(sql`${schema.cabinetEvents.kind} = 'repaired'`);
     expect(repaired.length).toBeGreaterThanOrEqual(repairs.length - 1); // the cabinet swap is logged as removed + placed
   });
 
@@ -303,7 +322,10 @@ describe('demo data', () => {
   });
 
   it('plans visits this week and next for both technicians, and keeps completed visits signed off', async () => {
-    const techs = await db.select().from(schema.users).where(sql`${schema.users.role} = 'technician'`);
+    const techs = await db
+      .select()
+      .from(schema.users)
+      .where(sql`${schema.users.role} = 'technician'`);
     const planned = await rows<{ user_id: string; window_start: Date }>(sql`
       select vt.user_id, v.window_start from visits v join visit_technicians vt on vt.visit_id = v.id
       where v.status = 'planned'`);
@@ -314,7 +336,10 @@ describe('demo data', () => {
       expect(own.every((p) => new Date(p.window_start).getTime() > Date.now() - 3_600_000)).toBe(true);
       expect(own.some((p) => new Date(p.window_start).getTime() < fortnight)).toBe(true);
     }
-    const completed = await db.select().from(schema.visits).where(sql`${schema.visits.status} = 'completed'`);
+    const completed = await db
+      .select()
+      .from(schema.visits)
+      .where(sql`${schema.visits.status} = 'completed'`);
     expect(completed.length).toBeGreaterThanOrEqual(20);
     for (const v of completed) {
       expect(v.signedAt).not.toBeNull();
@@ -344,7 +369,12 @@ describe('demo data', () => {
   });
 
   it('does nothing when seeded a second time', async () => {
-    const count = async () => (await rows<{ n: number }>(sql`select (select count(*) from users) + (select count(*) from cabinets) + (select count(*) from stock_movements) as n`))[0].n;
+    const count = async () =>
+      (
+        await rows<{ n: number }>(
+          sql`select (select count(*) from users) + (select count(*) from cabinets) + (select count(*) from stock_movements) as n`,
+        )
+      )[0].n;
     const before = await count();
     expect(await seedIfEmpty(db)).toBe(false);
     expect(await count()).toBe(before);

@@ -20,13 +20,33 @@ beforeAll(async () => {
   me = await signedIn('client', mine.client.id);
   [theirCabinet] = await db()
     .insert(cabinets)
-    .values({ serial: unique('THEIRS').toUpperCase(), cabinetModelId: theirs.wall!.cabinetModelId, wallId: theirs.wall!.id, column: 1, row: 1, batch: 'X' })
+    .values({
+      serial: unique('THEIRS').toUpperCase(),
+      cabinetModelId: theirs.wall!.cabinetModelId,
+      wallId: theirs.wall!.id,
+      column: 1,
+      row: 1,
+      batch: 'X',
+    })
     .returning();
   await db()
     .insert(cabinets)
-    .values({ serial: unique('MINE').toUpperCase(), cabinetModelId: mine.wall!.cabinetModelId, wallId: mine.wall!.id, column: 1, row: 1, batch: 'Y' });
-  [theirController] = await db().insert(controllers).values({ wallId: theirs.wall!.id, model: 'Processor', serial: unique('CTL').toUpperCase(), outputs: 4 }).returning();
-  [theirContact] = await db().insert(contacts).values({ clientId: theirs.client.id, name: 'Their contact', email: 'them@example.test' }).returning();
+    .values({
+      serial: unique('MINE').toUpperCase(),
+      cabinetModelId: mine.wall!.cabinetModelId,
+      wallId: mine.wall!.id,
+      column: 1,
+      row: 1,
+      batch: 'Y',
+    });
+  [theirController] = await db()
+    .insert(controllers)
+    .values({ wallId: theirs.wall!.id, model: 'Processor', serial: unique('CTL').toUpperCase(), outputs: 4 })
+    .returning();
+  [theirContact] = await db()
+    .insert(contacts)
+    .values({ clientId: theirs.client.id, name: 'Their contact', email: 'them@example.test' })
+    .returning();
 });
 
 const json = { 'X-Requested-With': 'gridkeep' };

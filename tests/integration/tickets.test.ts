@@ -31,10 +31,12 @@ beforeAll(async () => {
   // A round-the-clock plan makes the due times exact to check.
   const plan = await createServicePlan({ clockMode: 'round_the_clock' });
   await db().execute(sql`update clients set service_plan_id = ${plan.id} where id = ${org.client.id}`);
-  await db().insert(contacts).values([
-    { clientId: org.client.id, siteId: org.site.id, name: 'Site manager', email: 'site.manager@client.test' },
-    { clientId: org.client.id, name: 'Quiet person', email: 'quiet@client.test', receivesUpdates: false },
-  ]);
+  await db()
+    .insert(contacts)
+    .values([
+      { clientId: org.client.id, siteId: org.site.id, name: 'Site manager', email: 'site.manager@client.test' },
+      { clientId: org.client.id, name: 'Quiet person', email: 'quiet@client.test', receivesUpdates: false },
+    ]);
   office = await signedIn('coordinator');
   tech = await signedIn('technician');
   clientUser = await signedIn('client', org.client.id);
@@ -52,7 +54,10 @@ async function open(session: Session, overrides: object = {}) {
   const res = await session.post('/api/tickets', {
     siteId: org.site.id,
     wallId: org.wall!.id,
-    cells: [{ column: 4, row: 2 }, { column: 5, row: 2 }],
+    cells: [
+      { column: 4, row: 2 },
+      { column: 5, row: 2 },
+    ],
     title: 'Dead module at C4·R2',
     description: 'Black square lower left of centre',
     priority: 'high',
@@ -74,7 +79,13 @@ describe('opening a ticket', () => {
   it('a client user opens a ticket on their wall with tapped cells; due times come from the plan', async () => {
     const before = Date.now();
     const t = await open(clientUser);
-    expect(t).toMatchObject({ status: 'new', priority: 'high', scope: 'cells', cellLabels: ['C4·R2', 'C5·R2'], wall: { id: org.wall!.id } });
+    expect(t).toMatchObject({
+      status: 'new',
+      priority: 'high',
+      scope: 'cells',
+      cellLabels: ['C4·R2', 'C5·R2'],
+      wall: { id: org.wall!.id },
+    });
     expect(t.ref).toMatch(/^GK-\d+$/);
     // Factory plan, high priority: respond in 4 h, resolve in 24 h, round the clock.
     const created = new Date(t.createdAt).getTime();
@@ -85,7 +96,13 @@ describe('opening a ticket', () => {
   });
 
   it('refuses cells outside the wall and a site of another organisation', async () => {
-    const outside = await clientUser.post('/api/tickets', { siteId: org.site.id, wallId: org.wall!.id, cells: [{ column: 13, row: 1 }], title: 'x', priority: 'low' });
+    const outside = await clientUser.post('/api/tickets', {
+      siteId: org.site.id,
+      wallId: org.wall!.id,
+      cells: [{ column: 13, row: 1 }],
+      title: 'x',
+      priority: 'low',
+    });
     expect(outside.status).toBe(400);
     expect(outside.body.error.fields).toHaveProperty('cells');
     const other = await createOrganisation({ withWall: true });
@@ -105,8 +122,12 @@ describe('opening a ticket', () => {
     const calendar = { days: [1, 2, 3, 4, 5], start: '08:00', end: '18:00' };
     const created = new Date(res.body.createdAt);
     // The clock itself is checked against hand-worked examples in shared/calc/service-clock.test.ts.
-    expect(res.body.responseDueAt).toBe(dueAt({ start: created, hours: 8, mode: 'business', timeZone: 'America/New_York', calendar }).toISOString());
-    expect(res.body.resolutionDueAt).toBe(dueAt({ start: created, hours: 72, mode: 'business', timeZone: 'America/New_York', calendar }).toISOString());
+    expect(res.body.responseDueAt).toBe(
+      dueAt({ start: created, hours: 8, mode: 'business', timeZone: 'America/New_York', calendar }).toISOString(),
+    );
+    expect(res.body.resolutionDueAt).toBe(
+      dueAt({ start: created, hours: 72, mode: 'business', timeZone: 'America/New_York', calendar }).toISOString(),
+    );
   });
 });
 
@@ -115,7 +136,11 @@ describe('triage and the clock', () => {
     const t = await open(clientUser);
     const ack = await office.patch(`/api/tickets/${t.id}`, { status: 'acknowledged', assigneeId: tech.user.id });
     expect(ack.status).toBe(200);
-    expect(ack.body).toMatchObject({ status: 'acknowledged', assignee: { id: tech.user.id }, clocks: { response: 'met', resolution: 'on_track' } });
+    expect(ack.body).toMatchObject({
+      status: 'acknowledged',
+      assignee: { id: tech.user.id },
+      clocks: { response: 'met', resolution: 'on_track' },
+    });
     const back = await office.patch(`/api/tickets/${t.id}`, { status: 'new' });
     expect(back.status).toBe(409);
     expect(back.body.error.code).toBe('bad_transition');
@@ -133,7 +158,10 @@ describe('triage and the clock', () => {
     const paused = await office.patch(`/api/tickets/${t.id}`, { status: 'waiting_client' });
     expect(paused.body.clocks.resolution).toBe('paused');
     // Two hours pass while the client is away: move the pause back in time.
-    await db().update(tickets).set({ pausedAt: new Date(Date.now() - 2 * HOUR) }).where(eq(tickets.id, t.id));
+    await db()
+      .update(tickets)
+      .set({ pausedAt: new Date(Date.now() - 2 * HOUR) })
+      .where(eq(tickets.id, t.id));
     const resumed = await office.patch(`/api/tickets/${t.id}`, { status: 'in_progress' });
     const due1 = new Date(resumed.body.resolutionDueAt).getTime();
     expect(due1 - due0).toBeGreaterThanOrEqual(2 * HOUR - 1000);
@@ -146,8 +174,14 @@ describe('triage and the clock', () => {
     const risky = await open(clientUser, { title: 'at risk one' });
     const late = await open(clientUser, { title: 'breached one' });
     // High: 24 h to resolve; at risk when under 6 h are left.
-    await db().update(tickets).set({ resolutionAtRiskAt: new Date(Date.now() - 1000), acknowledgedAt: new Date() }).where(eq(tickets.id, risky.id));
-    await db().update(tickets).set({ resolutionDueAt: new Date(Date.now() - 1000), acknowledgedAt: new Date() }).where(eq(tickets.id, late.id));
+    await db()
+      .update(tickets)
+      .set({ resolutionAtRiskAt: new Date(Date.now() - 1000), acknowledgedAt: new Date() })
+      .where(eq(tickets.id, risky.id));
+    await db()
+      .update(tickets)
+      .set({ resolutionDueAt: new Date(Date.now() - 1000), acknowledgedAt: new Date() })
+      .where(eq(tickets.id, late.id));
     expect((await office.get(`/api/tickets/${risky.id}`)).body.clockState).toBe('at_risk');
     expect((await office.get(`/api/tickets/${late.id}`)).body.clockState).toBe('breached');
     const atRisk = await office.get(`/api/tickets?clock=at_risk&clientId=${org.client.id}&limit=100`);
@@ -164,7 +198,10 @@ describe('triage and the clock', () => {
     expect((await office.patch(`/api/tickets/${t.id}`, { status: 'scheduled', schedule: window(14) })).status).toBe(200);
     const again = await office.patch(`/api/tickets/${t.id}`, { status: 'scheduled', schedule: window(15) });
     expect(again.status).toBe(200);
-    expect(again.body.visits.map((v: { windowStart: string }) => v.windowStart)).toEqual(['2026-12-14T15:00:00.000Z', '2026-12-15T15:00:00.000Z']);
+    expect(again.body.visits.map((v: { windowStart: string }) => v.windowStart)).toEqual([
+      '2026-12-14T15:00:00.000Z',
+      '2026-12-15T15:00:00.000Z',
+    ]);
     expect(again.body.siteTimeZone).toBe('America/Chicago');
   });
 
@@ -175,8 +212,14 @@ describe('triage and the clock', () => {
       .insert(cabinets)
       .values({ wallId: wall.id, cabinetModelId: wall.cabinetModelId, serial: `RP-${Date.now()}`, column: 4, row: 2, batch: 'B7' })
       .returning();
-    const [part] = await db().insert(parts).values({ sku: `MOD-${Date.now()}`, name: 'Test module', kind: 'module' }).returning();
-    const [van] = await db().insert(stockLocations).values({ name: `Van ${Date.now()}`, kind: 'van', holderId: tech.user.id }).returning();
+    const [part] = await db()
+      .insert(parts)
+      .values({ sku: `MOD-${Date.now()}`, name: 'Test module', kind: 'module' })
+      .returning();
+    const [van] = await db()
+      .insert(stockLocations)
+      .values({ name: `Van ${Date.now()}`, kind: 'van', holderId: tech.user.id })
+      .returning();
     await db().insert(repairs).values({
       clientId: org.client.id,
       wallId: wall.id,
@@ -223,7 +266,10 @@ describe('triage and the clock', () => {
   it('counts open tickets by clock state for the board', async () => {
     const before = (await office.get('/api/tickets/clock-counts')).body as Record<string, number>;
     const t = await open(clientUser, { title: 'counted' });
-    await db().update(tickets).set({ resolutionDueAt: new Date(Date.now() - 1000), acknowledgedAt: new Date() }).where(eq(tickets.id, t.id));
+    await db()
+      .update(tickets)
+      .set({ resolutionDueAt: new Date(Date.now() - 1000), acknowledgedAt: new Date() })
+      .where(eq(tickets.id, t.id));
     const after = (await office.get('/api/tickets/clock-counts')).body as Record<string, number>;
     expect((after.breached ?? 0) - (before.breached ?? 0)).toBe(1);
     const theirs = await clientUser.get('/api/tickets/clock-counts');
@@ -264,8 +310,12 @@ describe('triage and the clock', () => {
 describe('comments', () => {
   it('hides internal comments from the client, and refuses internal comments from them', async () => {
     const t = await open(clientUser);
-    expect((await office.post(`/api/tickets/${t.id}/comments`, { body: 'Parts cost us a fortune', visibility: 'internal' })).status).toBe(201);
-    expect((await office.post(`/api/tickets/${t.id}/comments`, { body: 'We will bring a module from batch B7.', visibility: 'public' })).status).toBe(201);
+    expect((await office.post(`/api/tickets/${t.id}/comments`, { body: 'Parts cost us a fortune', visibility: 'internal' })).status).toBe(
+      201,
+    );
+    expect(
+      (await office.post(`/api/tickets/${t.id}/comments`, { body: 'We will bring a module from batch B7.', visibility: 'public' })).status,
+    ).toBe(201);
     expect((await clientUser.post(`/api/tickets/${t.id}/comments`, { body: 'Thanks!', visibility: 'public' })).status).toBe(201);
     expect((await clientUser.post(`/api/tickets/${t.id}/comments`, { body: 'sneaky', visibility: 'internal' })).status).toBe(403);
     const theirs = await clientUser.get(`/api/tickets/${t.id}/comments`);
@@ -285,7 +335,10 @@ describe('the tenant boundary on ticket routes', () => {
     expect((await stranger.get(`/api/tickets/${t.id}/comments`)).status).toBe(404);
     expect((await stranger.post(`/api/tickets/${t.id}/comments`, { body: 'hi' })).status).toBe(404);
     expect((await stranger.get(`/api/tickets/${t.id}/attachments`)).status).toBe(404);
-    const upload = await stranger.agent.post(`/api/tickets/${t.id}/attachments`).set('X-Requested-With', 'gridkeep').attach('file', Buffer.from('%PDF-1.4\n'), 'x.pdf');
+    const upload = await stranger.agent
+      .post(`/api/tickets/${t.id}/attachments`)
+      .set('X-Requested-With', 'gridkeep')
+      .attach('file', Buffer.from('%PDF-1.4\n'), 'x.pdf');
     expect(upload.status).toBe(404);
     const list = await stranger.get(`/api/tickets?clientId=${org.client.id}`);
     expect(list.body.items).toEqual([]);

@@ -41,18 +41,26 @@ describe('wall documents', () => {
   it('uploads to object storage under a random key and downloads with the original name', async () => {
     const res = await upload(office, org.wall!.id, 'As-built — Hall A.pdf', pdf);
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ fileName: 'As-built — Hall A.pdf', contentType: 'application/pdf', sizeBytes: pdf.length, kind: 'document' });
+    expect(res.body).toMatchObject({
+      fileName: 'As-built — Hall A.pdf',
+      contentType: 'application/pdf',
+      sizeBytes: pdf.length,
+      kind: 'document',
+    });
     const [row] = await db().select().from(attachments).where(eq(attachments.id, res.body.id));
     expect(row.storageKey).not.toContain('As-built');
     expect(row.storageKey).toMatch(/[0-9a-f-]{36}$/);
     expect(s3.current.keys('gridkeep-test')).toContain(row.storageKey);
     const list = await office.get(`/api/walls/${org.wall!.id}/documents`);
     expect(list.body.items.map((d: { id: string }) => d.id)).toContain(res.body.id);
-    const download = await office.get(res.body.url).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const download = await office
+      .get(res.body.url)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(download.status).toBe(200);
     expect(Buffer.compare(download.body as Buffer, pdf)).toBe(0);
     expect(download.headers['content-type']).toBe('application/pdf');

@@ -81,7 +81,12 @@ describe('PUT /api/walls/:id/plan', () => {
   it('refuses a run over the output limit, naming it', async () => {
     const { wall } = await wallOf();
     // Rows 1 and 2 joined into one run: 24 cabinets × 36,864 = 884,736 pixels > 650,000.
-    const runs = [{ index: 1, cells: [...row(1), ...row(2).reverse()] }, ...rowRuns().slice(2).map((r, i) => ({ ...r, index: i + 2 }))];
+    const runs = [
+      { index: 1, cells: [...row(1), ...row(2).reverse()] },
+      ...rowRuns()
+        .slice(2)
+        .map((r, i) => ({ ...r, index: i + 2 })),
+    ];
     const res = await office.put(`/api/walls/${wall.id}/plan`, { settings, dataRuns: { pattern: 'custom', runs } });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('runs_invalid');
@@ -152,7 +157,9 @@ describe('PUT /api/walls/:id/plan', () => {
     const supply = { voltage: 208, phases: 3, breakerAmps: 20, continuousFactor: 0.8, powerFactor: 1 };
     const res = await office.put(`/api/walls/${wall.id}/plan`, { settings: { ...settings, supply, chainCapacityW: 5764 } });
     expect(res.status).toBe(400);
-    expect(res.body.error.fields).toEqual({ 'settings.chainCapacityW': 'A chain on this supply may carry at most 3,328 W, set by its circuit.' });
+    expect(res.body.error.fields).toEqual({
+      'settings.chainCapacityW': 'A chain on this supply may carry at most 3,328 W, set by its circuit.',
+    });
     // Left out, the chain capacity is the chain's limit.
     const ok = await office.put(`/api/walls/${wall.id}/plan`, { settings: { supply, outputCapacityPixels: 650_000 } });
     expect(ok.status).toBe(200);
@@ -169,13 +176,24 @@ describe('PUT /api/walls/:id/plan', () => {
       'settings.chainCapacityW': "A chain on this supply may carry at most 1,200 W, set by the cabinet's power connector.",
     });
     // Seven cabinets on one chain are over the connector: refused, naming the run.
-    const seven = [{ index: 1, cells: row(1, 1, 7) }, { index: 2, cells: row(1, 8, 12) }, ...rowRuns().slice(1).flatMap((r) => [
-      { index: 0, cells: r.cells.slice(0, 6) },
-      { index: 0, cells: r.cells.slice(6) },
-    ])].map((r, i) => ({ ...r, index: i + 1 }));
-    const over = await office.put(`/api/walls/${wall.id}/plan`, { settings: { ...settings, chainCapacityW: undefined }, powerRuns: { pattern: 'custom', runs: seven } });
+    const seven = [
+      { index: 1, cells: row(1, 1, 7) },
+      { index: 2, cells: row(1, 8, 12) },
+      ...rowRuns()
+        .slice(1)
+        .flatMap((r) => [
+          { index: 0, cells: r.cells.slice(0, 6) },
+          { index: 0, cells: r.cells.slice(6) },
+        ]),
+    ].map((r, i) => ({ ...r, index: i + 1 }));
+    const over = await office.put(`/api/walls/${wall.id}/plan`, {
+      settings: { ...settings, chainCapacityW: undefined },
+      powerRuns: { pattern: 'custom', runs: seven },
+    });
     expect(over.status).toBe(400);
-    expect(over.body.error.details.problems).toEqual([{ kind: 'power', run: 1, message: 'Run 1 draws 1,400 W, over the chain capacity of 1,200 W.' }]);
+    expect(over.body.error.details.problems).toEqual([
+      { kind: 'power', run: 1, message: 'Run 1 draws 1,400 W, over the chain capacity of 1,200 W.' },
+    ]);
     const maker = await wallOf({ maxPerChain: 4 });
     const limited = await office.put(`/api/walls/${maker.wall.id}/plan`, { settings: { ...settings, chainCapacityW: undefined } });
     expect(limited.body.planSettings.chainCapacityW).toBe(800);
@@ -185,7 +203,9 @@ describe('PUT /api/walls/:id/plan', () => {
     const { wall } = await wallOf();
     const res = await office.put(`/api/walls/${wall.id}/plan`, { settings: { ...settings, supply: { ...settings.supply, voltage: 480 } } });
     expect(res.status).toBe(400);
-    expect(res.body.error.fields['settings.supply.voltage']).toMatch(/^480 V is outside the cabinet's 100 V–240 V input range.*step-down transformer\.$/);
+    expect(res.body.error.fields['settings.supply.voltage']).toMatch(
+      /^480 V is outside the cabinet's 100 V–240 V input range.*step-down transformer\.$/,
+    );
   });
 
   it('is the office’s: anonymous 401, technician 403, client users 404 (their own wall and another organisation’s)', async () => {

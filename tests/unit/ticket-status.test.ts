@@ -6,7 +6,9 @@ import { priorityTones, statusTones } from '@/features/tickets/components/ticket
 // WCAG 2.2, "relative luminance" and "contrast ratio" definitions (w3.org/TR/WCAG22/#dfn-relative-luminance).
 function luminance(hex: string) {
   const n = hex.replace('#', '');
-  const [r, g, b] = [0, 2, 4].map((i) => parseInt(n.slice(i, i + 2), 16) / 255).map((c) => (c <= 0.03928 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4));
+  const [r, g, b] = [0, 2, 4]
+    .map((i) => parseInt(n.slice(i, i + 2), 16) / 255)
+    .map((c) => (c <= 0.03928 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4));
   return 0.2126 * r + 0.7152 * g + 0.0722 * b;
 }
 function contrast(a: string, b: string) {

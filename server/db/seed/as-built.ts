@@ -23,8 +23,15 @@ function storedRuns(wall: Grid, limits: RunLimits): WallRuns {
  * where that takes fewer (a tall, narrow side wall), a line split only where it is over one output.
  */
 export function dataLinesInUse(wall: Grid, model: RunCabinet): number {
-  const limits: RunLimits = { kind: 'data', cabinetPixels: model.pixelsWide * model.pixelsHigh, outputCapacityPixels: DEFAULT_OUTPUT_CAPACITY_PIXELS };
-  return Math.min(generateRuns(wall.columns, wall.rows, 'rows', limits).length, generateRuns(wall.columns, wall.rows, 'columns', limits).length);
+  const limits: RunLimits = {
+    kind: 'data',
+    cabinetPixels: model.pixelsWide * model.pixelsHigh,
+    outputCapacityPixels: DEFAULT_OUTPUT_CAPACITY_PIXELS,
+  };
+  return Math.min(
+    generateRuns(wall.columns, wall.rows, 'rows', limits).length,
+    generateRuns(wall.columns, wall.rows, 'columns', limits).length,
+  );
 }
 
 /** The wall's stored plan columns: its supply and runs when the as-built plan is on file, else none. */

@@ -25,26 +25,43 @@ export function demoAuditTrail(rows: Source, officeId: string): AuditRow[] {
     const ticketId = t.id!;
     const createdAt = t.createdAt as Date;
     add({
-      actorId: t.reporterId ?? null, entity: 'ticket', entityId: ticketId, action: 'created', createdAt,
+      actorId: t.reporterId ?? null,
+      entity: 'ticket',
+      entityId: ticketId,
+      action: 'created',
+      createdAt,
       after: { number: t.number, title: t.title, priority: t.priority, status: 'new', cells: t.cells },
     });
     let status = 'new';
     const step = (actorId: string | null | undefined, at: Date | null | undefined, next: string, extra: Record<string, unknown> = {}) => {
       if (!at || next === status) return;
-      add({ actorId: actorId ?? null, entity: 'ticket', entityId: ticketId, action: 'updated', createdAt: at, before: { status }, after: { status: next, ...extra } });
+      add({
+        actorId: actorId ?? null,
+        entity: 'ticket',
+        entityId: ticketId,
+        action: 'updated',
+        createdAt: at,
+        before: { status },
+        after: { status: next, ...extra },
+      });
       status = next;
     };
     step(officeId, t.acknowledgedAt as Date | null, 'acknowledged', { assigneeId: t.assigneeId ?? null });
     // A ticket still open in a later state (scheduled, in progress, waiting) got there last.
-    if (!t.resolvedAt && t.status && !['new', 'acknowledged'].includes(t.status)) step(t.assigneeId ?? officeId, t.updatedAt as Date, t.status);
+    if (!t.resolvedAt && t.status && !['new', 'acknowledged'].includes(t.status))
+      step(t.assigneeId ?? officeId, t.updatedAt as Date, t.status);
     step(t.assigneeId ?? officeId, t.resolvedAt as Date | null, 'resolved');
     step(t.reporterId ?? officeId, t.closedAt as Date | null, 'closed');
   }
 
   for (const c of rows.ticketComments) {
     add({
-      actorId: c.authorId ?? null, entity: 'ticket', entityId: c.ticketId, action: `comment_${c.visibility ?? 'public'}`,
-      createdAt: c.createdAt as Date, after: { commentId: c.id },
+      actorId: c.authorId ?? null,
+      entity: 'ticket',
+      entityId: c.ticketId,
+      action: `comment_${c.visibility ?? 'public'}`,
+      createdAt: c.createdAt as Date,
+      after: { commentId: c.id },
     });
   }
 
@@ -55,7 +72,8 @@ export function demoAuditTrail(rows: Source, officeId: string): AuditRow[] {
     if (e.kind === 'placed' || e.kind === 'imported') add({ ...base, action: 'placed', after: to });
     else if (e.kind === 'moved' || e.kind === 'removed') add({ ...base, action: 'moved', before: from, after: to });
     else if (e.kind === 'swapped') add({ ...base, action: 'swapped', before: from, after: to });
-    else if (e.kind === 'status_changed') add({ ...base, action: 'updated', before: { status: e.fromStatus ?? null }, after: { status: e.toStatus ?? null } });
+    else if (e.kind === 'status_changed')
+      add({ ...base, action: 'updated', before: { status: e.fromStatus ?? null }, after: { status: e.toStatus ?? null } });
   }
 
   return trail.sort((a, b) => (a.createdAt as Date).getTime() - (b.createdAt as Date).getTime());

@@ -5,7 +5,18 @@ import type * as schema from '../schema/index.js';
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../../../shared/calc/video-signal.js';
 import { asBuiltPlan, dataLinesInUse } from './as-built.js';
 import { entries, pad, type Demo, type Insert } from './build-context.js';
-import { company, controllerModels, locationSpecs, modelSpecs, siteSpecs, usualTechnician, wallSpecs, type LocationKey, type ModelKey, type WallKey } from './register.js';
+import {
+  company,
+  controllerModels,
+  locationSpecs,
+  modelSpecs,
+  siteSpecs,
+  usualTechnician,
+  wallSpecs,
+  type LocationKey,
+  type ModelKey,
+  type WallKey,
+} from './register.js';
 import { ticketSpecs } from './work.js';
 
 const letters = 'ABCDEFGH';
@@ -71,17 +82,36 @@ function addWall({ rows, rand, clock, id, ids }: Demo, k: WallKey, w: WallSpec) 
   const installDate = clock.isoDate(-w.installedDaysAgo, site.timeZone);
   const installedAt = clock.at(site.timeZone, -w.installedDaysAgo, 10);
   rows.walls.push({
-    id: ids.wall[k], clientId: ids.client[site.client], siteId: ids.site[w.site], name: w.name, cabinetModelId: ids.model[w.model],
-    columns: w.columns, rows: w.rows, mounting: w.mounting, installDate,
+    id: ids.wall[k],
+    clientId: ids.client[site.client],
+    siteId: ids.site[w.site],
+    name: w.name,
+    cabinetModelId: ids.model[w.model],
+    columns: w.columns,
+    rows: w.rows,
+    mounting: w.mounting,
+    installDate,
     warrantyEnd: addYears(parseISO(installDate), w.warrantyYears).toISOString().slice(0, 10),
-    calibrationDate: installDate, inputNotes: w.inputNotes, internalNotes: w.internalNotes,
-    ...asBuiltPlan(w, model), createdAt: installedAt, updatedAt: installedAt,
+    calibrationDate: installDate,
+    inputNotes: w.inputNotes,
+    internalNotes: w.internalNotes,
+    ...asBuiltPlan(w, model),
+    createdAt: installedAt,
+    updatedAt: installedAt,
   });
   const ctrl = controllerModels[w.controller];
   rows.controllers.push({
-    id: id(), wallId: ids.wall[k], model: ctrl.model, serial: `${ctrl.serialPrefix}-${clock.yymm(-w.installedDaysAgo - 40)}-${pad(rand.int(1000, 99999), 5)}`,
-    firmware: w.firmware, outputs: ctrl.outputs, outputsInUse: dataLinesInUse(w, model), pixelsPerOutput: DEFAULT_OUTPUT_CAPACITY_PIXELS,
-    notes: '', createdAt: installedAt, updatedAt: installedAt,
+    id: id(),
+    wallId: ids.wall[k],
+    model: ctrl.model,
+    serial: `${ctrl.serialPrefix}-${clock.yymm(-w.installedDaysAgo - 40)}-${pad(rand.int(1000, 99999), 5)}`,
+    firmware: w.firmware,
+    outputs: ctrl.outputs,
+    outputsInUse: dataLinesInUse(w, model),
+    pixelsPerOutput: DEFAULT_OUTPUT_CAPACITY_PIXELS,
+    notes: '',
+    createdAt: installedAt,
+    updatedAt: installedAt,
   });
   return { installDate, installedAt };
 }
@@ -133,16 +163,31 @@ function placeCabinets(
       const batchLetter = batch.slice(-1);
       const at = replacement ? clock.hoursFrom(installedAt, 14 * 24) : installedAt;
       const cabId = cabinets.add({
-        id: id(), serial: cabinets.serialFor(w.model, batch.split('-')[1], batchLetter), cabinetModelId: ids.model[w.model],
-        wallId: ids.wall[k], column: c, row: r, batch, status: 'installed', stockLocationId: null,
+        id: id(),
+        serial: cabinets.serialFor(w.model, batch.split('-')[1], batchLetter),
+        cabinetModelId: ids.model[w.model],
+        wallId: ids.wall[k],
+        column: c,
+        row: r,
+        batch,
+        status: 'installed',
+        stockLocationId: null,
         installedOn: replacement ? clock.isoDate(-w.installedDaysAgo + 14, site.timeZone) : installDate,
         notes: replacement ? 'Replacement for a cabinet that failed burn-in at commissioning.' : '',
-        createdAt: at, updatedAt: at,
+        createdAt: at,
+        updatedAt: at,
       });
       cabinets.at.set(`${k}|${c}|${r}`, { id: cabId, batch });
       cabinets.event({
-        cabinetId: cabId, kind: 'placed', toWallId: ids.wall[k], toColumn: c, toRow: r, toStatus: 'installed', actorId: tech,
-        note: replacement ? 'Fitted at commissioning in place of a unit that failed burn-in.' : 'Installed.', createdAt: at,
+        cabinetId: cabId,
+        kind: 'placed',
+        toWallId: ids.wall[k],
+        toColumn: c,
+        toRow: r,
+        toStatus: 'installed',
+        actorId: tech,
+        note: replacement ? 'Fitted at commissioning in place of a unit that failed burn-in.' : 'Installed.',
+        createdAt: at,
       });
     }
   }
@@ -157,11 +202,28 @@ export function addSpare(
   const { model, batch, location, daysAgo, note } = spec;
   const at = clock.at(company.defaultTimeZone, -daysAgo, 11);
   const cabId = cabinets.add({
-    id: id(), serial: cabinets.serialFor(model, batch.split('-')[1], batch.slice(-1)), cabinetModelId: ids.model[model], wallId: null,
-    column: null, row: null, batch, status: 'spare', stockLocationId: ids.location[location], installedOn: null, notes: note,
-    createdAt: at, updatedAt: at,
+    id: id(),
+    serial: cabinets.serialFor(model, batch.split('-')[1], batch.slice(-1)),
+    cabinetModelId: ids.model[model],
+    wallId: null,
+    column: null,
+    row: null,
+    batch,
+    status: 'spare',
+    stockLocationId: ids.location[location],
+    installedOn: null,
+    notes: note,
+    createdAt: at,
+    updatedAt: at,
   });
-  cabinets.event({ cabinetId: cabId, kind: 'status_changed', toStatus: 'spare', actorId: ids.user.office, note: `Received into ${locationSpecs[location].name}.`, createdAt: at });
+  cabinets.event({
+    cabinetId: cabId,
+    kind: 'status_changed',
+    toStatus: 'spare',
+    actorId: ids.user.office,
+    note: `Received into ${locationSpecs[location].name}.`,
+    createdAt: at,
+  });
   return { id: cabId, at };
 }
 
@@ -170,10 +232,22 @@ export function addAtticStock(demo: Demo, cabinets: CabinetLog, wallBatches: Wal
   const w1 = wallSpecs.w01;
   const spare = (model: ModelKey, batch: string, location: LocationKey, daysAgo: number, note: string) =>
     addSpare(demo, cabinets, { model, batch, location, daysAgo, note });
-  const kitSpareCabinet = spare('hx26', wallBatches.w01.later, 'kitMain', w1.installedDaysAgo - 14, 'On-site spare for the main hall walls.');
+  const kitSpareCabinet = spare(
+    'hx26',
+    wallBatches.w01.later,
+    'kitMain',
+    w1.installedDaysAgo - 14,
+    'On-site spare for the main hall walls.',
+  );
   spare('hx26', wallBatches.w01.original[0], 'warehouse', w1.installedDaysAgo - 14, 'Attic stock for the Cedar Hollow main hall.');
   spare('hx26', wallBatches.w11.later, 'warehouse', wallSpecs.w11.installedDaysAgo - 10, 'Attic stock for the exhibit hall curved wall.');
-  spare('mv15', wallBatches.w12.original[1], 'warehouse', wallSpecs.w12.installedDaysAgo - 10, 'Attic stock for the Alderbrook lobby wall.');
+  spare(
+    'mv15',
+    wallBatches.w12.original[1],
+    'warehouse',
+    wallSpecs.w12.installedDaysAgo - 10,
+    'Attic stock for the Alderbrook lobby wall.',
+  );
   spare('tw39', wallBatches.w09.original[0], 'kitArena', wallSpecs.w09.installedDaysAgo - 7, 'On-site spare for the centre-hung wall.');
   return kitSpareCabinet;
 }

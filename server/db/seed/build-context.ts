@@ -78,9 +78,29 @@ export function startDemo(now: Date): Demo {
   const clock = createClock(now);
   const rows: DemoRows = {
     companySettings: { id: 1, ...company, updatedAt: now },
-    servicePlans: [], clients: [], sites: [], contacts: [], users: [], cabinetModels: [], walls: [], controllers: [],
-    parts: [], stockLocations: [], cabinets: [], cabinetEvents: [], maintenancePlans: [], tickets: [], ticketComments: [],
-    visits: [], visitTechnicians: [], repairs: [], vendorReturns: [], stockMovements: [], stockBalances: [], reorderPoints: [], auditEvents: [],
+    servicePlans: [],
+    clients: [],
+    sites: [],
+    contacts: [],
+    users: [],
+    cabinetModels: [],
+    walls: [],
+    controllers: [],
+    parts: [],
+    stockLocations: [],
+    cabinets: [],
+    cabinetEvents: [],
+    maintenancePlans: [],
+    tickets: [],
+    ticketComments: [],
+    visits: [],
+    visitTechnicians: [],
+    repairs: [],
+    vendorReturns: [],
+    stockMovements: [],
+    stockBalances: [],
+    reorderPoints: [],
+    auditEvents: [],
   };
   const ids = { plan: {}, client: {}, site: {}, user: {}, userName: {}, model: {}, part: {}, location: {}, wall: {} } as DemoIds;
   return { rows, rand, clock, id: rand.uuid, longAgo: clock.at(company.defaultTimeZone, -900, 9), ids };

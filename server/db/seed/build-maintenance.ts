@@ -22,20 +22,44 @@ function addMaintenancePlan({ rows, clock, id, ids }: Demo, work: WorkLog, m: Ma
   const planId = id();
   const installedAt = clock.at(tz, -w.installedDaysAgo, 10);
   rows.maintenancePlans.push({
-    id: planId, wallId: ids.wall[m.wall], intervalMonths: m.intervalMonths, checklist: maintenanceChecklist,
-    lastDoneOn, nextDueOn, active: true, createdAt: installedAt, updatedAt: clock.at(tz, doneOffset, 15),
+    id: planId,
+    wallId: ids.wall[m.wall],
+    intervalMonths: m.intervalMonths,
+    checklist: maintenanceChecklist,
+    lastDoneOn,
+    nextDueOn,
+    active: true,
+    createdAt: installedAt,
+    updatedAt: clock.at(tz, doneOffset, 15),
   });
   const start = clock.at(tz, doneOffset, m.wall === 'w12' ? 6 : 8);
   const completedAt = clock.hoursFrom(start, 3.5);
-  const visitId = work.addVisit({
-    clientId: ids.client[site.client], siteId: ids.site[w.site], wallId: ids.wall[m.wall], ticketId: null, maintenancePlanId: planId,
-    kind: 'maintenance', status: 'completed', windowStart: start, windowEnd: clock.hoursFrom(start, 4),
-    checklist: maintenanceChecklist.map((label): ChecklistItem => ({ label, done: true })), summary: m.summary,
-    signedByName: site.contact.name, signedAt: completedAt, reportSentAt: clock.hoursFrom(completedAt, 0.1),
-    startedAt: clock.hoursFrom(start, 0.1), completedAt, createdAt: clock.hoursFrom(start, -14 * 24), updatedAt: completedAt,
-  }, [ids.user[m.tech]]);
+  const visitId = work.addVisit(
+    {
+      clientId: ids.client[site.client],
+      siteId: ids.site[w.site],
+      wallId: ids.wall[m.wall],
+      ticketId: null,
+      maintenancePlanId: planId,
+      kind: 'maintenance',
+      status: 'completed',
+      windowStart: start,
+      windowEnd: clock.hoursFrom(start, 4),
+      checklist: maintenanceChecklist.map((label): ChecklistItem => ({ label, done: true })),
+      summary: m.summary,
+      signedByName: site.contact.name,
+      signedAt: completedAt,
+      reportSentAt: clock.hoursFrom(completedAt, 0.1),
+      startedAt: clock.hoursFrom(start, 0.1),
+      completedAt,
+      createdAt: clock.hoursFrom(start, -14 * 24),
+      updatedAt: completedAt,
+    },
+    [ids.user[m.tech]],
+  );
   (m.repairs ?? []).forEach((r, i) =>
-    work.logRepair(r, { wall: m.wall, visitId, ticketId: null, tech: m.tech, performedAt: clock.hoursFrom(start, 1 + 0.5 * i) }));
+    work.logRepair(r, { wall: m.wall, visitId, ticketId: null, tech: m.tech, performedAt: clock.hoursFrom(start, 1 + 0.5 * i) }),
+  );
 
   const dueIn = differenceInCalendarDays(parseISO(nextDueOn), parseISO(today));
   if (dueIn >= 0 && dueIn <= 14) {
@@ -43,11 +67,22 @@ function addMaintenancePlan({ rows, clock, id, ids }: Demo, work: WorkLog, m: Ma
     const planned = clock.at(tz, offset, m.wall === 'w12' ? 6 : 8);
     // The big centre wall takes both technicians.
     const techs = m.wall === 'w01' ? [ids.user.tech1, ids.user.tech2] : [ids.user[m.tech === 'tech1' ? 'tech1' : 'tech2']];
-    work.addVisit({
-      clientId: ids.client[site.client], siteId: ids.site[w.site], wallId: ids.wall[m.wall], ticketId: null, maintenancePlanId: planId,
-      kind: 'maintenance', status: 'planned', windowStart: planned, windowEnd: clock.hoursFrom(planned, m.wall === 'w01' ? 6 : 4),
-      checklist: maintenanceChecklist.map((label): ChecklistItem => ({ label, done: false })),
-      createdAt: clock.hoursAgo(24 * 7), updatedAt: clock.hoursAgo(24 * 7),
-    }, techs);
+    work.addVisit(
+      {
+        clientId: ids.client[site.client],
+        siteId: ids.site[w.site],
+        wallId: ids.wall[m.wall],
+        ticketId: null,
+        maintenancePlanId: planId,
+        kind: 'maintenance',
+        status: 'planned',
+        windowStart: planned,
+        windowEnd: clock.hoursFrom(planned, m.wall === 'w01' ? 6 : 4),
+        checklist: maintenanceChecklist.map((label): ChecklistItem => ({ label, done: false })),
+        createdAt: clock.hoursAgo(24 * 7),
+        updatedAt: clock.hoursAgo(24 * 7),
+      },
+      techs,
+    );
   }
 }

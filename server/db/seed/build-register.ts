@@ -1,7 +1,19 @@
 // The demo's organisations, accounts and catalogue: service plans, clients, sites and their
 // contacts, staff and client users, cabinet models, parts and stock locations.
 import { entries, type Demo } from './build-context.js';
-import { clientSpecs, clientUsers, company, locationSpecs, modelSpecs, partSpecs, plans, siteSpecs, staffUsers, type LocationKey, type SiteKey } from './register.js';
+import {
+  clientSpecs,
+  clientUsers,
+  company,
+  locationSpecs,
+  modelSpecs,
+  partSpecs,
+  plans,
+  siteSpecs,
+  staffUsers,
+  type LocationKey,
+  type SiteKey,
+} from './register.js';
 
 /** The site kit (spares kept on site) of each site that has one. */
 export const kitAt: Partial<Record<SiteKey, LocationKey>> = {};
@@ -20,19 +32,52 @@ export function addOrganisations({ rows, id, longAgo, ids }: Demo) {
   }
   for (const [k, c] of entries(clientSpecs)) {
     ids.client[k] = id();
-    rows.clients.push({ id: ids.client[k], name: c.name, servicePlanId: ids.plan[c.plan], notes: c.notes, createdAt: longAgo, updatedAt: longAgo });
+    rows.clients.push({
+      id: ids.client[k],
+      name: c.name,
+      servicePlanId: ids.plan[c.plan],
+      notes: c.notes,
+      createdAt: longAgo,
+      updatedAt: longAgo,
+    });
     for (const contact of c.contacts) {
-      rows.contacts.push({ id: id(), clientId: ids.client[k], siteId: null, receivesUpdates: true, ...contact, createdAt: longAgo, updatedAt: longAgo });
+      rows.contacts.push({
+        id: id(),
+        clientId: ids.client[k],
+        siteId: null,
+        receivesUpdates: true,
+        ...contact,
+        createdAt: longAgo,
+        updatedAt: longAgo,
+      });
     }
   }
   for (const [k, s] of entries(siteSpecs)) {
     ids.site[k] = id();
     rows.sites.push({
-      id: ids.site[k], clientId: ids.client[s.client], name: s.name, address: s.address, city: s.city, region: s.region,
-      postalCode: s.postalCode, country: 'US', timeZone: s.timeZone, accessNotes: s.accessNotes, internalNotes: s.internalNotes ?? '',
-      createdAt: longAgo, updatedAt: longAgo,
+      id: ids.site[k],
+      clientId: ids.client[s.client],
+      name: s.name,
+      address: s.address,
+      city: s.city,
+      region: s.region,
+      postalCode: s.postalCode,
+      country: 'US',
+      timeZone: s.timeZone,
+      accessNotes: s.accessNotes,
+      internalNotes: s.internalNotes ?? '',
+      createdAt: longAgo,
+      updatedAt: longAgo,
     });
-    rows.contacts.push({ id: id(), clientId: ids.client[s.client], siteId: ids.site[k], receivesUpdates: true, ...s.contact, createdAt: longAgo, updatedAt: longAgo });
+    rows.contacts.push({
+      id: id(),
+      clientId: ids.client[s.client],
+      siteId: ids.site[k],
+      receivesUpdates: true,
+      ...s.contact,
+      createdAt: longAgo,
+      updatedAt: longAgo,
+    });
   }
 }
 
@@ -43,16 +88,34 @@ export function addAccounts({ rows, rand, clock, id, ids }: Demo, passwordHash: 
     ids.user[k] = id();
     ids.userName[k] = u.name;
     rows.users.push({
-      id: ids.user[k], email: u.email, name: u.name, role: u.role, clientId: null, phone: u.phone, passwordHash,
-      passwordChangedAt: joined, lastSignInAt: clock.hoursAgo(rand.int(1, 30)), createdAt: joined, updatedAt: joined,
+      id: ids.user[k],
+      email: u.email,
+      name: u.name,
+      role: u.role,
+      clientId: null,
+      phone: u.phone,
+      passwordHash,
+      passwordChangedAt: joined,
+      lastSignInAt: clock.hoursAgo(rand.int(1, 30)),
+      createdAt: joined,
+      updatedAt: joined,
     });
   }
   for (const [k, u] of entries(clientUsers)) {
     ids.user[k] = id();
     ids.userName[k] = u.name;
     rows.users.push({
-      id: ids.user[k], email: u.email, name: u.name, role: 'client', clientId: ids.client[u.client], phone: u.phone, passwordHash,
-      passwordChangedAt: joined, lastSignInAt: clock.hoursAgo(rand.int(20, 300)), createdAt: joined, updatedAt: joined,
+      id: ids.user[k],
+      email: u.email,
+      name: u.name,
+      role: 'client',
+      clientId: ids.client[u.client],
+      phone: u.phone,
+      passwordHash,
+      passwordChangedAt: joined,
+      lastSignInAt: clock.hoursAgo(rand.int(20, 300)),
+      createdAt: joined,
+      updatedAt: joined,
     });
   }
 }
@@ -67,16 +130,28 @@ export function addCatalogue({ rows, id, longAgo, ids }: Demo) {
   for (const [k, p] of entries(partSpecs)) {
     ids.part[k] = id();
     rows.parts.push({
-      id: ids.part[k], sku: p.sku, name: p.name, kind: p.kind, cabinetModelId: p.model ? ids.model[p.model] : null,
-      unitCost: p.unitCost, leadTimeDays: p.leadTimeDays, createdAt: longAgo, updatedAt: longAgo,
+      id: ids.part[k],
+      sku: p.sku,
+      name: p.name,
+      kind: p.kind,
+      cabinetModelId: p.model ? ids.model[p.model] : null,
+      unitCost: p.unitCost,
+      leadTimeDays: p.leadTimeDays,
+      createdAt: longAgo,
+      updatedAt: longAgo,
     });
   }
   for (const [k, l] of entries(locationSpecs)) {
     ids.location[k] = id();
     rows.stockLocations.push({
-      id: ids.location[k], name: l.name, kind: l.kind, holderId: l.holder ? ids.user[l.holder] : null,
-      siteId: l.site ? ids.site[l.site] : null, clientId: l.site ? ids.client[siteSpecs[l.site].client] : null,
-      createdAt: longAgo, updatedAt: longAgo,
+      id: ids.location[k],
+      name: l.name,
+      kind: l.kind,
+      holderId: l.holder ? ids.user[l.holder] : null,
+      siteId: l.site ? ids.site[l.site] : null,
+      clientId: l.site ? ids.client[siteSpecs[l.site].client] : null,
+      createdAt: longAgo,
+      updatedAt: longAgo,
     });
   }
 }

@@ -66,19 +66,38 @@ function logRepair(demo: Demo, sources: RepairSources, spec: RepairSpec, ctx: Re
   const from: LocationKey | undefined = part ? (kit && spec.from !== 'van' ? kit : vanOf[ctx.tech]) : undefined;
   const swap = spec.action === 'cabinet_swapped';
   rows.repairs.push({
-    id: repairId, clientId: ids.client[site.client], wallId: ids.wall[ctx.wall], visitId: ctx.visitId, ticketId: ctx.ticketId,
-    cabinetId: cabinet.id, column: spec.column, row: spec.row, component: spec.component,
-    moduleColumn: spec.module?.[0] ?? null, moduleRow: spec.module?.[1] ?? null, fault: spec.fault, action: spec.action,
-    partId: part ? ids.part[part] : null, partBatch: part ? batch : null, fromLocationId: from ? ids.location[from] : null,
-    removedPartFate: spec.fate ?? 'none', notes: spec.notes, technicianId: ids.user[ctx.tech],
-    performedAt: ctx.performedAt, createdAt: ctx.performedAt,
+    id: repairId,
+    clientId: ids.client[site.client],
+    wallId: ids.wall[ctx.wall],
+    visitId: ctx.visitId,
+    ticketId: ctx.ticketId,
+    cabinetId: cabinet.id,
+    column: spec.column,
+    row: spec.row,
+    component: spec.component,
+    moduleColumn: spec.module?.[0] ?? null,
+    moduleRow: spec.module?.[1] ?? null,
+    fault: spec.fault,
+    action: spec.action,
+    partId: part ? ids.part[part] : null,
+    partBatch: part ? batch : null,
+    fromLocationId: from ? ids.location[from] : null,
+    removedPartFate: spec.fate ?? 'none',
+    notes: spec.notes,
+    technicianId: ids.user[ctx.tech],
+    performedAt: ctx.performedAt,
+    createdAt: ctx.performedAt,
   });
   if (part && from) {
     stock.moves.push({ part, batch, kind: 'consumption', from, quantity: 1, at: ctx.performedAt, repairId, actorId: ids.user[ctx.tech] });
   }
   if (!swap) {
     cabinets.event({
-      cabinetId: cabinet.id, kind: 'repaired', repairId, actorId: ids.user[ctx.tech], createdAt: ctx.performedAt,
+      cabinetId: cabinet.id,
+      kind: 'repaired',
+      repairId,
+      actorId: ids.user[ctx.tech],
+      createdAt: ctx.performedAt,
       note: `${spec.component.replace('_', ' ')}: ${spec.action.replace('_', ' ')} (${cellLabel(spec)}).`,
     });
   }
@@ -98,17 +117,46 @@ function addWarrantyReturn(
   const sentAt = clock.hoursFrom(ctx.performedAt, 72);
   const sentOffset = -Math.round((clock.nowMs - sentAt.getTime()) / (24 * HOUR));
   rows.vendorReturns.push({
-    id: vrId, partId: ids.part[part], serial: `${partSpecs[part].sku.split('-')[0]}-${pad(rand.int(100000, 999999), 7)}`, batch,
-    quantity: 1, fault: spec.notes, fromLocationId: ids.location.warehouse, repairId,
-    rmaReference: `TRN-RMA-${rand.int(30000, 39999)}`, sentOn: clock.isoDate(sentOffset), expectedBackOn: clock.isoDate(sentOffset + turnaround),
-    outcome: 'pending', backInStockOn: null, backToLocationId: null,
-    notes: `Removed from ${w.name}, ${cellLabel(spec)}.`, createdAt: sentAt, updatedAt: sentAt,
+    id: vrId,
+    partId: ids.part[part],
+    serial: `${partSpecs[part].sku.split('-')[0]}-${pad(rand.int(100000, 999999), 7)}`,
+    batch,
+    quantity: 1,
+    fault: spec.notes,
+    fromLocationId: ids.location.warehouse,
+    repairId,
+    rmaReference: `TRN-RMA-${rand.int(30000, 39999)}`,
+    sentOn: clock.isoDate(sentOffset),
+    expectedBackOn: clock.isoDate(sentOffset + turnaround),
+    outcome: 'pending',
+    backInStockOn: null,
+    backToLocationId: null,
+    notes: `Removed from ${w.name}, ${cellLabel(spec)}.`,
+    createdAt: sentAt,
+    updatedAt: sentAt,
   });
   stock.moves.push({
-    part, batch, kind: 'return_from_wall', to: 'warehouse', quantity: 1, at: clock.hoursFrom(ctx.performedAt, 24), repairId,
-    reason: `Failed unit from ${w.name} ${cellLabel(spec)}, held for a warranty return`, actorId: ids.user[ctx.tech],
+    part,
+    batch,
+    kind: 'return_from_wall',
+    to: 'warehouse',
+    quantity: 1,
+    at: clock.hoursFrom(ctx.performedAt, 24),
+    repairId,
+    reason: `Failed unit from ${w.name} ${cellLabel(spec)}, held for a warranty return`,
+    actorId: ids.user[ctx.tech],
   });
-  stock.moves.push({ part, batch, kind: 'sent_to_vendor', from: 'warehouse', quantity: 1, at: sentAt, vendorReturnId: vrId, reason: 'Warranty return', actorId: ids.user.office });
+  stock.moves.push({
+    part,
+    batch,
+    kind: 'sent_to_vendor',
+    from: 'warehouse',
+    quantity: 1,
+    at: sentAt,
+    vendorReturnId: vrId,
+    reason: 'Warranty return',
+    actorId: ids.user.office,
+  });
 }
 
 /** The water-damaged cabinet leaves the wall; the site kit's spare takes its place, and a new spare is ordered. */
@@ -124,29 +172,68 @@ function swapInKitSpare(
   const newRow = rows.cabinets.find((c) => c.id === replacement)!;
   const retiredAt = clock.hoursFrom(ctx.performedAt, 9 * 24);
   const daysAgo = Math.round((clock.nowMs - ctx.performedAt.getTime()) / (24 * HOUR));
-  Object.assign(oldRow, { wallId: null, column: null, row: null, status: 'retired', notes: 'Water damage: backplane corroded, not economical to repair.', updatedAt: retiredAt });
+  Object.assign(oldRow, {
+    wallId: null,
+    column: null,
+    row: null,
+    status: 'retired',
+    notes: 'Water damage: backplane corroded, not economical to repair.',
+    updatedAt: retiredAt,
+  });
   Object.assign(newRow, {
-    wallId: ids.wall[ctx.wall], column: spec.column, row: spec.row, status: 'installed', stockLocationId: null,
-    installedOn: clock.isoDate(-daysAgo, site.timeZone), updatedAt: ctx.performedAt,
+    wallId: ids.wall[ctx.wall],
+    column: spec.column,
+    row: spec.row,
+    status: 'installed',
+    stockLocationId: null,
+    installedOn: clock.isoDate(-daysAgo, site.timeZone),
+    updatedAt: ctx.performedAt,
   });
   cabinets.at.set(`${ctx.wall}|${spec.column}|${spec.row}`, { id: replacement, batch: newRow.batch as string });
   cabinets.event({
-    cabinetId: old, kind: 'removed', fromWallId: ids.wall[ctx.wall], fromColumn: spec.column, fromRow: spec.row, otherCabinetId: replacement,
-    repairId, fromStatus: 'installed', toStatus: 'at_bench', actorId: ids.user[ctx.tech], createdAt: ctx.performedAt,
+    cabinetId: old,
+    kind: 'removed',
+    fromWallId: ids.wall[ctx.wall],
+    fromColumn: spec.column,
+    fromRow: spec.row,
+    otherCabinetId: replacement,
+    repairId,
+    fromStatus: 'installed',
+    toStatus: 'at_bench',
+    actorId: ids.user[ctx.tech],
+    createdAt: ctx.performedAt,
     note: 'Removed after water damage; to the bench.',
   });
   cabinets.event({
-    cabinetId: replacement, kind: 'placed', toWallId: ids.wall[ctx.wall], toColumn: spec.column, toRow: spec.row, otherCabinetId: old,
-    repairId, fromStatus: 'spare', toStatus: 'installed', actorId: ids.user[ctx.tech], createdAt: ctx.performedAt,
+    cabinetId: replacement,
+    kind: 'placed',
+    toWallId: ids.wall[ctx.wall],
+    toColumn: spec.column,
+    toRow: spec.row,
+    otherCabinetId: old,
+    repairId,
+    fromStatus: 'spare',
+    toStatus: 'installed',
+    actorId: ids.user[ctx.tech],
+    createdAt: ctx.performedAt,
     note: `Swapped in from ${locationSpecs.kitMain.name} for the water-damaged cabinet.`,
   });
   cabinets.event({
-    cabinetId: old, kind: 'status_changed', fromStatus: 'at_bench', toStatus: 'retired', actorId: ids.user.admin, createdAt: retiredAt,
+    cabinetId: old,
+    kind: 'status_changed',
+    fromStatus: 'at_bench',
+    toStatus: 'retired',
+    actorId: ids.user.admin,
+    createdAt: retiredAt,
     note: 'Bench verdict: backplane corroded, not economical to repair.',
   });
   // A new spare cabinet for the site kit, ordered after the swap.
   addSpare(demo, cabinets, {
-    model: 'hx26', batch: wallBatches.w01.later, location: 'kitMain', daysAgo: daysAgo - 30, note: 'Replacement on-site spare for the main hall walls.',
+    model: 'hx26',
+    batch: wallBatches.w01.later,
+    location: 'kitMain',
+    daysAgo: daysAgo - 30,
+    note: 'Replacement on-site spare for the main hall walls.',
   });
 }
 

@@ -15,7 +15,15 @@ const ackDelayHours = { critical: 0.25, high: 0.75, normal: 2, low: 5 } as const
 const visitAfterDays = { critical: 0, high: 1, normal: 3, low: 6 } as const;
 
 const dayLabel = (date: Date, timeZone: string) =>
-  new Intl.DateTimeFormat('en-US', { weekday: 'long', month: 'long', day: 'numeric', hour: '2-digit', minute: '2-digit', hour12: false, timeZone }).format(date);
+  new Intl.DateTimeFormat('en-US', {
+    weekday: 'long',
+    month: 'long',
+    day: 'numeric',
+    hour: '2-digit',
+    minute: '2-digit',
+    hour12: false,
+    timeZone,
+  }).format(date);
 
 /** Every ticket of the story, numbered from 1001 in the order they were opened. */
 export function addTickets(demo: Demo, work: WorkLog) {
@@ -74,13 +82,27 @@ function addTicket(demo: Demo, work: WorkLog, t: TicketSpec): TicketRow {
   }
 
   return {
-    id: ticketId, clientId: ids.client[site.client], siteId: ids.site[siteKey], wallId: t.wall ? ids.wall[t.wall] : null,
-    scope: t.scope ?? 'cells', cells: (t.cells ?? []).map(([column, row]) => ({ column, row })), title: t.title,
-    description: t.description, priority: t.priority, status: t.status, reporterId,
+    id: ticketId,
+    clientId: ids.client[site.client],
+    siteId: ids.site[siteKey],
+    wallId: t.wall ? ids.wall[t.wall] : null,
+    scope: t.scope ?? 'cells',
+    cells: (t.cells ?? []).map(([column, row]) => ({ column, row })),
+    title: t.title,
+    description: t.description,
+    priority: t.priority,
+    status: t.status,
+    reporterId,
     assigneeId: t.status === 'new' ? null : t.tech ? ids.user[t.tech] : null,
     // The same clock the app runs: business hours in the site's time zone, per the plan.
     ...ticketDueTimes(planClock(plans[clientSpecs[site.client].plan], tz), t.priority, createdAt),
-    pausedAt, pausedSeconds: 0, acknowledgedAt: ackAt, resolvedAt, closedAt, createdAt, updatedAt: lastActivity,
+    pausedAt,
+    pausedSeconds: 0,
+    acknowledgedAt: ackAt,
+    resolvedAt,
+    closedAt,
+    createdAt,
+    updatedAt: lastActivity,
   };
 }
 
@@ -116,26 +138,45 @@ function completedVisit({ clock, ids }: Demo, work: WorkLog, m: TicketMoment, st
   const site = siteSpecs[siteKey];
   const techId = ids.user[t.tech!];
   const after = t.visitAfterDays ?? visitAfterDays[t.priority];
-  const planned = t.priority === 'critical'
-    ? clock.hoursFrom(createdAt, 2.5)
-    : clock.at(tz, clock.weekdayOffset(tz, -(t.ageDays ?? 0) + after), siteKey === 'fHq' ? 7 : 9);
+  const planned =
+    t.priority === 'critical'
+      ? clock.hoursFrom(createdAt, 2.5)
+      : clock.at(tz, clock.weekdayOffset(tz, -(t.ageDays ?? 0) + after), siteKey === 'fHq' ? 7 : 9);
   // A visit on the day of the call starts after the call was taken, not at the morning's start.
   const begin = planned.getTime() < ackAt.getTime() + HOUR ? clock.hoursFrom(ackAt, 2) : planned;
   const repairs = t.repairs ?? [];
   const completedAt = clock.hoursFrom(begin, 1 + 0.75 * Math.max(1, repairs.length));
-  const visitId = work.addVisit({
-    clientId: ids.client[site.client], siteId: ids.site[siteKey], wallId: t.wall ? ids.wall[t.wall] : null, ticketId,
-    maintenancePlanId: null, kind: 'ticket', status: 'completed', windowStart: begin, windowEnd: clock.hoursFrom(begin, 3),
-    checklist: repairChecklist.map((label): ChecklistItem =>
-      t.status === 'waiting_parts' && label.startsWith('Repair tested')
-        ? { label, done: false, note: 'Waiting for parts.' }
-        : { label, done: true }),
-    summary: t.resolution ?? '', internalNotes: (t.internal ?? []).join('\n'),
-    signedByName: site.contact.name, signedAt: completedAt, reportSentAt: clock.hoursFrom(completedAt, 0.1),
-    startedAt: clock.hoursFrom(begin, 0.2), completedAt, createdAt: ackAt, updatedAt: completedAt,
-  }, [techId]);
+  const visitId = work.addVisit(
+    {
+      clientId: ids.client[site.client],
+      siteId: ids.site[siteKey],
+      wallId: t.wall ? ids.wall[t.wall] : null,
+      ticketId,
+      maintenancePlanId: null,
+      kind: 'ticket',
+      status: 'completed',
+      windowStart: begin,
+      windowEnd: clock.hoursFrom(begin, 3),
+      checklist: repairChecklist.map((label): ChecklistItem =>
+        t.status === 'waiting_parts' && label.startsWith('Repair tested')
+          ? { label, done: false, note: 'Waiting for parts.' }
+          : { label, done: true },
+      ),
+      summary: t.resolution ?? '',
+      internalNotes: (t.internal ?? []).join('\n'),
+      signedByName: site.contact.name,
+      signedAt: completedAt,
+      reportSentAt: clock.hoursFrom(completedAt, 0.1),
+      startedAt: clock.hoursFrom(begin, 0.2),
+      completedAt,
+      createdAt: ackAt,
+      updatedAt: completedAt,
+    },
+    [techId],
+  );
   repairs.forEach((r, i) =>
-    work.logRepair(r, { wall: t.wall!, visitId, ticketId, tech: t.tech!, performedAt: clock.hoursFrom(begin, 0.5 + 0.75 * i) }));
+    work.logRepair(r, { wall: t.wall!, visitId, ticketId, tech: t.tech!, performedAt: clock.hoursFrom(begin, 0.5 + 0.75 * i) }),
+  );
   let { resolvedAt, lastActivity } = start;
   if (t.status === 'waiting_parts') {
     work.comment(ticketId, ids.user.office, t.partsNote!, 'public', clock.hoursFrom(completedAt, 2));
@@ -153,12 +194,24 @@ function visitUnderWay({ clock, ids }: Demo, work: WorkLog, { t, ticketId, siteK
   const site = siteSpecs[siteKey];
   const techId = ids.user[t.tech!];
   const start = clock.hoursAgo(1.5);
-  work.addVisit({
-    clientId: ids.client[site.client], siteId: ids.site[siteKey], wallId: ids.wall[t.wall!], ticketId, maintenancePlanId: null,
-    kind: 'ticket', status: 'in_progress', windowStart: start, windowEnd: clock.hoursFrom(start, 4),
-    checklist: repairChecklist.map((label, i): ChecklistItem => ({ label, done: i < 3 })),
-    startedAt: clock.hoursAgo(1), createdAt: ackAt!, updatedAt: clock.hoursAgo(1),
-  }, [techId]);
+  work.addVisit(
+    {
+      clientId: ids.client[site.client],
+      siteId: ids.site[siteKey],
+      wallId: ids.wall[t.wall!],
+      ticketId,
+      maintenancePlanId: null,
+      kind: 'ticket',
+      status: 'in_progress',
+      windowStart: start,
+      windowEnd: clock.hoursFrom(start, 4),
+      checklist: repairChecklist.map((label, i): ChecklistItem => ({ label, done: i < 3 })),
+      startedAt: clock.hoursAgo(1),
+      createdAt: ackAt!,
+      updatedAt: clock.hoursAgo(1),
+    },
+    [techId],
+  );
   work.comment(ticketId, ids.user.office, `Visit booked for ${dayLabel(start, tz)}.`, 'public', clock.hoursFrom(ackAt!, 0.5));
   (t.internal ?? []).forEach((text, i) => work.comment(ticketId, techId, text, 'internal', clock.hoursAgo(0.5 - 0.1 * i)));
   return { resolvedAt: null, pausedAt: null, lastActivity: clock.hoursAgo(0.5) };
@@ -169,12 +222,30 @@ function visitBooked({ clock, ids }: Demo, work: WorkLog, { t, ticketId, siteKey
   const site = siteSpecs[siteKey];
   const nth = t.priority === 'high' ? 1 : t.priority === 'normal' ? 2 : 4;
   const start = clock.at(tz, clock.businessDayOffset(tz, nth), siteKey === 'fHq' ? 7 : 9);
-  work.addVisit({
-    clientId: ids.client[site.client], siteId: ids.site[siteKey], wallId: t.wall ? ids.wall[t.wall] : null, ticketId,
-    maintenancePlanId: null, kind: 'ticket', status: 'planned', windowStart: start, windowEnd: clock.hoursFrom(start, 3),
-    checklist: repairChecklist.map((label): ChecklistItem => ({ label, done: false })), createdAt: ackAt!, updatedAt: ackAt!,
-  }, [ids.user[t.tech!]]);
+  work.addVisit(
+    {
+      clientId: ids.client[site.client],
+      siteId: ids.site[siteKey],
+      wallId: t.wall ? ids.wall[t.wall] : null,
+      ticketId,
+      maintenancePlanId: null,
+      kind: 'ticket',
+      status: 'planned',
+      windowStart: start,
+      windowEnd: clock.hoursFrom(start, 3),
+      checklist: repairChecklist.map((label): ChecklistItem => ({ label, done: false })),
+      createdAt: ackAt!,
+      updatedAt: ackAt!,
+    },
+    [ids.user[t.tech!]],
+  );
   const booked = clock.hoursFrom(ackAt!, 1);
-  work.comment(ticketId, ids.user.office, `Visit booked for ${dayLabel(start, tz)} (about three hours). ${ids.userName[t.tech!]} will sign in at reception.`, 'public', booked);
+  work.comment(
+    ticketId,
+    ids.user.office,
+    `Visit booked for ${dayLabel(start, tz)} (about three hours). ${ids.userName[t.tech!]} will sign in at reception.`,
+    'public',
+    booked,
+  );
   return { resolvedAt: null, pausedAt: null, lastActivity: booked };
 }

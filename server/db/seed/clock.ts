@@ -23,7 +23,7 @@ export function createClock(now: Date) {
   /** The `n`-th weekday (Monday–Friday) after today in `timeZone`, as a day offset (n ≥ 1). */
   const businessDayOffset = (timeZone: string, n: number) => {
     let offset = 0;
-    for (let found = 0; found < n; ) {
+    for (let found = 0; found < n;) {
       offset += 1;
       const { weekday } = localDay(timeZone, offset);
       if (weekday !== 0 && weekday !== 6) found += 1;

@@ -44,7 +44,11 @@ export function settleLedger(input: Move[], restockActor: (to: LocationKey) => s
     if (short <= 0) return;
     if (location === 'warehouse') {
       const receipt: Move = {
-        part, batch, kind: 'receipt', to: 'warehouse', quantity: short + (batch ? 2 : 6),
+        part,
+        batch,
+        kind: 'receipt',
+        to: 'warehouse',
+        quantity: short + (batch ? 2 : 6),
         at: new Date(at.getTime() - 48 * HOUR),
         reason: batch ? `Batch-matched restock ordered from the maker (batch ${batch})` : 'Restock order',
         actorId: restockActor('warehouse'),
@@ -56,7 +60,12 @@ export function settleLedger(input: Move[], restockActor: (to: LocationKey) => s
     const topUp = batch ? short : Math.max(short, 2);
     ensure(part, batch, 'warehouse', topUp, at);
     const transfer: Move = {
-      part, batch, kind: 'transfer', from: 'warehouse', to: location, quantity: topUp,
+      part,
+      batch,
+      kind: 'transfer',
+      from: 'warehouse',
+      to: location,
+      quantity: topUp,
       at: new Date(at.getTime() - 3 * HOUR),
       reason: 'Restocked from the warehouse',
       actorId: restockActor(location),

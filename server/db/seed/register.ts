@@ -24,14 +24,17 @@ const targets = (t: Targets): PlanTargets => ({
 
 export type PlanKey = 'essential' | 'extended' | 'allHours';
 
-export const plans: Record<PlanKey, {
-  name: string;
-  clockMode: 'business' | 'round_the_clock';
-  businessDays: number[];
-  dayStart: string;
-  dayEnd: string;
-  targets: PlanTargets;
-}> = {
+export const plans: Record<
+  PlanKey,
+  {
+    name: string;
+    clockMode: 'business' | 'round_the_clock';
+    businessDays: number[];
+    dayStart: string;
+    dayEnd: string;
+    targets: PlanTargets;
+  }
+> = {
   essential: {
     name: 'Essential',
     clockMode: 'business',
@@ -60,15 +63,24 @@ export const plans: Record<PlanKey, {
 
 export type ClientKey = 'fellowship' | 'district' | 'venue' | 'freight';
 
-interface ContactSpec { name: string; title: string; email: string; phone: string; receivesUpdates?: boolean }
-
-export const clientSpecs: Record<ClientKey, {
+interface ContactSpec {
   name: string;
-  plan: PlanKey;
-  domain: string;
-  notes: string;
-  contacts: ContactSpec[];
-}> = {
+  title: string;
+  email: string;
+  phone: string;
+  receivesUpdates?: boolean;
+}
+
+export const clientSpecs: Record<
+  ClientKey,
+  {
+    name: string;
+    plan: PlanKey;
+    domain: string;
+    notes: string;
+    contacts: ContactSpec[];
+  }
+> = {
   fellowship: {
     name: 'Cedar Hollow Fellowship',
     plan: 'extended',
@@ -78,7 +90,13 @@ export const clientSpecs: Record<ClientKey, {
       'Production director approves anything that takes a wall down for more than an hour. Invoices to the operations office.',
     contacts: [
       { name: 'Tobias Wrenfield', title: 'Production director', email: 'tobias.wrenfield@cedarhollow.test', phone: '+1 214 555 0131' },
-      { name: 'Ruth Abernathy-Sole', title: 'Operations director', email: 'operations@cedarhollow.test', phone: '+1 214 555 0132', receivesUpdates: false },
+      {
+        name: 'Ruth Abernathy-Sole',
+        title: 'Operations director',
+        email: 'operations@cedarhollow.test',
+        phone: '+1 214 555 0132',
+        receivesUpdates: false,
+      },
     ],
   },
   district: {
@@ -113,26 +131,40 @@ export const clientSpecs: Record<ClientKey, {
       'Corporate lobby wall, seen by every visitor: fix within the day when possible. Security badge issued at reception; ' +
       'ladders must be signed off by building management.',
     contacts: [
-      { name: 'Keiko Marlowe', title: 'Workplace technology lead', email: 'keiko.marlowe@alderbrook-freight.test', phone: '+1 415 555 0161' },
-      { name: 'Victor Halden', title: 'Building manager', email: 'building@alderbrook-freight.test', phone: '+1 415 555 0162', receivesUpdates: false },
+      {
+        name: 'Keiko Marlowe',
+        title: 'Workplace technology lead',
+        email: 'keiko.marlowe@alderbrook-freight.test',
+        phone: '+1 415 555 0161',
+      },
+      {
+        name: 'Victor Halden',
+        title: 'Building manager',
+        email: 'building@alderbrook-freight.test',
+        phone: '+1 415 555 0162',
+        receivesUpdates: false,
+      },
     ],
   },
 };
 
 export type SiteKey = 'fMain' | 'fWest' | 'fLake' | 'dHigh' | 'dMiddle' | 'dAdmin' | 'vArena' | 'vHall' | 'fHq';
 
-export const siteSpecs: Record<SiteKey, {
-  client: ClientKey;
-  name: string;
-  address: string;
-  city: string;
-  region: string;
-  postalCode: string;
-  timeZone: string;
-  accessNotes: string;
-  internalNotes?: string;
-  contact: ContactSpec;
-}> = {
+export const siteSpecs: Record<
+  SiteKey,
+  {
+    client: ClientKey;
+    name: string;
+    address: string;
+    city: string;
+    region: string;
+    postalCode: string;
+    timeZone: string;
+    accessNotes: string;
+    internalNotes?: string;
+    contact: ContactSpec;
+  }
+> = {
   fMain: {
     client: 'fellowship',
     name: 'Main Campus',
@@ -185,7 +217,12 @@ export const siteSpecs: Record<SiteKey, {
     accessNotes:
       'Sign in at the main office with photo ID; the custodian on duty opens the auditorium. Loading door at the back of the stage, ' +
       'reached from the bus loop (no deliveries 07:15–08:00 and 14:30–15:15). Service entry 06:30–21:00 on school days.',
-    contact: { name: 'Marcus Delacroix-Bell', title: 'Auditorium manager', email: 'auditorium@harrowgate-usd.test', phone: '+1 614 555 0143' },
+    contact: {
+      name: 'Marcus Delacroix-Bell',
+      title: 'Auditorium manager',
+      email: 'auditorium@harrowgate-usd.test',
+      phone: '+1 614 555 0143',
+    },
   },
   dMiddle: {
     client: 'district',
@@ -198,7 +235,12 @@ export const siteSpecs: Record<SiteKey, {
     accessNotes:
       'Front office sign-in. The commons is used for lunch 10:45–13:15: work before or after. ' +
       'Visitor spaces by the flagpole; the head custodian has the lift key.',
-    contact: { name: 'Patrice Oyelaran', title: 'Head custodian', email: 'pinecrest.facilities@harrowgate-usd.test', phone: '+1 614 555 0144' },
+    contact: {
+      name: 'Patrice Oyelaran',
+      title: 'Head custodian',
+      email: 'pinecrest.facilities@harrowgate-usd.test',
+      phone: '+1 614 555 0144',
+    },
   },
   dAdmin: {
     client: 'district',
@@ -225,7 +267,12 @@ export const siteSpecs: Record<SiteKey, {
       'Loading dock 2 (east side), check in with the dock master. The centre-hung wall is lowered on its chain motors only by the venue ' +
       'rigging crew: book them 48 h ahead. The plaza sign is reached by the service ladder behind the box office. Crew parking in lot C.',
     internalNotes: 'Site kit is in the video control room, cage 3; the dock master has the cage key.',
-    contact: { name: 'Rory Gallagher-Price', title: 'Production manager', email: 'production@copperline-events.test', phone: '+1 480 555 0153' },
+    contact: {
+      name: 'Rory Gallagher-Price',
+      title: 'Production manager',
+      email: 'production@copperline-events.test',
+      phone: '+1 480 555 0153',
+    },
   },
   vHall: {
     client: 'venue',
@@ -237,7 +284,7 @@ export const siteSpecs: Record<SiteKey, {
     timeZone: 'America/Phoenix',
     accessNotes:
       'Marshalling yard on the south side; forklifts have right of way during move-in days. Hall doors open 06:00–23:00. ' +
-      'The hall supervisor holds the key to the curved wall\'s rear walkway.',
+      "The hall supervisor holds the key to the curved wall's rear walkway.",
     contact: { name: 'Selma Whitford', title: 'Hall supervisor', email: 'exhibit.hall@copperline-events.test', phone: '+1 480 555 0154' },
   },
   fHq: {
@@ -251,7 +298,12 @@ export const siteSpecs: Record<SiteKey, {
     accessNotes:
       'Service entrance on Quay Street; security desk issues a contractor badge. Lobby work only before 08:00 or after 18:00 on ' +
       'weekdays, any time at weekends with building-management approval. Contractor parking on level P2.',
-    contact: { name: 'Lena Okoro-Whitfield', title: 'Facilities coordinator', email: 'facilities@alderbrook-freight.test', phone: '+1 415 555 0163' },
+    contact: {
+      name: 'Lena Okoro-Whitfield',
+      title: 'Facilities coordinator',
+      email: 'facilities@alderbrook-freight.test',
+      phone: '+1 415 555 0163',
+    },
   },
 };
 
@@ -262,45 +314,128 @@ export type ModelKey = 'hx19' | 'hx26' | 'tw39' | 'tw48' | 'mv15';
  * of the class. The Morrow Vale datasheet at hand gives no power connection figures, so plans for
  * it show what they assume.
  */
-export const modelSpecs: Record<ModelKey, Omit<CabinetModel, 'id' | 'archived'> & {
-  /** How this maker writes serials and module batch codes. */
-  serialPrefix: string;
-  batchPrefix: string;
-}> = {
+export const modelSpecs: Record<
+  ModelKey,
+  Omit<CabinetModel, 'id' | 'archived'> & {
+    /** How this maker writes serials and module batch codes. */
+    serialPrefix: string;
+    batchPrefix: string;
+  }
+> = {
   hx19: {
-    name: 'Halvard HX 1.9 Interior', maker: 'Halvard Display Works',
-    widthMm: 500, heightMm: 500, pixelPitchMm: 1.953, pixelsWide: 256, pixelsHigh: 256, modulesWide: 2, modulesHigh: 2,
-    maxPowerW: 190, typicalPowerW: 65, weightKg: 7.6, brightnessNits: 800,
-    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: 15, maxPerChain: 12, maxPowerVA: 200, environment: 'indoor',
-    serialPrefix: 'HX19', batchPrefix: 'H19',
+    name: 'Halvard HX 1.9 Interior',
+    maker: 'Halvard Display Works',
+    widthMm: 500,
+    heightMm: 500,
+    pixelPitchMm: 1.953,
+    pixelsWide: 256,
+    pixelsHigh: 256,
+    modulesWide: 2,
+    modulesHigh: 2,
+    maxPowerW: 190,
+    typicalPowerW: 65,
+    weightKg: 7.6,
+    brightnessNits: 800,
+    inputVoltageMinV: 100,
+    inputVoltageMaxV: 240,
+    passThroughAmps: 15,
+    maxPerChain: 12,
+    maxPowerVA: 200,
+    environment: 'indoor',
+    serialPrefix: 'HX19',
+    batchPrefix: 'H19',
   },
   hx26: {
-    name: 'Halvard HX 2.6 Interior', maker: 'Halvard Display Works',
-    widthMm: 500, heightMm: 500, pixelPitchMm: 2.604, pixelsWide: 192, pixelsHigh: 192, modulesWide: 2, modulesHigh: 2,
-    maxPowerW: 180, typicalPowerW: 60, weightKg: 7.5, brightnessNits: 1000,
-    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: 15, maxPerChain: 12, maxPowerVA: 190, environment: 'indoor',
-    serialPrefix: 'HX26', batchPrefix: 'H26',
+    name: 'Halvard HX 2.6 Interior',
+    maker: 'Halvard Display Works',
+    widthMm: 500,
+    heightMm: 500,
+    pixelPitchMm: 2.604,
+    pixelsWide: 192,
+    pixelsHigh: 192,
+    modulesWide: 2,
+    modulesHigh: 2,
+    maxPowerW: 180,
+    typicalPowerW: 60,
+    weightKg: 7.5,
+    brightnessNits: 1000,
+    inputVoltageMinV: 100,
+    inputVoltageMaxV: 240,
+    passThroughAmps: 15,
+    maxPerChain: 12,
+    maxPowerVA: 190,
+    environment: 'indoor',
+    serialPrefix: 'HX26',
+    batchPrefix: 'H26',
   },
   tw39: {
-    name: 'Tarnwell TW 3.9 Touring', maker: 'Tarnwell Optoelectronics',
-    widthMm: 500, heightMm: 1000, pixelPitchMm: 3.906, pixelsWide: 128, pixelsHigh: 256, modulesWide: 2, modulesHigh: 4,
-    maxPowerW: 340, typicalPowerW: 115, weightKg: 12.5, brightnessNits: 1200,
-    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: 16, maxPerChain: 8, maxPowerVA: null, environment: 'indoor',
-    serialPrefix: 'TW39', batchPrefix: 'T39',
+    name: 'Tarnwell TW 3.9 Touring',
+    maker: 'Tarnwell Optoelectronics',
+    widthMm: 500,
+    heightMm: 1000,
+    pixelPitchMm: 3.906,
+    pixelsWide: 128,
+    pixelsHigh: 256,
+    modulesWide: 2,
+    modulesHigh: 4,
+    maxPowerW: 340,
+    typicalPowerW: 115,
+    weightKg: 12.5,
+    brightnessNits: 1200,
+    inputVoltageMinV: 100,
+    inputVoltageMaxV: 240,
+    passThroughAmps: 16,
+    maxPerChain: 8,
+    maxPowerVA: null,
+    environment: 'indoor',
+    serialPrefix: 'TW39',
+    batchPrefix: 'T39',
   },
   tw48: {
-    name: 'Tarnwell TW 4.8 Outdoor', maker: 'Tarnwell Optoelectronics',
-    widthMm: 500, heightMm: 1000, pixelPitchMm: 4.81, pixelsWide: 104, pixelsHigh: 208, modulesWide: 2, modulesHigh: 4,
-    maxPowerW: 420, typicalPowerW: 140, weightKg: 16.5, brightnessNits: 5500,
-    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: 16, maxPerChain: 6, maxPowerVA: 445, environment: 'outdoor',
-    serialPrefix: 'TW48', batchPrefix: 'T48',
+    name: 'Tarnwell TW 4.8 Outdoor',
+    maker: 'Tarnwell Optoelectronics',
+    widthMm: 500,
+    heightMm: 1000,
+    pixelPitchMm: 4.81,
+    pixelsWide: 104,
+    pixelsHigh: 208,
+    modulesWide: 2,
+    modulesHigh: 4,
+    maxPowerW: 420,
+    typicalPowerW: 140,
+    weightKg: 16.5,
+    brightnessNits: 5500,
+    inputVoltageMinV: 100,
+    inputVoltageMaxV: 240,
+    passThroughAmps: 16,
+    maxPerChain: 6,
+    maxPowerVA: 445,
+    environment: 'outdoor',
+    serialPrefix: 'TW48',
+    batchPrefix: 'T48',
   },
   mv15: {
-    name: 'Morrow Vale Slimline 1.5', maker: 'Morrow Vale Displays',
-    widthMm: 600, heightMm: 337.5, pixelPitchMm: 1.5625, pixelsWide: 384, pixelsHigh: 216, modulesWide: 2, modulesHigh: 2,
-    maxPowerW: 110, typicalPowerW: 38, weightKg: 6.2, brightnessNits: 600,
-    inputVoltageMinV: 100, inputVoltageMaxV: 240, passThroughAmps: null, maxPerChain: null, maxPowerVA: null, environment: 'indoor',
-    serialPrefix: 'MVS15', batchPrefix: 'M15',
+    name: 'Morrow Vale Slimline 1.5',
+    maker: 'Morrow Vale Displays',
+    widthMm: 600,
+    heightMm: 337.5,
+    pixelPitchMm: 1.5625,
+    pixelsWide: 384,
+    pixelsHigh: 216,
+    modulesWide: 2,
+    modulesHigh: 2,
+    maxPowerW: 110,
+    typicalPowerW: 38,
+    weightKg: 6.2,
+    brightnessNits: 600,
+    inputVoltageMinV: 100,
+    inputVoltageMaxV: 240,
+    passThroughAmps: null,
+    maxPerChain: null,
+    maxPowerVA: null,
+    environment: 'indoor',
+    serialPrefix: 'MVS15',
+    batchPrefix: 'M15',
   },
 };
 
@@ -338,76 +473,200 @@ export interface WallSpec {
 
 export const wallSpecs: Record<WallKey, WallSpec> = {
   w01: {
-    site: 'fMain', name: 'Main hall centre wall', model: 'hx26', columns: 12, rows: 6, mounting: 'ground_stacked',
+    site: 'fMain',
+    name: 'Main hall centre wall',
+    model: 'hx26',
+    columns: 12,
+    rows: 6,
+    mounting: 'ground_stacked',
     // As built: 208 V three-phase distro, 20 A circuits, one power chain and one data line per row.
     asBuilt: { voltage: 208, phases: 3, breakerAmps: 20, continuousFactor: 0.8 },
-    installedDaysAgo: 790, warrantyYears: 5, batches: 3, commissioningSwaps: 2, controller: 'qp8', firmware: '4.2.17',
-    inputNotes: 'Program and backup 3840×2160 at 59.94 Hz from the broadcast switcher on HDMI 2.0 (inputs 1 and 2); failover to input 2 is automatic.',
-    internalNotes: 'Ground-stacked on the stage riser; rear access through the stage-left door. Row 4 is fed by power chain 4 from distro B.',
+    installedDaysAgo: 790,
+    warrantyYears: 5,
+    batches: 3,
+    commissioningSwaps: 2,
+    controller: 'qp8',
+    firmware: '4.2.17',
+    inputNotes:
+      'Program and backup 3840×2160 at 59.94 Hz from the broadcast switcher on HDMI 2.0 (inputs 1 and 2); failover to input 2 is automatic.',
+    internalNotes:
+      'Ground-stacked on the stage riser; rear access through the stage-left door. Row 4 is fed by power chain 4 from distro B.',
   },
   w02: {
-    site: 'fMain', name: 'Main hall left side wall', model: 'hx26', columns: 4, rows: 6, mounting: 'flown',
-    installedDaysAgo: 790, warrantyYears: 5, batches: 2, sharesBatchesWith: 'w01', commissioningSwaps: 1, controller: 'qp4', firmware: '4.2.17',
-    inputNotes: 'Image-magnification feed 1920×1080 from the switcher aux 1, scaled to the wall\'s portrait canvas.',
-    internalNotes: 'Flown from the house truss; the church\'s own rigger must lower it.',
+    site: 'fMain',
+    name: 'Main hall left side wall',
+    model: 'hx26',
+    columns: 4,
+    rows: 6,
+    mounting: 'flown',
+    installedDaysAgo: 790,
+    warrantyYears: 5,
+    batches: 2,
+    sharesBatchesWith: 'w01',
+    commissioningSwaps: 1,
+    controller: 'qp4',
+    firmware: '4.2.17',
+    inputNotes: "Image-magnification feed 1920×1080 from the switcher aux 1, scaled to the wall's portrait canvas.",
+    internalNotes: "Flown from the house truss; the church's own rigger must lower it.",
   },
   w03: {
-    site: 'fMain', name: 'Main hall right side wall', model: 'hx26', columns: 4, rows: 6, mounting: 'flown',
-    installedDaysAgo: 790, warrantyYears: 5, batches: 2, sharesBatchesWith: 'w01', commissioningSwaps: 1, controller: 'qp4', firmware: '4.2.17',
+    site: 'fMain',
+    name: 'Main hall right side wall',
+    model: 'hx26',
+    columns: 4,
+    rows: 6,
+    mounting: 'flown',
+    installedDaysAgo: 790,
+    warrantyYears: 5,
+    batches: 2,
+    sharesBatchesWith: 'w01',
+    commissioningSwaps: 1,
+    controller: 'qp4',
+    firmware: '4.2.17',
     inputNotes: 'Image-magnification feed 1920×1080 from the switcher aux 2.',
     internalNotes: 'Bottom row runs warm: distro B circuit 6 shared with stage lighting until the church rewired it.',
   },
   w04: {
-    site: 'fWest', name: 'Worship centre wall', model: 'tw39', columns: 10, rows: 3, mounting: 'flown',
-    installedDaysAgo: 610, warrantyYears: 3, batches: 2, commissioningSwaps: 1, controller: 'qp4', firmware: '4.1.9',
+    site: 'fWest',
+    name: 'Worship centre wall',
+    model: 'tw39',
+    columns: 10,
+    rows: 3,
+    mounting: 'flown',
+    installedDaysAgo: 610,
+    warrantyYears: 3,
+    batches: 2,
+    commissioningSwaps: 1,
+    controller: 'qp4',
+    firmware: '4.1.9',
     inputNotes: '1920×1080 from the production PC over fibre; lyrics and stream program.',
-    internalNotes: 'Hung from a steel frame engineered by the church\'s structural consultant; drawings in the as-built folder.',
+    internalNotes: "Hung from a steel frame engineered by the church's structural consultant; drawings in the as-built folder.",
   },
   w05: {
-    site: 'fLake', name: 'Youth room wall', model: 'hx19', columns: 8, rows: 4, mounting: 'wall_fixed',
-    installedDaysAgo: 520, warrantyYears: 3, batches: 2, commissioningSwaps: 1, controller: 'qp4', firmware: '4.1.9',
+    site: 'fLake',
+    name: 'Youth room wall',
+    model: 'hx19',
+    columns: 8,
+    rows: 4,
+    mounting: 'wall_fixed',
+    installedDaysAgo: 520,
+    warrantyYears: 3,
+    batches: 2,
+    commissioningSwaps: 1,
+    controller: 'qp4',
+    firmware: '4.1.9',
     inputNotes: 'Laptop on the stage (HDMI wall plate) or the media player; input 1 is the wall plate.',
     internalNotes: 'Low wall in a room used for games: suggested a protective net.',
   },
   w06: {
-    site: 'dHigh', name: 'Auditorium stage wall', model: 'tw39', columns: 12, rows: 4, mounting: 'ground_stacked',
-    installedDaysAgo: 880, warrantyYears: 3, batches: 2, commissioningSwaps: 1, controller: 'qp4', firmware: '3.9.4',
+    site: 'dHigh',
+    name: 'Auditorium stage wall',
+    model: 'tw39',
+    columns: 12,
+    rows: 4,
+    mounting: 'ground_stacked',
+    installedDaysAgo: 880,
+    warrantyYears: 3,
+    batches: 2,
+    commissioningSwaps: 1,
+    controller: 'qp4',
+    firmware: '3.9.4',
     inputNotes: 'Stage left HDMI, booth playback and the district streaming encoder, switched in the booth.',
-    internalNotes: 'Warranty over; repairs are chargeable under the district\'s service plan.',
+    internalNotes: "Warranty over; repairs are chargeable under the district's service plan.",
   },
   w07: {
-    site: 'dMiddle', name: 'Commons wall', model: 'hx26', columns: 8, rows: 4, mounting: 'wall_fixed',
-    installedDaysAgo: 700, warrantyYears: 3, batches: 2, commissioningSwaps: 1, controller: 'qp4', firmware: '4.1.9',
+    site: 'dMiddle',
+    name: 'Commons wall',
+    model: 'hx26',
+    columns: 8,
+    rows: 4,
+    mounting: 'wall_fixed',
+    installedDaysAgo: 700,
+    warrantyYears: 3,
+    batches: 2,
+    commissioningSwaps: 1,
+    controller: 'qp4',
+    firmware: '4.1.9',
     inputNotes: 'Signage player on input 1, announcements laptop on input 2.',
     internalNotes: 'Fixed to a block wall with a 150 mm service gap; front-serviceable modules.',
   },
   w08: {
-    site: 'dAdmin', name: 'Board room wall', model: 'mv15', columns: 4, rows: 4, mounting: 'wall_fixed',
-    installedDaysAgo: 450, warrantyYears: 3, batches: 2, commissioningSwaps: 1, controller: 'qp4', firmware: '4.2.17',
+    site: 'dAdmin',
+    name: 'Board room wall',
+    model: 'mv15',
+    columns: 4,
+    rows: 4,
+    mounting: 'wall_fixed',
+    installedDaysAgo: 450,
+    warrantyYears: 3,
+    batches: 2,
+    commissioningSwaps: 1,
+    controller: 'qp4',
+    firmware: '4.2.17',
     inputNotes: 'Room system presentation switcher, 1920×1080; preset 1 = laptop, preset 2 = signage.',
     internalNotes: 'Front-serviceable; magnetic module tool is in the credenza.',
   },
   w09: {
-    site: 'vArena', name: 'Centre-hung main wall', model: 'tw39', columns: 10, rows: 4, mounting: 'flown',
-    installedDaysAgo: 660, warrantyYears: 5, batches: 2, commissioningSwaps: 1, controller: 'qp4', firmware: '4.2.17',
+    site: 'vArena',
+    name: 'Centre-hung main wall',
+    model: 'tw39',
+    columns: 10,
+    rows: 4,
+    mounting: 'flown',
+    installedDaysAgo: 660,
+    warrantyYears: 5,
+    batches: 2,
+    commissioningSwaps: 1,
+    controller: 'qp4',
+    firmware: '4.2.17',
     inputNotes: 'Show feed 3840×2160 from the arena control room over fibre; backup processor in the same rack.',
     internalNotes: 'Only the venue rigging crew may fly the wall in or out.',
   },
   w10: {
-    site: 'vArena', name: 'Plaza entrance sign', model: 'tw48', columns: 8, rows: 3, mounting: 'wall_fixed',
-    installedDaysAgo: 640, warrantyYears: 5, batches: 2, commissioningSwaps: 1, controller: 'qp4', firmware: '4.2.17',
+    site: 'vArena',
+    name: 'Plaza entrance sign',
+    model: 'tw48',
+    columns: 8,
+    rows: 3,
+    mounting: 'wall_fixed',
+    installedDaysAgo: 640,
+    warrantyYears: 5,
+    batches: 2,
+    commissioningSwaps: 1,
+    controller: 'qp4',
+    firmware: '4.2.17',
     inputNotes: 'Signage player in the box-office rack; brightness schedule set in the processor.',
     internalNotes: 'IP65 cabinets; check the rear cable glands after monsoon storms.',
   },
   w11: {
-    site: 'vHall', name: 'Exhibit hall curved wall', model: 'hx26', columns: 16, rows: 4, mounting: 'curved',
-    installedDaysAgo: 420, warrantyYears: 5, batches: 3, commissioningSwaps: 2, controller: 'qp8', firmware: '4.2.17',
+    site: 'vHall',
+    name: 'Exhibit hall curved wall',
+    model: 'hx26',
+    columns: 16,
+    rows: 4,
+    mounting: 'curved',
+    installedDaysAgo: 420,
+    warrantyYears: 5,
+    batches: 3,
+    commissioningSwaps: 2,
+    controller: 'qp8',
+    firmware: '4.2.17',
     inputNotes: 'Two 1920×1080 feeds stitched side by side (input 1 left half, input 2 right half).',
     internalNotes: '5° curve between every column; curve locks must be checked after each move-in.',
   },
   w12: {
-    site: 'fHq', name: 'Lobby feature wall', model: 'mv15', columns: 10, rows: 8, mounting: 'wall_fixed',
-    installedDaysAgo: 560, warrantyYears: 5, batches: 3, commissioningSwaps: 2, controller: 'qp16', firmware: '4.2.17',
+    site: 'fHq',
+    name: 'Lobby feature wall',
+    model: 'mv15',
+    columns: 10,
+    rows: 8,
+    mounting: 'wall_fixed',
+    installedDaysAgo: 560,
+    warrantyYears: 5,
+    batches: 3,
+    commissioningSwaps: 2,
+    controller: 'qp16',
+    firmware: '4.2.17',
     inputNotes: 'Brand content player 3840×1728 native canvas on input 1; reception PC on input 2.',
     internalNotes: 'Front-serviceable. Lobby closes to the public 18:00; building management must approve the lift.',
   },
@@ -433,27 +692,93 @@ export const clientUsers: Record<ClientUserKey, { email: string; name: string; c
 
 export const DEMO_PASSWORD = 'gridkeep-demo';
 
-export type PartKey = 'modHx19' | 'modHx26' | 'modTw39' | 'modTw48' | 'modMv15' | 'psu200' | 'psu300' | 'rxc' | 'dataCable' | 'powerCable' | 'fan';
+export type PartKey =
+  'modHx19' | 'modHx26' | 'modTw39' | 'modTw48' | 'modMv15' | 'psu200' | 'psu300' | 'rxc' | 'dataCable' | 'powerCable' | 'fan';
 
-export const partSpecs: Record<PartKey, {
-  sku: string;
-  name: string;
-  kind: 'module' | 'power_supply' | 'receiving_card' | 'cable' | 'fan';
-  model?: ModelKey;
-  unitCost: string;
-  leadTimeDays: number;
-  /** Modules carry the batch code of their production run. */
-  batched: boolean;
-}> = {
-  modHx19: { sku: 'MOD-HX19', name: 'LED module 250×250 mm, 1.9 mm (HX 1.9)', kind: 'module', model: 'hx19', unitCost: '148.00', leadTimeDays: 35, batched: true },
-  modHx26: { sku: 'MOD-HX26', name: 'LED module 250×250 mm, 2.6 mm (HX 2.6)', kind: 'module', model: 'hx26', unitCost: '112.00', leadTimeDays: 35, batched: true },
-  modTw39: { sku: 'MOD-TW39', name: 'LED module 250×250 mm, 3.9 mm (TW 3.9)', kind: 'module', model: 'tw39', unitCost: '86.00', leadTimeDays: 42, batched: true },
-  modTw48: { sku: 'MOD-TW48', name: 'LED module 250×250 mm, 4.8 mm outdoor (TW 4.8)', kind: 'module', model: 'tw48', unitCost: '124.00', leadTimeDays: 42, batched: true },
-  modMv15: { sku: 'MOD-MV15', name: 'LED module 300×168.75 mm, 1.5 mm (Slimline 1.5)', kind: 'module', model: 'mv15', unitCost: '196.00', leadTimeDays: 49, batched: true },
-  psu200: { sku: 'PSU-5V200', name: 'Power supply 5 V 200 W, indoor cabinet', kind: 'power_supply', unitCost: '38.50', leadTimeDays: 14, batched: false },
-  psu300: { sku: 'PSU-5V300-OD', name: 'Power supply 5 V 300 W, sealed outdoor', kind: 'power_supply', model: 'tw48', unitCost: '64.00', leadTimeDays: 21, batched: false },
+export const partSpecs: Record<
+  PartKey,
+  {
+    sku: string;
+    name: string;
+    kind: 'module' | 'power_supply' | 'receiving_card' | 'cable' | 'fan';
+    model?: ModelKey;
+    unitCost: string;
+    leadTimeDays: number;
+    /** Modules carry the batch code of their production run. */
+    batched: boolean;
+  }
+> = {
+  modHx19: {
+    sku: 'MOD-HX19',
+    name: 'LED module 250×250 mm, 1.9 mm (HX 1.9)',
+    kind: 'module',
+    model: 'hx19',
+    unitCost: '148.00',
+    leadTimeDays: 35,
+    batched: true,
+  },
+  modHx26: {
+    sku: 'MOD-HX26',
+    name: 'LED module 250×250 mm, 2.6 mm (HX 2.6)',
+    kind: 'module',
+    model: 'hx26',
+    unitCost: '112.00',
+    leadTimeDays: 35,
+    batched: true,
+  },
+  modTw39: {
+    sku: 'MOD-TW39',
+    name: 'LED module 250×250 mm, 3.9 mm (TW 3.9)',
+    kind: 'module',
+    model: 'tw39',
+    unitCost: '86.00',
+    leadTimeDays: 42,
+    batched: true,
+  },
+  modTw48: {
+    sku: 'MOD-TW48',
+    name: 'LED module 250×250 mm, 4.8 mm outdoor (TW 4.8)',
+    kind: 'module',
+    model: 'tw48',
+    unitCost: '124.00',
+    leadTimeDays: 42,
+    batched: true,
+  },
+  modMv15: {
+    sku: 'MOD-MV15',
+    name: 'LED module 300×168.75 mm, 1.5 mm (Slimline 1.5)',
+    kind: 'module',
+    model: 'mv15',
+    unitCost: '196.00',
+    leadTimeDays: 49,
+    batched: true,
+  },
+  psu200: {
+    sku: 'PSU-5V200',
+    name: 'Power supply 5 V 200 W, indoor cabinet',
+    kind: 'power_supply',
+    unitCost: '38.50',
+    leadTimeDays: 14,
+    batched: false,
+  },
+  psu300: {
+    sku: 'PSU-5V300-OD',
+    name: 'Power supply 5 V 300 W, sealed outdoor',
+    kind: 'power_supply',
+    model: 'tw48',
+    unitCost: '64.00',
+    leadTimeDays: 21,
+    batched: false,
+  },
   rxc: { sku: 'RXC-A8', name: 'Receiving card A8', kind: 'receiving_card', unitCost: '59.00', leadTimeDays: 21, batched: false },
-  dataCable: { sku: 'CBL-DATA-06', name: 'Cat6 data jumper 0.6 m, locking', kind: 'cable', unitCost: '6.20', leadTimeDays: 7, batched: false },
+  dataCable: {
+    sku: 'CBL-DATA-06',
+    name: 'Cat6 data jumper 0.6 m, locking',
+    kind: 'cable',
+    unitCost: '6.20',
+    leadTimeDays: 7,
+    batched: false,
+  },
   powerCable: { sku: 'CBL-PWR-06', name: 'Power jumper 0.6 m, locking', kind: 'cable', unitCost: '9.80', leadTimeDays: 7, batched: false },
   fan: { sku: 'FAN-80-IP', name: 'Cabinet fan 80 mm, sealed', kind: 'fan', unitCost: '14.00', leadTimeDays: 14, batched: false },
 };
@@ -468,7 +793,10 @@ export const moduleForModel: Record<ModelKey, PartKey> = {
 
 export type LocationKey = 'warehouse' | 'van1' | 'van2' | 'kitMain' | 'kitArena';
 
-export const locationSpecs: Record<LocationKey, { name: string; kind: 'warehouse' | 'van' | 'site_kit'; holder?: 'tech1' | 'tech2'; site?: SiteKey }> = {
+export const locationSpecs: Record<
+  LocationKey,
+  { name: string; kind: 'warehouse' | 'van' | 'site_kit'; holder?: 'tech1' | 'tech2'; site?: SiteKey }
+> = {
   warehouse: { name: 'Brantley Springs warehouse', kind: 'warehouse' },
   van1: { name: 'Van 1 (Jonah Ellery)', kind: 'van', holder: 'tech1' },
   van2: { name: 'Van 2 (Rafael Dunmore)', kind: 'van', holder: 'tech2' },

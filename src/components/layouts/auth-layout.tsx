@@ -17,7 +17,9 @@ export function AuthLayout({ title, description, children }: AuthLayoutProps) {
           <Logo />
         </div>
         <div className="relative hidden max-w-md lg:block">
-          <p className="text-3xl font-semibold leading-tight text-white">Every wall you installed, every cabinet in it, and what is due next.</p>
+          <p className="text-3xl font-semibold leading-tight text-white">
+            Every wall you installed, every cabinet in it, and what is due next.
+          </p>
           <p className="mt-4 text-base text-ink-200">
             The service desk and installed-base register for the people who install, repair and look after LED video walls.
           </p>

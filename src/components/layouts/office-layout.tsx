@@ -56,13 +56,18 @@ function SideNav({ isAdmin, onNavigate }: { isAdmin: boolean; onNavigate?: () =>
         className={({ isActive }) =>
           clsx(
             'group flex min-h-touch items-center gap-3 rounded-md px-3 text-base font-medium transition-colors lg:min-h-10',
-            isActive ? 'bg-ink-800 text-white shadow-[inset_3px_0_0_theme(colors.amber.400)]' : 'text-ink-200 hover:bg-ink-800/60 hover:text-white',
+            isActive
+              ? 'bg-ink-800 text-white shadow-[inset_3px_0_0_theme(colors.amber.400)]'
+              : 'text-ink-200 hover:bg-ink-800/60 hover:text-white',
           )
         }
       >
         {({ isActive }) => (
           <>
-            <item.icon className={clsx('h-5 w-5 shrink-0', isActive ? 'text-amber-400' : 'text-ink-300 group-hover:text-ink-100')} aria-hidden="true" />
+            <item.icon
+              className={clsx('h-5 w-5 shrink-0', isActive ? 'text-amber-400' : 'text-ink-300 group-hover:text-ink-100')}
+              aria-hidden="true"
+            />
             {item.label}
           </>
         )}

@@ -25,16 +25,7 @@ export function Badge({ tone = 'neutral', children, className }: { tone?: Tone; 
 }
 
 /** The product's states: the service-plan clock and a cabinet's condition. */
-export type PillState =
-  | 'on-track'
-  | 'at-risk'
-  | 'breached'
-  | 'installed'
-  | 'spare'
-  | 'at-bench'
-  | 'returned'
-  | 'retired'
-  | 'open-ticket';
+export type PillState = 'on-track' | 'at-risk' | 'breached' | 'installed' | 'spare' | 'at-bench' | 'returned' | 'retired' | 'open-ticket';
 
 // Written out in full so Tailwind finds every class name.
 const states: Record<PillState, [pill: string, dot: string]> = {

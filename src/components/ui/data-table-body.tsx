@@ -45,7 +45,10 @@ function DataRow<T>({ row, renderExpanded, span }: { row: Row<T>; renderExpanded
         {row.getVisibleCells().map((cell) => {
           const meta = cell.column.columnDef.meta;
           return (
-            <td key={cell.id} className={clsx('px-3 py-2 align-middle', meta?.align === 'right' && 'text-right tabular-nums', meta?.className)}>
+            <td
+              key={cell.id}
+              className={clsx('px-3 py-2 align-middle', meta?.align === 'right' && 'text-right tabular-nums', meta?.className)}
+            >
               {flexRender(cell.column.columnDef.cell, cell.getContext())}
             </td>
           );

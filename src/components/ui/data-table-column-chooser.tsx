@@ -21,7 +21,12 @@ export function ColumnChooser<T>({ table }: { table: Table<T> }) {
         <legend className="px-2 pb-1 text-xs font-semibold text-stone-600">Show columns</legend>
         {hideable.map((column) => (
           <label key={column.id} className="flex min-h-9 cursor-pointer items-center gap-2.5 rounded px-2 hover:bg-stone-100">
-            <input type="checkbox" className="h-4 w-4 accent-ink-700" checked={column.getIsVisible()} onChange={column.getToggleVisibilityHandler()} />
+            <input
+              type="checkbox"
+              className="h-4 w-4 accent-ink-700"
+              checked={column.getIsVisible()}
+              onChange={column.getToggleVisibilityHandler()}
+            />
             <span className="text-base">{columnLabel(column)}</span>
           </label>
         ))}

@@ -52,6 +52,12 @@ describe('CSV export of a data table', () => {
 
   it('exports only the columns shown', () => {
     const { table, rows } = tableOf({ count: false, place: false });
-    expect(tableCsv(table, rows)).toEqual({ header: ['Serial', 'Status'], body: [['GK-1', 'INSTALLED (GK-1)'], ['GK-2', 'SPARE (GK-2)']] });
+    expect(tableCsv(table, rows)).toEqual({
+      header: ['Serial', 'Status'],
+      body: [
+        ['GK-1', 'INSTALLED (GK-1)'],
+        ['GK-2', 'SPARE (GK-2)'],
+      ],
+    });
   });
 });

@@ -24,7 +24,11 @@ function HeaderCell<T>({ header }: { header: Header<T, unknown> }) {
     <th
       scope="col"
       aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-      className={clsx('whitespace-nowrap px-3 py-2 text-xs font-semibold text-stone-600', meta?.align === 'right' && 'text-right', meta?.className)}
+      className={clsx(
+        'whitespace-nowrap px-3 py-2 text-xs font-semibold text-stone-600',
+        meta?.align === 'right' && 'text-right',
+        meta?.className,
+      )}
     >
       {header.isPlaceholder ? null : header.column.getCanSort() ? (
         <button

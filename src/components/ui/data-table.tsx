@@ -173,7 +173,9 @@ export function DataTable<T>({
         </div>
       )}
 
-      {rows.length > 0 ? <Pager shown={rows.length} hasNextPage={hasNextPage} onLoadMore={onLoadMore} isLoadingMore={isLoadingMore} /> : null}
+      {rows.length > 0 ? (
+        <Pager shown={rows.length} hasNextPage={hasNextPage} onLoadMore={onLoadMore} isLoadingMore={isLoadingMore} />
+      ) : null}
     </div>
   );
 }

@@ -1,15 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import clsx from 'clsx';
 import type { FormHTMLAttributes, ReactNode } from 'react';
-import {
-  FormProvider,
-  useForm,
-  useFormContext,
-  type FieldValues,
-  type Path,
-  type UseFormProps,
-  type UseFormReturn,
-} from 'react-hook-form';
+import { FormProvider, useForm, useFormContext, type FieldValues, type Path, type UseFormProps, type UseFormReturn } from 'react-hook-form';
 import type { z } from 'zod';
 import { Alert } from '@/components/ui/alert';
 import { Button, type ButtonProps } from '@/components/ui/button';
@@ -47,8 +39,10 @@ export function applyServerError<T extends FieldValues>(form: UseFormReturn<T, u
   if (!fieldsSayItAll) form.setError('root.server', { type: 'server', message });
 }
 
-interface FormProps<TIn extends FieldValues, TOut extends FieldValues>
-  extends Omit<FormHTMLAttributes<HTMLFormElement>, 'onSubmit' | 'children'> {
+interface FormProps<TIn extends FieldValues, TOut extends FieldValues> extends Omit<
+  FormHTMLAttributes<HTMLFormElement>,
+  'onSubmit' | 'children'
+> {
   form: UseFormReturn<TIn, unknown, TOut>;
   onSubmit: (values: TOut) => Promise<unknown> | unknown;
   children: ReactNode;

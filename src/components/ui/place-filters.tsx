@@ -38,7 +38,13 @@ export function PlaceFilters({
         />
       ) : null}
       {siteOptions && siteOptions.length > 0 ? (
-        <FilterSelect label="Site" anyLabel="All sites" options={siteOptions} value={values.siteId ?? ''} onChange={(v) => onChange({ ...values, siteId: v || undefined })} />
+        <FilterSelect
+          label="Site"
+          anyLabel="All sites"
+          options={siteOptions}
+          value={values.siteId ?? ''}
+          onChange={(v) => onChange({ ...values, siteId: v || undefined })}
+        />
       ) : null}
       {modelOptions && modelOptions.length > 0 ? (
         <FilterSelect

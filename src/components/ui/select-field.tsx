@@ -53,12 +53,7 @@ interface SelectBoxProps extends SelectHTMLAttributes<HTMLSelectElement> {
 export function SelectBox({ invalid = false, className, children, ref, ...rest }: SelectBoxProps) {
   return (
     <div className={clsx('relative', className)}>
-      <select
-        ref={ref}
-        aria-invalid={invalid || undefined}
-        className={inputClasses(invalid, 'appearance-none pr-9')}
-        {...rest}
-      >
+      <select ref={ref} aria-invalid={invalid || undefined} className={inputClasses(invalid, 'appearance-none pr-9')} {...rest}>
         {children}
       </select>
       <ChevronDown className="pointer-events-none absolute right-3 top-1/2 h-4 w-4 -translate-y-1/2 text-stone-500" aria-hidden="true" />

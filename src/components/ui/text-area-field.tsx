@@ -12,11 +12,29 @@ interface TextAreaFieldProps extends Omit<TextareaHTMLAttributes<HTMLTextAreaEle
 }
 
 /** A multi-line text input bound to the surrounding <Form> (react-hook-form). */
-export function TextAreaField({ name, label, hint, labelAside, registerOptions, className, rows = 4, ...textareaProps }: TextAreaFieldProps) {
+export function TextAreaField({
+  name,
+  label,
+  hint,
+  labelAside,
+  registerOptions,
+  className,
+  rows = 4,
+  ...textareaProps
+}: TextAreaFieldProps) {
   const { register } = useFormContext();
   const { id, hintId, errorId, error } = useFieldState(name);
   return (
-    <FieldShell id={id} label={label} hint={hint} hintId={hintId} error={error} errorId={errorId} labelAside={labelAside} className={className}>
+    <FieldShell
+      id={id}
+      label={label}
+      hint={hint}
+      hintId={hintId}
+      error={error}
+      errorId={errorId}
+      labelAside={labelAside}
+      className={className}
+    >
       <textarea
         id={id}
         rows={rows}

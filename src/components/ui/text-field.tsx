@@ -41,7 +41,16 @@ export function TextField({
     />
   );
   return (
-    <FieldShell id={id} label={label} hint={hint} hintId={hintId} error={error} errorId={errorId} labelAside={labelAside} className={className}>
+    <FieldShell
+      id={id}
+      label={label}
+      hint={hint}
+      hintId={hintId}
+      error={error}
+      errorId={errorId}
+      labelAside={labelAside}
+      className={className}
+    >
       {revealable ? (
         <div className="relative">
           {input}

@@ -48,7 +48,12 @@ export function ToastProvider({ children }: { children: ReactNode }) {
               <CircleAlert className="mt-0.5 h-5 w-5 shrink-0" aria-hidden="true" />
             )}
             <p className="flex-1">{t.message}</p>
-            <button type="button" onClick={() => dismiss(t.id)} aria-label="Dismiss" className="-m-1 rounded p-1 opacity-80 hover:opacity-100">
+            <button
+              type="button"
+              onClick={() => dismiss(t.id)}
+              aria-label="Dismiss"
+              className="-m-1 rounded p-1 opacity-80 hover:opacity-100"
+            >
               <X className="h-4 w-4" aria-hidden="true" />
             </button>
           </div>

@@ -7,7 +7,12 @@ import type { GridPosition } from '@/components/wall-map/wall-map-geometry';
  * inside the grid. `moveFocus` moves it and focuses that cell once it is drawn. The keyboard
  * ring shows while focus is inside the map and the last move was by keyboard.
  */
-export function useGridFocus(columns: number, rows: number, selected: GridPosition[] | undefined, cellLayerRef: RefObject<SVGGElement | null>) {
+export function useGridFocus(
+  columns: number,
+  rows: number,
+  selected: GridPosition[] | undefined,
+  cellLayerRef: RefObject<SVGGElement | null>,
+) {
   const [focusPos, setFocusPos] = useState<GridPosition>(() => selected?.[0] ?? { column: 1, row: 1 });
   const column = Math.min(columns, Math.max(1, focusPos.column));
   const row = Math.min(rows, Math.max(1, focusPos.row));

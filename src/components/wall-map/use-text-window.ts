@@ -2,7 +2,10 @@ import { useMemo } from 'react';
 import { cellsInWindow, type Rect, type WallLayout } from '@/components/wall-map/wall-map-geometry';
 import type { TextLevel } from '@/components/wall-map/wall-map-row';
 
-const block = (from: number, to: number, max: number): [number, number] => [Math.floor((from - 1) / 8) * 8 + 1, Math.min(max, Math.ceil(to / 8) * 8)];
+const block = (from: number, to: number, max: number): [number, number] => [
+  Math.floor((from - 1) / 8) * 8 + 1,
+  Math.min(max, Math.ceil(to / 8) * 8),
+];
 
 /**
  * The columns and rows whose cells carry text: those in view (and a margin), in blocks of 8 so

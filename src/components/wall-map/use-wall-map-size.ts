@@ -12,8 +12,7 @@ export function useWallMapSize(svgRef: RefObject<SVGSVGElement | null>) {
   useLayoutEffect(() => {
     const svg = svgRef.current;
     if (!svg) return;
-    const measured = (width: number, height: number) =>
-      setSize((s) => (s.width === width && s.height === height ? s : { width, height }));
+    const measured = (width: number, height: number) => setSize((s) => (s.width === width && s.height === height ? s : { width, height }));
     const box = svg.getBoundingClientRect();
     measured(box.width, box.height);
     if (typeof ResizeObserver === 'undefined') return;

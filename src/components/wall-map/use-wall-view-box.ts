@@ -24,9 +24,6 @@ export function useWallViewBox(layout: WallLayout, shapeKey: string, view: WallV
   }
   const vbRef = useRef(vb);
   vbRef.current = vb;
-  const setVb = useCallback<SetViewBox>(
-    (next) => setViewState((s) => ({ ...s, vb: typeof next === 'function' ? next(s.vb) : next })),
-    [],
-  );
+  const setVb = useCallback<SetViewBox>((next) => setViewState((s) => ({ ...s, vb: typeof next === 'function' ? next(s.vb) : next })), []);
   return { vb, vbRef, setVb };
 }

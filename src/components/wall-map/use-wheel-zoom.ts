@@ -24,7 +24,9 @@ export function useWheelZoom(
 ) {
   const zoomBy = useCallback(
     (factor: number, at?: { x: number; y: number }) =>
-      setVb((current) => zoomAt(current, layout.content, factor, at ?? { x: current.x + current.width / 2, y: current.y + current.height / 2 }, maxScale)),
+      setVb((current) =>
+        zoomAt(current, layout.content, factor, at ?? { x: current.x + current.width / 2, y: current.y + current.height / 2 }, maxScale),
+      ),
     [layout, maxScale, setVb],
   );
 

@@ -54,11 +54,22 @@ export function cellName(p: GridPosition, cell: WallMapCell | undefined): string
  * What every cell shows, row by row, and the legend's counts: only new data changes them (not
  * the view, the zoom or the focus). Cells outside the grid are left out.
  */
-export function useCellModels(cells: WallMapCell[] | undefined, columns: number, rows: number): { cellRows: CellModel[][]; legend: LegendCounts } {
+export function useCellModels(
+  cells: WallMapCell[] | undefined,
+  columns: number,
+  rows: number,
+): { cellRows: CellModel[][]; legend: LegendCounts } {
   return useMemo(() => {
     const byPosition: (WallMapCell | undefined)[] = new Array(columns * rows);
     for (const cell of cells ?? []) {
-      if (Number.isInteger(cell.column) && Number.isInteger(cell.row) && cell.column >= 1 && cell.row >= 1 && cell.column <= columns && cell.row <= rows) {
+      if (
+        Number.isInteger(cell.column) &&
+        Number.isInteger(cell.row) &&
+        cell.column >= 1 &&
+        cell.row >= 1 &&
+        cell.column <= columns &&
+        cell.row <= rows
+      ) {
         byPosition[(cell.row - 1) * columns + cell.column - 1] = cell;
       }
     }

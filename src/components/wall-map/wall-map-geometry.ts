@@ -104,11 +104,7 @@ export function wallLayout(columns: number, rows: number, view: WallView = 'fron
  * The columns and rows a window (in user units) shows, widened by `pad` cells on each side; in
  * the rear view the columns are mirrored like the cells. Null when the window holds no cell.
  */
-export function cellsInWindow(
-  layout: WallLayout,
-  vb: Rect,
-  pad = 0,
-): { columns: [number, number]; rows: [number, number] } | null {
+export function cellsInWindow(layout: WallLayout, vb: Rect, pad = 0): { columns: [number, number]; rows: [number, number] } | null {
   const stepX = layout.cellWidth + CELL_GAP;
   const stepY = layout.cellHeight + CELL_GAP;
   const firstSlot = Math.max(0, Math.floor((vb.x - layout.grid.x) / stepX) - pad);

@@ -88,16 +88,42 @@ function pushMarks(marks: ReactNode[], cell: CellModel, box: RowBox, x: number, 
   const { column, tone, serial, heat } = cell;
   const { width, height, size, labelSize, cy } = box;
   if (heat && heat > 0) {
-    marks.push(<rect key={`h${column}`} x={x} width={width} height={height} rx={4} className="fill-state-breached-dot" fillOpacity={0.12 + 0.6 * Math.min(1, heat)} />);
+    marks.push(
+      <rect
+        key={`h${column}`}
+        x={x}
+        width={width}
+        height={height}
+        rx={4}
+        className="fill-state-breached-dot"
+        fillOpacity={0.12 + 0.6 * Math.min(1, heat)}
+      />,
+    );
   }
   if (tone === 'open_ticket') {
     // A mark as well as a colour: colour is never the only signal.
     marks.push(
-      <path key={`t${column}`} d={`M ${x + width - size * 0.3} 2 L ${x + width - 2} 2 L ${x + width - 2} ${size * 0.3} Z`} className="fill-state-open-ticket-dot" />,
+      <path
+        key={`t${column}`}
+        d={`M ${x + width - size * 0.3} 2 L ${x + width - 2} 2 L ${x + width - 2} ${size * 0.3} Z`}
+        className="fill-state-open-ticket-dot"
+      />,
     );
   }
   if (selected) {
-    marks.push(<rect key={`s${column}`} x={x + 5} y={5} width={width - 10} height={height - 10} rx={3} fill="none" className="stroke-amber-500" strokeWidth={7} />);
+    marks.push(
+      <rect
+        key={`s${column}`}
+        x={x + 5}
+        y={5}
+        width={width - 10}
+        height={height - 10}
+        rx={3}
+        fill="none"
+        className="stroke-amber-500"
+        strokeWidth={7}
+      />,
+    );
   }
   if (level === 'none') return;
   const style = toneStyles[tone];
@@ -120,7 +146,15 @@ function pushMarks(marks: ReactNode[], cell: CellModel, box: RowBox, x: number, 
     // Long serials shrink to fit the cell (about 0.6 em per character in the UI font).
     const serialSize = Math.min(size * 0.15, (width * 0.88) / (0.62 * serial.length));
     marks.push(
-      <text key={`n${column}`} x={cx} y={cy + labelSize * 0.95} textAnchor="middle" dominantBaseline="central" fontSize={serialSize} className={clsx(style.text, 'font-mono')}>
+      <text
+        key={`n${column}`}
+        x={cx}
+        y={cy + labelSize * 0.95}
+        textAnchor="middle"
+        dominantBaseline="central"
+        fontSize={serialSize}
+        className={clsx(style.text, 'font-mono')}
+      >
         {serial}
       </text>,
     );

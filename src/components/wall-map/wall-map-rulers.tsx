@@ -7,7 +7,14 @@ export const Rulers = memo(function Rulers({ layout, step, fontSize }: { layout:
   for (let c = 1; c <= layout.columns; c += 1) {
     if (c !== 1 && c % step !== 0) continue;
     numbers.push(
-      <text key={`c${c}`} x={layout.columnCenterX(c)} y={layout.grid.y / 2} textAnchor="middle" dominantBaseline="central" fontSize={fontSize}>
+      <text
+        key={`c${c}`}
+        x={layout.columnCenterX(c)}
+        y={layout.grid.y / 2}
+        textAnchor="middle"
+        dominantBaseline="central"
+        fontSize={fontSize}
+      >
         C{c}
       </text>,
     );

@@ -1,14 +1,7 @@
 // Colours and words of the wall map's cell tones, from the design tokens in tailwind.config.ts.
 // Class names are written out in full so Tailwind finds them.
 
-export type CellTone =
-  | 'installed'
-  | 'spare'
-  | 'at_bench'
-  | 'returned_to_vendor'
-  | 'retired'
-  | 'open_ticket'
-  | 'empty';
+export type CellTone = 'installed' | 'spare' | 'at_bench' | 'returned_to_vendor' | 'retired' | 'open_ticket' | 'empty';
 
 export const cellTones: readonly CellTone[] = ['installed', 'open_ticket', 'spare', 'at_bench', 'returned_to_vendor', 'retired', 'empty'];
 

@@ -41,7 +41,17 @@ export function WallMapToolbar({ view, scale, maxScale, onZoomBy, onShowWhole }:
   );
 }
 
-function MapButton({ label, onClick, disabled, children }: { label: string; onClick: () => void; disabled?: boolean; children: ReactNode }) {
+function MapButton({
+  label,
+  onClick,
+  disabled,
+  children,
+}: {
+  label: string;
+  onClick: () => void;
+  disabled?: boolean;
+  children: ReactNode;
+}) {
   return (
     <button
       type="button"

@@ -86,16 +86,21 @@ describe('zoom and pan', () => {
 
   it('keeps the point under the pointer where it was while zooming', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1.01, max: 3, noNaN: true }), fc.double({ min: 0.1, max: 0.9 }), fc.double({ min: 0.1, max: 0.9 }), (f, fx, fy) => {
-        const at = { x: content.x + fx * content.width, y: content.y + fy * content.height };
-        const next = zoomAt(content, content, f, at, max);
-        const relBefore = (at.x - content.x) / content.width;
-        const relAfter = (at.x - next.x) / next.width;
-        // Exact unless the window had to be pushed back inside the drawing.
-        const inside = next.x > content.x && next.x + next.width < content.x + content.width;
-        if (inside) expect(relAfter).toBeCloseTo(relBefore, 9);
-        expect(next.width).toBeCloseTo(content.width / f, 6);
-      }),
+      fc.property(
+        fc.double({ min: 1.01, max: 3, noNaN: true }),
+        fc.double({ min: 0.1, max: 0.9 }),
+        fc.double({ min: 0.1, max: 0.9 }),
+        (f, fx, fy) => {
+          const at = { x: content.x + fx * content.width, y: content.y + fy * content.height };
+          const next = zoomAt(content, content, f, at, max);
+          const relBefore = (at.x - content.x) / content.width;
+          const relAfter = (at.x - next.x) / next.width;
+          // Exact unless the window had to be pushed back inside the drawing.
+          const inside = next.x > content.x && next.x + next.width < content.x + content.width;
+          if (inside) expect(relAfter).toBeCloseTo(relBefore, 9);
+          expect(next.width).toBeCloseTo(content.width / f, 6);
+        },
+      ),
     );
   });
 

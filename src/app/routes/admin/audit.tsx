@@ -29,10 +29,7 @@ export function Component() {
   return (
     <>
       <PageHeader title="Audit log" description="Who changed what, and when. Open a row to see the values before and after." />
-      <AuditTable
-        filters={filters}
-        onFiltersChange={setFilters}
-      />
+      <AuditTable filters={filters} onFiltersChange={setFilters} />
     </>
   );
 }

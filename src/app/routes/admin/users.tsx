@@ -52,8 +52,9 @@ export function Component() {
           setParams(
             (prev) => {
               const p = new URLSearchParams(prev);
-              for (const [key, value] of Object.entries(next)) if (value) p.set(key, value);
-              else p.delete(key);
+              for (const [key, value] of Object.entries(next))
+                if (value) p.set(key, value);
+                else p.delete(key);
               return p;
             },
             { replace: true },

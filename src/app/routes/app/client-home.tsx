@@ -47,7 +47,11 @@ export function ClientHome({ name, organisation }: { name: string; organisation:
   const tickets = useQuery(ticketQueries.page(clientOpenTickets, clientTicketsLimit));
   return (
     <>
-      <PageHeader title={`Welcome, ${firstName(name)}`} description={`The service overview for ${organisation}.`} actions={reportFaultButton} />
+      <PageHeader
+        title={`Welcome, ${firstName(name)}`}
+        description={`The service overview for ${organisation}.`}
+        actions={reportFaultButton}
+      />
       <div className="grid gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <YourWalls />
 

@@ -55,7 +55,10 @@ export function TechnicianHome({ name }: { name: string }) {
           />
           {tickets.data?.nextCursor ? (
             <p className="mt-3 text-base text-stone-600">
-              {myTicketsLimit} shown, the soonest due. <Link to={paths.tickets.getHref()} className="link">See them all</Link>
+              {myTicketsLimit} shown, the soonest due.{' '}
+              <Link to={paths.tickets.getHref()} className="link">
+                See them all
+              </Link>
             </p>
           ) : null}
         </HomeSection>

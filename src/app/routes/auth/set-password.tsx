@@ -58,13 +58,13 @@ export function Component() {
       description={
         invite ? (
           <>
-            Choose a password for <strong className="font-semibold text-stone-800">{link.data.email}</strong>. You will be signed
-            in straight away.
+            Choose a password for <strong className="font-semibold text-stone-800">{link.data.email}</strong>. You will be signed in
+            straight away.
           </>
         ) : (
           <>
-            For <strong className="font-semibold text-stone-800">{link.data.email}</strong>. Other sign-ins with the old password
-            stop working.
+            For <strong className="font-semibold text-stone-800">{link.data.email}</strong>. Other sign-ins with the old password stop
+            working.
           </>
         )
       }

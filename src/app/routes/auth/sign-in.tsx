@@ -21,7 +21,9 @@ export function Component() {
   return (
     <AuthLayout
       title="Sign in to Gridkeep"
-      description={next && next !== '/' ? 'Sign in to continue where you were going.' : 'Use the e-mail address your invitation was sent to.'}
+      description={
+        next && next !== '/' ? 'Sign in to continue where you were going.' : 'Use the e-mail address your invitation was sent to.'
+      }
     >
       <SignInForm next={next} defaultEmail={params.get('email') ?? ''} />
     </AuthLayout>

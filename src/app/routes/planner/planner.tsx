@@ -13,7 +13,13 @@ import { CabinetInputs, GridInputs, SupplyInputs } from '@/features/planner/comp
 import { PlannerRuns } from '@/features/planner/components/runs-panel';
 import { SavePlanDialog } from '@/features/planner/components/save-plan-dialog';
 import { planResult } from '@/features/planner/utils/plan-result';
-import { defaultPlannerValues, inputOf, plannerFormSchema, valuesFromWall, type PlannerFormInput } from '@/features/planner/utils/planner-form';
+import {
+  defaultPlannerValues,
+  inputOf,
+  plannerFormSchema,
+  valuesFromWall,
+  type PlannerFormInput,
+} from '@/features/planner/utils/planner-form';
 import { num } from '@/features/planner/utils/format';
 import { requireUser, staff } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
@@ -65,7 +71,12 @@ export function Component() {
         description="A wall from a cabinet model and a grid: size, pixels, power, heat, weight, outputs and runs. The figures follow as you type."
         actions={
           isOffice(user) ? (
-            <Button variant="primary" icon={<Save className="h-4 w-4" aria-hidden="true" />} onClick={() => setSaving(true)} disabled={!result}>
+            <Button
+              variant="primary"
+              icon={<Save className="h-4 w-4" aria-hidden="true" />}
+              onClick={() => setSaving(true)}
+              disabled={!result}
+            >
               Save onto a wall…
             </Button>
           ) : null
@@ -104,13 +115,18 @@ export function Component() {
           </Card>
 
           {result ? (
-            <Card title="Runs" description="Numbered arrows in the order the cable links the cabinets, from the disc with the run's number.">
+            <Card
+              title="Runs"
+              description="Numbered arrows in the order the cable links the cabinets, from the disc with the run's number."
+            >
               <PlannerRuns
                 columns={result.v.columns}
                 rows={result.v.rows}
                 cellAspect={result.v.cabinet.heightMm / result.v.cabinet.widthMm}
                 patterns={result.patterns}
-                onPatternChange={(kind, pattern) => form.setValue(kind === 'data' ? 'dataPattern' : 'powerPattern', pattern, { shouldValidate: true })}
+                onPatternChange={(kind, pattern) =>
+                  form.setValue(kind === 'data' ? 'dataPattern' : 'powerPattern', pattern, { shouldValidate: true })
+                }
                 runs={result.runs}
                 limits={result.limits}
               />

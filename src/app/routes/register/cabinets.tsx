@@ -51,12 +51,7 @@ export function Component() {
             : "The cabinets of your organisation's walls."
         }
       />
-      <CabinetsTable
-        filters={filters}
-        staff={staff}
-        filterOptions={filterOptions}
-        onFiltersChange={setFilters}
-      />
+      <CabinetsTable filters={filters} staff={staff} filterOptions={filterOptions} onFiltersChange={setFilters} />
     </>
   );
 }

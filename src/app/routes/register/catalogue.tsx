@@ -80,7 +80,9 @@ export function Component() {
       </nav>
       {tab === 'models' ? <CabinetModelsTable canEdit={canEdit} /> : <ControllersTable canEdit={canEdit} wallOptions={wallOptions} />}
       {canEdit && tab === 'models' ? <CreateCabinetModelDialog open={adding} onClose={() => setAdding(false)} /> : null}
-      {canEdit && tab === 'controllers' ? <CreateControllerDialog open={adding} onClose={() => setAdding(false)} wallOptions={wallOptions} /> : null}
+      {canEdit && tab === 'controllers' ? (
+        <CreateControllerDialog open={adding} onClose={() => setAdding(false)} wallOptions={wallOptions} />
+      ) : null}
     </>
   );
 }

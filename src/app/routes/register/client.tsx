@@ -45,7 +45,15 @@ export function Component() {
   return (
     <>
       <PageHeader
-        eyebrow={staff ? <Link to={paths.clients.getHref()} className="hover:underline">Clients</Link> : 'Your organisation'}
+        eyebrow={
+          staff ? (
+            <Link to={paths.clients.getHref()} className="hover:underline">
+              Clients
+            </Link>
+          ) : (
+            'Your organisation'
+          )
+        }
         title={
           <span className="flex flex-wrap items-center gap-2">
             {client.name}
@@ -69,12 +77,20 @@ export function Component() {
         <div className="space-y-5">
           <Card title="Sites" description="Locations with walls; open one for its access notes and walls." flush>
             {client.sites.length === 0 ? (
-              <EmptyState icon={MapPin} title="No sites yet" description={canEdit ? 'Add the first location with the button above.' : undefined} className="py-8" />
+              <EmptyState
+                icon={MapPin}
+                title="No sites yet"
+                description={canEdit ? 'Add the first location with the button above.' : undefined}
+                className="py-8"
+              />
             ) : (
               <ul className="divide-y divide-stone-100">
                 {client.sites.map((s) => (
                   <li key={s.id}>
-                    <Link to={paths.site.getHref(s.id)} className="flex min-h-touch items-center justify-between gap-3 px-4 py-3 hover:bg-stone-50 sm:px-5">
+                    <Link
+                      to={paths.site.getHref(s.id)}
+                      className="flex min-h-touch items-center justify-between gap-3 px-4 py-3 hover:bg-stone-50 sm:px-5"
+                    >
                       <span className="min-w-0">
                         <span className="block font-medium text-ink-800">{s.name}</span>
                         <span className="block text-sm text-stone-600">

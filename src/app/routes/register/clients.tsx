@@ -44,12 +44,12 @@ export function Component() {
 
   return (
     <>
-      <PageHeader title="Clients" description="Every organisation whose walls you look after: service plan, contacts, sites and walls." actions={addButton} />
-      <ClientsTable
-        filters={filters}
-        emptyAction={addButton}
-        onFiltersChange={setFilters}
+      <PageHeader
+        title="Clients"
+        description="Every organisation whose walls you look after: service plan, contacts, sites and walls."
+        actions={addButton}
       />
+      <ClientsTable filters={filters} emptyAction={addButton} onFiltersChange={setFilters} />
       {canEdit ? <CreateClientDialog open={adding} onClose={() => setAdding(false)} /> : null}
     </>
   );

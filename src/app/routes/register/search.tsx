@@ -21,7 +21,10 @@ export function Component() {
   useDocumentTitle(q ? `Search: ${q}` : 'Search');
   return (
     <>
-      <PageHeader title={q ? `Results for “${q}”` : 'Search'} description="Names match anywhere in the name; serials match from their first characters." />
+      <PageHeader
+        title={q ? `Results for “${q}”` : 'Search'}
+        description="Names match anywhere in the name; serials match from their first characters."
+      />
       <SearchResults q={q} />
     </>
   );

@@ -78,12 +78,20 @@ export function Component() {
           <div className="space-y-5">
             <Card title="Walls" flush>
               {site.walls.length === 0 ? (
-                <EmptyState icon={Grid3x3} title="No walls at this site yet" description={canEdit ? 'Add one with the button above.' : undefined} className="py-8" />
+                <EmptyState
+                  icon={Grid3x3}
+                  title="No walls at this site yet"
+                  description={canEdit ? 'Add one with the button above.' : undefined}
+                  className="py-8"
+                />
               ) : (
                 <ul className="divide-y divide-stone-100">
                   {site.walls.map((w) => (
                     <li key={w.id}>
-                      <Link to={paths.wall.getHref(w.id)} className="flex min-h-touch items-center justify-between gap-3 px-4 py-3 hover:bg-stone-50 sm:px-5">
+                      <Link
+                        to={paths.wall.getHref(w.id)}
+                        className="flex min-h-touch items-center justify-between gap-3 px-4 py-3 hover:bg-stone-50 sm:px-5"
+                      >
                         <span className="min-w-0">
                           <span className="block font-medium text-ink-800">{w.name}</span>
                           <span className="block text-sm text-stone-600">

@@ -45,12 +45,7 @@ export function Component() {
         title="Sites"
         description={staff ? 'Every place where a client has walls: address, time zone and access notes.' : "Your organisation's sites."}
       />
-      <SitesTable
-        filters={filters}
-        staff={staff}
-        clientOptions={staff ? clientOptions : undefined}
-        onFiltersChange={setFilters}
-      />
+      <SitesTable filters={filters} staff={staff} clientOptions={staff ? clientOptions : undefined} onFiltersChange={setFilters} />
     </>
   );
 }

@@ -19,10 +19,7 @@ export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 export async function loader({ request, params }: LoaderFunctionArgs) {
   await requireUser(request, staff);
   const id = idParam(params);
-  await Promise.all([
-    queryClient.ensureQueryData(wallQueries.detail(id)),
-    queryClient.prefetchQuery(wallQueries.cabinets(id)),
-  ]);
+  await Promise.all([queryClient.ensureQueryData(wallQueries.detail(id)), queryClient.prefetchQuery(wallQueries.cabinets(id))]);
   return null;
 }
 
@@ -46,7 +43,12 @@ export function Component() {
         title="QR labels"
         description="One label per cabinet: scanning it opens the cabinet in Gridkeep. Prints three across, seven down (63 × 36 mm) on A4 or Letter."
         actions={
-          <Button variant="primary" onClick={() => window.print()} disabled={items.length === 0} icon={<Printer className="h-4 w-4" aria-hidden="true" />}>
+          <Button
+            variant="primary"
+            onClick={() => window.print()}
+            disabled={items.length === 0}
+            icon={<Printer className="h-4 w-4" aria-hidden="true" />}
+          >
             Print
           </Button>
         }

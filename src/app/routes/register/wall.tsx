@@ -148,7 +148,9 @@ export function Component() {
             aria-current={t.key === tab ? 'page' : undefined}
             className={clsx(
               '-mb-px flex min-h-touch items-center whitespace-nowrap border-b-2 px-3.5 text-base font-medium md:min-h-10',
-              t.key === tab ? 'border-amber-500 text-ink-950' : 'border-transparent text-stone-600 hover:border-stone-300 hover:text-ink-900',
+              t.key === tab
+                ? 'border-amber-500 text-ink-950'
+                : 'border-transparent text-stone-600 hover:border-stone-300 hover:text-ink-900',
             )}
           >
             {t.label}
@@ -159,7 +161,13 @@ export function Component() {
       {tab === 'map' ? (
         <div className="space-y-5">
           <CabinetWallMap
-            wall={{ id: wall.id, name: wall.name, columns: wall.columns, rows: wall.rows, cellAspect: wall.cabinetModel.heightMm / wall.cabinetModel.widthMm }}
+            wall={{
+              id: wall.id,
+              name: wall.name,
+              columns: wall.columns,
+              rows: wall.rows,
+              cellAspect: wall.cabinetModel.heightMm / wall.cabinetModel.widthMm,
+            }}
             selected={selected}
             onSelect={(p) => update({ col: p ? String(p.column) : null, row: p ? String(p.row) : null })}
             view={view}

@@ -59,12 +59,7 @@ export function Component() {
         description={staff ? 'Every installed wall: open one for its map, cabinets, history and documents.' : "Your organisation's walls."}
         actions={addButton}
       />
-      <WallsTable
-        filters={filters}
-        filterOptions={filterOptions}
-        emptyAction={addButton}
-        onFiltersChange={setFilters}
-      />
+      <WallsTable filters={filters} filterOptions={filterOptions} emptyAction={addButton} onFiltersChange={setFilters} />
       {canEdit ? (
         <CreateWallDialog
           open={adding}

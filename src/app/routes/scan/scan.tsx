@@ -30,9 +30,7 @@ export function Component() {
         <CameraScanner onSerial={open} />
         <p className="flex gap-3 rounded-md border border-stone-200 bg-white px-4 py-3 text-base text-stone-700">
           <Smartphone className="mt-0.5 h-5 w-5 shrink-0 text-ink-600" aria-hidden="true" />
-          <span>
-            Your phone&apos;s own camera app opens the labels too: point it at the QR code and tap the link it shows.
-          </span>
+          <span>Your phone&apos;s own camera app opens the labels too: point it at the QR code and tap the link it shows.</span>
         </p>
       </div>
     </div>

@@ -106,11 +106,19 @@ function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
     <>
       <PageHeader
         title={isClient ? 'Tickets' : 'My tickets'}
-        description={isClient ? 'What your organisation reported, and where each request stands.' : 'Tickets assigned to you, most recently updated first.'}
+        description={
+          isClient
+            ? 'What your organisation reported, and where each request stands.'
+            : 'Tickets assigned to you, most recently updated first.'
+        }
         actions={isClient ? newTicketButton : undefined}
       />
       <div className="mb-4 flex flex-col gap-3 sm:flex-row sm:items-end sm:justify-between">
-        <div role="group" aria-label="Which tickets" className="inline-flex w-full rounded-md border border-stone-300 bg-white p-0.5 shadow-sm sm:w-auto">
+        <div
+          role="group"
+          aria-label="Which tickets"
+          className="inline-flex w-full rounded-md border border-stone-300 bg-white p-0.5 shadow-sm sm:w-auto"
+        >
           {showChoices.map((c) => (
             <button
               key={c.value}
@@ -126,7 +134,12 @@ function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
             </button>
           ))}
         </div>
-        <FilterSearch label="Search" placeholder="Title or GK-number" value={params.get('q') ?? ''} onChange={(q) => update('q', q || undefined)} />
+        <FilterSearch
+          label="Search"
+          placeholder="Title or GK-number"
+          value={params.get('q') ?? ''}
+          onChange={(q) => update('q', q || undefined)}
+        />
       </div>
       <TicketCardList
         label={isClient ? 'Your tickets' : 'Tickets assigned to you'}
@@ -140,7 +153,10 @@ function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
               ? show === 'open'
                 ? { title: 'No open tickets', description: 'If something is wrong with a wall, tell us here.', action: newTicketButton }
                 : { title: 'No tickets here yet' }
-              : { title: show === 'open' ? 'Nothing assigned to you is open' : 'No tickets here', description: 'The office assigns tickets; they appear here.' }
+              : {
+                  title: show === 'open' ? 'Nothing assigned to you is open' : 'No tickets here',
+                  description: 'The office assigns tickets; they appear here.',
+                }
         }
       />
     </>

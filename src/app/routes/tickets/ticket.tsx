@@ -48,7 +48,12 @@ export function Component() {
   const ticket = useQuery(ticketQueries.detail(id));
   useDocumentTitle(ticket.data ? `${ticket.data.ref} ${ticket.data.title}` : 'Ticket');
   if (ticket.isPending) return <PageSpinner label="Loading the ticket" />;
-  if (ticket.isError) return <Alert tone="danger" title="The ticket could not be loaded.">{errorMessage(ticket.error)}</Alert>;
+  if (ticket.isError)
+    return (
+      <Alert tone="danger" title="The ticket could not be loaded.">
+        {errorMessage(ticket.error)}
+      </Alert>
+    );
   return <TicketPage ticket={ticket.data} />;
 }
 
@@ -81,7 +86,9 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
           <span className="mt-1 flex flex-wrap items-center gap-2">
             <TicketStatusBadge status={ticket.status} forClient={forClient} size="md" />
             <PriorityBadge priority={ticket.priority} size="md" />
-            {ticket.clockState && !closed ? <ClockBadge state={ticket.clockState} what="Service-plan clock" className="px-2.5 py-1 text-sm" /> : null}
+            {ticket.clockState && !closed ? (
+              <ClockBadge state={ticket.clockState} what="Service-plan clock" className="px-2.5 py-1 text-sm" />
+            ) : null}
           </span>
         }
       />

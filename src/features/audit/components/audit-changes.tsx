@@ -71,12 +71,20 @@ function asRecord(value: unknown): Record<string, unknown> | null {
   return value && typeof value === 'object' && !Array.isArray(value) ? (value as Record<string, unknown>) : null;
 }
 
-const fieldNames: Record<string, string> = { id: 'Id', email: 'E-mail', clientId: 'Organisation id', passwordChangedAt: 'Password changed' };
+const fieldNames: Record<string, string> = {
+  id: 'Id',
+  email: 'E-mail',
+  clientId: 'Organisation id',
+  passwordChangedAt: 'Password changed',
+};
 
 /** "clientId" → "Client id", "last_sign_in_at" → "Last sign in at". */
 function humanise(key: string) {
   if (fieldNames[key]) return fieldNames[key];
-  const words = key.replace(/([a-z0-9])([A-Z])/g, '$1 $2').replace(/_/g, ' ').toLowerCase();
+  const words = key
+    .replace(/([a-z0-9])([A-Z])/g, '$1 $2')
+    .replace(/_/g, ' ')
+    .toLowerCase();
   return words.charAt(0).toUpperCase() + words.slice(1);
 }
 

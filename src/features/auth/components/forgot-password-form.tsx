@@ -17,8 +17,8 @@ export function ForgotPasswordForm({ defaultEmail = '' }: { defaultEmail?: strin
       <div className="space-y-5">
         <Alert tone="success" title="Check your inbox">
           <p>
-            If <strong className="font-semibold">{sentTo}</strong> belongs to a Gridkeep account, a link to set a new password is on
-            its way. The link works once and expires after a while; ask for a new one if it does.
+            If <strong className="font-semibold">{sentTo}</strong> belongs to a Gridkeep account, a link to set a new password is on its
+            way. The link works once and expires after a while; ask for a new one if it does.
           </p>
         </Alert>
         <p className="text-base text-stone-700">

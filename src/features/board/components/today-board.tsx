@@ -58,7 +58,10 @@ function ClockCountTiles() {
             <li key={t.state}>
               <Link
                 to={paths.tickets.getHref({ clock: t.state, open: 'true' })}
-                className={clsx('group block rounded-md border border-l-4 border-stone-200 bg-white px-4 py-3 shadow-card hover:border-stone-300 hover:bg-stone-50', t.tone)}
+                className={clsx(
+                  'group block rounded-md border border-l-4 border-stone-200 bg-white px-4 py-3 shadow-card hover:border-stone-300 hover:bg-stone-50',
+                  t.tone,
+                )}
               >
                 <span className="flex items-center gap-2 text-sm font-semibold text-stone-800">
                   <span className={clsx('h-2.5 w-2.5 rounded-full', t.dot)} aria-hidden="true" />
@@ -101,9 +104,31 @@ function SeeAll({ to, label }: { to: string; label: string }) {
   );
 }
 
-function ListState({ isPending, error, empty, count, children }: { isPending: boolean; error: unknown; empty: ReactNode; count: number; children: ReactNode }) {
-  if (isPending) return <p className="flex items-center gap-2 px-5 py-6 text-sm text-stone-600"><Spinner label="" /> Loading…</p>;
-  if (error) return <div className="p-4"><Alert tone="danger">{errorMessage(error)}</Alert></div>;
+function ListState({
+  isPending,
+  error,
+  empty,
+  count,
+  children,
+}: {
+  isPending: boolean;
+  error: unknown;
+  empty: ReactNode;
+  count: number;
+  children: ReactNode;
+}) {
+  if (isPending)
+    return (
+      <p className="flex items-center gap-2 px-5 py-6 text-sm text-stone-600">
+        <Spinner label="" /> Loading…
+      </p>
+    );
+  if (error)
+    return (
+      <div className="p-4">
+        <Alert tone="danger">{errorMessage(error)}</Alert>
+      </div>
+    );
   if (count === 0) return <div className="px-5 py-8 text-center text-sm text-stone-600">{empty}</div>;
   return <>{children}</>;
 }
@@ -118,7 +143,9 @@ function TicketLine({ t, due, action }: { t: TicketListItem; due: ReactNode; act
             {t.ref}
           </Link>
           {p ? <StatusPill state={p[0]}>{p[1]}</StatusPill> : null}
-          <Badge tone={t.priority === 'critical' ? 'danger' : t.priority === 'high' ? 'amber' : 'neutral'}>{priorityGuidance[t.priority].label}</Badge>
+          <Badge tone={t.priority === 'critical' ? 'danger' : t.priority === 'high' ? 'amber' : 'neutral'}>
+            {priorityGuidance[t.priority].label}
+          </Badge>
         </p>
         <Link to={paths.ticket.getHref(t.id)} className="mt-0.5 block font-medium text-ink-950 hover:underline">
           {t.title}
@@ -155,7 +182,9 @@ function AttentionList() {
     <Section
       title="At risk and breached"
       icon={AlarmClock}
-      action={<SeeAll to={paths.tickets.getHref({ clock: 'at_risk,breached', open: 'true', sort: 'resolutionDueAt', dir: 'asc' })} label="All" />}
+      action={
+        <SeeAll to={paths.tickets.getHref({ clock: 'at_risk,breached', open: 'true', sort: 'resolutionDueAt', dir: 'asc' })} label="All" />
+      }
     >
       <ListState
         isPending={query.isPending}
@@ -169,10 +198,16 @@ function AttentionList() {
       >
         <ul className="divide-y divide-stone-100" aria-label="Tickets at risk or breached">
           {items.map((t) => (
-            <TicketLine key={t.id} t={t} due={t.status === 'new' && t.responseDueAt ? dueText(t.responseDueAt, 'Response') : dueText(t.resolutionDueAt, 'Resolution')} />
+            <TicketLine
+              key={t.id}
+              t={t}
+              due={t.status === 'new' && t.responseDueAt ? dueText(t.responseDueAt, 'Response') : dueText(t.resolutionDueAt, 'Resolution')}
+            />
           ))}
         </ul>
-        {query.data?.nextCursor ? <p className="border-t border-stone-100 px-5 py-2 text-sm text-stone-600">The {boardListLimit} most urgent are shown.</p> : null}
+        {query.data?.nextCursor ? (
+          <p className="border-t border-stone-100 px-5 py-2 text-sm text-stone-600">The {boardListLimit} most urgent are shown.</p>
+        ) : null}
       </ListState>
     </Section>
   );
@@ -184,7 +219,11 @@ function WaitingList() {
   const toast = useToast();
   const items = query.data?.items ?? [];
   return (
-    <Section title="New, waiting for acknowledgement" icon={Inbox} action={<SeeAll to={paths.tickets.getHref({ status: 'new', sort: 'createdAt', dir: 'asc' })} label="All" />}>
+    <Section
+      title="New, waiting for acknowledgement"
+      icon={Inbox}
+      action={<SeeAll to={paths.tickets.getHref({ status: 'new', sort: 'createdAt', dir: 'asc' })} label="All" />}
+    >
       <ListState isPending={query.isPending} error={query.error} count={items.length} empty="No new tickets waiting. Nice.">
         <ul className="divide-y divide-stone-100" aria-label="New tickets waiting for acknowledgement">
           {items.map((t) => (
@@ -218,7 +257,9 @@ function WaitingList() {
             />
           ))}
         </ul>
-        {query.data?.nextCursor ? <p className="border-t border-stone-100 px-5 py-2 text-sm text-stone-600">The {boardListLimit} oldest are shown.</p> : null}
+        {query.data?.nextCursor ? (
+          <p className="border-t border-stone-100 px-5 py-2 text-sm text-stone-600">The {boardListLimit} oldest are shown.</p>
+        ) : null}
       </ListState>
     </Section>
   );

@@ -147,7 +147,12 @@ export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, on
 
 function UpdateCabinetDialog({ cabinet, open, onClose }: { cabinet: CabinetDetail; open: boolean; onClose: () => void }) {
   return (
-    <Dialog open={open} onClose={onClose} title={`Update ${cabinet.serial}`} description={cabinet.position ? `At ${cabinet.position} on ${cabinet.wall?.name}` : undefined}>
+    <Dialog
+      open={open}
+      onClose={onClose}
+      title={`Update ${cabinet.serial}`}
+      description={cabinet.position ? `At ${cabinet.position} on ${cabinet.wall?.name}` : undefined}
+    >
       {open ? <UpdateCabinetForm cabinet={cabinet} onDone={onClose} /> : null}
     </Dialog>
   );
@@ -175,13 +180,21 @@ function UpdateCabinetForm({ cabinet, onDone }: { cabinet: CabinetDetail; onDone
     >
       <SelectField name="status" label="Status" options={options} />
       {leaves ? (
-        <Alert tone="info">
-          This takes the cabinet off the wall and frees {cabinet.position}. The history keeps where it was.
-        </Alert>
+        <Alert tone="info">This takes the cabinet off the wall and frees {cabinet.position}. The history keeps where it was.</Alert>
       ) : null}
-      <TextField name="batch" label="Module batch / bin" autoComplete="off" hint="Modules from different batches differ slightly in colour." />
+      <TextField
+        name="batch"
+        label="Module batch / bin"
+        autoComplete="off"
+        hint="Modules from different batches differ slightly in colour."
+      />
       <TextAreaField name="notes" label="Notes" rows={3} hint="Staff only." />
-      <TextField name="note" label="Reason (kept in the history)" autoComplete="off" hint="Optional, e.g. sent to the bench for a dead receiving card." />
+      <TextField
+        name="note"
+        label="Reason (kept in the history)"
+        autoComplete="off"
+        hint="Optional, e.g. sent to the bench for a dead receiving card."
+      />
       <DialogActions>
         <Button onClick={onDone}>Cancel</Button>
         <SubmitButton>Save</SubmitButton>

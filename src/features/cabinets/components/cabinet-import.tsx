@@ -70,8 +70,8 @@ export function CabinetImport({ wall, mapHref }: CabinetImportProps) {
             Download the template
           </Button>
           <p className="text-sm text-stone-600">
-            First line: <code className="rounded bg-stone-100 px-1 font-mono">serial,column,row,batch</code>. Nothing is imported unless every line is
-            right.
+            First line: <code className="rounded bg-stone-100 px-1 font-mono">serial,column,row,batch</code>. Nothing is imported unless
+            every line is right.
           </p>
         </div>
 
@@ -174,9 +174,7 @@ function ProgressBar({ value, label }: { value: number; label: string }) {
       >
         <div className="h-full rounded-full bg-ink-600 transition-[width]" style={{ width: `${percent}%` }} />
       </div>
-      <span className="w-32 text-sm tabular-nums text-stone-700">
-        {value < 1 ? `${percent} %` : label}
-      </span>
+      <span className="w-32 text-sm tabular-nums text-stone-700">{value < 1 ? `${percent} %` : label}</span>
     </div>
   );
 }

@@ -17,11 +17,11 @@ function useQrCodes(urls: string[]) {
   useEffect(() => {
     let cancelled = false;
     const list = key ? key.split('\n') : [];
-    Promise.all(list.map(async (url) => [url, await QRCode.toString(url, { type: 'svg', margin: 4, errorCorrectionLevel: 'M' })] as const)).then(
-      (pairs) => {
-        if (!cancelled) setCodes(new Map(pairs));
-      },
-    );
+    Promise.all(
+      list.map(async (url) => [url, await QRCode.toString(url, { type: 'svg', margin: 4, errorCorrectionLevel: 'M' })] as const),
+    ).then((pairs) => {
+      if (!cancelled) setCodes(new Map(pairs));
+    });
     return () => {
       cancelled = true;
     };
@@ -65,7 +65,10 @@ export function CabinetLabelsSheet({ wall, cabinets, origin }: CabinetLabelsShee
           {cabinets.map((c) => {
             const url = labelUrl(origin, c.serial);
             return (
-              <div key={c.id} className="cabinet-label flex flex-col gap-1 overflow-hidden rounded-md border border-stone-300 bg-white px-3 py-2.5 shadow-card">
+              <div
+                key={c.id}
+                className="cabinet-label flex flex-col gap-1 overflow-hidden rounded-md border border-stone-300 bg-white px-3 py-2.5 shadow-card"
+              >
                 <p className="serial break-all font-mono text-[12pt] font-bold leading-tight text-black">{c.serial}</p>
                 <div className="flex min-h-0 flex-1 items-center gap-2">
                   <div

@@ -42,7 +42,8 @@ interface CabinetWallMapProps {
   notice?: ReactNode;
 }
 
-const same = (a: Position | null | undefined, b: Position | null | undefined) => Boolean(a && b && a.column === b.column && a.row === b.row);
+const same = (a: Position | null | undefined, b: Position | null | undefined) =>
+  Boolean(a && b && a.column === b.column && a.row === b.row);
 const samePlace = (a: Position | null, b: Position | null) => a === b || same(a, b);
 
 /**
@@ -67,7 +68,16 @@ function useAddressValue<T>(value: T, equal: (a: T, b: T) => boolean, onChange: 
  * the cabinet card (a side panel on wide screens, a dialog on phones) from which staff move or
  * swap the cabinet by tapping its new position.
  */
-export function CabinetWallMap({ wall, selected: selectedInAddress, onSelect: select, view: viewInAddress, onViewChange, canRegister, canOperate, notice }: CabinetWallMapProps) {
+export function CabinetWallMap({
+  wall,
+  selected: selectedInAddress,
+  onSelect: select,
+  view: viewInAddress,
+  onViewChange,
+  canRegister,
+  canOperate,
+  notice,
+}: CabinetWallMapProps) {
   const [selected, onSelect] = useAddressValue(selectedInAddress, samePlace, select);
   const [view, setView] = useAddressValue<View>(viewInAddress, (a, b) => a === b, onViewChange);
   const query = useQuery(wallQueries.cabinets(wall.id));
@@ -161,22 +171,24 @@ export function CabinetWallMap({ wall, selected: selectedInAddress, onSelect: se
         <div className="space-y-3">
           {notice}
           {mode ? (
-            <div role="status" className="flex flex-wrap items-center justify-between gap-3 rounded-md border border-amber-300 bg-amber-50 px-3.5 py-2.5">
+            <div
+              role="status"
+              className="flex flex-wrap items-center justify-between gap-3 rounded-md border border-amber-300 bg-amber-50 px-3.5 py-2.5"
+            >
               <p className="text-base text-amber-900">
                 {mode.kind === 'move' ? (
                   <>
-                    Moving <span className="font-mono font-semibold">{mode.cabinet.serial}</span> from {mode.cabinet.position}: tap a free position.
+                    Moving <span className="font-mono font-semibold">{mode.cabinet.serial}</span> from {mode.cabinet.position}: tap a free
+                    position.
                   </>
                 ) : (
                   <>
-                    Swapping <span className="font-mono font-semibold">{mode.cabinet.serial}</span> at {mode.cabinet.position}: tap the cabinet to swap
-                    with.
+                    Swapping <span className="font-mono font-semibold">{mode.cabinet.serial}</span> at {mode.cabinet.position}: tap the
+                    cabinet to swap with.
                   </>
                 )}
               </p>
-              <Button onClick={() => setMode(null)}>
-                Cancel
-              </Button>
+              <Button onClick={() => setMode(null)}>Cancel</Button>
             </div>
           ) : null}
           {query.isError ? (
@@ -204,7 +216,10 @@ export function CabinetWallMap({ wall, selected: selectedInAddress, onSelect: se
       </Card>
 
       {wide ? (
-        <aside aria-label="Cabinet" className="sticky top-20 max-h-[calc(100dvh-6rem)] overflow-y-auto rounded-md border border-stone-200 bg-white p-5 shadow-card">
+        <aside
+          aria-label="Cabinet"
+          className="sticky top-20 max-h-[calc(100dvh-6rem)] overflow-y-auto rounded-md border border-stone-200 bg-white p-5 shadow-card"
+        >
           {panel}
         </aside>
       ) : (
@@ -248,7 +263,15 @@ function ConfirmMoveDialog({
   const title = pending?.kind === 'swap' ? 'Swap these cabinets?' : 'Move this cabinet?';
   return (
     <Dialog open={pending !== null} onClose={onCancel} title={title} size="sm">
-      {pending ? <ConfirmMoveForm key={`${pending.kind}:${pending.cabinet.id}`} pending={pending} wallId={wallId} onCancel={onCancel} onDone={onDone} /> : null}
+      {pending ? (
+        <ConfirmMoveForm
+          key={`${pending.kind}:${pending.cabinet.id}`}
+          pending={pending}
+          wallId={wallId}
+          onCancel={onCancel}
+          onDone={onDone}
+        />
+      ) : null}
     </Dialog>
   );
 }
@@ -294,8 +317,8 @@ function ConfirmMoveForm({
         ) : (
           <>
             <span className="font-mono font-semibold">{cabinet.serial}</span> ({cabinet.position}) and{' '}
-            <span className="font-mono font-semibold">{pending.other.serial}</span> ({cellLabel(pending.other)}) take each other’s positions.
-            Both histories keep the swap.
+            <span className="font-mono font-semibold">{pending.other.serial}</span> ({cellLabel(pending.other)}) take each other’s
+            positions. Both histories keep the swap.
           </>
         )}
       </p>

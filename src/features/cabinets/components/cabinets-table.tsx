@@ -45,7 +45,10 @@ export function CabinetsTable({ filters, onFiltersChange, staff, filterOptions }
         enableSorting: true,
         meta: { alwaysVisible: true },
         cell: (c) => (
-          <Link to={paths.cabinetLabel.getHref(c.getValue())} className="whitespace-nowrap font-mono font-medium text-ink-800 hover:underline">
+          <Link
+            to={paths.cabinetLabel.getHref(c.getValue())}
+            className="whitespace-nowrap font-mono font-medium text-ink-800 hover:underline"
+          >
             {c.getValue()}
           </Link>
         ),
@@ -76,7 +79,10 @@ export function CabinetsTable({ filters, onFiltersChange, staff, filterOptions }
           const { wallId, column: col, row } = c.row.original;
           // The wall's map opens on the cabinet's cell.
           return wallId ? (
-            <Link to={paths.wall.getHref(wallId, { col: col ?? undefined, row: row ?? undefined })} className="text-stone-800 hover:underline">
+            <Link
+              to={paths.wall.getHref(wallId, { col: col ?? undefined, row: row ?? undefined })}
+              className="text-stone-800 hover:underline"
+            >
               {c.getValue()}
             </Link>
           ) : (
@@ -115,7 +121,13 @@ export function CabinetsTable({ filters, onFiltersChange, staff, filterOptions }
         cell: (c) => (c.getValue() ? <span className="whitespace-nowrap">{formatDate(c.getValue())}</span> : none),
       }),
       ...(staff
-        ? [column.accessor('locationName', { header: 'Stock location', meta: { hiddenByDefault: true }, cell: (c) => c.getValue() ?? none })]
+        ? [
+            column.accessor('locationName', {
+              header: 'Stock location',
+              meta: { hiddenByDefault: true },
+              cell: (c) => c.getValue() ?? none,
+            }),
+          ]
         : []),
     ],
     [staff, filters.batch],

@@ -20,7 +20,12 @@ interface EmptyCellCardProps {
 export function EmptyCellCard({ wallId, position, canRegister, onClose, titled = false }: EmptyCellCardProps) {
   const label = cellLabel(position);
   return (
-    <article aria-labelledby={titled ? undefined : 'empty-cell-title'} aria-label={titled ? label : undefined} className="space-y-4" data-testid="empty-cell-card">
+    <article
+      aria-labelledby={titled ? undefined : 'empty-cell-title'}
+      aria-label={titled ? label : undefined}
+      className="space-y-4"
+      data-testid="empty-cell-card"
+    >
       <header className="flex items-start justify-between gap-3">
         <div className="flex items-start gap-3">
           <span className="flex h-10 w-10 shrink-0 items-center justify-center rounded-full bg-stone-100 text-stone-600">

@@ -17,7 +17,19 @@ const environmentOptions = [
   { value: 'outdoor', label: 'Outdoor' },
 ];
 
-function NumberField({ name, label, unit, step = 'any', hint }: { name: string; label: string; unit?: string; step?: string; hint?: string }) {
+function NumberField({
+  name,
+  label,
+  unit,
+  step = 'any',
+  hint,
+}: {
+  name: string;
+  label: string;
+  unit?: string;
+  step?: string;
+  hint?: string;
+}) {
   return (
     <TextField
       name={name}
@@ -48,7 +60,13 @@ function PitchCheck() {
 
 export function CreateCabinetModelDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
   return (
-    <Dialog open={open} onClose={onClose} title="Add a cabinet model" description="The manufacturer's data sheet figures, per cabinet." size="lg">
+    <Dialog
+      open={open}
+      onClose={onClose}
+      title="Add a cabinet model"
+      description="The manufacturer's data sheet figures, per cabinet."
+      size="lg"
+    >
       {open ? <CreateCabinetModelForm onDone={onClose} /> : null}
     </Dialog>
   );

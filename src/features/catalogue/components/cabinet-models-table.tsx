@@ -30,10 +30,22 @@ export function CabinetModelsTable({ canEdit }: { canEdit: boolean }) {
       column.accessor((m) => `${n(m.widthMm)} × ${n(m.heightMm)}`, { id: 'size', header: 'Size (mm)', meta: { align: 'right' } }),
       column.accessor((m) => `${m.pixelsWide} × ${m.pixelsHigh}`, { id: 'pixels', header: 'Pixels', meta: { align: 'right' } }),
       column.accessor((m) => `${m.modulesWide} × ${m.modulesHigh}`, { id: 'modules', header: 'Modules', meta: { align: 'right' } }),
-      column.accessor((m) => `${n(m.maxPowerW)} / ${n(m.typicalPowerW)}`, { id: 'power', header: 'Power max / typ. (W)', meta: { align: 'right' } }),
+      column.accessor((m) => `${n(m.maxPowerW)} / ${n(m.typicalPowerW)}`, {
+        id: 'power',
+        header: 'Power max / typ. (W)',
+        meta: { align: 'right' },
+      }),
       column.accessor('weightKg', { header: 'Weight', meta: { align: 'right' }, cell: (c) => `${c.getValue()} kg` }),
-      column.accessor('brightnessNits', { header: 'Brightness', meta: { align: 'right', hiddenByDefault: true }, cell: (c) => `${n(c.getValue())} nits` }),
-      column.accessor((m) => `${m.inputVoltageMinV}–${m.inputVoltageMaxV} V`, { id: 'voltage', header: 'Power input', meta: { hiddenByDefault: true } }),
+      column.accessor('brightnessNits', {
+        header: 'Brightness',
+        meta: { align: 'right', hiddenByDefault: true },
+        cell: (c) => `${n(c.getValue())} nits`,
+      }),
+      column.accessor((m) => `${m.inputVoltageMinV}–${m.inputVoltageMaxV} V`, {
+        id: 'voltage',
+        header: 'Power input',
+        meta: { hiddenByDefault: true },
+      }),
       column.accessor((m) => m.passThroughAmps, {
         id: 'connector',
         header: 'Connector',
@@ -48,7 +60,9 @@ export function CabinetModelsTable({ canEdit }: { canEdit: boolean }) {
       }),
       column.accessor('environment', {
         header: 'Use',
-        cell: (c) => <Badge tone={c.getValue() === 'outdoor' ? 'amber' : 'neutral'}>{c.getValue() === 'outdoor' ? 'Outdoor' : 'Indoor'}</Badge>,
+        cell: (c) => (
+          <Badge tone={c.getValue() === 'outdoor' ? 'amber' : 'neutral'}>{c.getValue() === 'outdoor' ? 'Outdoor' : 'Indoor'}</Badge>
+        ),
       }),
       ...(canEdit ? [editColumn<CabinetModel>(setEditing, (r) => r.name)] : []),
     ],
@@ -66,7 +80,13 @@ export function CabinetModelsTable({ canEdit }: { canEdit: boolean }) {
         isLoading={query.isPending}
         error={query.error}
         onRetry={() => query.refetch()}
-        empty={<EmptyState icon={LayoutGrid} title="No cabinet models yet" description="Add the models you install: walls are built from them." />}
+        empty={
+          <EmptyState
+            icon={LayoutGrid}
+            title="No cabinet models yet"
+            description="Add the models you install: walls are built from them."
+          />
+        }
       />
       <EditCabinetModelDialog model={editing} onClose={() => setEditing(null)} />
     </>

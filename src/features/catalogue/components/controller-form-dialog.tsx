@@ -24,13 +24,7 @@ function WallSelect({ options }: { options: SelectOption[] }) {
     if (options.length && current) setValue('wallId', current);
   }, [options, getValues, setValue]);
   return (
-    <SelectField
-      name="wallId"
-      label="Drives the wall"
-      placeholder="No wall (a spare)"
-      options={options}
-      registerOptions={nullIfEmpty}
-    />
+    <SelectField name="wallId" label="Drives the wall" placeholder="No wall (a spare)" options={options} registerOptions={nullIfEmpty} />
   );
 }
 
@@ -44,7 +38,13 @@ interface CreateControllerDialogProps {
 
 export function CreateControllerDialog({ open, onClose, wallOptions, wallId }: CreateControllerDialogProps) {
   return (
-    <Dialog open={open} onClose={onClose} title="Add a controller" description="The processor or sending device that drives a wall." size="lg">
+    <Dialog
+      open={open}
+      onClose={onClose}
+      title="Add a controller"
+      description="The processor or sending device that drives a wall."
+      size="lg"
+    >
       {open ? <CreateControllerForm wallOptions={wallOptions} wallId={wallId} onDone={onClose} /> : null}
     </Dialog>
   );
@@ -94,7 +94,15 @@ function CreateControllerForm({ wallOptions, wallId, onDone }: { wallOptions: Se
   );
 }
 
-export function EditControllerDialog({ controller, wallOptions, onClose }: { controller: Controller | null; wallOptions: SelectOption[]; onClose: () => void }) {
+export function EditControllerDialog({
+  controller,
+  wallOptions,
+  onClose,
+}: {
+  controller: Controller | null;
+  wallOptions: SelectOption[];
+  onClose: () => void;
+}) {
   return (
     <Dialog
       open={controller !== null}
@@ -107,7 +115,15 @@ export function EditControllerDialog({ controller, wallOptions, onClose }: { con
   );
 }
 
-function EditControllerForm({ controller, wallOptions, onDone }: { controller: Controller; wallOptions: SelectOption[]; onDone: () => void }) {
+function EditControllerForm({
+  controller,
+  wallOptions,
+  onDone,
+}: {
+  controller: Controller;
+  wallOptions: SelectOption[];
+  onDone: () => void;
+}) {
   const update = useUpdateController();
   const toast = useToast();
   const form = useZodForm(controllerPatch, {

@@ -63,7 +63,9 @@ export function ControllersTable({ canEdit, wallOptions }: { canEdit: boolean; w
         isLoading={query.isPending}
         error={query.error}
         onRetry={() => query.refetch()}
-        empty={<EmptyState icon={Cpu} title="No controllers yet" description="Record each processor: model, serial, firmware and outputs." />}
+        empty={
+          <EmptyState icon={Cpu} title="No controllers yet" description="Record each processor: model, serial, firmware and outputs." />
+        }
       />
       <EditControllerDialog controller={editing} wallOptions={wallOptions} onClose={() => setEditing(null)} />
     </>

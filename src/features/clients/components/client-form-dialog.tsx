@@ -91,7 +91,12 @@ function EditClientForm({ client, onDone }: { client: ClientDetail; onDone: () =
   const update = useUpdateClient();
   const toast = useToast();
   const form = useZodForm(clientPatch, {
-    defaultValues: { name: client.name, servicePlanId: client.servicePlan?.id ?? null, notes: client.notes ?? '', archived: client.archived },
+    defaultValues: {
+      name: client.name,
+      servicePlanId: client.servicePlan?.id ?? null,
+      notes: client.notes ?? '',
+      archived: client.archived,
+    },
   });
   return (
     <Form

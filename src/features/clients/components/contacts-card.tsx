@@ -53,7 +53,12 @@ export function ContactsCard({ clientId, contacts, siteId, sites, canEdit, title
       }
     >
       {contacts.length === 0 ? (
-        <EmptyState icon={Users} title="No contacts yet" description="Add the people who report faults, approve work or hold the keys." className="py-8" />
+        <EmptyState
+          icon={Users}
+          title="No contacts yet"
+          description="Add the people who report faults, approve work or hold the keys."
+          className="py-8"
+        />
       ) : (
         <ul className="divide-y divide-stone-100">
           {contacts.map((c) => (
@@ -84,10 +89,22 @@ export function ContactsCard({ clientId, contacts, siteId, sites, canEdit, title
               </div>
               {canEdit ? (
                 <div className="flex shrink-0 gap-1">
-                  <Button size="sm" variant="ghost" onClick={() => setEditing(c)} aria-label={`Edit ${c.name}`} icon={<Pencil className="h-4 w-4" aria-hidden="true" />}>
+                  <Button
+                    size="sm"
+                    variant="ghost"
+                    onClick={() => setEditing(c)}
+                    aria-label={`Edit ${c.name}`}
+                    icon={<Pencil className="h-4 w-4" aria-hidden="true" />}
+                  >
                     Edit
                   </Button>
-                  <Button size="sm" variant="ghost" onClick={() => setRemoving(c)} aria-label={`Remove ${c.name}`} icon={<Trash2 className="h-4 w-4" aria-hidden="true" />}>
+                  <Button
+                    size="sm"
+                    variant="ghost"
+                    onClick={() => setRemoving(c)}
+                    aria-label={`Remove ${c.name}`}
+                    icon={<Trash2 className="h-4 w-4" aria-hidden="true" />}
+                  >
                     Remove
                   </Button>
                 </div>

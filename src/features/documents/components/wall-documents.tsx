@@ -54,7 +54,11 @@ export function WallDocuments({ wallId, canUpload, canMarkInternal, canDelete }:
             </Alert>
           </div>
         ) : files.length === 0 ? (
-          <EmptyState icon={FileText} title="No documents yet" description={canUpload ? 'Upload the as-built drawing first: the next technician will thank you.' : undefined} />
+          <EmptyState
+            icon={FileText}
+            title="No documents yet"
+            description={canUpload ? 'Upload the as-built drawing first: the next technician will thank you.' : undefined}
+          />
         ) : (
           <ul className="divide-y divide-stone-100">
             {files.map((f) => (
@@ -107,15 +111,30 @@ function DocumentRow({ file: f, onRemove }: DocumentRowProps) {
       </div>
       <div className="flex gap-1">
         {/^image\/|^application\/pdf$/.test(f.contentType) ? (
-          <a href={`${f.url}?inline=1`} target="_blank" rel="noreferrer" className="rounded px-2.5 py-1.5 text-sm font-medium text-ink-700 hover:bg-ink-50">
+          <a
+            href={`${f.url}?inline=1`}
+            target="_blank"
+            rel="noreferrer"
+            className="rounded px-2.5 py-1.5 text-sm font-medium text-ink-700 hover:bg-ink-50"
+          >
             View
           </a>
         ) : null}
-        <a href={f.url} download={f.fileName} className="inline-flex items-center gap-1.5 rounded px-2.5 py-1.5 text-sm font-medium text-ink-700 hover:bg-ink-50">
+        <a
+          href={f.url}
+          download={f.fileName}
+          className="inline-flex items-center gap-1.5 rounded px-2.5 py-1.5 text-sm font-medium text-ink-700 hover:bg-ink-50"
+        >
           <Download className="h-4 w-4" aria-hidden="true" /> Download
         </a>
         {onRemove ? (
-          <Button size="sm" variant="ghost" aria-label={`Remove ${f.fileName}`} onClick={() => onRemove(f)} icon={<Trash2 className="h-4 w-4" aria-hidden="true" />}>
+          <Button
+            size="sm"
+            variant="ghost"
+            aria-label={`Remove ${f.fileName}`}
+            onClick={() => onRemove(f)}
+            icon={<Trash2 className="h-4 w-4" aria-hidden="true" />}
+          >
             Remove
           </Button>
         ) : null}
@@ -191,7 +210,13 @@ function UploadForm({ wallId, canMarkInternal }: { wallId: string; canMarkIntern
           </label>
         ) : null}
         <div className="flex flex-wrap items-center gap-3">
-          <Button type="submit" variant="primary" disabled={!file} loading={progress !== null} icon={<Upload className="h-4 w-4" aria-hidden="true" />}>
+          <Button
+            type="submit"
+            variant="primary"
+            disabled={!file}
+            loading={progress !== null}
+            icon={<Upload className="h-4 w-4" aria-hidden="true" />}
+          >
             Upload
           </Button>
           {progress !== null ? <UploadProgress fraction={progress} /> : null}

@@ -21,8 +21,8 @@ export function MailboxView() {
   if (mailbox.isError) {
     return isNotFound(mailbox.error) ? (
       <Alert tone="info" title="No development mailbox here">
-        The development mailbox is only available with the local mail server. This installation sends e-mail through a real
-        mail server, so messages go to people's own inboxes.
+        The development mailbox is only available with the local mail server. This installation sends e-mail through a real mail server, so
+        messages go to people's own inboxes.
       </Alert>
     ) : (
       <Alert tone="danger" title="The mailbox could not be loaded.">
@@ -39,10 +39,7 @@ export function MailboxView() {
 
   return (
     <div className="overflow-hidden rounded-md border border-stone-200 bg-white shadow-card lg:grid lg:h-[calc(100dvh-13rem)] lg:min-h-[28rem] lg:grid-cols-[22rem_1fr]">
-      <section
-        aria-label="Messages"
-        className={clsx('flex min-h-0 flex-col border-stone-200 lg:border-r', selected && 'hidden lg:flex')}
-      >
+      <section aria-label="Messages" className={clsx('flex min-h-0 flex-col border-stone-200 lg:border-r', selected && 'hidden lg:flex')}>
         <div className="flex items-center justify-between gap-2 border-b border-stone-200 px-4 py-2">
           <p className="text-sm text-stone-600">{items.length === 1 ? '1 message' : `${items.length} messages`}</p>
           <Button
@@ -56,7 +53,11 @@ export function MailboxView() {
           </Button>
         </div>
         {items.length === 0 ? (
-          <EmptyState icon={Inbox} title="No mail yet" description="Invitations, reset links and ticket notices sent by Gridkeep appear here." />
+          <EmptyState
+            icon={Inbox}
+            title="No mail yet"
+            description="Invitations, reset links and ticket notices sent by Gridkeep appear here."
+          />
         ) : (
           <ul className="min-h-0 flex-1 divide-y divide-stone-100 overflow-y-auto">
             {items.map((m) => (
@@ -71,7 +72,12 @@ export function MailboxView() {
         {selected ? (
           <MessagePane message={selected} onBack={() => setSelectedId(null)} />
         ) : (
-          <EmptyState icon={MailOpen} title="Choose a message" description="Its text and attachments show here." className="h-full justify-center" />
+          <EmptyState
+            icon={MailOpen}
+            title="Choose a message"
+            description="Its text and attachments show here."
+            className="h-full justify-center"
+          />
         )}
       </section>
     </div>
@@ -85,7 +91,10 @@ function MessageLine({ message: m, selected, onSelect }: { message: MailboxItem;
       type="button"
       onClick={onSelect}
       aria-current={selected ? 'true' : undefined}
-      className={clsx('block w-full px-4 py-3 text-left hover:bg-stone-50', selected && 'bg-ink-50 shadow-[inset_3px_0_0_theme(colors.amber.400)]')}
+      className={clsx(
+        'block w-full px-4 py-3 text-left hover:bg-stone-50',
+        selected && 'bg-ink-50 shadow-[inset_3px_0_0_theme(colors.amber.400)]',
+      )}
     >
       <span className="flex items-baseline justify-between gap-2">
         <span className="truncate text-sm text-stone-700">{m.to}</span>
@@ -104,7 +113,13 @@ function MessageLine({ message: m, selected, onSelect }: { message: MailboxItem;
 function MessagePane({ message, onBack }: { message: MailboxItem; onBack: () => void }) {
   return (
     <article className="px-5 py-4">
-      <Button variant="ghost" size="sm" className="-ml-2 mb-2 lg:hidden" onClick={onBack} icon={<ArrowLeft className="h-4 w-4" aria-hidden="true" />}>
+      <Button
+        variant="ghost"
+        size="sm"
+        className="-ml-2 mb-2 lg:hidden"
+        onClick={onBack}
+        icon={<ArrowLeft className="h-4 w-4" aria-hidden="true" />}
+      >
         All messages
       </Button>
       <h2 className="text-xl font-semibold">{message.subject || '(no subject)'}</h2>
@@ -121,7 +136,10 @@ function MessagePane({ message, onBack }: { message: MailboxItem; onBack: () => 
           <h3 className="text-xs font-semibold text-stone-600">Attachments</h3>
           <ul className="mt-1.5 flex flex-wrap gap-2">
             {message.attachments.map((a, i) => (
-              <li key={`${a.filename}-${i}`} className="flex items-center gap-2 rounded border border-stone-200 bg-stone-50 px-2.5 py-1.5 text-sm">
+              <li
+                key={`${a.filename}-${i}`}
+                className="flex items-center gap-2 rounded border border-stone-200 bg-stone-50 px-2.5 py-1.5 text-sm"
+              >
                 <Paperclip className="h-4 w-4 text-stone-500" aria-hidden="true" />
                 <span className="font-medium text-stone-800">{a.filename || 'unnamed'}</span>
                 <span className="text-xs text-stone-500">{a.contentType}</span>
@@ -131,7 +149,11 @@ function MessagePane({ message, onBack }: { message: MailboxItem; onBack: () => 
         </div>
       ) : null}
       <div className="mt-5 whitespace-pre-wrap break-words border-t border-stone-200 pt-4 text-base leading-relaxed text-stone-800">
-        {message.text ? <LinkifiedText text={message.text} /> : <span className="italic text-stone-500">This message has no plain-text part.</span>}
+        {message.text ? (
+          <LinkifiedText text={message.text} />
+        ) : (
+          <span className="italic text-stone-500">This message has no plain-text part.</span>
+        )}
       </div>
     </article>
   );

@@ -18,7 +18,15 @@ interface ChoiceGroupProps<T extends string> {
 }
 
 /** A small set of exclusive choices as one row of buttons (native radios underneath). */
-export function ChoiceGroup<T extends string>({ legend, hideLegend = false, value, onChange, choices, className, size = 'md' }: ChoiceGroupProps<T>) {
+export function ChoiceGroup<T extends string>({
+  legend,
+  hideLegend = false,
+  value,
+  onChange,
+  choices,
+  className,
+  size = 'md',
+}: ChoiceGroupProps<T>) {
   const name = useId();
   return (
     <fieldset className={className}>

@@ -9,7 +9,8 @@ export const cautions = {
     'These figures are planning estimates: circuits and connections are designed and signed off by a licensed electrician under the local code.',
   structure:
     "Ground-stacked and flown walls follow the manufacturer's instructions and a qualified engineer's design; ballast and rigging are not computed here.",
-  service: 'Isolate power before opening a cabinet; handle modules with ESD protection; use proper access equipment when working at height.',
+  service:
+    'Isolate power before opening a cabinet; handle modules with ESD protection; use proper access equipment when working at height.',
 } as const;
 
 export function Caution({ children, className }: { children: ReactNode; className?: string }) {
@@ -25,7 +26,13 @@ export function Caution({ children, className }: { children: ReactNode; classNam
 }
 
 /** The power caution with the code whose continuous-load factor the figures used. */
-export function PowerCaution({ supply, className }: { supply: Pick<Supply, 'voltage' | 'phases' | 'continuousFactor'>; className?: string }) {
+export function PowerCaution({
+  supply,
+  className,
+}: {
+  supply: Pick<Supply, 'voltage' | 'phases' | 'continuousFactor'>;
+  className?: string;
+}) {
   return (
     <Caution className={className}>
       {cautions.power} {continuousLoadNote(supply)}

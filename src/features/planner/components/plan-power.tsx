@@ -17,11 +17,21 @@ export function CircuitTable({ plan }: { plan: WallPlan }) {
         <table className="w-full text-sm tabular-nums">
           <thead className="sticky top-0 bg-stone-50 text-left text-xs text-stone-600">
             <tr>
-              <th scope="col" className="px-3 py-2 font-semibold">Circuit</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Phase</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Cabinets</th>
-              <th scope="col" className="px-3 py-2 text-right font-semibold">Watts</th>
-              <th scope="col" className="px-3 py-2 text-right font-semibold">Amps</th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Circuit
+              </th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Phase
+              </th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Cabinets
+              </th>
+              <th scope="col" className="px-3 py-2 text-right font-semibold">
+                Watts
+              </th>
+              <th scope="col" className="px-3 py-2 text-right font-semibold">
+                Amps
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-stone-100">

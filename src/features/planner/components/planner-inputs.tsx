@@ -25,7 +25,17 @@ export function connectionText(m: Pick<CabinetModel, 'passThroughAmps' | 'maxPer
   return parts.filter(Boolean).join(' · ');
 }
 
-function RadioField<T extends string>({ name, legend, choices, onChange }: { name: 'gridMode' | 'target.unit' | 'inputPreset'; legend: string; choices: { value: T; label: string }[]; onChange?: (v: T) => void }) {
+function RadioField<T extends string>({
+  name,
+  legend,
+  choices,
+  onChange,
+}: {
+  name: 'gridMode' | 'target.unit' | 'inputPreset';
+  legend: string;
+  choices: { value: T; label: string }[];
+  onChange?: (v: T) => void;
+}) {
   const { control } = useFormContext<PlannerFormInput>();
   const { field } = useController({ control, name });
   return (
@@ -46,7 +56,10 @@ export function CabinetInputs({ models }: { models: CabinetModel[] }) {
   const modelId = useWatch({ control: form.control, name: 'modelId' });
   const cabinet = useWatch({ control: form.control, name: 'cabinet' });
   const model = models.find((m) => m.id === modelId);
-  const pitch = Number(cabinet?.widthMm) > 0 && Number(cabinet?.pixelsWide) > 0 ? pixelPitchMm(Number(cabinet.widthMm), Number(cabinet.pixelsWide)) : null;
+  const pitch =
+    Number(cabinet?.widthMm) > 0 && Number(cabinet?.pixelsWide) > 0
+      ? pixelPitchMm(Number(cabinet.widthMm), Number(cabinet.pixelsWide))
+      : null;
 
   return (
     <Card title="Cabinet" description="From the catalogue, or typed in by hand.">
@@ -54,7 +67,10 @@ export function CabinetInputs({ models }: { models: CabinetModel[] }) {
         <SelectField
           name="modelId"
           label="Cabinet model"
-          options={[...models.map((m) => ({ value: m.id, label: `${m.name} · ${num(m.widthMm)} × ${num(m.heightMm)} mm` })), { value: '', label: 'Custom cabinet (type the figures)' }]}
+          options={[
+            ...models.map((m) => ({ value: m.id, label: `${m.name} · ${num(m.widthMm)} × ${num(m.heightMm)} mm` })),
+            { value: '', label: 'Custom cabinet (type the figures)' },
+          ]}
           registerOptions={{
             onChange: (e: { target: { value: string } }) => {
               const chosen = models.find((m) => m.id === e.target.value);
@@ -69,11 +85,17 @@ export function CabinetInputs({ models }: { models: CabinetModel[] }) {
           <div className="rounded border border-stone-200 bg-stone-50 px-3 py-2.5 text-sm">
             <dl className="grid grid-cols-2 gap-x-4 gap-y-1">
               <dt className="text-stone-600">Size</dt>
-              <dd className="tabular-nums">{num(model.widthMm)} × {num(model.heightMm)} mm</dd>
+              <dd className="tabular-nums">
+                {num(model.widthMm)} × {num(model.heightMm)} mm
+              </dd>
               <dt className="text-stone-600">Pixels</dt>
-              <dd className="tabular-nums">{num(model.pixelsWide)} × {num(model.pixelsHigh)} ({num(model.pixelPitchMm, 3)} mm)</dd>
+              <dd className="tabular-nums">
+                {num(model.pixelsWide)} × {num(model.pixelsHigh)} ({num(model.pixelPitchMm, 3)} mm)
+              </dd>
               <dt className="text-stone-600">Power</dt>
-              <dd className="tabular-nums">{num(model.maxPowerW)} W max, {num(model.typicalPowerW)} W typical</dd>
+              <dd className="tabular-nums">
+                {num(model.maxPowerW)} W max, {num(model.typicalPowerW)} W typical
+              </dd>
               <dt className="text-stone-600">Power input</dt>
               <dd className="tabular-nums">
                 {num(model.inputVoltageMinV)}–{num(model.inputVoltageMaxV)} V · {connectionText(model)}
@@ -81,7 +103,9 @@ export function CabinetInputs({ models }: { models: CabinetModel[] }) {
               <dt className="text-stone-600">Weight</dt>
               <dd className="tabular-nums">{num(model.weightKg, 1)} kg</dd>
               <dt className="text-stone-600">Modules</dt>
-              <dd className="tabular-nums">{model.modulesWide} × {model.modulesHigh}, {model.environment}</dd>
+              <dd className="tabular-nums">
+                {model.modulesWide} × {model.modulesHigh}, {model.environment}
+              </dd>
             </dl>
             <Button
               size="sm"
@@ -104,7 +128,8 @@ export function CabinetInputs({ models }: { models: CabinetModel[] }) {
             <TextField name="cabinet.weightKg" label="Weight (kg)" {...numberField} />
             <TextField name="cardsPerCabinet" label="Receiving cards" hint="Per cabinet" {...wholeField} />
             <p className="col-span-2 text-sm text-stone-600">
-              Pixel pitch: <span className="font-medium tabular-nums text-ink-950">{pitch ? `${num(pitch, 3)} mm` : '—'}</span> (width ÷ pixels wide)
+              Pixel pitch: <span className="font-medium tabular-nums text-ink-950">{pitch ? `${num(pitch, 3)} mm` : '—'}</span> (width ÷
+              pixels wide)
             </p>
             <p className="col-span-2 mt-1 text-sm font-medium text-stone-800">From the datasheet, when known</p>
             <TextField name="cabinet.inputVoltageMinV" label="Lowest input (V)" {...numberField} />
@@ -122,7 +147,10 @@ export function CabinetInputs({ models }: { models: CabinetModel[] }) {
 
 export function GridInputs() {
   const form = useFormContext<PlannerFormInput>();
-  const [gridMode, cabinet, target, columns, rows] = useWatch({ control: form.control, name: ['gridMode', 'cabinet', 'target', 'columns', 'rows'] });
+  const [gridMode, cabinet, target, columns, rows] = useWatch({
+    control: form.control,
+    name: ['gridMode', 'cabinet', 'target', 'columns', 'rows'],
+  });
   const options = gridMode === 'size' ? gridOptions(cabinet, target) : [];
 
   /** The closest grid follows the typed target size; another option can still be picked. */
@@ -201,7 +229,8 @@ export function GridInputs() {
                               {sizeMetric(o.widthMm, o.heightMm)} · {sizeImperial(o.widthMm, o.heightMm)}
                             </span>
                             <span className="block text-xs text-stone-600">
-                              Width {difference(o.widthErrorMm, 'wider', 'narrower')}, height {difference(o.heightErrorMm, 'taller', 'shorter')}
+                              Width {difference(o.widthErrorMm, 'wider', 'narrower')}, height{' '}
+                              {difference(o.heightErrorMm, 'taller', 'shorter')}
                             </span>
                           </span>
                         </label>
@@ -239,7 +268,12 @@ export function SupplyInputs() {
             registerOptions={{ setValueAs: (v: string) => Number(v) }}
           />
           <TextField name="supply.breakerAmps" label="Breaker (A)" hint="Each branch circuit" {...numberField} />
-          <TextField name="supply.continuousFactor" label="Continuous-load factor" hint="0.8: NEC 210.20(A); local code elsewhere" {...numberField} />
+          <TextField
+            name="supply.continuousFactor"
+            label="Continuous-load factor"
+            hint="0.8: NEC 210.20(A); local code elsewhere"
+            {...numberField}
+          />
           <TextField name="supply.powerFactor" label="Power factor" hint="Empty: datasheet VA, else 0.95" {...numberField} />
         </div>
         {chain ? (
@@ -247,7 +281,12 @@ export function SupplyInputs() {
             {chain}
           </p>
         ) : null}
-        <TextField name="outputCapacityPixels" label="Output capacity (pixels)" hint="Pixels one controller output drives" {...wholeField} />
+        <TextField
+          name="outputCapacityPixels"
+          label="Output capacity (pixels)"
+          hint="Pixels one controller output drives"
+          {...wholeField}
+        />
         <div className="grid grid-cols-2 gap-3">
           <TextField name="processorOutputs" label="Processor outputs" hint="Optional" {...wholeField} />
           <TextField name="dataCableToWallM" label="Cable to the wall (m)" hint="Processor to the wall's corner" {...numberField} />
@@ -276,7 +315,13 @@ function chainText(supply: PlannerFormInput['supply'] | undefined, cabinet: Plan
   const breakerAmps = figure(supply?.breakerAmps);
   const maxPowerW = figure(cabinet?.maxPowerW);
   if (!supply || !cabinet || voltage === undefined || breakerAmps === undefined || maxPowerW === undefined || maxPowerW <= 0) return null;
-  const s = { voltage, phases: Number(supply.phases) === 3 ? (3 as const) : (1 as const), breakerAmps, continuousFactor: figure(supply.continuousFactor) ?? 0.8, powerFactor: figure(supply.powerFactor) };
+  const s = {
+    voltage,
+    phases: Number(supply.phases) === 3 ? (3 as const) : (1 as const),
+    breakerAmps,
+    continuousFactor: figure(supply.continuousFactor) ?? 0.8,
+    powerFactor: figure(supply.powerFactor),
+  };
   const c = {
     maxPowerW,
     maxPowerVA: figure(cabinet.maxPowerVA),

@@ -42,7 +42,16 @@ export const RunArrows = memo(function RunArrows({ geometry, runs, highlight = n
         return (
           <g key={`${position}-${run.index}`} opacity={faint ? 0.3 : 1}>
             {rects.map((r, i) => (
-              <rect key={`t${i}`} x={r.x} y={r.y} width={r.width} height={r.height} rx={4} className={colour.fill} fillOpacity={isHighlight ? 0.22 : 0.1} />
+              <rect
+                key={`t${i}`}
+                x={r.x}
+                y={r.y}
+                width={r.width}
+                height={r.height}
+                rx={4}
+                className={colour.fill}
+                fillOpacity={isHighlight ? 0.22 : 0.1}
+              />
             ))}
             {rects.slice(1).map((b, i) => {
               const a = rects[i];

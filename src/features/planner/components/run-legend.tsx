@@ -34,15 +34,28 @@ export function RunLegend({ runs, limits, selected = null, onSelect, label, clas
           const load = loadText(run.cells.length, limits);
           const body = (
             <>
-              <span className={clsx('flex h-6 w-6 shrink-0 items-center justify-center rounded-full text-xs font-semibold text-white', colour.swatch)}>
+              <span
+                className={clsx(
+                  'flex h-6 w-6 shrink-0 items-center justify-center rounded-full text-xs font-semibold text-white',
+                  colour.swatch,
+                )}
+              >
                 {run.index}
               </span>
               <span className="min-w-0 flex-1">
                 <span className="flex items-baseline justify-between gap-2">
                   <span className="font-medium text-ink-950">
-                    Run {run.index} <span className="font-normal text-stone-600">· {run.cells.length} {run.cells.length === 1 ? 'cabinet' : 'cabinets'}</span>
+                    Run {run.index}{' '}
+                    <span className="font-normal text-stone-600">
+                      · {run.cells.length} {run.cells.length === 1 ? 'cabinet' : 'cabinets'}
+                    </span>
                   </span>
-                  <span className={clsx('whitespace-nowrap text-xs tabular-nums', load.over ? 'font-semibold text-danger-700' : 'text-stone-600')}>
+                  <span
+                    className={clsx(
+                      'whitespace-nowrap text-xs tabular-nums',
+                      load.over ? 'font-semibold text-danger-700' : 'text-stone-600',
+                    )}
+                  >
                     {Math.round(load.share * 100)} %
                   </span>
                 </span>
@@ -68,7 +81,9 @@ export function RunLegend({ runs, limits, selected = null, onSelect, label, clas
                   aria-pressed={selected === position}
                   className={clsx(
                     'flex w-full items-start gap-2.5 rounded border px-2.5 py-2 text-left text-sm',
-                    selected === position ? 'border-ink-600 bg-ink-50 ring-1 ring-ink-600' : 'border-stone-200 bg-white hover:border-stone-400',
+                    selected === position
+                      ? 'border-ink-600 bg-ink-50 ring-1 ring-ink-600'
+                      : 'border-stone-200 bg-white hover:border-stone-400',
                   )}
                 >
                   {body}

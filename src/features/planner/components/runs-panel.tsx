@@ -39,7 +39,19 @@ interface RunsMapProps {
 }
 
 /** A wall map with the runs of one kind as numbered arrows, its view toggle and the per-run legend. */
-export function RunsMap({ kind, columns, rows, cellAspect, runs, limits, selected = null, onSelect, onCellActivate, selectedCells, toolbar }: RunsMapProps) {
+export function RunsMap({
+  kind,
+  columns,
+  rows,
+  cellAspect,
+  runs,
+  limits,
+  selected = null,
+  onSelect,
+  onCellActivate,
+  selectedCells,
+  toolbar,
+}: RunsMapProps) {
   const [view, setView] = useState<'front' | 'rear'>('front');
   const label = kindLabels[kind];
   return (
@@ -62,7 +74,13 @@ export function RunsMap({ kind, columns, rows, cellAspect, runs, limits, selecte
       <p className="text-sm font-medium text-stone-700" data-testid={`${kind}-run-totals`}>
         {runTotals(runs, limits)}
       </p>
-      <RunLegend runs={runs} limits={limits} selected={selected} onSelect={onSelect} label={`${label.title}: load of each run against its limit`} />
+      <RunLegend
+        runs={runs}
+        limits={limits}
+        selected={selected}
+        onSelect={onSelect}
+        label={`${label.title}: load of each run against its limit`}
+      />
     </div>
   );
 }

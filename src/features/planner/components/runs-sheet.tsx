@@ -102,7 +102,11 @@ export function RunsSheet({ wall }: { wall: WallDetail }) {
           const set = sets[kind];
           const limits = limitsOfWall(wall, kind, settings);
           return (
-            <section key={kind} className={clsx('space-y-3 print:pt-4', i > 0 && 'print:break-before-page')} aria-labelledby={`sheet-${kind}`}>
+            <section
+              key={kind}
+              className={clsx('space-y-3 print:pt-4', i > 0 && 'print:break-before-page')}
+              aria-labelledby={`sheet-${kind}`}
+            >
               <div className="flex flex-wrap items-baseline justify-between gap-2">
                 <h2 id={`sheet-${kind}`} className="text-xl font-semibold">
                   {kindLabels[kind].title}
@@ -111,7 +115,9 @@ export function RunsSheet({ wall }: { wall: WallDetail }) {
                   </span>
                 </h2>
                 {set.stored ? null : (
-                  <span className="rounded border border-amber-500 px-2 py-0.5 text-sm font-semibold text-amber-800">Proposal — not saved</span>
+                  <span className="rounded border border-amber-500 px-2 py-0.5 text-sm font-semibold text-amber-800">
+                    Proposal — not saved
+                  </span>
                 )}
               </div>
               <p className="text-base font-medium" data-testid={`sheet-${kind}-totals`}>
@@ -131,10 +137,18 @@ export function RunsSheet({ wall }: { wall: WallDetail }) {
               <table className="w-full border-collapse text-sm">
                 <thead>
                   <tr className="border-b-2 border-stone-400 text-left">
-                    <th scope="col" className="w-28 py-1.5 pr-3 sm:w-20">Run</th>
-                    <th scope="col" className="hidden w-24 py-1.5 pr-3 text-right sm:table-cell">Cabinets</th>
-                    <th scope="col" className="hidden w-48 py-1.5 pr-3 text-right sm:table-cell">{kind === 'data' ? 'Pixels' : 'Watts'} of limit</th>
-                    <th scope="col" className="py-1.5">Cells in order (from the controller or feed)</th>
+                    <th scope="col" className="w-28 py-1.5 pr-3 sm:w-20">
+                      Run
+                    </th>
+                    <th scope="col" className="hidden w-24 py-1.5 pr-3 text-right sm:table-cell">
+                      Cabinets
+                    </th>
+                    <th scope="col" className="hidden w-48 py-1.5 pr-3 text-right sm:table-cell">
+                      {kind === 'data' ? 'Pixels' : 'Watts'} of limit
+                    </th>
+                    <th scope="col" className="py-1.5">
+                      Cells in order (from the controller or feed)
+                    </th>
                   </tr>
                 </thead>
                 <tbody>
@@ -152,7 +166,9 @@ export function RunsSheet({ wall }: { wall: WallDetail }) {
                         </span>
                       </td>
                       <td className="hidden py-1.5 pr-3 text-right tabular-nums sm:table-cell">{run.cells.length}</td>
-                      <td className="hidden py-1.5 pr-3 text-right tabular-nums sm:table-cell">{loadText(run.cells.length, limits).text}</td>
+                      <td className="hidden py-1.5 pr-3 text-right tabular-nums sm:table-cell">
+                        {loadText(run.cells.length, limits).text}
+                      </td>
                       <td className="py-1.5 leading-relaxed">{pathText(run)}</td>
                     </tr>
                   ))}

@@ -93,7 +93,8 @@ export function SavePlanDialog({ open, onClose, model, columns, rows, settings, 
     body = (
       <div className="space-y-4">
         <p className="text-base text-stone-700">
-          Walls built from <span className="font-medium text-ink-950">{model.name}</span>. Saving replaces the settings and runs stored on the wall.
+          Walls built from <span className="font-medium text-ink-950">{model.name}</span>. Saving replaces the settings and runs stored on
+          the wall.
         </p>
         <div className="space-y-1.5">
           <label htmlFor={selectId} className="text-sm font-medium text-stone-800">
@@ -133,7 +134,12 @@ export function SavePlanDialog({ open, onClose, model, columns, rows, settings, 
         ) : (
           <>
             <Button onClick={close}>Cancel</Button>
-            <Button variant="primary" onClick={() => void submit().catch(() => undefined)} disabled={!wall || !gridMatches} loading={save.isPending}>
+            <Button
+              variant="primary"
+              onClick={() => void submit().catch(() => undefined)}
+              disabled={!wall || !gridMatches}
+              loading={save.isPending}
+            >
               Save onto wall
             </Button>
           </>

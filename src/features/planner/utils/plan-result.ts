@@ -10,7 +10,11 @@ export function planResult(v: PlannerForm) {
   const plan = planWall(input);
   const patterns = patternsOf(v);
   // The chain's limit as the plan worked it out: circuit, connector and maker's count.
-  const settings: PlanSettings = { supply: input.supply, outputCapacityPixels: input.outputCapacityPixels, chainCapacityW: plan.chainLimitW };
+  const settings: PlanSettings = {
+    supply: input.supply,
+    outputCapacityPixels: input.outputCapacityPixels,
+    chainCapacityW: plan.chainLimitW,
+  };
   const cabinet = cabinetOf(v);
   const limits = { data: runLimitsFor('data', cabinet, settings), power: runLimitsFor('power', cabinet, settings) };
   // The schema refuses a cabinet over either limit, so every run holds at least one cabinet.

@@ -14,13 +14,22 @@ describe('the planner form', () => {
     expect(options[0]).toMatchObject({ columns: 12, rows: 6, widthErrorMm: -96, heightErrorMm: -48 });
     expect(options.map((o) => `${o.columns}×${o.rows}`).sort()).toEqual(['12×6', '12×7', '13×6', '13×7']);
     // Metres: 6 m × 3 m of 500 mm cabinets is exactly 12 × 6, offered alone.
-    expect(gridOptions({ widthMm: 500, heightMm: 500 }, { unit: 'm', width: 6, height: 3 }).map((o) => [o.columns, o.rows])).toEqual([[12, 6]]);
+    expect(gridOptions({ widthMm: 500, heightMm: 500 }, { unit: 'm', width: 6, height: 3 }).map((o) => [o.columns, o.rows])).toEqual([
+      [12, 6],
+    ]);
     expect(gridOptions({ widthMm: 500, heightMm: 500 }, { unit: 'm', width: Number.NaN, height: 3 })).toEqual([]);
   });
 
   it('turns the fields into the wall-plan request the API takes', () => {
     const parsed = plannerFormSchema.parse(values({ inputPreset: 'uhd', columns: 12, rows: 6 }));
-    expect(toPlanRequest(parsed)).toMatchObject({ columns: 12, rows: 6, input: { width: 3840, height: 2160 }, outputCapacityPixels: 650_000, dataPattern: 'rows', powerPattern: 'rows' });
+    expect(toPlanRequest(parsed)).toMatchObject({
+      columns: 12,
+      rows: 6,
+      input: { width: 3840, height: 2160 },
+      outputCapacityPixels: 650_000,
+      dataPattern: 'rows',
+      powerPattern: 'rows',
+    });
     // Empty datasheet boxes are "not known", never zero: the plan then assumes 0.95 and says so.
     const request = toPlanRequest(parsed);
     expect(request.supply.powerFactor).toBeUndefined();
@@ -29,7 +38,9 @@ describe('the planner form', () => {
 
   it('puts the API’s own cross-field rules on the fields they name', () => {
     // 192 × 192 = 36,864 px per cabinet: over an output of 30,000 px.
-    expect(issuesOf(values({ outputCapacityPixels: 30_000 }))).toEqual({ outputCapacityPixels: 'One cabinet (36,864 pixels) is over the output capacity.' });
+    expect(issuesOf(values({ outputCapacityPixels: 30_000 }))).toEqual({
+      outputCapacityPixels: 'One cabinet (36,864 pixels) is over the output capacity.',
+    });
     // 120 V × 1 A × 0.8 = 96 W a circuit (NEC 210.19(A)(1)): less than one 180 W cabinet.
     expect(issuesOf(values({ supply: { ...defaultPlannerValues.supply, breakerAmps: 1 } }))).toHaveProperty(['supply.breakerAmps']);
     // 480 V is outside the cabinet's 100–240 V input range.
@@ -44,7 +55,12 @@ describe('the planner form', () => {
 
   it('checks the target size and a custom input only when they are used', () => {
     expect(issuesOf(values({ gridMode: 'grid' }))).toEqual({});
-    expect(issuesOf(values({ gridMode: 'size' }))).toEqual({ 'target.width': 'Width must be a number.', 'target.height': 'Height must be a number.' });
-    expect(issuesOf(values({ inputPreset: 'custom', input: { width: 1920.5, height: 1080 } }))).toEqual({ 'input.width': 'Input width must be a whole number.' });
+    expect(issuesOf(values({ gridMode: 'size' }))).toEqual({
+      'target.width': 'Width must be a number.',
+      'target.height': 'Height must be a number.',
+    });
+    expect(issuesOf(values({ inputPreset: 'custom', input: { width: 1920.5, height: 1080 } }))).toEqual({
+      'input.width': 'Input width must be a whole number.',
+    });
   });
 });

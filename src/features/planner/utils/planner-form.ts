@@ -29,8 +29,16 @@ const maybeNumber = z.number().or(z.nan());
 const optionalFigure = maybeNumber.optional();
 
 // The cabinet's required figures as the API checks them; its datasheet extras may stay empty.
-const { maxPowerVA: _va, inputVoltageMinV: _min, inputVoltageMaxV: _max, passThroughAmps: _pass, maxPerChain: _chain, receivingCards: _cards, receivingCardPixels: _cardPx, ...requiredCabinet } =
-  cabinetSpecInput.shape;
+const {
+  maxPowerVA: _va,
+  inputVoltageMinV: _min,
+  inputVoltageMaxV: _max,
+  passThroughAmps: _pass,
+  maxPerChain: _chain,
+  receivingCards: _cards,
+  receivingCardPixels: _cardPx,
+  ...requiredCabinet
+} = cabinetSpecInput.shape;
 const formCabinet = z.object({
   ...requiredCabinet,
   maxPowerVA: optionalFigure,
@@ -71,33 +79,36 @@ export const plannerFormSchema = z
     dataPattern: z.enum(runPatterns),
     powerPattern: z.enum(runPatterns),
   })
-  .superRefine((v, ctx) => {
-    const positive = (value: number, path: (string | number)[], label: string, whole = false) => {
-      if (!Number.isFinite(value)) ctx.addIssue({ code: 'custom', path, message: `${label} must be a number.` });
-      else if (value <= 0) ctx.addIssue({ code: 'custom', path, message: `${label} must be more than zero.` });
-      else if (whole && !Number.isInteger(value)) ctx.addIssue({ code: 'custom', path, message: `${label} must be a whole number.` });
-      else return true;
-      return false;
-    };
-    if (v.gridMode === 'size') {
-      positive(v.target.width, ['target', 'width'], 'Width');
-      positive(v.target.height, ['target', 'height'], 'Height');
-    }
-    if (v.inputPreset === 'custom') {
-      positive(v.input.width, ['input', 'width'], 'Input width', true);
-      positive(v.input.height, ['input', 'height'], 'Input height', true);
-    }
-    // The API's own rules (each figure, the supply against the cabinet's input range, one cabinet
-    // over an output or a chain, input sizes): the same paths here.
-    const request = wallPlanRequest.safeParse(toPlanRequest(v));
-    if (!request.success) {
-      for (const issue of request.error.issues) {
-        if (issue.path[0] === 'input' && v.inputPreset !== 'custom') continue;
-        const path = issue.path[0] === 'processor' ? ['processorOutputs'] : (issue.path as (string | number)[]);
-        ctx.addIssue({ code: 'custom', path, message: issue.message });
+  .superRefine(
+    (v, ctx) => {
+      const positive = (value: number, path: (string | number)[], label: string, whole = false) => {
+        if (!Number.isFinite(value)) ctx.addIssue({ code: 'custom', path, message: `${label} must be a number.` });
+        else if (value <= 0) ctx.addIssue({ code: 'custom', path, message: `${label} must be more than zero.` });
+        else if (whole && !Number.isInteger(value)) ctx.addIssue({ code: 'custom', path, message: `${label} must be a whole number.` });
+        else return true;
+        return false;
+      };
+      if (v.gridMode === 'size') {
+        positive(v.target.width, ['target', 'width'], 'Width');
+        positive(v.target.height, ['target', 'height'], 'Height');
       }
-    }
-  }, { when: (payload) => payload.issues.length === 0 });
+      if (v.inputPreset === 'custom') {
+        positive(v.input.width, ['input', 'width'], 'Input width', true);
+        positive(v.input.height, ['input', 'height'], 'Input height', true);
+      }
+      // The API's own rules (each figure, the supply against the cabinet's input range, one cabinet
+      // over an output or a chain, input sizes): the same paths here.
+      const request = wallPlanRequest.safeParse(toPlanRequest(v));
+      if (!request.success) {
+        for (const issue of request.error.issues) {
+          if (issue.path[0] === 'input' && v.inputPreset !== 'custom') continue;
+          const path = issue.path[0] === 'processor' ? ['processorOutputs'] : (issue.path as (string | number)[]);
+          ctx.addIssue({ code: 'custom', path, message: issue.message });
+        }
+      }
+    },
+    { when: (payload) => payload.issues.length === 0 },
+  );
 
 export type PlannerFormInput = z.input<typeof plannerFormSchema>;
 export type PlannerForm = z.output<typeof plannerFormSchema>;
@@ -165,7 +176,10 @@ export const targetMm = (value: number, unit: LengthUnit) => (unit === 'm' ? val
  * The grids closest to the typed target size, within the register's limit; an empty list while
  * the cabinet or the target is not valid yet.
  */
-export function gridOptions(cabinet: { widthMm?: number; heightMm?: number } | undefined, target: { unit?: LengthUnit; width?: number; height?: number } | undefined): GridOption[] {
+export function gridOptions(
+  cabinet: { widthMm?: number; heightMm?: number } | undefined,
+  target: { unit?: LengthUnit; width?: number; height?: number } | undefined,
+): GridOption[] {
   const w = Number(cabinet?.widthMm);
   const h = Number(cabinet?.heightMm);
   const tw = Number(target?.width);

@@ -16,7 +16,11 @@ export function toggleCell(runs: Run[], selected: number, cell: Cell): Run[] {
   }
   return runs.map((r, i) => {
     const cells = r.cells.filter((c) => !same(c, cell));
-    return i === selected ? { ...r, cells: [...cells, { column: cell.column, row: cell.row }] } : cells.length === r.cells.length ? r : { ...r, cells };
+    return i === selected
+      ? { ...r, cells: [...cells, { column: cell.column, row: cell.row }] }
+      : cells.length === r.cells.length
+        ? r
+        : { ...r, cells };
   });
 }
 

@@ -27,7 +27,10 @@ export interface RunSet {
 export const PROPOSAL_PATTERN: RunPattern = DEFAULT_RUN_PATTERN;
 
 /** The settings the wall was planned with, or the defaults (for its cabinet model, with its controller's output capacity). */
-export function settingsOfWall(wall: Pick<WallDetail, 'planSettings' | 'controllers' | 'cabinetModel'>): { settings: PlanSettings; stored: boolean } {
+export function settingsOfWall(wall: Pick<WallDetail, 'planSettings' | 'controllers' | 'cabinetModel'>): {
+  settings: PlanSettings;
+  stored: boolean;
+} {
   if (wall.planSettings) return { settings: wall.planSettings, stored: true };
   const controller = wall.controllers[0];
   return { settings: defaultPlanSettings(wall.cabinetModel, controller?.pixelsPerOutput), stored: false };
@@ -46,7 +49,8 @@ export function proposeRuns(columns: number, rows: number, pattern: RunPattern, 
   return cabinetsPerRun(limits) >= 1 ? generateRuns(columns, rows, pattern, limits) : [];
 }
 
-const asPattern = (p: string): StoredRunPattern => ((storedRunPatterns as readonly string[]).includes(p) ? (p as StoredRunPattern) : 'custom');
+const asPattern = (p: string): StoredRunPattern =>
+  (storedRunPatterns as readonly string[]).includes(p) ? (p as StoredRunPattern) : 'custom';
 
 /** The wall's data or power runs: stored, or proposed. */
 export function runSetOfWall(wall: WallDetail, kind: RunKind, settings: PlanSettings): RunSet {

@@ -120,7 +120,13 @@ export function CameraScanner({ onSerial }: { onSerial: (serial: string) => void
   return (
     <section ref={sectionRef} aria-label="Scan with the camera" className="scroll-mt-20 space-y-3">
       <div className={live ? 'relative overflow-hidden rounded-md bg-ink-950' : 'hidden'}>
-        <video ref={videoRef} playsInline muted className="block aspect-[3/4] max-h-[60dvh] w-full object-cover sm:aspect-video" aria-label="Camera view" />
+        <video
+          ref={videoRef}
+          playsInline
+          muted
+          className="block aspect-[3/4] max-h-[60dvh] w-full object-cover sm:aspect-video"
+          aria-label="Camera view"
+        />
         {/* A frame to aim with; the detector looks at the whole picture. */}
         <div className="pointer-events-none absolute inset-0 flex items-center justify-center" aria-hidden="true">
           <div className="aspect-square w-3/5 max-w-[16rem] rounded-lg border-4 border-amber-400/90 shadow-[0_0_0_100vmax_rgba(0,0,0,0.35)]" />

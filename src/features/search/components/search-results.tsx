@@ -53,10 +53,21 @@ function Row({ to, primary, secondary }: { to: string; primary: ReactNode; secon
 export function SearchResults({ q }: { q: string }) {
   const query = useQuery({ ...searchQueries.results(q), enabled: q.trim().length > 0, placeholderData: keepPreviousData });
   if (!q.trim()) {
-    return <EmptyState icon={SearchX} title="Type something to search for" description="A client, site or wall name, or the first characters of a serial." />;
+    return (
+      <EmptyState
+        icon={SearchX}
+        title="Type something to search for"
+        description="A client, site or wall name, or the first characters of a serial."
+      />
+    );
   }
   if (query.isPending) return <PageSpinner label="Searching" />;
-  if (query.isError) return <Alert tone="danger" title="The search did not work.">{errorMessage(query.error)}</Alert>;
+  if (query.isError)
+    return (
+      <Alert tone="danger" title="The search did not work.">
+        {errorMessage(query.error)}
+      </Alert>
+    );
   const r = query.data;
   const total = r.clients.length + r.sites.length + r.walls.length + r.cabinets.length;
   if (total === 0) {
@@ -89,10 +100,16 @@ export function SearchResults({ q }: { q: string }) {
         {r.cabinets.map((c) => (
           <Row
             key={c.id}
-            to={c.wallId && c.column && c.row ? paths.wall.getHref(c.wallId, { col: c.column, row: c.row }) : paths.cabinetLabel.getHref(c.serial)}
+            to={
+              c.wallId && c.column && c.row
+                ? paths.wall.getHref(c.wallId, { col: c.column, row: c.row })
+                : paths.cabinetLabel.getHref(c.serial)
+            }
             primary={<span className="font-mono">{c.serial}</span>}
             secondary={
-              c.wallName && c.column && c.row ? `${c.wallName} · ${cellLabel({ column: c.column, row: c.row })} · ${statusWords[c.status]}` : statusWords[c.status]
+              c.wallName && c.column && c.row
+                ? `${c.wallName} · ${cellLabel({ column: c.column, row: c.row })} · ${statusWords[c.status]}`
+                : statusWords[c.status]
             }
           />
         ))}

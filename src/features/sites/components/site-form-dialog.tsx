@@ -31,7 +31,11 @@ function TimeZoneSelect() {
       name="timeZone"
       label="Time zone"
       options={options}
-      hint={zone ? `Local time there now: ${formatSiteTime(new Date(), zone)}. Service-plan clocks count in this zone.` : 'Service-plan clocks count in this zone.'}
+      hint={
+        zone
+          ? `Local time there now: ${formatSiteTime(new Date(), zone)}. Service-plan clocks count in this zone.`
+          : 'Service-plan clocks count in this zone.'
+      }
     />
   );
 }
@@ -62,7 +66,17 @@ function SiteFields() {
 /** The browser's own zone is the best first guess for a new site. */
 const guessZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
 
-export function CreateSiteDialog({ clientId, clientName, open, onClose }: { clientId: string; clientName: string; open: boolean; onClose: () => void }) {
+export function CreateSiteDialog({
+  clientId,
+  clientName,
+  open,
+  onClose,
+}: {
+  clientId: string;
+  clientName: string;
+  open: boolean;
+  onClose: () => void;
+}) {
   return (
     <Dialog open={open} onClose={onClose} title="Add a site" description={`A location of ${clientName}.`} size="lg">
       {open ? <CreateSiteForm clientId={clientId} onDone={onClose} /> : null}

@@ -13,7 +13,8 @@ import { errorMessage } from '@/lib/errors';
 import { formatDateTime } from '@/lib/format';
 import { attachmentQueries, downloadUrl, inlineUrl } from '@/resources/attachments';
 
-const sizeText = (bytes: number) => (bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`);
+const sizeText = (bytes: number) =>
+  bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`;
 
 /** Photos, videos and files of a ticket: thumbnails, a larger view, downloads, and adding more. */
 export function AttachmentsPanel({ ticketId, canUpload }: { ticketId: string; canUpload: boolean }) {
@@ -28,10 +29,19 @@ export function AttachmentsPanel({ ticketId, canUpload }: { ticketId: string; ca
   };
 
   return (
-    <Card title={<span className="inline-flex items-center gap-2"><Paperclip className="h-4 w-4 text-ink-600" aria-hidden="true" />Photos and files</span>}>
+    <Card
+      title={
+        <span className="inline-flex items-center gap-2">
+          <Paperclip className="h-4 w-4 text-ink-600" aria-hidden="true" />
+          Photos and files
+        </span>
+      }
+    >
       <div className="space-y-4">
         {attachments.isPending ? (
-          <p className="flex items-center gap-2 text-sm text-stone-600"><Spinner label="" /> Loading…</p>
+          <p className="flex items-center gap-2 text-sm text-stone-600">
+            <Spinner label="" /> Loading…
+          </p>
         ) : attachments.isError ? (
           <Alert tone="danger">{errorMessage(attachments.error)}</Alert>
         ) : items.length === 0 ? (
@@ -47,7 +57,11 @@ export function AttachmentsPanel({ ticketId, canUpload }: { ticketId: string; ca
         {canUpload ? (
           <div className="space-y-3 border-t border-stone-100 pt-4">
             <MediaPicker onFiles={onFiles} disabled={uploads.busy} />
-            <UploadList items={uploads.items} onRemove={uploads.remove} onRetry={(key) => uploads.retry(ticketId, key).then(() => undefined)} />
+            <UploadList
+              items={uploads.items}
+              onRemove={uploads.remove}
+              onRetry={(key) => uploads.retry(ticketId, key).then(() => undefined)}
+            />
           </div>
         ) : null}
       </div>

@@ -30,14 +30,25 @@ export function Conversation({ ticketId, staff, closed }: ConversationProps) {
   const comments = useQuery(ticketQueries.comments(ticketId));
   const items = comments.data?.items ?? [];
   return (
-    <Card title={<span className="inline-flex items-center gap-2"><MessagesSquare className="h-4 w-4 text-ink-600" aria-hidden="true" />Conversation</span>}>
+    <Card
+      title={
+        <span className="inline-flex items-center gap-2">
+          <MessagesSquare className="h-4 w-4 text-ink-600" aria-hidden="true" />
+          Conversation
+        </span>
+      }
+    >
       <div className="space-y-5">
         {comments.isPending ? (
-          <p className="flex items-center gap-2 text-sm text-stone-600"><Spinner label="" /> Loading…</p>
+          <p className="flex items-center gap-2 text-sm text-stone-600">
+            <Spinner label="" /> Loading…
+          </p>
         ) : comments.isError ? (
           <Alert tone="danger">{errorMessage(comments.error)}</Alert>
         ) : items.length === 0 ? (
-          <p className="text-sm text-stone-600">{staff ? 'No comments yet.' : 'No replies yet. We will write here, and you get an e-mail when we do.'}</p>
+          <p className="text-sm text-stone-600">
+            {staff ? 'No comments yet.' : 'No replies yet. We will write here, and you get an e-mail when we do.'}
+          </p>
         ) : (
           <ol className="space-y-3" aria-label="Comments">
             {items.map((c) => (
@@ -46,7 +57,9 @@ export function Conversation({ ticketId, staff, closed }: ConversationProps) {
           </ol>
         )}
         {closed ? (
-          <p className="rounded-md bg-stone-100 px-3 py-2 text-sm text-stone-700">This ticket is closed. {staff ? '' : 'If the fault is back, open a new ticket.'}</p>
+          <p className="rounded-md bg-stone-100 px-3 py-2 text-sm text-stone-700">
+            This ticket is closed. {staff ? '' : 'If the fault is back, open a new ticket.'}
+          </p>
         ) : (
           <Composer ticketId={ticketId} staff={staff} />
         )}
@@ -102,12 +115,21 @@ function Composer({ ticketId, staff }: { ticketId: string; staff: boolean }) {
     <Form
       form={form}
       aria-label={staff ? 'Write a comment' : 'Write a reply'}
-      className={clsx('space-y-3 rounded-md border p-3 transition-colors', internal ? 'border-amber-400 bg-amber-50' : 'border-stone-200 bg-stone-50')}
+      className={clsx(
+        'space-y-3 rounded-md border p-3 transition-colors',
+        internal ? 'border-amber-400 bg-amber-50' : 'border-stone-200 bg-stone-50',
+      )}
       onSubmit={async (values) => {
         await add.mutateAsync({ body: values.body, visibility: staff ? values.visibility : 'public' });
         // Keep the chosen visibility: a second internal note must not go out in public by accident.
         form.reset({ body: '', visibility: values.visibility });
-        toast(values.visibility === 'internal' ? 'Internal note added.' : staff ? 'Reply sent. The client gets an e-mail.' : 'Reply sent to the service desk.');
+        toast(
+          values.visibility === 'internal'
+            ? 'Internal note added.'
+            : staff
+              ? 'Reply sent. The client gets an e-mail.'
+              : 'Reply sent to the service desk.',
+        );
       }}
     >
       {staff ? <VisibilityChoice /> : null}
@@ -132,7 +154,10 @@ function Composer({ ticketId, staff }: { ticketId: string; staff: boolean }) {
         }
       />
       <div className="flex justify-end">
-        <SubmitButton variant={internal ? 'secondary' : 'primary'} icon={internal ? <Lock className="h-4 w-4" aria-hidden="true" /> : undefined}>
+        <SubmitButton
+          variant={internal ? 'secondary' : 'primary'}
+          icon={internal ? <Lock className="h-4 w-4" aria-hidden="true" /> : undefined}
+        >
           {staff ? (internal ? 'Add internal note' : 'Send public reply') : 'Send reply'}
         </SubmitButton>
       </div>
@@ -162,7 +187,11 @@ function VisibilityChoice() {
             className={clsx(
               'flex min-h-touch cursor-pointer items-center gap-1.5 rounded px-3 text-sm font-medium md:min-h-9',
               'has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-ink-600',
-              visibility === o.value ? (o.value === 'internal' ? 'bg-amber-400 text-ink-950' : 'bg-ink-800 text-white') : 'text-ink-800 hover:bg-stone-100',
+              visibility === o.value
+                ? o.value === 'internal'
+                  ? 'bg-amber-400 text-ink-950'
+                  : 'bg-ink-800 text-white'
+                : 'text-ink-800 hover:bg-stone-100',
             )}
           >
             <input type="radio" value={o.value} className="sr-only" {...register('visibility')} />

@@ -40,7 +40,9 @@ function MergeForm({ ticket, onDone }: { ticket: TicketDetail; onDone: () => voi
   const [q, setQ] = useState('');
   const [intoId, setIntoId] = useState<string | null>(null);
   const [error, setError] = useState<unknown>(null);
-  const candidates = useQuery(ticketQueries.page({ clientId: ticket.client.id, open: 'true', q: q || undefined, sort: 'updatedAt', dir: 'desc' }, 25));
+  const candidates = useQuery(
+    ticketQueries.page({ clientId: ticket.client.id, open: 'true', q: q || undefined, sort: 'updatedAt', dir: 'desc' }, 25),
+  );
   const merge = useMergeTicket();
   const toast = useToast();
   const navigate = useNavigate();
@@ -50,7 +52,13 @@ function MergeForm({ ticket, onDone }: { ticket: TicketDetail; onDone: () => voi
   return (
     <div className="space-y-3">
       {error ? <Alert tone="danger">{errorMessage(error)}</Alert> : null}
-      <FilterSearch label={`Open tickets of ${ticket.client.name}`} placeholder="Title or GK-number" value={q} onChange={setQ} className="w-full" />
+      <FilterSearch
+        label={`Open tickets of ${ticket.client.name}`}
+        placeholder="Title or GK-number"
+        value={q}
+        onChange={setQ}
+        className="w-full"
+      />
       {candidates.isPending ? (
         <Spinner />
       ) : items.length === 0 ? (
@@ -67,7 +75,13 @@ function MergeForm({ ticket, onDone }: { ticket: TicketDetail; onDone: () => voi
                     intoId === t.id ? 'border-ink-700 bg-ink-50' : 'border-stone-200 hover:bg-stone-50',
                   )}
                 >
-                  <input type="radio" name="merge-into" className="mt-1 h-4 w-4 accent-ink-700" checked={intoId === t.id} onChange={() => setIntoId(t.id)} />
+                  <input
+                    type="radio"
+                    name="merge-into"
+                    className="mt-1 h-4 w-4 accent-ink-700"
+                    checked={intoId === t.id}
+                    onChange={() => setIntoId(t.id)}
+                  />
                   <span className="min-w-0 flex-1">
                     <span className="flex flex-wrap items-center gap-2">
                       <span className="font-mono text-sm font-medium text-ink-700">{t.ref}</span>

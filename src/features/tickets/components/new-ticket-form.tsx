@@ -29,7 +29,11 @@ import { siteQueries } from '@/resources/sites';
 const schemaResolver = zodResolver(createTicketInput);
 const friendlyResolver: Resolver<NewTicketValues, unknown, CreateTicketInput> = async (values, context, options) => {
   const result = await schemaResolver(values, context, options);
-  const words: Record<string, string> = { siteId: 'Choose the site.', priority: 'Choose how bad it is.', title: 'Say in a few words what is wrong.' };
+  const words: Record<string, string> = {
+    siteId: 'Choose the site.',
+    priority: 'Choose how bad it is.',
+    title: 'Say in a few words what is wrong.',
+  };
   for (const [name, message] of Object.entries(words)) {
     const error = (result.errors as Record<string, { message?: string } | undefined>)[name];
     if (error) error.message = message;
@@ -100,12 +104,24 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
     setPlace('');
   }, [siteId, form]);
 
-  if (sites.isPending) return <p className="flex items-center gap-2 py-10 text-stone-600"><Spinner label="" /> Loading your sites…</p>;
-  if (sites.isError) return <Alert tone="danger" title="Your sites could not be loaded.">{errorMessage(sites.error)}</Alert>;
+  if (sites.isPending)
+    return (
+      <p className="flex items-center gap-2 py-10 text-stone-600">
+        <Spinner label="" /> Loading your sites…
+      </p>
+    );
+  if (sites.isError)
+    return (
+      <Alert tone="danger" title="Your sites could not be loaded.">
+        {errorMessage(sites.error)}
+      </Alert>
+    );
   if (sites.data.items.length === 0) {
     return (
       <Alert tone="info" title="No sites yet">
-        {forClient ? 'Your organisation has no sites in Gridkeep yet. Call or e-mail the service desk and we will set them up.' : 'Add a client site first.'}
+        {forClient
+          ? 'Your organisation has no sites in Gridkeep yet. Call or e-mail the service desk and we will set them up.'
+          : 'Add a client site first.'}
       </Alert>
     );
   }
@@ -118,8 +134,12 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
       aria-label="Open a ticket"
       className="space-y-6"
       onSubmit={async (values) => {
-        if (values.wallId && values.scope === 'cells' && !(values.cells?.length)) {
-          form.setError('cells', { type: 'manual', message: 'Tap the faulty cabinets on the map, or choose “The whole wall”.' }, { shouldFocus: false });
+        if (values.wallId && values.scope === 'cells' && !values.cells?.length) {
+          form.setError(
+            'cells',
+            { type: 'manual', message: 'Tap the faulty cabinets on the map, or choose “The whole wall”.' },
+            { shouldFocus: false },
+          );
           document.getElementById('ticket-what')?.scrollIntoView({ behavior: 'smooth', block: 'start' });
           return;
         }
@@ -135,7 +155,13 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
       </Step>
 
       <Step number={wall ? 4 : 3} title="Tell us about it">
-        <TextField name="title" label="In a few words" placeholder="e.g. Dark square lower left of centre" maxLength={160} autoComplete="off" />
+        <TextField
+          name="title"
+          label="In a few words"
+          placeholder="e.g. Dark square lower left of centre"
+          maxLength={160}
+          autoComplete="off"
+        />
         <TextAreaField
           name="description"
           label="What do you see?"
@@ -152,7 +178,9 @@ export function NewTicketForm({ forClient }: { forClient: boolean }) {
 
       <div className="flex flex-wrap items-center gap-3">
         <SubmitButton size="lg">Send the ticket</SubmitButton>
-        <p className="text-sm text-stone-600">{forClient ? 'You get an e-mail when the service desk answers.' : 'The client’s contacts are kept informed by e-mail.'}</p>
+        <p className="text-sm text-stone-600">
+          {forClient ? 'You get an e-mail when the service desk answers.' : 'The client’s contacts are kept informed by e-mail.'}
+        </p>
       </div>
     </Form>
   );

@@ -8,11 +8,26 @@ import type { z } from 'zod';
 export type NewTicketValues = z.input<typeof createTicketInput>;
 
 /** One numbered step of "Open a ticket": a titled section. */
-export function Step({ number, title, optional = false, id, children }: { number: number; title: string; optional?: boolean; id?: string; children: ReactNode }) {
+export function Step({
+  number,
+  title,
+  optional = false,
+  id,
+  children,
+}: {
+  number: number;
+  title: string;
+  optional?: boolean;
+  id?: string;
+  children: ReactNode;
+}) {
   return (
     <section id={id} aria-label={title} className="scroll-mt-20 rounded-md border border-stone-200 bg-white p-4 shadow-card sm:p-5">
       <h2 className="mb-4 flex items-center gap-2.5 text-lg font-semibold">
-        <span className="flex h-7 w-7 shrink-0 items-center justify-center rounded-full bg-ink-800 text-sm font-semibold text-white" aria-hidden="true">
+        <span
+          className="flex h-7 w-7 shrink-0 items-center justify-center rounded-full bg-ink-800 text-sm font-semibold text-white"
+          aria-hidden="true"
+        >
           {number}
         </span>
         {title}

@@ -35,7 +35,14 @@ export function WhatStep({ wall }: { wall: WallSummary }) {
       <fieldset>
         <legend className="sr-only">What is affected</legend>
         <div className="grid gap-2 sm:grid-cols-3">
-          <ChoiceCard name="scope" checked={scope === 'cells'} onChange={() => chooseScope('cells')} icon={LayoutGrid} title="Some cabinets" detail="Tap them on the map" />
+          <ChoiceCard
+            name="scope"
+            checked={scope === 'cells'}
+            onChange={() => chooseScope('cells')}
+            icon={LayoutGrid}
+            title="Some cabinets"
+            detail="Tap them on the map"
+          />
           <ChoiceCard
             name="scope"
             checked={scope === 'whole_wall'}

@@ -15,7 +15,10 @@ import { wallQueries } from '@/resources/walls';
 export type TicketPlace = 'wall' | 'site' | '';
 
 /** The walls at a site, by name: the choices of step 1 (none before a site is chosen). */
-export const wallChoices = (siteId: string | null | undefined) => ({ ...wallQueries.page({ siteId: siteId || undefined }), enabled: Boolean(siteId) });
+export const wallChoices = (siteId: string | null | undefined) => ({
+  ...wallQueries.page({ siteId: siteId || undefined }),
+  enabled: Boolean(siteId),
+});
 
 interface WhereStepProps {
   sites: SiteSummary[];
@@ -48,7 +51,10 @@ export function WhereStep({ sites, forClient, place, onPlaceChange }: WhereStepP
           name="siteId"
           label="Site"
           placeholder="Choose the site…"
-          options={sites.map((s) => ({ value: s.id, label: forClient ? `${s.name}${s.city ? ` · ${s.city}` : ''}` : `${s.name} (${s.clientName})` }))}
+          options={sites.map((s) => ({
+            value: s.id,
+            label: forClient ? `${s.name}${s.city ? ` · ${s.city}` : ''}` : `${s.name} (${s.clientName})`,
+          }))}
         />
       ) : (
         <p className="flex items-center gap-2 text-base text-stone-800">
@@ -63,7 +69,9 @@ export function WhereStep({ sites, forClient, place, onPlaceChange }: WhereStepP
         <fieldset className="space-y-2" aria-describedby={wallError ? 'wall-error' : undefined}>
           <legend className="mb-2 text-sm font-medium text-stone-800">Which wall?</legend>
           {walls.isPending ? (
-            <p className="flex items-center gap-2 text-sm text-stone-600"><Spinner label="" /> Loading the walls…</p>
+            <p className="flex items-center gap-2 text-sm text-stone-600">
+              <Spinner label="" /> Loading the walls…
+            </p>
           ) : walls.isError ? (
             <Alert tone="danger">{errorMessage(walls.error)}</Alert>
           ) : (

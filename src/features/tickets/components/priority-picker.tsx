@@ -23,7 +23,9 @@ export function PriorityPicker({ name = 'priority', hideLegend = false }: { name
               className={clsx(
                 'flex cursor-pointer items-start gap-3 rounded-md border bg-white p-3 transition-colors',
                 'has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-ink-600 has-[:focus-visible]:ring-offset-2',
-                checked ? 'border-ink-700 bg-ink-50 shadow-[inset_0_0_0_1px_theme(colors.ink.700)]' : 'border-stone-300 hover:border-stone-400',
+                checked
+                  ? 'border-ink-700 bg-ink-50 shadow-[inset_0_0_0_1px_theme(colors.ink.700)]'
+                  : 'border-stone-300 hover:border-stone-400',
               )}
             >
               <input id={`${id}-${p}`} type="radio" value={p} className="mt-1 h-4 w-4 shrink-0 accent-ink-700" {...register(name)} />
@@ -33,7 +35,16 @@ export function PriorityPicker({ name = 'priority', hideLegend = false }: { name
                     {[1, 2, 3, 4].map((n) => (
                       <span
                         key={n}
-                        className={clsx('w-[3px] rounded-sm', n <= priorityTones[p].bars ? (p === 'critical' ? 'bg-danger-600' : p === 'high' ? 'bg-amber-600' : 'bg-ink-600') : 'bg-stone-300')}
+                        className={clsx(
+                          'w-[3px] rounded-sm',
+                          n <= priorityTones[p].bars
+                            ? p === 'critical'
+                              ? 'bg-danger-600'
+                              : p === 'high'
+                                ? 'bg-amber-600'
+                                : 'bg-ink-600'
+                            : 'bg-stone-300',
+                        )}
                         style={{ height: `${n * 25}%` }}
                       />
                     ))}

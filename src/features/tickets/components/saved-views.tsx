@@ -36,7 +36,10 @@ export function SavedViews({ filters, onApply }: SavedViewsProps) {
         type="button"
         aria-pressed={!hasAnyFilter(filters)}
         onClick={() => onApply({ sort: filters.sort, dir: filters.dir })}
-        className={clsx(chip, !hasAnyFilter(filters) ? 'border-ink-700 bg-ink-700 text-white' : 'border-stone-300 bg-white text-ink-800 hover:border-stone-400')}
+        className={clsx(
+          chip,
+          !hasAnyFilter(filters) ? 'border-ink-700 bg-ink-700 text-white' : 'border-stone-300 bg-white text-ink-800 hover:border-stone-400',
+        )}
       >
         All tickets
       </button>
@@ -47,14 +50,22 @@ export function SavedViews({ filters, onApply }: SavedViewsProps) {
             key={v.id}
             className={clsx(chip, 'gap-1 pr-1', active ? 'border-ink-700 bg-ink-700 text-white' : 'border-stone-300 bg-white text-ink-800')}
           >
-            <button type="button" aria-pressed={active} onClick={() => onApply(filtersFromParams(new URLSearchParams(v.filters)))} className="hover:underline">
+            <button
+              type="button"
+              aria-pressed={active}
+              onClick={() => onApply(filtersFromParams(new URLSearchParams(v.filters)))}
+              className="hover:underline"
+            >
               {v.name}
             </button>
             <button
               type="button"
               onClick={() => setRemoving(v)}
               aria-label={`Delete the view “${v.name}”`}
-              className={clsx('flex h-6 w-6 items-center justify-center rounded-full', active ? 'hover:bg-ink-600' : 'text-stone-500 hover:bg-stone-100 hover:text-ink-900')}
+              className={clsx(
+                'flex h-6 w-6 items-center justify-center rounded-full',
+                active ? 'hover:bg-ink-600' : 'text-stone-500 hover:bg-stone-100 hover:text-ink-900',
+              )}
             >
               <X className="h-3.5 w-3.5" aria-hidden="true" />
             </button>
@@ -67,7 +78,12 @@ export function SavedViews({ filters, onApply }: SavedViewsProps) {
         </Button>
       ) : null}
 
-      <Dialog open={saving} onClose={() => setSaving(false)} title="Save this view" description="The filters and sort order are kept under a name, for you only.">
+      <Dialog
+        open={saving}
+        onClose={() => setSaving(false)}
+        title="Save this view"
+        description="The filters and sort order are kept under a name, for you only."
+      >
         {saving ? <SaveViewForm filters={filters} onDone={() => setSaving(false)} /> : null}
       </Dialog>
       <ConfirmDialog
@@ -102,7 +118,14 @@ function SaveViewForm({ filters, onDone }: { filters: TicketFilters; onDone: () 
         onDone();
       }}
     >
-      <TextField name="name" label="Name" autoComplete="off" maxLength={60} hint="Saving under an existing name replaces that view." autoFocus />
+      <TextField
+        name="name"
+        label="Name"
+        autoComplete="off"
+        maxLength={60}
+        hint="Saving under an existing name replaces that view."
+        autoFocus
+      />
       <DialogActions>
         <Button onClick={onDone}>Cancel</Button>
         <SubmitButton>Save view</SubmitButton>

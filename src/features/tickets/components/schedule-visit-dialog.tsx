@@ -33,7 +33,12 @@ function defaultWindow(timeZone: string) {
 /** Plans a visit for the ticket (status "scheduled"); the client gets an e-mail with a calendar invitation. */
 export function ScheduleVisitDialog({ open, onClose, ticket, timeZone }: ScheduleVisitDialogProps) {
   return (
-    <Dialog open={open} onClose={onClose} title={`Schedule a visit for ${ticket.ref}`} description="The client’s contacts get an e-mail with a calendar invitation.">
+    <Dialog
+      open={open}
+      onClose={onClose}
+      title={`Schedule a visit for ${ticket.ref}`}
+      description="The client’s contacts get an e-mail with a calendar invitation."
+    >
       {open && timeZone ? <ScheduleForm ticket={ticket} timeZone={timeZone} onDone={onClose} /> : open ? <Spinner /> : null}
     </Dialog>
   );
@@ -84,19 +89,35 @@ function ScheduleForm({ ticket, timeZone, onDone }: { ticket: TicketDetail; time
       }}
     >
       {problem ? <Alert tone="danger">{problem}</Alert> : null}
-      <p className="text-sm text-stone-700">Times are at the site ({zone}, {timeZone.replace(/_/g, ' ')}).</p>
+      <p className="text-sm text-stone-700">
+        Times are at the site ({zone}, {timeZone.replace(/_/g, ' ')}).
+      </p>
       <div className="grid gap-3 sm:grid-cols-2">
         <div className="space-y-1.5">
           <label htmlFor={ids.start} className="text-sm font-medium text-stone-800">
             Arrive from
           </label>
-          <input id={ids.start} type="datetime-local" value={start} onChange={(e) => setStart(e.target.value)} className={inputClasses(!startValid)} required />
+          <input
+            id={ids.start}
+            type="datetime-local"
+            value={start}
+            onChange={(e) => setStart(e.target.value)}
+            className={inputClasses(!startValid)}
+            required
+          />
         </div>
         <div className="space-y-1.5">
           <label htmlFor={ids.end} className="text-sm font-medium text-stone-800">
             Until
           </label>
-          <input id={ids.end} type="datetime-local" value={end} onChange={(e) => setEnd(e.target.value)} className={inputClasses(false)} required />
+          <input
+            id={ids.end}
+            type="datetime-local"
+            value={end}
+            onChange={(e) => setEnd(e.target.value)}
+            className={inputClasses(false)}
+            required
+          />
         </div>
       </div>
       <TechnicianChoice technicians={technicians} loading={staff.isPending} chosen={technicianIds} onChange={setTechnicianIds} />

@@ -17,8 +17,10 @@ interface ClockLineProps {
 function ClockLine({ title, state, dueAt, doneAt, doneWord, pausedAt, timeZone }: ClockLineProps) {
   let text: string;
   if (!state || !dueAt) text = 'No target in the service plan.';
-  else if (state === 'met' || state === 'missed') text = `${doneWord} ${formatSiteTime(doneAt, timeZone)} · target was ${formatSiteTime(dueAt, timeZone)}`;
-  else if (state === 'paused') text = `Paused since ${formatSiteTime(pausedAt, timeZone)} while we wait for the client. Due ${formatSiteTime(dueAt, timeZone)} before the pause.`;
+  else if (state === 'met' || state === 'missed')
+    text = `${doneWord} ${formatSiteTime(doneAt, timeZone)} · target was ${formatSiteTime(dueAt, timeZone)}`;
+  else if (state === 'paused')
+    text = `Paused since ${formatSiteTime(pausedAt, timeZone)} while we wait for the client. Due ${formatSiteTime(dueAt, timeZone)} before the pause.`;
   else if (state === 'breached') text = `Was due ${formatSiteTime(dueAt, timeZone)} (${relativeTime(dueAt)})`;
   else text = `Due ${formatSiteTime(dueAt, timeZone)} (${relativeTime(dueAt)})`;
   return (
@@ -41,7 +43,14 @@ export function TicketClocks({ ticket, timeZone }: { ticket: TicketDetail; timeZ
         Service-plan clock{timeZone ? <span className="font-normal text-stone-500">· times at the site</span> : null}
       </h2>
       <dl className="divide-y divide-stone-100">
-        <ClockLine title="First response" state={ticket.clocks.response} dueAt={ticket.responseDueAt} doneAt={ticket.acknowledgedAt} doneWord="Answered" timeZone={timeZone} />
+        <ClockLine
+          title="First response"
+          state={ticket.clocks.response}
+          dueAt={ticket.responseDueAt}
+          doneAt={ticket.acknowledgedAt}
+          doneWord="Answered"
+          timeZone={timeZone}
+        />
         <ClockLine
           title="Resolution"
           state={ticket.clocks.resolution}

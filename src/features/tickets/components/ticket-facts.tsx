@@ -6,7 +6,12 @@ import type { TicketDetail, TicketVisit } from '@shared/schemas/tickets';
 import { formatAgo, formatDateTime } from '@/lib/format';
 import { formatSiteTime } from '@/lib/site-time';
 
-const scopeText = { cells: 'Particular cabinets', whole_wall: 'The whole wall', controller: 'Controller / signal', site: 'Something else at the site' } as const;
+const scopeText = {
+  cells: 'Particular cabinets',
+  whole_wall: 'The whole wall',
+  controller: 'Controller / signal',
+  site: 'Something else at the site',
+} as const;
 const visitStatusText: Record<(typeof visitStatuses)[number], string> = {
   planned: 'Planned',
   in_progress: 'Under way',
@@ -36,7 +41,9 @@ export function TicketFacts({ ticket, forClient }: { ticket: TicketDetail; forCl
         <Fact label="Opened">
           <span title={formatDateTime(ticket.createdAt)}>{formatAgo(ticket.createdAt)}</span>
         </Fact>
-        <Fact label={forClient ? 'Handled by' : 'Assignee'}>{ticket.assignee?.name ?? <span className="font-normal text-stone-500">{forClient ? 'The service desk' : 'Unassigned'}</span>}</Fact>
+        <Fact label={forClient ? 'Handled by' : 'Assignee'}>
+          {ticket.assignee?.name ?? <span className="font-normal text-stone-500">{forClient ? 'The service desk' : 'Unassigned'}</span>}
+        </Fact>
         <Fact label="Updated">
           <span title={formatDateTime(ticket.updatedAt)}>{formatAgo(ticket.updatedAt)}</span>
         </Fact>
@@ -49,7 +56,14 @@ export function TicketFacts({ ticket, forClient }: { ticket: TicketDetail; forCl
 export function TicketVisits({ visits, timeZone }: { visits: TicketVisit[]; timeZone?: string }) {
   if (visits.length === 0) return null;
   return (
-    <Card title={<span className="inline-flex items-center gap-2"><CalendarDays className="h-4 w-4 text-ink-600" aria-hidden="true" />Visits</span>}>
+    <Card
+      title={
+        <span className="inline-flex items-center gap-2">
+          <CalendarDays className="h-4 w-4 text-ink-600" aria-hidden="true" />
+          Visits
+        </span>
+      }
+    >
       <ul className="space-y-2" aria-label="Visits for this ticket">
         {visits.map((v) => (
           <li key={v.id} className="rounded-md border border-stone-200 px-3 py-2">

@@ -1,11 +1,19 @@
 import { describe, expect, it } from 'vitest';
-import { filtersFromParams, filtersToRecord, sameFilters, statusChoiceOf, withStatusChoice } from '@/features/tickets/components/ticket-filters';
+import {
+  filtersFromParams,
+  filtersToRecord,
+  sameFilters,
+  statusChoiceOf,
+  withStatusChoice,
+} from '@/features/tickets/components/ticket-filters';
 
 // The values the API accepts are those of shared/schemas/tickets.ts listTicketsQuery.
 describe('ticket list filters in the address', () => {
   it('keeps known values and drops the rest', () => {
     const f = filtersFromParams(
-      new URLSearchParams('status=new,bogus,resolved&priority=urgent&clock=at_risk,breached&assigneeId=me&clientId=not-an-id&q=%20GK-12%20&sort=resolutionDueAt&dir=sideways'),
+      new URLSearchParams(
+        'status=new,bogus,resolved&priority=urgent&clock=at_risk,breached&assigneeId=me&clientId=not-an-id&q=%20GK-12%20&sort=resolutionDueAt&dir=sideways',
+      ),
     );
     expect(f).toEqual({
       status: 'new,resolved',
@@ -20,7 +28,13 @@ describe('ticket list filters in the address', () => {
       sort: 'resolutionDueAt',
       dir: undefined,
     });
-    expect(filtersToRecord(f)).toEqual({ status: 'new,resolved', clock: 'at_risk,breached', assigneeId: 'me', q: 'GK-12', sort: 'resolutionDueAt' });
+    expect(filtersToRecord(f)).toEqual({
+      status: 'new,resolved',
+      clock: 'at_risk,breached',
+      assigneeId: 'me',
+      q: 'GK-12',
+      sort: 'resolutionDueAt',
+    });
   });
 
   it('accepts an assignee id, "none" and "me", and nothing else', () => {

@@ -3,7 +3,6 @@ import { ticketClockStates } from '@shared/schemas/tickets';
 import type { TicketFilters } from '@/resources/tickets';
 import { isRecordId } from '@/lib/record-id';
 
-
 /** Keeps only the values of a comma-separated list that the API knows. */
 const csvOf = (value: string | null, allowed: readonly string[]) => {
   const kept = (value ?? '').split(',').filter((v) => allowed.includes(v));
@@ -11,7 +10,19 @@ const csvOf = (value: string | null, allowed: readonly string[]) => {
 };
 const idOf = (value: string | null) => (value && isRecordId(value) ? value : undefined);
 
-export const filterKeys = ['status', 'open', 'priority', 'clock', 'clientId', 'siteId', 'wallId', 'assigneeId', 'q', 'sort', 'dir'] as const;
+export const filterKeys = [
+  'status',
+  'open',
+  'priority',
+  'clock',
+  'clientId',
+  'siteId',
+  'wallId',
+  'assigneeId',
+  'q',
+  'sort',
+  'dir',
+] as const;
 
 /**
  * The list's filters from the address. Unknown or malformed values are dropped, so a pasted or

@@ -26,8 +26,12 @@ const html = (repairs: TicketRepair[]) => {
 describe('ticket repairs', () => {
   it('says what was done, to which module, where', () => {
     expect(repairHeadline(base)).toBe('Replaced module 1,2 at C7·R4');
-    expect(repairHeadline({ ...base, component: 'receiving_card', action: 'reseated', module: null })).toBe('Reseated receiving card at C7·R4');
-    expect(repairHeadline({ ...base, component: 'whole_cabinet', action: 'cabinet_swapped', module: null })).toBe('Swapped the cabinet for a spare at C7·R4');
+    expect(repairHeadline({ ...base, component: 'receiving_card', action: 'reseated', module: null })).toBe(
+      'Reseated receiving card at C7·R4',
+    );
+    expect(repairHeadline({ ...base, component: 'whole_cabinet', action: 'cabinet_swapped', module: null })).toBe(
+      'Swapped the cabinet for a spare at C7·R4',
+    );
   });
 
   it('shows the time in the site’s zone, links the cabinet, and shows stock and notes only when the server sent them', () => {

@@ -62,7 +62,10 @@ export function TicketRepairs({ repairs, timeZone }: { repairs: TicketRepair[]; 
     >
       <ul className="space-y-3" aria-label="Repairs for this ticket">
         {repairs.map((r) => {
-          const stock = [r.part ? `spare: ${r.part.name}${r.part.batch ? `, batch ${r.part.batch}` : ''}` : null, r.removedPartFate ? fateText[r.removedPartFate] : null]
+          const stock = [
+            r.part ? `spare: ${r.part.name}${r.part.batch ? `, batch ${r.part.batch}` : ''}` : null,
+            r.removedPartFate ? fateText[r.removedPartFate] : null,
+          ]
             .filter(Boolean)
             .join(' · ');
           return (

@@ -36,7 +36,17 @@ export function statusText(status: TicketStatus, forClient: boolean) {
   return statusLabels[status];
 }
 
-export function TicketStatusBadge({ status, forClient = false, size = 'sm', className }: { status: TicketStatus; forClient?: boolean; size?: 'sm' | 'md'; className?: string }) {
+export function TicketStatusBadge({
+  status,
+  forClient = false,
+  size = 'sm',
+  className,
+}: {
+  status: TicketStatus;
+  forClient?: boolean;
+  size?: 'sm' | 'md';
+  className?: string;
+}) {
   const { className: tone, icon: Icon } = statusTones[status];
   return (
     <span
@@ -116,7 +126,12 @@ export function ClockBadge({ state, what, className }: { state: TicketClockState
   );
   if (state === 'paused') {
     return (
-      <span className={clsx('inline-flex items-center gap-1.5 whitespace-nowrap rounded-full bg-stone-100 px-2 py-0.5 text-xs font-medium text-stone-700', className)}>
+      <span
+        className={clsx(
+          'inline-flex items-center gap-1.5 whitespace-nowrap rounded-full bg-stone-100 px-2 py-0.5 text-xs font-medium text-stone-700',
+          className,
+        )}
+      >
         <Hourglass className="h-3 w-3" aria-hidden="true" />
         {label}
       </span>

@@ -29,14 +29,20 @@ export function TicketSummary({ ticket }: { ticket: TicketDetail }) {
           ticket.scope === 'cells' && ticket.cells.length ? (
             <div className="space-y-3">
               <p className="text-sm text-stone-800">
-                <span className="font-medium">{ticket.cells.length === 1 ? 'Reported cabinet:' : `Reported cabinets (${ticket.cells.length}):`}</span>{' '}
+                <span className="font-medium">
+                  {ticket.cells.length === 1 ? 'Reported cabinet:' : `Reported cabinets (${ticket.cells.length}):`}
+                </span>{' '}
                 {ticket.cellLabels.join(', ')}
               </p>
               <TicketWallMap wall={ticket.wall} selected={ticket.cells} />
             </div>
           ) : (
             <p className="flex items-center gap-2 rounded-md bg-stone-100 px-3 py-2 text-sm font-medium text-stone-800">
-              {ticket.scope === 'controller' ? <Cpu className="h-4 w-4" aria-hidden="true" /> : <Grid3x3 className="h-4 w-4" aria-hidden="true" />}
+              {ticket.scope === 'controller' ? (
+                <Cpu className="h-4 w-4" aria-hidden="true" />
+              ) : (
+                <Grid3x3 className="h-4 w-4" aria-hidden="true" />
+              )}
               {ticket.scope === 'controller' ? 'The controller or the signal' : 'The whole wall'}
               {ticket.cells.length ? ` · ${ticket.cells.map(cellLabel).join(', ')}` : ''}
             </p>

@@ -140,7 +140,9 @@ export function TicketsTable({ filters, onFiltersChange }: TicketsTableProps) {
         <EmptyState
           icon={Ticket}
           title={hasAnyFilter(filters) ? 'No tickets match these filters' : 'No tickets yet'}
-          description={hasAnyFilter(filters) ? 'Try other filters, or clear them.' : 'Tickets opened by clients or by the office appear here.'}
+          description={
+            hasAnyFilter(filters) ? 'Try other filters, or clear them.' : 'Tickets opened by clients or by the office appear here.'
+          }
         />
       }
     />
@@ -160,9 +162,27 @@ function TicketFilterBar({ filters, onFiltersChange }: TicketsTableProps) {
   return (
     <>
       <FilterSearch label="Search" placeholder="Title or GK-number" value={filters.q ?? ''} onChange={(q) => set({ q: q || undefined })} />
-      <FilterSelect label="Status" anyLabel="Any status" options={statusFilterOptions} value={statusChoiceOf(filters)} onChange={(v) => onFiltersChange(withStatusChoice(filters, v))} />
-      <FilterSelect label="Priority" anyLabel="Any priority" options={priorityFilterOptions} value={filters.priority ?? ''} onChange={(v) => set({ priority: v || undefined })} />
-      <FilterSelect label="Clock" anyLabel="Any clock state" options={clockFilterOptions} value={filters.clock ?? ''} onChange={(v) => set({ clock: v || undefined })} />
+      <FilterSelect
+        label="Status"
+        anyLabel="Any status"
+        options={statusFilterOptions}
+        value={statusChoiceOf(filters)}
+        onChange={(v) => onFiltersChange(withStatusChoice(filters, v))}
+      />
+      <FilterSelect
+        label="Priority"
+        anyLabel="Any priority"
+        options={priorityFilterOptions}
+        value={filters.priority ?? ''}
+        onChange={(v) => set({ priority: v || undefined })}
+      />
+      <FilterSelect
+        label="Clock"
+        anyLabel="Any clock state"
+        options={clockFilterOptions}
+        value={filters.clock ?? ''}
+        onChange={(v) => set({ clock: v || undefined })}
+      />
       <FilterSelect
         label="Assignee"
         anyLabel="Anyone"
@@ -181,7 +201,13 @@ function TicketFilterBar({ filters, onFiltersChange }: TicketsTableProps) {
         value={filters.clientId ?? ''}
         onChange={(v) => set({ clientId: v || undefined, siteId: undefined, wallId: undefined })}
       />
-      <FilterSelect label="Site" anyLabel="All sites" options={siteChoices} value={filters.siteId ?? ''} onChange={(v) => set({ siteId: v || undefined, wallId: undefined })} />
+      <FilterSelect
+        label="Site"
+        anyLabel="All sites"
+        options={siteChoices}
+        value={filters.siteId ?? ''}
+        onChange={(v) => set({ siteId: v || undefined, wallId: undefined })}
+      />
       {filters.siteId ? (
         <FilterSelect
           label="Wall"

@@ -85,7 +85,12 @@ function TriageForm({ ticket, office, timeZone }: TriagePanelProps) {
           <label htmlFor={ids.status} className="text-sm font-medium text-stone-800">
             Status
           </label>
-          <SelectBox id={ids.status} value={status} onChange={(e) => setStatus(e.target.value as TicketStatus)} disabled={ticket.nextStatuses.length === 0}>
+          <SelectBox
+            id={ids.status}
+            value={status}
+            onChange={(e) => setStatus(e.target.value as TicketStatus)}
+            disabled={ticket.nextStatuses.length === 0}
+          >
             <option value={ticket.status}>{statusText(ticket.status, false)} (now)</option>
             {ticket.nextStatuses.map((s) => (
               <option key={s} value={s}>
@@ -108,7 +113,9 @@ function TriageForm({ ticket, office, timeZone }: TriagePanelProps) {
                   </option>
                 ))}
               </SelectBox>
-              {priority !== ticket.priority ? <p className="text-sm text-stone-600">The due times are worked out again from the service plan.</p> : null}
+              {priority !== ticket.priority ? (
+                <p className="text-sm text-stone-600">The due times are worked out again from the service plan.</p>
+              ) : null}
             </div>
             <div className="space-y-1.5">
               <label htmlFor={ids.assignee} className="text-sm font-medium text-stone-800">
@@ -141,7 +148,8 @@ function StatusHint({ from, to }: { from: TicketStatus; to: TicketStatus }) {
   if (to === from) return null;
   if (to === 'waiting_client') return <p className="text-sm text-stone-600">The resolution clock pauses until the ticket moves on.</p>;
   if (to === 'resolved') return <p className="text-sm text-stone-600">The client gets an e-mail and can close the ticket.</p>;
-  if (to === 'scheduled') return <p className="text-sm text-stone-600">To plan the visit and send the client an invitation, use “Schedule a visit”.</p>;
+  if (to === 'scheduled')
+    return <p className="text-sm text-stone-600">To plan the visit and send the client an invitation, use “Schedule a visit”.</p>;
   return null;
 }
 

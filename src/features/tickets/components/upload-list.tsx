@@ -22,7 +22,14 @@ export function MediaPicker({ onFiles, disabled }: { onFiles: (files: File[]) =>
   };
   return (
     <div className="flex flex-wrap gap-2">
-      <label htmlFor={cameraId} className={clsx(buttonClasses('secondary', 'md'), 'cursor-pointer [@media(pointer:fine)]:hidden', disabled && 'pointer-events-none opacity-60')}>
+      <label
+        htmlFor={cameraId}
+        className={clsx(
+          buttonClasses('secondary', 'md'),
+          'cursor-pointer [@media(pointer:fine)]:hidden',
+          disabled && 'pointer-events-none opacity-60',
+        )}
+      >
         <Camera className="h-4 w-4" aria-hidden="true" />
         Take a photo or video
         <input
@@ -36,7 +43,10 @@ export function MediaPicker({ onFiles, disabled }: { onFiles: (files: File[]) =>
           disabled={disabled}
         />
       </label>
-      <label htmlFor={filesId} className={clsx(buttonClasses('secondary', 'md'), 'cursor-pointer', disabled && 'pointer-events-none opacity-60')}>
+      <label
+        htmlFor={filesId}
+        className={clsx(buttonClasses('secondary', 'md'), 'cursor-pointer', disabled && 'pointer-events-none opacity-60')}
+      >
         <ImagePlus className="h-4 w-4" aria-hidden="true" />
         Add photos or a video
         <input id={filesId} type="file" accept="image/*,video/*" multiple className="sr-only" onChange={take} disabled={disabled} />
@@ -67,7 +77,11 @@ export function UploadList({ items, onRemove, onRetry }: UploadListProps) {
             )}
           >
             <span className="flex h-14 w-14 shrink-0 items-center justify-center overflow-hidden rounded bg-stone-100 text-stone-500">
-              {item.preview ? <img src={item.preview} alt="" className="h-full w-full object-cover" /> : <FileVideo className="h-6 w-6" aria-hidden="true" />}
+              {item.preview ? (
+                <img src={item.preview} alt="" className="h-full w-full object-cover" />
+              ) : (
+                <FileVideo className="h-6 w-6" aria-hidden="true" />
+              )}
             </span>
             <div className="min-w-0 flex-1 space-y-1">
               <p className="flex items-baseline justify-between gap-2 text-sm">
@@ -90,7 +104,10 @@ export function UploadList({ items, onRemove, onRetry }: UploadListProps) {
                     className="h-2 overflow-hidden rounded-full bg-stone-200"
                   >
                     <div
-                      className={clsx('h-full rounded-full transition-[width] duration-200', item.status === 'done' ? 'bg-state-on-track-dot' : 'bg-amber-500')}
+                      className={clsx(
+                        'h-full rounded-full transition-[width] duration-200',
+                        item.status === 'done' ? 'bg-state-on-track-dot' : 'bg-amber-500',
+                      )}
                       style={{ width: `${item.status === 'waiting' ? 0 : percent}%` }}
                     />
                   </div>
@@ -109,12 +126,24 @@ export function UploadList({ items, onRemove, onRetry }: UploadListProps) {
               )}
             </div>
             {item.status === 'failed' && onRetry ? (
-              <button type="button" onClick={() => onRetry(item.key)} aria-label={`Try ${item.file.name} again`} title="Try again" className="flex h-touch w-touch items-center justify-center rounded text-ink-700 hover:bg-ink-50 md:h-9 md:w-9">
+              <button
+                type="button"
+                onClick={() => onRetry(item.key)}
+                aria-label={`Try ${item.file.name} again`}
+                title="Try again"
+                className="flex h-touch w-touch items-center justify-center rounded text-ink-700 hover:bg-ink-50 md:h-9 md:w-9"
+              >
                 <RotateCcw className="h-4 w-4" aria-hidden="true" />
               </button>
             ) : null}
             {onRemove && item.status !== 'uploading' && item.status !== 'done' ? (
-              <button type="button" onClick={() => onRemove(item.key)} aria-label={`Remove ${item.file.name}`} title="Remove" className="flex h-touch w-touch items-center justify-center rounded text-stone-500 hover:bg-stone-100 hover:text-ink-900 md:h-9 md:w-9">
+              <button
+                type="button"
+                onClick={() => onRemove(item.key)}
+                aria-label={`Remove ${item.file.name}`}
+                title="Remove"
+                className="flex h-touch w-touch items-center justify-center rounded text-stone-500 hover:bg-stone-100 hover:text-ink-900 md:h-9 md:w-9"
+              >
                 <X className="h-4 w-4" aria-hidden="true" />
               </button>
             ) : null}

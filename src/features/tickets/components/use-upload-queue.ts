@@ -21,7 +21,8 @@ export const maxUploadBytes = 25 * 1024 * 1024;
 /** Why a file cannot be sent, before sending it; null when it may go. */
 export function refuseFile(file: File): string | null {
   if (file.type && !/^(image|video)\//.test(file.type)) return 'Only photos and videos can be added here.';
-  if (file.size > maxUploadBytes) return `Larger than ${Math.round(maxUploadBytes / 1024 / 1024)} MB: trim the video or send a shorter one.`;
+  if (file.size > maxUploadBytes)
+    return `Larger than ${Math.round(maxUploadBytes / 1024 / 1024)} MB: trim the video or send a shorter one.`;
   return null;
 }
 

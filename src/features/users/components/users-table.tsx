@@ -37,7 +37,11 @@ function userColumns(meId: string, onEdit: (user: UserSummary) => void, onToggle
         </span>
       ),
     }),
-    column.accessor('email', { header: 'E-mail', meta: { className: 'whitespace-nowrap' }, cell: (c) => <span className="text-stone-700">{c.getValue()}</span> }),
+    column.accessor('email', {
+      header: 'E-mail',
+      meta: { className: 'whitespace-nowrap' },
+      cell: (c) => <span className="text-stone-700">{c.getValue()}</span>,
+    }),
     column.accessor('role', {
       header: 'Role',
       meta: { csv: (u) => roleDescriptions[u.role].label, className: 'whitespace-nowrap' },

@@ -3,7 +3,10 @@ import { ShieldAlert } from 'lucide-react';
 /** The service caution shown beside the wall map for people who open cabinets. */
 export function ServiceCaution({ className }: { className?: string }) {
   return (
-    <div role="note" className={`flex gap-3 rounded-md border border-state-at-risk-dot/50 bg-state-at-risk-bg px-3.5 py-3 text-state-at-risk ${className ?? ''}`}>
+    <div
+      role="note"
+      className={`flex gap-3 rounded-md border border-state-at-risk-dot/50 bg-state-at-risk-bg px-3.5 py-3 text-state-at-risk ${className ?? ''}`}
+    >
       <ShieldAlert className="mt-0.5 h-5 w-5 shrink-0" aria-hidden="true" />
       <p className="text-sm sm:text-base">
         <span className="font-semibold">Service safety: </span>

@@ -16,7 +16,12 @@ export function WallControllersCard({ wall, actions }: { wall: WallDetail; actio
   return (
     <Card title="Controllers" actions={actions} flush>
       {wall.controllers.length === 0 ? (
-        <EmptyState icon={Cpu} title="No controller recorded" description="Record the processor that drives this wall: model, serial, firmware, outputs." className="py-8" />
+        <EmptyState
+          icon={Cpu}
+          title="No controller recorded"
+          description="Record the processor that drives this wall: model, serial, firmware, outputs."
+          className="py-8"
+        />
       ) : (
         <>
           <ul className="divide-y divide-stone-100">
@@ -26,16 +31,16 @@ export function WallControllersCard({ wall, actions }: { wall: WallDetail; actio
                   {c.model} <span className="font-mono text-sm font-normal text-stone-700">{c.serial}</span>
                 </p>
                 <p className="text-sm text-stone-700">
-                  Firmware {c.firmware || '—'} · {c.outputsInUse} of {c.outputs} outputs in use ·{' '}
-                  {c.pixelsPerOutput.toLocaleString('en')} px per output
+                  Firmware {c.firmware || '—'} · {c.outputsInUse} of {c.outputs} outputs in use · {c.pixelsPerOutput.toLocaleString('en')}{' '}
+                  px per output
                 </p>
               </li>
             ))}
           </ul>
           {byRows !== null && fewest !== null ? (
             <p className="border-t border-stone-100 px-4 py-2.5 text-sm text-stone-700 sm:px-5">
-              One data line per row takes {byRows} output{byRows === 1 ? '' : 's'}, the fewest any layout can use is {fewest} (at most {perOutput}{' '}
-              cabinets per output, a cabinet is never split); the controllers have {outputs}.
+              One data line per row takes {byRows} output{byRows === 1 ? '' : 's'}, the fewest any layout can use is {fewest} (at most{' '}
+              {perOutput} cabinets per output, a cabinet is never split); the controllers have {outputs}.
             </p>
           ) : null}
         </>

@@ -97,7 +97,11 @@ function WallFields({ models, sites }: { models: ModelChoice[]; sites?: SelectOp
         <TextField name="warrantyEnd" label="Warranty ends" type="date" registerOptions={nullIfEmpty} />
         <TextField name="calibrationDate" label="Last calibrated" type="date" registerOptions={nullIfEmpty} />
       </div>
-      <TextAreaField name="inputNotes" label="Input signal notes" hint="Sources, resolution and frame rate the controller receives. The client sees these." />
+      <TextAreaField
+        name="inputNotes"
+        label="Input signal notes"
+        hint="Sources, resolution and frame rate the controller receives. The client sees these."
+      />
       <TextAreaField name="internalNotes" label="Internal notes" hint="Only staff see these." />
     </>
   );
@@ -158,7 +162,17 @@ function CreateWallForm({ models, siteId, sites, onDone }: Omit<CreateWallDialog
   );
 }
 
-export function EditWallDialog({ wall, models, open, onClose }: { wall: WallDetail; models: ModelChoice[]; open: boolean; onClose: () => void }) {
+export function EditWallDialog({
+  wall,
+  models,
+  open,
+  onClose,
+}: {
+  wall: WallDetail;
+  models: ModelChoice[];
+  open: boolean;
+  onClose: () => void;
+}) {
   return (
     <Dialog open={open} onClose={onClose} title={`Edit ${wall.name}`} size="lg">
       {open ? <EditWallForm wall={wall} models={models} onDone={onClose} /> : null}

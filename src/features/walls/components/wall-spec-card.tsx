@@ -30,7 +30,10 @@ export function WallSpecCard({ wall }: { wall: WallDetail }) {
   const m = wall.cabinetModel;
   const plan = wallFigures(wall);
   return (
-    <Card title="Specification" description={`${m.name}${m.maker ? ` · ${m.maker}` : ''} · ${m.environment === 'outdoor' ? 'outdoor' : 'indoor'}`}>
+    <Card
+      title="Specification"
+      description={`${m.name}${m.maker ? ` · ${m.maker}` : ''} · ${m.environment === 'outdoor' ? 'outdoor' : 'indoor'}`}
+    >
       <dl className="grid grid-cols-2 gap-x-4 gap-y-3 sm:grid-cols-3">
         <Fact label="Grid">
           {wall.columns} × {wall.rows} <span className="text-stone-600">({n(wall.columns * wall.rows)} cabinets)</span>

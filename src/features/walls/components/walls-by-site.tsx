@@ -34,7 +34,10 @@ export function WallsBySite({ walls }: { walls: WallSummary[] }) {
     <div className="space-y-4">
       {groupBySite(walls).map((site) => (
         <section key={site.id} aria-labelledby={`site-${site.id}`} className="rounded-md border border-stone-200 bg-white shadow-card">
-          <h3 id={`site-${site.id}`} className="flex items-center gap-2 border-b border-stone-200 px-4 py-3 text-base font-semibold sm:px-5">
+          <h3
+            id={`site-${site.id}`}
+            className="flex items-center gap-2 border-b border-stone-200 px-4 py-3 text-base font-semibold sm:px-5"
+          >
             <MapPin className="h-4 w-4 shrink-0 text-ink-600" aria-hidden="true" />
             <Link to={paths.site.getHref(site.id)} className="hover:underline">
               {site.name}
