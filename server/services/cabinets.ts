@@ -302,17 +302,15 @@ export async function placeCabinet(actor: Actor, wallId: string, input: PlaceCab
         notes: input.notes ?? '',
       })
       .returning();
-    await tx
-      .insert(cabinetEvents)
-      .values({
-        cabinetId: row.id,
-        kind: 'placed',
-        toWallId: wallId,
-        toColumn: input.column,
-        toRow: input.row,
-        toStatus: 'installed',
-        actorId: actor.userId,
-      });
+    await tx.insert(cabinetEvents).values({
+      cabinetId: row.id,
+      kind: 'placed',
+      toWallId: wallId,
+      toColumn: input.column,
+      toRow: input.row,
+      toStatus: 'installed',
+      actorId: actor.userId,
+    });
     await recordAudit(tx, { actor, entity: 'cabinet', entityId: row.id, action: 'placed', after: row });
     return row.id;
   });
@@ -594,19 +592,17 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
           })),
         )
         .returning({ id: cabinets.id, column: cabinets.column, row: cabinets.row });
-      await tx
-        .insert(cabinetEvents)
-        .values(
-          inserted.map((c) => ({
-            cabinetId: c.id,
-            kind: 'imported' as const,
-            toWallId: wallId,
-            toColumn: c.column,
-            toRow: c.row,
-            toStatus: 'installed' as const,
-            actorId: actor.userId,
-          })),
-        );
+      await tx.insert(cabinetEvents).values(
+        inserted.map((c) => ({
+          cabinetId: c.id,
+          kind: 'imported' as const,
+          toWallId: wallId,
+          toColumn: c.column,
+          toRow: c.row,
+          toStatus: 'installed' as const,
+          actorId: actor.userId,
+        })),
+      );
     }
     await recordAudit(tx, { actor, entity: 'wall', entityId: wallId, action: 'cabinets_imported', after: { count: rows.length } });
   });
