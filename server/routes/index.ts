@@ -1,3 +1,4 @@
+import { partsRouter, stockLocationsRouter, stockMovementsRouter, stockRouter, wallSparesRouter } from './stock.js';
 import type { Router } from 'express';
 import { attachmentsRouter, wallDocumentsRouter } from './attachments.js';
 import { authRouter } from './auth.js';
@@ -34,6 +35,7 @@ export function apiRoutes(api: Router) {
   api.use('/sites', sitesRouter);
   api.use('/walls/:id/documents', wallDocumentsRouter);
   api.use('/walls/:id/plan', wallPlanRouter);
+  api.use('/walls/:id/spares', wallSparesRouter);
   api.use('/walls', wallsRouter);
   api.use('/attachments', attachmentsRouter);
   api.use('/cabinets', cabinetsRouter);
@@ -43,4 +45,8 @@ export function apiRoutes(api: Router) {
   api.use('/tickets', ticketsRouter);
   api.use('/ticket-views', ticketViewsRouter);
   api.use('/staff', staffRouter);
+  api.use('/stock', stockRouter);
+  api.use('/stock-movements', stockMovementsRouter);
+  api.use('/parts', partsRouter);
+  api.use('/stock-locations', stockLocationsRouter);
 }

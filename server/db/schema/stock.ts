@@ -1,5 +1,18 @@
 import { sql } from 'drizzle-orm';
-import { bigserial, check, date, index, integer, numeric, pgTable, primaryKey, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  bigserial,
+  boolean,
+  check,
+  date,
+  index,
+  integer,
+  numeric,
+  pgTable,
+  primaryKey,
+  text,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { at, createdAt, updatedAt } from './columns.js';
 import { partKindEnum, stockLocationKindEnum, stockMovementKindEnum, vendorReturnOutcomeEnum } from './enums.js';
 import { clients, sites } from './clients.js';
@@ -75,11 +88,16 @@ export const stockMovements = pgTable(
     reason: text().notNull().default(''),
     repairId: uuid(),
     vendorReturnId: uuid(),
+    /** The wall a spare was taken for, whose module batch it was checked against. */
+    wallId: uuid(),
+    /** Taken knowing that its batch differs from the wall's own (colour and brightness may show). */
+    batchMismatch: boolean().notNull().default(false),
     actorId: uuid().references(() => users.id, { onDelete: 'set null' }),
     createdAt: createdAt(),
   },
   (t) => [
     index('stock_movements_part_idx').on(t.partId, t.createdAt),
+    index('stock_movements_wall_idx').on(t.wallId),
     index('stock_movements_from_idx').on(t.fromLocationId),
     index('stock_movements_to_idx').on(t.toLocationId),
     index('stock_movements_repair_idx').on(t.repairId),

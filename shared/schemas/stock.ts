@@ -1,0 +1,165 @@
+// The spare-stock resources: parts, stock locations, the movement ledger and the quantities on
+// hand it adds up to. Request schemas (forms and server alike), list queries and responses.
+import { z } from 'zod';
+import { optionalId, pageQuery, text } from './common.js';
+import {
+  partKinds,
+  stockLocationKinds,
+  stockMovementKinds,
+  type PartKind,
+  type StockLocationKind,
+  type StockMovementKind,
+} from './enums.js';
+
+/** A production batch / bin code: trimmed, as printed on the module or cabinet; empty for parts without batches. */
+export const batchCode = z.string().trim().max(40, 'At most 40 characters.').default('');
+
+// ---- requests ----
+
+/** Which locations a movement of each kind names: where the stock comes from, where it goes. */
+export const movementEnds: Record<StockMovementKind, { from: 'required' | 'none' | 'either'; to: 'required' | 'none' | 'either' }> = {
+  receipt: { from: 'none', to: 'required' },
+  back_from_vendor: { from: 'none', to: 'required' },
+  return_from_wall: { from: 'none', to: 'required' },
+  consumption: { from: 'required', to: 'none' },
+  sent_to_vendor: { from: 'required', to: 'none' },
+  transfer: { from: 'required', to: 'required' },
+  // An adjustment corrects a count one way: down from a location, or up into one.
+  adjustment: { from: 'either', to: 'either' },
+};
+
+export const stockMovementInput = z
+  .object({
+    kind: z.enum(stockMovementKinds, { error: 'Choose what happened to the stock.' }),
+    partId: z.uuid('Choose a part.'),
+    batch: batchCode,
+    fromLocationId: z.uuid('Choose a location.').optional(),
+    toLocationId: z.uuid('Choose a location.').optional(),
+    quantity: z
+      .number({ error: 'Quantity must be a number.' })
+      .int('Whole units only.')
+      .min(1, 'At least one.')
+      .max(100_000, 'At most 100,000 at once.'),
+    reason: text(500).optional(),
+    /** The wall the spare is taken for: its module batch is checked against the spare's. */
+    forWallId: optionalId,
+    /** Taking a spare of another batch than the wall's needs this, and the movement records it. */
+    acceptBatchMismatch: z.boolean().optional(),
+  })
+  .superRefine((m, ctx) => {
+    const ends = movementEnds[m.kind];
+    const named = (field: 'fromLocationId' | 'toLocationId', rule: 'required' | 'none' | 'either', words: string) => {
+      if (rule === 'required' && !m[field]) ctx.addIssue({ code: 'custom', path: [field], message: `Choose where the stock ${words}.` });
+      if (rule === 'none' && m[field])
+        ctx.addIssue({ code: 'custom', path: [field], message: `A ${m.kind.replace(/_/g, ' ')} names no location here.` });
+    };
+    named('fromLocationId', ends.from, 'comes from');
+    named('toLocationId', ends.to, 'goes to');
+    if (m.kind === 'adjustment') {
+      if (Boolean(m.fromLocationId) === Boolean(m.toLocationId)) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['fromLocationId'],
+          message: 'An adjustment takes stock off one location or adds it to one.',
+        });
+      }
+      if (!m.reason) ctx.addIssue({ code: 'custom', path: ['reason'], message: 'Say why the count is corrected.' });
+    }
+    if (m.fromLocationId && m.fromLocationId === m.toLocationId) {
+      ctx.addIssue({ code: 'custom', path: ['toLocationId'], message: 'Choose another location than the one it comes from.' });
+    }
+  });
+export type StockMovementInput = z.input<typeof stockMovementInput>;
+export type StockMovementRequest = z.output<typeof stockMovementInput>;
+
+export const listStockQuery = pageQuery.extend({
+  partId: optionalId,
+  locationId: optionalId,
+  /** One batch, matched whole (any case). */
+  batch: z.string().trim().max(40).optional(),
+  partKind: z.enum(partKinds).optional(),
+  locationKind: z.enum(stockLocationKinds).optional(),
+});
+export type ListStockQuery = z.infer<typeof listStockQuery>;
+
+export const listStockMovementsQuery = pageQuery.extend({
+  partId: optionalId,
+  /** Movements into or out of this location. */
+  locationId: optionalId,
+  kind: z.enum(stockMovementKinds).optional(),
+  batch: z.string().trim().max(40).optional(),
+});
+export type ListStockMovementsQuery = z.infer<typeof listStockMovementsQuery>;
+
+export const listPartsQuery = pageQuery.extend({
+  q: z.string().trim().max(100).optional(),
+  kind: z.enum(partKinds).optional(),
+  cabinetModelId: optionalId,
+});
+export type ListPartsQuery = z.infer<typeof listPartsQuery>;
+
+export const listStockLocationsQuery = z.object({
+  kind: z.enum(stockLocationKinds).optional(),
+  siteId: optionalId,
+});
+export type ListStockLocationsQuery = z.infer<typeof listStockLocationsQuery>;
+
+// ---- responses ----
+
+export interface Part {
+  id: string;
+  sku: string;
+  name: string;
+  kind: PartKind;
+  cabinetModel: { id: string; name: string } | null;
+  leadTimeDays: number;
+  archived: boolean;
+}
+
+export interface StockLocation {
+  id: string;
+  name: string;
+  kind: StockLocationKind;
+  /** The technician who holds a van. */
+  holder: { id: string; name: string } | null;
+  /** The site of an on-site kit. */
+  site: { id: string; name: string; clientName: string } | null;
+  archived: boolean;
+}
+
+/** What one location holds of one part and batch: the ledger's sum. */
+export interface StockBalance {
+  partId: string;
+  partSku: string;
+  partName: string;
+  partKind: PartKind;
+  batch: string;
+  locationId: string;
+  locationName: string;
+  locationKind: StockLocationKind;
+  onHand: number;
+  /** The location's reorder point for the part (all batches together), when one is set. */
+  reorderAt: number | null;
+}
+
+export interface StockMovement {
+  id: number;
+  kind: StockMovementKind;
+  partId: string;
+  partName: string;
+  batch: string;
+  from: { id: string; name: string } | null;
+  to: { id: string; name: string } | null;
+  quantity: number;
+  reason: string;
+  wallId: string | null;
+  /** The spare's batch differs from the wall's own, and whoever took it said so. */
+  batchMismatch: boolean;
+  actorName: string | null;
+  createdAt: string;
+}
+
+/** A spare for a wall, its batch compared with the batches of the wall's cabinets. */
+export interface WallSpare extends StockBalance {
+  matchesWallBatch: boolean;
+}
