@@ -124,6 +124,7 @@ const balanceColumns = {
   locationName: stockLocations.name,
   locationKind: stockLocations.kind,
   onHand: stockBalances.quantity,
+  partOnHandHere: sql<number>`(select coalesce(sum(b.quantity), 0)::int from stock_balances b where b.part_id = ${stockBalances.partId} and b.location_id = ${stockBalances.locationId})`,
   reorderAt: reorderPoints.minQuantity,
 };
 
@@ -179,6 +180,7 @@ function presentBalance(r: StockBalance): StockBalance {
     locationName: r.locationName,
     locationKind: r.locationKind,
     onHand: r.onHand,
+    partOnHandHere: r.partOnHandHere,
     reorderAt: r.reorderAt,
   };
 }
@@ -486,6 +488,7 @@ export async function lowStock(): Promise<{ items: (StockBalance & { reorderQuan
       locationName: r.locationName,
       locationKind: r.locationKind,
       onHand: r.onHand,
+      partOnHandHere: r.onHand,
       reorderAt: r.minQuantity,
       reorderQuantity: r.reorderQuantity,
     })),

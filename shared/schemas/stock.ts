@@ -138,6 +138,8 @@ export interface StockBalance {
   locationName: string;
   locationKind: StockLocationKind;
   onHand: number;
+  /** The part on hand at the location, all batches together: what a reorder point watches. */
+  partOnHandHere: number;
   /** The location's reorder point for the part (all batches together), when one is set. */
   reorderAt: number | null;
 }

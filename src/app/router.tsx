@@ -36,6 +36,7 @@ const router = createBrowserRouter([
           { path: paths.newTicket.path, lazy: () => import('@/app/routes/tickets/new') },
           { path: paths.ticket.path, lazy: () => import('@/app/routes/tickets/ticket') },
           { path: paths.planner.path, lazy: () => import('@/app/routes/planner/planner') },
+          { path: paths.stock.path, lazy: () => import('@/app/routes/stock/stock') },
           { path: paths.wallRuns.path, lazy: () => import('@/app/routes/planner/wall-runs') },
           { path: paths.scan.path, lazy: () => import('@/app/routes/scan/scan') },
           { path: paths.cabinetLabel.path, lazy: () => import('@/app/routes/register/cabinet-label') },

@@ -27,6 +27,8 @@ export const paths = {
   },
 
   account: { path: '/account', getHref: () => '/account' },
+  /** Spare stock: on hand per location (a technician's van first on their phone). */
+  stock: { path: '/stock', getHref: (filters: { locationId?: string } = {}) => withParams('/stock', filters) },
   search: { path: '/search', getHref: (q?: string) => withParams('/search', { q }) },
 
   // Office and shared register

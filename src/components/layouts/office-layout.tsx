@@ -9,6 +9,7 @@ import {
   Layers,
   LayoutDashboard,
   MapPin,
+  Package,
   Menu,
   Search,
   Square,
@@ -37,6 +38,7 @@ const workItems: NavItem[] = [
   { to: paths.cabinets.getHref(), label: 'Cabinets', icon: Square },
   { to: paths.catalogue.getHref(), label: 'Catalogue', icon: Layers },
   { to: paths.tickets.getHref(), label: 'Tickets', icon: Ticket },
+  { to: paths.stock.getHref(), label: 'Stock', icon: Package },
   { to: paths.planner.getHref(), label: 'Planner', icon: Calculator },
 ];
 

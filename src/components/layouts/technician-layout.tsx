@@ -1,6 +1,6 @@
 import clsx from 'clsx';
 import type { LucideIcon } from 'lucide-react';
-import { CircleUser, Grid3x3, House, ScanLine, Ticket } from 'lucide-react';
+import { CircleUser, Grid3x3, House, Package, ScanLine, Ticket } from 'lucide-react';
 import { NavLink } from 'react-router-dom';
 import { SkipLink, UserMenu, type ShellProps } from '@/components/layouts/user-menu';
 import { Logo } from '@/components/ui/logo';
@@ -18,6 +18,7 @@ const items: NavItem[] = [
   { to: paths.tickets.getHref(), label: 'Tickets', icon: Ticket },
   { to: paths.walls.getHref(), label: 'Walls', icon: Grid3x3 },
   { to: paths.scan.getHref(), label: 'Scan', icon: ScanLine },
+  { to: paths.stock.getHref(), label: 'Van', icon: Package },
   { to: paths.account.getHref(), label: 'Me', icon: CircleUser },
 ];
 
@@ -43,7 +44,7 @@ export function TechnicianLayout({ user, onSignOut, signingOut, children }: Shel
         aria-label="Main"
         className="on-ink fixed inset-x-0 bottom-0 z-30 border-t border-ink-800 bg-ink-900 pb-[env(safe-area-inset-bottom)]"
       >
-        <ul className="mx-auto grid max-w-3xl grid-cols-5">
+        <ul className="mx-auto grid max-w-3xl grid-cols-6">
           {items.map((item) => (
             <li key={item.to}>
               <NavLink

@@ -1,3 +1,4 @@
+import { LowStockList } from '@/features/board/components/low-stock-list';
 import { priorityGuidance, type OpenClockState, type TicketClockState, type TicketListItem } from '@shared/schemas/tickets';
 import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
@@ -37,6 +38,7 @@ export function TodayBoard() {
         <AttentionList />
         <WaitingList />
       </div>
+      <LowStockList />
     </div>
   );
 }

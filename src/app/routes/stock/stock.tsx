@@ -1,0 +1,117 @@
+import type { StockBalance, StockLocation, StockMovementInput } from '@shared/schemas/stock';
+import { useQuery } from '@tanstack/react-query';
+import { Plus } from 'lucide-react';
+import { useMemo, useState } from 'react';
+import type { LoaderFunctionArgs } from 'react-router-dom';
+import { Button } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { Card } from '@/components/ui/card';
+import { FilterSelect } from '@/components/ui/filters';
+import { MovementDialog } from '@/features/stock/components/movement-dialog';
+import { locationKindLabels, StockTable } from '@/features/stock/components/stock-table';
+import { LocationStockCards } from '@/features/stock/components/van-stock';
+import { requireUser, staff } from '@/app/auth-guard';
+import { idParam, useListFilters } from '@/lib/list-filters';
+import { queryClient } from '@/lib/query-client';
+import { isOffice, useUser } from '@/lib/session';
+import { useDocumentTitle } from '@/lib/use-document-title';
+import { stockQueries, type StockFilters } from '@/resources/stock';
+export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
+
+function filtersFrom(params: URLSearchParams): StockFilters {
+  const kind = params.get('partKind');
+  const kinds = ['module', 'power_supply', 'receiving_card', 'cable', 'fan', 'cabinet'] as const;
+  return {
+    locationId: idParam(params, 'locationId'),
+    partKind: kinds.find((k) => k === kind),
+  };
+}
+
+export async function loader({ request }: LoaderFunctionArgs) {
+  await requireUser(request, staff);
+  await Promise.all([
+    queryClient.ensureQueryData(stockQueries.locations()).catch(() => undefined),
+    queryClient.ensureInfiniteQueryData(stockQueries.balances(filtersFrom(new URL(request.url).searchParams))).catch(() => undefined),
+  ]);
+  return null;
+}
+
+/**
+ * Spare stock. The office sees every location, records receipts, transfers, uses and
+ * corrections; a technician sees their van first, as cards for the phone, and moves stock out of it.
+ */
+export function Component() {
+  useDocumentTitle('Stock');
+  const user = useUser();
+  const office = isOffice(user);
+  const [filters, setFilters] = useListFilters(filtersFrom);
+  const locations = useQuery(stockQueries.locations());
+  const [moving, setMoving] = useState<Partial<StockMovementInput> | null>(null);
+  const locationOptions = useMemo(
+    () => (locations.data?.items ?? []).map((l) => ({ value: l.id, label: `${l.name} (${locationKindLabels[l.kind]})` })),
+    [locations.data],
+  );
+  const vans = (locations.data?.items ?? []).filter((l) => l.kind === 'van' && l.holder?.id === user.id);
+  const moveFrom = (row: StockBalance) =>
+    setMoving({ kind: office ? 'transfer' : 'consumption', partId: row.partId, batch: row.batch, fromLocationId: row.locationId });
+
+  return (
+    <>
+      <PageHeader
+        title={office ? 'Stock' : 'My van'}
+        description={
+          office
+            ? 'Spares on hand in the warehouse, the vans and the site kits: the sums of the ledger.'
+            : 'What you carry, and what is on the shelf.'
+        }
+        actions={
+          <Button variant="primary" icon={<Plus className="h-4 w-4" aria-hidden="true" />} onClick={() => setMoving({})}>
+            {office ? 'Record a movement' : 'Take or use stock'}
+          </Button>
+        }
+      />
+      {!office ? (
+        <div className="mb-6 space-y-4">
+          {vans.length ? (
+            vans.map((van) => (
+              <Card key={van.id} title={van.name}>
+                <LocationStockCards location={van} onMove={moveFrom} />
+              </Card>
+            ))
+          ) : (
+            <p className="text-stone-700">No van is in your name yet; the office sets one up.</p>
+          )}
+          <OtherLocation locations={(locations.data?.items ?? []).filter((l) => !vans.includes(l))} onMove={moveFrom} />
+        </div>
+      ) : (
+        <StockTable filters={filters} onFiltersChange={setFilters} locationOptions={locationOptions} onMove={moveFrom} />
+      )}
+      <MovementDialog
+        open={moving !== null}
+        onClose={() => setMoving(null)}
+        start={moving ?? undefined}
+        kinds={office ? undefined : ['consumption', 'transfer']}
+      />
+    </>
+  );
+}
+
+/** Another location's shelf, as cards: the warehouse before a visit, or a site kit on site. */
+function OtherLocation({ locations, onMove }: { locations: StockLocation[]; onMove: (row: StockBalance) => void }) {
+  const [id, setId] = useState('');
+  const location = locations.find((l) => l.id === id);
+  return (
+    <Card title="Another location">
+      <div className="space-y-4">
+        <FilterSelect
+          label="Location"
+          anyLabel="Choose a location"
+          options={locations.map((l) => ({ value: l.id, label: `${l.name} (${locationKindLabels[l.kind]})` }))}
+          value={id}
+          onChange={setId}
+        />
+        {location ? <LocationStockCards location={location} onMove={onMove} /> : null}
+      </div>
+    </Card>
+  );
+}

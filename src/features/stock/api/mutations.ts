@@ -1,0 +1,5 @@
+// The stock's write: a movement changes the counts, the ledger and the low-stock list.
+import { useWrite } from '@/lib/mutation';
+import { stockKeys, stockRequests } from '@/resources/stock';
+
+export const useRecordMovement = () => useWrite(stockRequests.move, [stockKeys.all]);

@@ -1,0 +1,141 @@
+import type { StockBalance } from '@shared/schemas/stock';
+import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
+import { createColumnHelper } from '@tanstack/react-table';
+import { Package } from 'lucide-react';
+import { useMemo } from 'react';
+import { Badge } from '@/components/ui/badge';
+import { Button } from '@/components/ui/button';
+import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
+import { EmptyState } from '@/components/ui/empty-state';
+import { FilterSelect } from '@/components/ui/filters';
+import type { SelectOption } from '@/components/ui/select-field';
+import { stockQueries, type StockFilters } from '@/resources/stock';
+
+const column = createColumnHelper<StockBalance>();
+const n = (v: number) => v.toLocaleString('en');
+
+export const partKindLabels = {
+  module: 'Module',
+  power_supply: 'Power supply',
+  receiving_card: 'Receiving card',
+  cable: 'Cable',
+  fan: 'Fan',
+  cabinet: 'Cabinet',
+} as const;
+
+export const locationKindLabels = { warehouse: 'Warehouse', van: 'Van', site_kit: 'Site kit' } as const;
+
+interface StockTableProps {
+  filters: StockFilters;
+  onFiltersChange: (filters: StockFilters) => void;
+  locationOptions: SelectOption[];
+  /** Offers a movement from a row (the office, or a technician for their own van). */
+  onMove?: (row: StockBalance) => void;
+}
+
+/** On hand per part, batch and location: the ledger's sums, a reorder point marked when reached. */
+export function StockTable({ filters, onFiltersChange, locationOptions, onMove }: StockTableProps) {
+  const query = useInfiniteQuery({ ...stockQueries.balances(filters), placeholderData: keepPreviousData });
+  const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
+  const columns = useMemo(
+    () => [
+      column.accessor('partName', {
+        header: 'Part',
+        meta: { alwaysVisible: true, className: 'min-w-[12rem]' },
+        cell: (c) => (
+          <span>
+            <span className="font-medium text-ink-950">{c.getValue()}</span>
+            <span className="block font-mono text-xs text-stone-600">{c.row.original.partSku}</span>
+          </span>
+        ),
+      }),
+      column.accessor('partKind', { header: 'Kind', cell: (c) => partKindLabels[c.getValue()] }),
+      column.accessor('batch', {
+        header: 'Batch',
+        cell: (c) => (c.getValue() ? <span className="font-mono text-sm">{c.getValue()}</span> : '—'),
+      }),
+      column.accessor('locationName', {
+        header: 'Location',
+        cell: (c) => (
+          <span>
+            {c.getValue()} <span className="text-sm text-stone-600">({locationKindLabels[c.row.original.locationKind]})</span>
+          </span>
+        ),
+      }),
+      column.accessor('onHand', {
+        header: 'On hand',
+        meta: { align: 'right' },
+        cell: (c) => {
+          const low = c.row.original.reorderAt !== null && c.row.original.partOnHandHere <= c.row.original.reorderAt;
+          return (
+            <span className="inline-flex items-center gap-2 tabular-nums">
+              {low ? <Badge tone="amber">Low: {c.row.original.partOnHandHere} of this part here</Badge> : null}
+              <span className="font-semibold">{n(c.getValue())}</span>
+            </span>
+          );
+        },
+      }),
+      column.accessor('reorderAt', {
+        header: 'Reorder at',
+        meta: { align: 'right', hiddenByDefault: true, csv: (r) => (r.reorderAt === null ? '' : String(r.reorderAt)) },
+        cell: (c) => (c.getValue() === null ? '—' : n(c.getValue() ?? 0)),
+      }),
+      ...(onMove
+        ? [
+            column.display({
+              id: 'actions',
+              header: () => <span className="sr-only">Actions</span>,
+              meta: { noCsv: true, alwaysVisible: true, align: 'right', className: 'w-px whitespace-nowrap' },
+              cell: (c) => (
+                <Button
+                  size="sm"
+                  variant="ghost"
+                  onClick={() => onMove(c.row.original)}
+                  aria-label={`Move ${c.row.original.partName} from ${c.row.original.locationName}`}
+                >
+                  Move
+                </Button>
+              ),
+            }),
+          ]
+        : []),
+    ],
+    [onMove],
+  );
+  const filtered = Boolean(filters.locationId || filters.partKind);
+  return (
+    <DataTable
+      tableId="stock"
+      label="Stock on hand"
+      columns={columns}
+      data={rows}
+      getRowId={(b) => `${b.partId}:${b.batch}:${b.locationId}`}
+      {...pagedQueryProps(query)}
+      toolbar={
+        <>
+          <FilterSelect
+            label="Location"
+            anyLabel="All locations"
+            options={locationOptions}
+            value={filters.locationId ?? ''}
+            onChange={(v) => onFiltersChange({ ...filters, locationId: v || undefined })}
+          />
+          <FilterSelect
+            label="Kind"
+            anyLabel="All kinds"
+            options={Object.entries(partKindLabels).map(([value, label]) => ({ value, label }))}
+            value={filters.partKind ?? ''}
+            onChange={(v) => onFiltersChange({ ...filters, partKind: (v || undefined) as StockFilters['partKind'] })}
+          />
+        </>
+      }
+      empty={
+        <EmptyState
+          icon={Package}
+          title={filtered ? 'Nothing on hand here' : 'No stock yet'}
+          description={filtered ? 'Try another location or kind.' : 'Record a receipt to put the first spares on the shelf.'}
+        />
+      }
+    />
+  );
+}

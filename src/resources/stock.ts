@@ -1,0 +1,80 @@
+// The spare-stock resources: quantities on hand, the movement ledger, parts, stock locations,
+// low stock and a wall's spares. Query keys, one query per read endpoint, one request per write.
+import { queryOptions } from '@tanstack/react-query';
+import type { z } from 'zod';
+import type { Page } from '@shared/schemas/common';
+import type {
+  listStockMovementsQuery,
+  listStockQuery,
+  Part,
+  StockBalance,
+  StockLocation,
+  StockMovement,
+  StockMovementInput,
+  WallSpare,
+} from '@shared/schemas/stock';
+import { api } from '@/lib/api-client';
+import { pagedQueryOptions } from '@/lib/paged-query';
+
+export type StockFilters = Omit<z.input<typeof listStockQuery>, 'cursor' | 'limit'>;
+export type MovementFilters = Omit<z.input<typeof listStockMovementsQuery>, 'cursor' | 'limit'>;
+
+export const stockPageSize = 100;
+
+export const stockKeys = {
+  all: ['stock'] as const,
+  balances: (filters: StockFilters) => [...stockKeys.all, 'balances', filters] as const,
+  movements: (filters: MovementFilters) => [...stockKeys.all, 'movements', filters] as const,
+  low: () => [...stockKeys.all, 'low'] as const,
+  parts: () => [...stockKeys.all, 'parts'] as const,
+  locations: () => [...stockKeys.all, 'locations'] as const,
+  wallSpares: (wallId: string, locationId?: string) => [...stockKeys.all, 'wall-spares', wallId, locationId ?? 'all'] as const,
+};
+
+export const stockQueries = {
+  /** On hand per part, batch and location, by part, batch and location. */
+  balances: (filters: StockFilters) =>
+    pagedQueryOptions(stockKeys.balances(filters), (cursor, signal) =>
+      api.get<Page<StockBalance>>('/api/stock', { query: { limit: stockPageSize, ...filters, cursor }, signal }),
+    ),
+  /** The ledger, newest first. */
+  movements: (filters: MovementFilters) =>
+    pagedQueryOptions(stockKeys.movements(filters), (cursor, signal) =>
+      api.get<Page<StockMovement>>('/api/stock-movements', { query: { limit: 50, ...filters, cursor }, signal }),
+    ),
+  /** Reorder points at or below their mark. */
+  low: () =>
+    queryOptions({
+      queryKey: stockKeys.low(),
+      queryFn: ({ signal }) => api.get<{ items: (StockBalance & { reorderQuantity: number })[] }>('/api/stock/low', { signal }),
+    }),
+  /** The parts of the catalogue of spares (the first 500, by name). */
+  parts: () =>
+    queryOptions({
+      queryKey: stockKeys.parts(),
+      queryFn: ({ signal }) => api.get<Page<Part>>('/api/parts', { query: { limit: 500 }, signal }),
+      staleTime: 5 * 60_000,
+    }),
+  /** Warehouses, vans and site kits (client users: their own site kits). */
+  locations: () =>
+    queryOptions({
+      queryKey: stockKeys.locations(),
+      queryFn: ({ signal }) => api.get<{ items: StockLocation[] }>('/api/stock-locations', { signal }),
+      staleTime: 5 * 60_000,
+    }),
+  /** Spares of a wall's model, the wall's own batches first. */
+  wallSpares: (wallId: string, locationId?: string) =>
+    queryOptions({
+      queryKey: stockKeys.wallSpares(wallId, locationId),
+      queryFn: ({ signal }) =>
+        api.get<{ wallBatches: string[]; items: WallSpare[] }>(`/api/walls/${encodeURIComponent(wallId)}/spares`, {
+          query: { locationId },
+          signal,
+        }),
+    }),
+};
+
+export const stockRequests = {
+  /** Records a movement; 409 `insufficient_stock` when fewer are on hand, `batch_mismatch` for another batch than the wall's. */
+  move: (input: StockMovementInput) => api.post<StockMovement>('/api/stock-movements', input),
+};

@@ -1,0 +1,112 @@
+import { expect, test, type Page } from '@playwright/test';
+
+// Spare stock against the real app and its demo data: the office receives fans into the
+// warehouse and transfers some to a van, and both counts follow; a technician on a phone sees
+// their van and records a spare used.
+
+async function signIn(page: Page, email: string) {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill('gridkeep-demo');
+  await page.getByRole('button', { name: /sign in/i }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+}
+
+interface Balance {
+  partName: string;
+  batch: string;
+  locationName: string;
+  onHand: number;
+}
+
+/** On hand of a part at a location, as the API adds up the ledger. */
+async function onHand(page: Page, partName: string, locationName: string): Promise<number> {
+  const answer = (await (await page.request.get('/api/stock?limit=500')).json()) as { items: Balance[] };
+  return answer.items
+    .filter((b) => b.partName === partName && b.locationName === locationName && b.batch === '')
+    .reduce((n, b) => n + b.onHand, 0);
+}
+
+async function choose(select: ReturnType<Page['getByLabel']>, containing: string) {
+  await select.locator('option', { hasText: containing }).first().waitFor({ state: 'attached' });
+  const label = (await select.locator('option').allTextContents()).find((l) => l.includes(containing));
+  await select.selectOption({ label: label! });
+}
+
+const fan = 'Cabinet fan 80 mm, sealed';
+const warehouse = 'Brantley Springs warehouse';
+const van = 'Van 1 (Jonah Ellery)';
+
+test('the office receives stock into the warehouse, transfers some to a van, and both counts change', async ({ page }, testInfo) => {
+  test.setTimeout(90_000);
+  const errors: string[] = [];
+  page.on('pageerror', (err) => errors.push(err.message));
+  await page.setViewportSize({ width: 1366, height: 900 });
+  await signIn(page, 'office@gridkeep.test');
+  const before = { warehouse: await onHand(page, fan, warehouse), van: await onHand(page, fan, van) };
+
+  await page.getByRole('navigation').getByRole('link', { name: 'Stock' }).click();
+  await expect(page.getByRole('heading', { name: 'Stock', level: 1 })).toBeVisible();
+
+  await page.getByRole('button', { name: 'Record a movement' }).click();
+  let dialog = page.getByRole('dialog', { name: 'Record a stock movement' });
+  await dialog.getByLabel('What happened').selectOption({ label: 'Receive from a supplier' });
+  await choose(dialog.getByLabel('Part'), fan);
+  await dialog.getByLabel('Quantity').fill('5');
+  await choose(dialog.getByLabel('To', { exact: true }), warehouse);
+  await dialog.getByRole('button', { name: 'Record' }).click();
+  await expect(dialog).toBeHidden();
+
+  await page.getByRole('button', { name: 'Record a movement' }).click();
+  dialog = page.getByRole('dialog', { name: 'Record a stock movement' });
+  await dialog.getByLabel('What happened').selectOption({ label: 'Transfer between locations' });
+  await choose(dialog.getByLabel('Part'), fan);
+  await dialog.getByLabel('Quantity').fill('3');
+  await choose(dialog.getByLabel('From', { exact: true }), warehouse);
+  await choose(dialog.getByLabel('To', { exact: true }), van);
+  await dialog.getByRole('button', { name: 'Record' }).click();
+  await expect(dialog).toBeHidden();
+
+  // Warehouse + 5 − 3, van + 3: in the table (filtered to each location) and in the ledger's sums.
+  const row = (location: string) => page.getByRole('row').filter({ hasText: fan }).filter({ hasText: location });
+  await expect(row(warehouse).getByRole('cell').nth(4)).toHaveText(String(before.warehouse + 2));
+  await expect(row(van).getByRole('cell').nth(4)).toHaveText(String(before.van + 3));
+  expect(await onHand(page, fan, warehouse)).toBe(before.warehouse + 2);
+  expect(await onHand(page, fan, van)).toBe(before.van + 3);
+  await page.screenshot({ path: testInfo.outputPath('stock-office.png'), fullPage: true });
+
+  // Taking more than is on hand is refused, in words.
+  await page.getByRole('button', { name: 'Record a movement' }).click();
+  dialog = page.getByRole('dialog', { name: 'Record a stock movement' });
+  await dialog.getByLabel('What happened').selectOption({ label: 'Use in a repair' });
+  await choose(dialog.getByLabel('Part'), fan);
+  await dialog.getByLabel('Quantity').fill('999');
+  await choose(dialog.getByLabel('From', { exact: true }), van);
+  await dialog.getByRole('button', { name: 'Record' }).click();
+  await expect(dialog.getByText(/Only \d+ of that part/).first()).toBeVisible();
+  expect(errors).toEqual([]);
+});
+
+test('a technician on a phone sees their van and records a spare used', async ({ page }, testInfo) => {
+  test.setTimeout(90_000);
+  await page.setViewportSize({ width: 390, height: 844 });
+  await signIn(page, 'tech@gridkeep.test');
+  await page.getByRole('navigation').getByRole('link', { name: 'Van' }).click();
+  await expect(page.getByRole('heading', { name: 'My van', level: 1 })).toBeVisible();
+  const cards = page.getByRole('list', { name: `On hand in ${van}` });
+  const jumper = cards.getByRole('listitem').filter({ hasText: 'Power jumper 0.6 m, locking' });
+  await expect(jumper).toBeVisible();
+  const count = Number(await jumper.locator('p[aria-label$="on hand"]').textContent());
+  expect(count).toBeGreaterThan(0);
+  const button = jumper.getByRole('button', { name: /Use or move Power jumper/ });
+  const box = await button.boundingBox();
+  expect(box!.height).toBeGreaterThanOrEqual(44); // WCAG 2.5.5 target size
+  await page.screenshot({ path: testInfo.outputPath('van-phone.png'), fullPage: true });
+
+  await button.click();
+  const dialog = page.getByRole('dialog', { name: 'Record a stock movement' });
+  await expect(dialog.getByLabel('What happened')).toHaveValue('consumption');
+  await dialog.getByRole('button', { name: 'Record' }).click();
+  await expect(dialog).toBeHidden();
+  await expect(jumper.locator('p[aria-label$="on hand"]')).toHaveText(String(count - 1));
+});
