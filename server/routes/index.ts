@@ -1,4 +1,4 @@
-import { partsRouter, stockLocationsRouter, stockMovementsRouter, stockRouter, wallSparesRouter } from './stock.js';
+import { partsRouter, stockLocationsRouter, stockMovementsRouter, stockRouter, vendorReturnsRouter, wallSparesRouter } from './stock.js';
 import type { Router } from 'express';
 import { attachmentsRouter, wallDocumentsRouter } from './attachments.js';
 import { authRouter } from './auth.js';
@@ -49,4 +49,5 @@ export function apiRoutes(api: Router) {
   api.use('/stock-movements', stockMovementsRouter);
   api.use('/parts', partsRouter);
   api.use('/stock-locations', stockLocationsRouter);
+  api.use('/vendor-returns', vendorReturnsRouter);
 }

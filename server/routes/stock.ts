@@ -6,8 +6,15 @@ import {
   listStockLocationsQuery,
   listStockMovementsQuery,
   listStockQuery,
+  listVendorReturnsQuery,
+  restockQuery,
   stockMovementInput,
+  vendorReturnInput,
+  vendorReturnPatch,
 } from '../../shared/schemas/stock.js';
+import { officeRoles } from '../../shared/schemas/enums.js';
+import * as restock from '../services/restock.js';
+import * as returns from '../services/vendor-returns.js';
 import { actorOf, requireAuth, requireRole } from '../middleware/auth.js';
 import { validated } from '../middleware/validate.js';
 import * as stock from '../services/stock.js';
@@ -22,6 +29,14 @@ stockRouter.get(
   '/',
   validated({ query: listStockQuery }, async ({ query }, req, res) => {
     res.json(await stock.listStock(actorOf(req), query));
+  }),
+);
+/** What each wall's site kit should hold of its own batches, and what to send (spares forecast). */
+stockRouter.get(
+  '/restock',
+  staff,
+  validated({ query: restockQuery }, async ({ query }, _req, res) => {
+    res.json(await restock.restockList(query.serviceLevel));
   }),
 );
 /** Reorder points at or below their mark (the office's low-stock list). */
@@ -70,5 +85,29 @@ wallSparesRouter.get(
   '/',
   validated({ params: idParams, query: z.object({ locationId: z.uuid().optional() }) }, async ({ params, query }, _req, res) => {
     res.json(await stock.wallSpares(params.id, query.locationId));
+  }),
+);
+
+/** Failed parts sent back to their maker: staff read them, the office records them. */
+export const vendorReturnsRouter = Router();
+vendorReturnsRouter.use(staff);
+vendorReturnsRouter.get(
+  '/',
+  validated({ query: listVendorReturnsQuery }, async ({ query }, _req, res) => {
+    res.json(await returns.listVendorReturns(query));
+  }),
+);
+vendorReturnsRouter.post(
+  '/',
+  requireRole(...officeRoles),
+  validated({ body: vendorReturnInput }, async ({ body }, req, res) => {
+    res.status(201).json(await returns.openVendorReturn(actorOf(req), body));
+  }),
+);
+vendorReturnsRouter.patch(
+  '/:id',
+  requireRole(...officeRoles),
+  validated({ params: idParams, body: vendorReturnPatch }, async ({ params, body }, req, res) => {
+    res.json(await returns.updateVendorReturn(actorOf(req), params.id, body));
   }),
 );

@@ -34,7 +34,7 @@ import { likePattern } from './clients.js';
 import { decodeCursor, encodeCursor } from './pagination.js';
 import { found } from './scope.js';
 
-type Tx = Parameters<Parameters<ReturnType<typeof db>['transaction']>[0]>[0];
+export type Tx = Parameters<Parameters<ReturnType<typeof db>['transaction']>[0]>[0];
 
 const isOffice = (actor: Actor) => (officeRoles as readonly string[]).includes(actor.role);
 
@@ -424,33 +424,45 @@ async function watchReorderPoint(tx: Tx, partId: string, locationId: string, mov
   });
 }
 
+/**
+ * Writes one movement in the caller's transaction: the actor's right to move it, the batch
+ * check, the balances it changes (never below zero) and the reorder points it crosses.
+ */
+export async function applyMovement(
+  tx: Tx,
+  actor: Actor,
+  m: StockMovementRequest,
+  links: { vendorReturnId?: string } = {},
+): Promise<number> {
+  await assertMayMove(tx, actor, m);
+  const [part] = await tx.select({ id: parts.id }).from(parts).where(eq(parts.id, m.partId));
+  found(part, 'Part');
+  const batchMismatch = await checkBatch(tx, m);
+  if (m.fromLocationId) await takeOff(tx, m, m.fromLocationId);
+  if (m.toLocationId) await putOn(tx, m, m.toLocationId);
+  const [row] = await tx
+    .insert(stockMovements)
+    .values({
+      partId: m.partId,
+      batch: m.batch,
+      kind: m.kind,
+      fromLocationId: m.fromLocationId ?? null,
+      toLocationId: m.toLocationId ?? null,
+      quantity: m.quantity,
+      reason: m.reason ?? '',
+      wallId: m.forWallId ?? null,
+      vendorReturnId: links.vendorReturnId ?? null,
+      batchMismatch,
+      actorId: actor.userId,
+    })
+    .returning({ id: stockMovements.id });
+  for (const locationId of [m.fromLocationId, m.toLocationId]) if (locationId) await watchReorderPoint(tx, m.partId, locationId, row.id);
+  return row.id;
+}
+
 /** Records one movement and changes the balances it moves, in one transaction. */
 export async function recordMovement(actor: Actor, m: StockMovementRequest): Promise<StockMovement> {
-  const id = await db().transaction(async (tx) => {
-    await assertMayMove(tx, actor, m);
-    const [part] = await tx.select({ id: parts.id, archivedAt: parts.archivedAt }).from(parts).where(eq(parts.id, m.partId));
-    found(part, 'Part');
-    const batchMismatch = await checkBatch(tx, m);
-    if (m.fromLocationId) await takeOff(tx, m, m.fromLocationId);
-    if (m.toLocationId) await putOn(tx, m, m.toLocationId);
-    const [row] = await tx
-      .insert(stockMovements)
-      .values({
-        partId: m.partId,
-        batch: m.batch,
-        kind: m.kind,
-        fromLocationId: m.fromLocationId ?? null,
-        toLocationId: m.toLocationId ?? null,
-        quantity: m.quantity,
-        reason: m.reason ?? '',
-        wallId: m.forWallId ?? null,
-        batchMismatch,
-        actorId: actor.userId,
-      })
-      .returning({ id: stockMovements.id });
-    for (const locationId of [m.fromLocationId, m.toLocationId]) if (locationId) await watchReorderPoint(tx, m.partId, locationId, row.id);
-    return row.id;
-  });
+  const id = await db().transaction((tx) => applyMovement(tx, actor, m));
   const [row] = await movementRows(eq(stockMovements.id, id), 1);
   return row.presented;
 }

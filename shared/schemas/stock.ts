@@ -6,9 +6,11 @@ import {
   partKinds,
   stockLocationKinds,
   stockMovementKinds,
+  vendorReturnOutcomes,
   type PartKind,
   type StockLocationKind,
   type StockMovementKind,
+  type VendorReturnOutcome,
 } from './enums.js';
 
 /** A production batch / bin code: trimmed, as printed on the module or cabinet; empty for parts without batches. */
@@ -164,4 +166,103 @@ export interface StockMovement {
 /** A spare for a wall, its batch compared with the batches of the wall's cabinets. */
 export interface WallSpare extends StockBalance {
   matchesWallBatch: boolean;
+}
+
+// ---- vendor returns ----
+
+export const vendorReturnInput = z
+  .object({
+    partId: z.uuid('Choose a part.'),
+    serial: z.string().trim().max(64).default(''),
+    batch: batchCode,
+    quantity: z.number({ error: 'Quantity must be a number.' }).int('Whole units only.').min(1, 'At least one.').max(10_000).default(1),
+    fault: z.string().trim().min(1, 'Say what is wrong with it.').max(500),
+    /** Where the failed part leaves from: a `sent_to_vendor` movement takes it off that shelf. */
+    fromLocationId: optionalId,
+    rmaReference: z.string().trim().max(80).default(''),
+    sentOn: z.iso.date('Use the form YYYY-MM-DD.').optional(),
+    expectedBackOn: z.iso.date('Use the form YYYY-MM-DD.').optional(),
+    notes: text(2000).optional(),
+  })
+  .refine((v) => !v.sentOn || !v.expectedBackOn || v.expectedBackOn >= v.sentOn, {
+    path: ['expectedBackOn'],
+    message: 'It cannot be back before it is sent.',
+  });
+export type VendorReturnInput = z.input<typeof vendorReturnInput>;
+
+export const vendorReturnPatch = z
+  .object({
+    outcome: z.enum(vendorReturnOutcomes).optional(),
+    rmaReference: z.string().trim().max(80).optional(),
+    sentOn: z.iso.date('Use the form YYYY-MM-DD.').optional(),
+    expectedBackOn: z.iso.date('Use the form YYYY-MM-DD.').optional(),
+    /** A repaired or replaced part back on this shelf: a `back_from_vendor` movement puts it there. */
+    backToLocationId: optionalId,
+    notes: text(2000).optional(),
+  })
+  .refine((v) => !v.backToLocationId || v.outcome === 'repaired' || v.outcome === 'replaced', {
+    path: ['backToLocationId'],
+    message: 'Only a repaired or replaced part comes back into stock.',
+  });
+export type VendorReturnPatch = z.input<typeof vendorReturnPatch>;
+
+export const listVendorReturnsQuery = z.object({
+  outcome: z.enum(vendorReturnOutcomes).optional(),
+  /** Only returns past their expected date and still pending. */
+  overdue: z
+    .enum(['true', 'false'])
+    .optional()
+    .transform((v) => v === 'true'),
+});
+
+export interface VendorReturn {
+  id: string;
+  part: { id: string; name: string; sku: string };
+  serial: string;
+  batch: string;
+  quantity: number;
+  fault: string;
+  from: { id: string; name: string } | null;
+  rmaReference: string;
+  sentOn: string | null;
+  expectedBackOn: string | null;
+  outcome: VendorReturnOutcome;
+  backInStockOn: string | null;
+  backTo: { id: string; name: string } | null;
+  notes: string;
+  /** Pending past its expected date. */
+  overdue: boolean;
+  createdAt: string;
+}
+
+// ---- restock from the spares forecast ----
+
+export const restockQuery = z.object({
+  serviceLevel: z.coerce
+    .number({ error: 'Service level must be a number.' })
+    .gt(0, 'Service level must be more than 0.')
+    .lt(1, 'Service level must be below 1; try 0.95.')
+    .default(0.95),
+});
+
+/** One wall's spare modules: what its site kit should hold of the wall's own batches, and what to send. */
+export interface RestockLine {
+  wallId: string;
+  wallName: string;
+  siteName: string;
+  clientName: string;
+  kit: { id: string; name: string } | null;
+  part: { id: string; name: string; sku: string } | null;
+  modules: number;
+  /** Whose failures set the rate: the wall's own history, or its cabinet model's across walls. */
+  rateBasis: 'wall' | 'model';
+  failures: number;
+  exposureModuleMonths: number;
+  failuresPerThousandModuleMonths: number;
+  leadTimeMonths: number;
+  expectedFailures: number;
+  recommended: number;
+  /** Modules of the wall's own batches in its site kit. */
+  onHand: number;
+  toSend: number;
 }

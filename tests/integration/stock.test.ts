@@ -206,16 +206,14 @@ describe('who may move stock', () => {
     await office.post('/api/stock-movements', { kind: 'receipt', partId: part.id, toLocationId: kit.id, quantity: 3 }).expect(201);
     const fromKit = () => tech.post('/api/stock-movements', { kind: 'consumption', partId: part.id, fromLocationId: kit.id, quantity: 1 });
     expect((await fromKit()).status).toBe(403);
-    await db()
-      .insert(tickets)
-      .values({
-        clientId: client.id,
-        siteId: site.id,
-        title: 'Dead module',
-        priority: 'high',
-        status: 'scheduled',
-        assigneeId: tech.user.id,
-      });
+    await db().insert(tickets).values({
+      clientId: client.id,
+      siteId: site.id,
+      title: 'Dead module',
+      priority: 'high',
+      status: 'scheduled',
+      assigneeId: tech.user.id,
+    });
     expect((await fromKit()).status).toBe(201);
     expect(await onHand(part.id, kit.id)).toBe(2);
   });
