@@ -28,7 +28,11 @@ export const paths = {
 
   account: { path: '/account', getHref: () => '/account' },
   /** Spare stock: on hand per location (a technician's van first on their phone). */
-  stock: { path: '/stock', getHref: (filters: { locationId?: string } = {}) => withParams('/stock', filters) },
+  stock: {
+    path: '/stock',
+    /** `tab`: on hand (default), vendor returns or the restock list. */
+    getHref: (filters: { locationId?: string; tab?: 'returns' | 'restock' } = {}) => withParams('/stock', filters),
+  },
   search: { path: '/search', getHref: (q?: string) => withParams('/search', { q }) },
 
   // Office and shared register

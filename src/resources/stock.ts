@@ -11,6 +11,10 @@ import type {
   StockLocation,
   StockMovement,
   StockMovementInput,
+  RestockLine,
+  VendorReturn,
+  VendorReturnInput,
+  VendorReturnPatch,
   WallSpare,
 } from '@shared/schemas/stock';
 import { api } from '@/lib/api-client';
@@ -29,6 +33,8 @@ export const stockKeys = {
   parts: () => [...stockKeys.all, 'parts'] as const,
   locations: () => [...stockKeys.all, 'locations'] as const,
   wallSpares: (wallId: string, locationId?: string) => [...stockKeys.all, 'wall-spares', wallId, locationId ?? 'all'] as const,
+  vendorReturns: (filters: { overdue?: boolean }) => [...stockKeys.all, 'vendor-returns', filters] as const,
+  restock: (serviceLevel: number) => [...stockKeys.all, 'restock', serviceLevel] as const,
 };
 
 export const stockQueries = {
@@ -74,7 +80,26 @@ export const stockQueries = {
     }),
 };
 
+export const returnQueries = {
+  /** Failed parts sent back to their makers: overdue first, then pending, then the rest. */
+  list: (filters: { overdue?: boolean } = {}) =>
+    queryOptions({
+      queryKey: stockKeys.vendorReturns(filters),
+      queryFn: ({ signal }) =>
+        api.get<{ items: VendorReturn[] }>('/api/vendor-returns', { query: { overdue: filters.overdue ? 'true' : undefined }, signal }),
+    }),
+  /** Each wall's spares forecast against its site kit. */
+  restock: (serviceLevel: number) =>
+    queryOptions({
+      queryKey: stockKeys.restock(serviceLevel),
+      queryFn: ({ signal }) => api.get<{ items: RestockLine[] }>('/api/stock/restock', { query: { serviceLevel }, signal }),
+    }),
+};
+
 export const stockRequests = {
+  openReturn: (input: VendorReturnInput) => api.post<VendorReturn>('/api/vendor-returns', input),
+  updateReturn: ({ id, ...input }: VendorReturnPatch & { id: string }) =>
+    api.patch<VendorReturn>(`/api/vendor-returns/${encodeURIComponent(id)}`, input),
   /** Records a movement; 409 `insufficient_stock` when fewer are on hand, `batch_mismatch` for another batch than the wall's. */
   move: (input: StockMovementInput) => api.post<StockMovement>('/api/stock-movements', input),
 };

@@ -110,3 +110,38 @@ test('a technician on a phone sees their van and records a spare used', async ({
   await expect(dialog).toBeHidden();
   await expect(jumper.locator('p[aria-label$="on hand"]')).toHaveText(String(count - 1));
 });
+
+test('the office sends a failed part to its maker and takes it back into stock; the restock list says what each site kit needs', async ({ page }, testInfo) => {
+  test.setTimeout(90_000);
+  await page.setViewportSize({ width: 1366, height: 900 });
+  await signIn(page, 'office@gridkeep.test');
+  const psu = 'Power supply 5 V 200 W, indoor cabinet';
+  const before = await onHand(page, psu, warehouse);
+
+  await page.goto('/stock?tab=returns');
+  await page.getByRole('button', { name: 'Send a part to its maker' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Send a part to its maker' });
+  await choose(dialog.getByLabel('Part', { exact: true }), psu);
+  await dialog.getByLabel('Serial').fill('PSU-E2E-001');
+  await dialog.getByLabel('Fault').fill('No output on the 5 V rail');
+  await choose(dialog.getByLabel('Leaves from'), warehouse);
+  await dialog.getByLabel('Maker’s reference').fill('RMA-E2E-1');
+  await dialog.getByRole('button', { name: 'Send' }).click();
+  await expect(dialog).toBeHidden();
+  const row = page.getByRole('row').filter({ hasText: 'PSU-E2E-001' });
+  await expect(row).toContainText('With the maker');
+  expect(await onHand(page, psu, warehouse)).toBe(before - 1);
+
+  await row.getByRole('button', { name: /Record the outcome/ }).click();
+  const outcome = page.getByRole('dialog', { name: 'Record what the maker did' });
+  await outcome.getByLabel('Outcome').selectOption({ label: 'Repaired' });
+  await choose(outcome.getByLabel('Back into stock at'), warehouse);
+  await outcome.getByRole('button', { name: 'Save' }).click();
+  await expect(row).toContainText(`Back in ${warehouse}`);
+  expect(await onHand(page, psu, warehouse)).toBe(before);
+
+  await page.getByRole('link', { name: 'Restock list' }).click();
+  const table = page.getByRole('table', { name: 'Restock list' });
+  await expect(table.getByRole('row').filter({ hasText: 'Main hall centre wall' })).toBeVisible();
+  await page.screenshot({ path: testInfo.outputPath('restock.png'), fullPage: true });
+});

@@ -1,9 +1,9 @@
-import clsx from 'clsx';
 import { Plus } from 'lucide-react';
 import { useMemo, useState } from 'react';
-import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
+import { SectionTabs } from '@/components/ui/section-tabs';
 import { paths } from '@/config/paths';
 import { CreateCabinetModelDialog } from '@/features/catalogue/components/cabinet-model-form-dialog';
 import { CabinetModelsTable } from '@/features/catalogue/components/cabinet-models-table';
@@ -57,27 +57,14 @@ export function Component() {
           ) : null
         }
       />
-      <nav aria-label="Catalogue sections" className="-mt-2 mb-5 flex gap-1 border-b border-stone-200">
-        {(
-          [
-            ['models', 'Cabinet models'],
-            ['controllers', 'Controllers'],
-          ] as const
-        ).map(([key, label]) => (
-          <Link
-            key={key}
-            to={paths.catalogue.getHref(key === 'models' ? undefined : key)}
-            replace
-            aria-current={tab === key ? 'page' : undefined}
-            className={clsx(
-              '-mb-px flex min-h-touch items-center border-b-2 px-3.5 text-base font-medium md:min-h-10',
-              tab === key ? 'border-amber-500 text-ink-950' : 'border-transparent text-stone-600 hover:border-stone-300 hover:text-ink-900',
-            )}
-          >
-            {label}
-          </Link>
-        ))}
-      </nav>
+      <SectionTabs
+        label="Catalogue sections"
+        current={tab}
+        tabs={[
+          { key: 'models', label: 'Cabinet models', to: paths.catalogue.getHref() },
+          { key: 'controllers', label: 'Controllers', to: paths.catalogue.getHref('controllers') },
+        ]}
+      />
       {tab === 'models' ? <CabinetModelsTable canEdit={canEdit} /> : <ControllersTable canEdit={canEdit} wallOptions={wallOptions} />}
       {canEdit && tab === 'models' ? <CreateCabinetModelDialog open={adding} onClose={() => setAdding(false)} /> : null}
       {canEdit && tab === 'controllers' ? (

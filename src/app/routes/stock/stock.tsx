@@ -1,10 +1,14 @@
 import type { StockBalance, StockLocation, StockMovementInput } from '@shared/schemas/stock';
 import { useQuery } from '@tanstack/react-query';
-import { Plus } from 'lucide-react';
+import { Plus, Undo2 } from 'lucide-react';
 import { useMemo, useState } from 'react';
-import type { LoaderFunctionArgs } from 'react-router-dom';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
+import { SectionTabs } from '@/components/ui/section-tabs';
+import { paths } from '@/config/paths';
+import { RestockTable } from '@/features/stock/components/restock-table';
+import { OpenReturnDialog, VendorReturnsTable } from '@/features/stock/components/vendor-returns';
 import { Card } from '@/components/ui/card';
 import { FilterSelect } from '@/components/ui/filters';
 import { MovementDialog } from '@/features/stock/components/movement-dialog';
@@ -17,6 +21,8 @@ import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { stockQueries, type StockFilters } from '@/resources/stock';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
+
+const tabs = ['on-hand', 'returns', 'restock'] as const;
 
 function filtersFrom(params: URLSearchParams): StockFilters {
   const kind = params.get('partKind');
@@ -52,6 +58,9 @@ export function Component() {
     [locations.data],
   );
   const vans = (locations.data?.items ?? []).filter((l) => l.kind === 'van' && l.holder?.id === user.id);
+  const [params] = useSearchParams();
+  const tab = tabs.find((t) => t === params.get('tab')) ?? 'on-hand';
+  const [returning, setReturning] = useState(false);
   const moveFrom = (row: StockBalance) =>
     setMoving({ kind: office ? 'transfer' : 'consumption', partId: row.partId, batch: row.batch, fromLocationId: row.locationId });
 
@@ -65,11 +74,28 @@ export function Component() {
             : 'What you carry, and what is on the shelf.'
         }
         actions={
-          <Button variant="primary" icon={<Plus className="h-4 w-4" aria-hidden="true" />} onClick={() => setMoving({})}>
-            {office ? 'Record a movement' : 'Take or use stock'}
-          </Button>
+          tab === 'returns' && office ? (
+            <Button variant="primary" icon={<Undo2 className="h-4 w-4" aria-hidden="true" />} onClick={() => setReturning(true)}>
+              Send a part to its maker
+            </Button>
+          ) : (
+            <Button variant="primary" icon={<Plus className="h-4 w-4" aria-hidden="true" />} onClick={() => setMoving({})}>
+              {office ? 'Record a movement' : 'Take or use stock'}
+            </Button>
+          )
         }
       />
+      {office ? (
+        <SectionTabs
+          label="Stock sections"
+          current={tab}
+          tabs={[
+            { key: 'on-hand', label: 'On hand', to: paths.stock.getHref() },
+            { key: 'returns', label: 'Vendor returns', to: paths.stock.getHref({ tab: 'returns' }) },
+            { key: 'restock', label: 'Restock list', to: paths.stock.getHref({ tab: 'restock' }) },
+          ]}
+        />
+      ) : null}
       {!office ? (
         <div className="mb-6 space-y-4">
           {vans.length ? (
@@ -83,9 +109,14 @@ export function Component() {
           )}
           <OtherLocation locations={(locations.data?.items ?? []).filter((l) => !vans.includes(l))} onMove={moveFrom} />
         </div>
+      ) : tab === 'returns' ? (
+        <VendorReturnsTable canEdit />
+      ) : tab === 'restock' ? (
+        <RestockTable />
       ) : (
         <StockTable filters={filters} onFiltersChange={setFilters} locationOptions={locationOptions} onMove={moveFrom} />
       )}
+      {office ? <OpenReturnDialog open={returning} onClose={() => setReturning(false)} /> : null}
       <MovementDialog
         open={moving !== null}
         onClose={() => setMoving(null)}

@@ -3,3 +3,5 @@ import { useWrite } from '@/lib/mutation';
 import { stockKeys, stockRequests } from '@/resources/stock';
 
 export const useRecordMovement = () => useWrite(stockRequests.move, [stockKeys.all]);
+export const useOpenReturn = () => useWrite(stockRequests.openReturn, [stockKeys.all]);
+export const useUpdateReturn = () => useWrite(stockRequests.updateReturn, [stockKeys.all]);
