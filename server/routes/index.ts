@@ -1,4 +1,12 @@
-import { partsRouter, stockLocationsRouter, stockMovementsRouter, stockRouter, vendorReturnsRouter, wallSparesRouter } from './stock.js';
+import {
+  partsRouter,
+  reorderPointsRouter,
+  stockLocationsRouter,
+  stockMovementsRouter,
+  stockRouter,
+  vendorReturnsRouter,
+  wallSparesRouter,
+} from './stock.js';
 import type { Router } from 'express';
 import { attachmentsRouter, wallDocumentsRouter } from './attachments.js';
 import { authRouter } from './auth.js';
@@ -50,4 +58,5 @@ export function apiRoutes(api: Router) {
   api.use('/parts', partsRouter);
   api.use('/stock-locations', stockLocationsRouter);
   api.use('/vendor-returns', vendorReturnsRouter);
+  api.use('/reorder-points', reorderPointsRouter);
 }

@@ -7,7 +7,12 @@ import {
   listStockMovementsQuery,
   listStockQuery,
   listVendorReturnsQuery,
+  partInput,
+  partPatch,
+  reorderPointInput,
   restockQuery,
+  stockLocationInput,
+  stockLocationPatch,
   stockMovementInput,
   vendorReturnInput,
   vendorReturnPatch,
@@ -69,8 +74,61 @@ partsRouter.get(
   }),
 );
 
+const office = requireRole(...officeRoles);
+partsRouter.get(
+  '/:id',
+  validated({ params: idParams }, async ({ params }, _req, res) => {
+    res.json(await stock.getPart(params.id));
+  }),
+);
+partsRouter.post(
+  '/',
+  office,
+  validated({ body: partInput }, async ({ body }, req, res) => {
+    res.status(201).json(await stock.createPart(actorOf(req), body));
+  }),
+);
+partsRouter.patch(
+  '/:id',
+  office,
+  validated({ params: idParams, body: partPatch }, async ({ params, body }, req, res) => {
+    res.json(await stock.updatePart(actorOf(req), params.id, body));
+  }),
+);
+
+/** Reorder points per part and location (the office's). */
+export const reorderPointsRouter = Router();
+reorderPointsRouter.use(office);
+reorderPointsRouter.put(
+  '/',
+  validated({ body: reorderPointInput }, async ({ body }, req, res) => {
+    res.json(await stock.setReorderPoint(actorOf(req), body));
+  }),
+);
+reorderPointsRouter.delete(
+  '/',
+  validated({ query: z.object({ partId: z.uuid(), locationId: z.uuid() }) }, async ({ query }, req, res) => {
+    await stock.removeReorderPoint(actorOf(req), query.partId, query.locationId);
+    res.status(204).end();
+  }),
+);
+
 export const stockLocationsRouter = Router();
 stockLocationsRouter.use(requireAuth);
+stockLocationsRouter.post(
+  '/',
+  office,
+  validated({ body: stockLocationInput }, async ({ body }, req, res) => {
+    res.status(201).json(await stock.createStockLocation(actorOf(req), body));
+  }),
+);
+stockLocationsRouter.patch(
+  '/:id',
+  office,
+  validated({ params: idParams, body: stockLocationPatch }, async ({ params, body }, req, res) => {
+    res.json(await stock.updateStockLocation(actorOf(req), params.id, body));
+  }),
+);
 stockLocationsRouter.get(
   '/',
   validated({ query: listStockLocationsQuery }, async ({ query }, req, res) => {
@@ -99,14 +157,14 @@ vendorReturnsRouter.get(
 );
 vendorReturnsRouter.post(
   '/',
-  requireRole(...officeRoles),
+  office,
   validated({ body: vendorReturnInput }, async ({ body }, req, res) => {
     res.status(201).json(await returns.openVendorReturn(actorOf(req), body));
   }),
 );
 vendorReturnsRouter.patch(
   '/:id',
-  requireRole(...officeRoles),
+  office,
   validated({ params: idParams, body: vendorReturnPatch }, async ({ params, body }, req, res) => {
     res.json(await returns.updateVendorReturn(actorOf(req), params.id, body));
   }),

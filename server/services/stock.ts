@@ -30,6 +30,9 @@ import { cabinets, walls } from '../db/schema/walls.js';
 import { AppError, conflict, forbidden } from '../errors.js';
 import { queueMail } from '../integrations/mail.js';
 import type { Actor } from '../middleware/auth.js';
+import type { z } from 'zod';
+import type { partInput, partPatch, reorderPointInput, stockLocationInput, stockLocationPatch } from '../../shared/schemas/stock.js';
+import { recordAudit } from './audit.js';
 import { likePattern } from './clients.js';
 import { decodeCursor, encodeCursor } from './pagination.js';
 import { found } from './scope.js';
@@ -84,31 +87,35 @@ export async function listParts(query: ListPartsQuery): Promise<Page<Part>> {
   };
 }
 
-export async function listStockLocations(actor: Actor, query: ListStockLocationsQuery): Promise<{ items: StockLocation[] }> {
+async function locationRows(where: SQL | undefined): Promise<StockLocation[]> {
   const rows = await db()
     .select({ location: stockLocations, holderName: users.name, siteName: sites.name, clientName: clients.name })
     .from(stockLocations)
     .leftJoin(users, eq(users.id, stockLocations.holderId))
     .leftJoin(sites, eq(sites.id, stockLocations.siteId))
     .leftJoin(clients, eq(clients.id, stockLocations.clientId))
-    .where(
+    .where(where)
+    .orderBy(asc(stockLocations.kind), asc(stockLocations.name));
+  return rows.map((r): StockLocation => ({
+    id: r.location.id,
+    name: r.location.name,
+    kind: r.location.kind,
+    holder: r.location.holderId ? { id: r.location.holderId, name: r.holderName ?? '' } : null,
+    site: r.location.siteId ? { id: r.location.siteId, name: r.siteName ?? '', clientName: r.clientName ?? '' } : null,
+    archived: r.location.archivedAt !== null,
+  }));
+}
+
+export async function listStockLocations(actor: Actor, query: ListStockLocationsQuery): Promise<{ items: StockLocation[] }> {
+  return {
+    items: await locationRows(
       and(
         locationScope(actor),
         isNull(stockLocations.archivedAt),
         query.kind ? eq(stockLocations.kind, query.kind) : undefined,
         query.siteId ? eq(stockLocations.siteId, query.siteId) : undefined,
       ),
-    )
-    .orderBy(asc(stockLocations.kind), asc(stockLocations.name));
-  return {
-    items: rows.map((r): StockLocation => ({
-      id: r.location.id,
-      name: r.location.name,
-      kind: r.location.kind,
-      holder: r.location.holderId ? { id: r.location.holderId, name: r.holderName ?? '' } : null,
-      site: r.location.siteId ? { id: r.location.siteId, name: r.siteName ?? '', clientName: r.clientName ?? '' } : null,
-      archived: r.location.archivedAt !== null,
-    })),
+    ),
   };
 }
 
@@ -505,4 +512,116 @@ export async function lowStock(): Promise<{ items: (StockBalance & { reorderQuan
       reorderQuantity: r.reorderQuantity,
     })),
   };
+}
+
+// ---- the office's records: parts, locations, reorder points ----
+
+export async function getPart(id: string): Promise<Part> {
+  const [row] = await db()
+    .select({ part: parts, modelName: cabinetModels.name })
+    .from(parts)
+    .leftJoin(cabinetModels, eq(cabinetModels.id, parts.cabinetModelId))
+    .where(eq(parts.id, id));
+  const r = found(row, 'Part');
+  return presentPart(r.part, r.modelName);
+}
+
+export async function createPart(actor: Actor, input: z.output<typeof partInput>): Promise<Part> {
+  const id = await db().transaction(async (tx) => {
+    const [row] = await tx
+      .insert(parts)
+      .values({
+        sku: input.sku,
+        name: input.name,
+        kind: input.kind,
+        cabinetModelId: input.cabinetModelId ?? null,
+        leadTimeDays: input.leadTimeDays,
+      })
+      .returning();
+    await recordAudit(tx, { actor, entity: 'part', entityId: row.id, action: 'created', after: row });
+    return row.id;
+  });
+  return getPart(id);
+}
+
+export async function updatePart(actor: Actor, id: string, patch: z.output<typeof partPatch>): Promise<Part> {
+  await db().transaction(async (tx) => {
+    const [before] = await tx.select().from(parts).where(eq(parts.id, id)).for('update');
+    found(before, 'Part');
+    const { archived, ...fields } = patch;
+    const [after] = await tx
+      .update(parts)
+      .set({
+        ...fields,
+        ...(archived === undefined ? {} : { archivedAt: archived ? (before.archivedAt ?? new Date()) : null }),
+        updatedAt: new Date(),
+      })
+      .where(eq(parts.id, id))
+      .returning();
+    await recordAudit(tx, { actor, entity: 'part', entityId: id, action: archived ? 'archived' : 'updated', before, after });
+  });
+  return getPart(id);
+}
+
+async function getLocation(id: string): Promise<StockLocation> {
+  const [location] = await locationRows(eq(stockLocations.id, id));
+  return found(location, 'Stock location');
+}
+
+export async function createStockLocation(actor: Actor, input: z.output<typeof stockLocationInput>): Promise<StockLocation> {
+  const id = await db().transaction(async (tx) => {
+    let clientId: string | null = null;
+    if (input.siteId) {
+      const [site] = await tx.select({ clientId: sites.clientId }).from(sites).where(eq(sites.id, input.siteId));
+      clientId = found(site, 'Site').clientId;
+    }
+    const [row] = await tx
+      .insert(stockLocations)
+      .values({ name: input.name, kind: input.kind, holderId: input.holderId ?? null, siteId: input.siteId ?? null, clientId })
+      .returning();
+    await recordAudit(tx, { actor, entity: 'stock_location', entityId: row.id, action: 'created', after: row });
+    return row.id;
+  });
+  return getLocation(id);
+}
+
+export async function updateStockLocation(actor: Actor, id: string, patch: z.output<typeof stockLocationPatch>): Promise<StockLocation> {
+  await db().transaction(async (tx) => {
+    const [before] = await tx.select().from(stockLocations).where(eq(stockLocations.id, id)).for('update');
+    found(before, 'Stock location');
+    const { archived, ...fields } = patch;
+    const [after] = await tx
+      .update(stockLocations)
+      .set({
+        ...fields,
+        ...(archived === undefined ? {} : { archivedAt: archived ? (before.archivedAt ?? new Date()) : null }),
+        updatedAt: new Date(),
+      })
+      .where(eq(stockLocations.id, id))
+      .returning();
+    await recordAudit(tx, { actor, entity: 'stock_location', entityId: id, action: archived ? 'archived' : 'updated', before, after });
+  });
+  return getLocation(id);
+}
+
+/** Sets a part's reorder point at a location; the alert re-arms so the new mark is watched from now on. */
+export async function setReorderPoint(actor: Actor, input: z.output<typeof reorderPointInput>) {
+  await db().transaction(async (tx) => {
+    await tx
+      .insert(reorderPoints)
+      .values({ ...input, alertedAt: null })
+      .onConflictDoUpdate({
+        target: [reorderPoints.partId, reorderPoints.locationId],
+        set: { minQuantity: input.minQuantity, reorderQuantity: input.reorderQuantity, alertedAt: null },
+      });
+    await recordAudit(tx, { actor, entity: 'reorder_point', entityId: input.partId, action: 'updated', after: input });
+  });
+  return { ...input };
+}
+
+export async function removeReorderPoint(actor: Actor, partId: string, locationId: string) {
+  await db().transaction(async (tx) => {
+    await tx.delete(reorderPoints).where(and(eq(reorderPoints.partId, partId), eq(reorderPoints.locationId, locationId)));
+    await recordAudit(tx, { actor, entity: 'reorder_point', entityId: partId, action: 'deleted', before: { partId, locationId } });
+  });
 }

@@ -266,3 +266,54 @@ export interface RestockLine {
   onHand: number;
   toSend: number;
 }
+
+// ---- parts, locations and reorder points (the office's) ----
+
+export const partInput = z.object({
+  sku: z
+    .string()
+    .trim()
+    .min(1, 'Required.')
+    .max(40, 'At most 40 characters.')
+    .transform((s) => s.toUpperCase()),
+  name: z.string().trim().min(1, 'Required.').max(120, 'At most 120 characters.'),
+  kind: z.enum(partKinds, { error: 'Choose what kind of part it is.' }),
+  /** The cabinet model a module, power supply or card fits; none for generic parts. */
+  cabinetModelId: z.uuid().nullable().optional(),
+  leadTimeDays: z.number({ error: 'Lead time must be a number.' }).int('Whole days.').min(0).max(3650).default(30),
+});
+export type PartInput = z.input<typeof partInput>;
+export const partPatch = partInput.partial().extend({ archived: z.boolean().optional() });
+export type PartPatch = z.input<typeof partPatch>;
+
+export const stockLocationInput = z
+  .object({
+    name: z.string().trim().min(1, 'Required.').max(120, 'At most 120 characters.'),
+    kind: z.enum(stockLocationKinds, { error: 'Choose a kind of location.' }),
+    /** The technician who holds a van. */
+    holderId: z.uuid().nullable().optional(),
+    /** The site of an on-site kit. */
+    siteId: z.uuid().nullable().optional(),
+  })
+  .superRefine((l, ctx) => {
+    if (l.kind === 'van' && !l.holderId) ctx.addIssue({ code: 'custom', path: ['holderId'], message: 'A van is held by a technician.' });
+    if (l.kind === 'site_kit' && !l.siteId) ctx.addIssue({ code: 'custom', path: ['siteId'], message: 'A site kit is kept at a site.' });
+    if (l.kind !== 'site_kit' && l.siteId)
+      ctx.addIssue({ code: 'custom', path: ['siteId'], message: 'Only a site kit is kept at a site.' });
+  });
+export type StockLocationInput = z.input<typeof stockLocationInput>;
+export const stockLocationPatch = z.object({
+  name: z.string().trim().min(1, 'Required.').max(120).optional(),
+  holderId: z.uuid().nullable().optional(),
+  archived: z.boolean().optional(),
+});
+export type StockLocationPatch = z.input<typeof stockLocationPatch>;
+
+export const reorderPointInput = z.object({
+  partId: z.uuid('Choose a part.'),
+  locationId: z.uuid('Choose a location.'),
+  /** Alert when the part on hand here (all batches) falls to or below this. */
+  minQuantity: z.number({ error: 'Must be a number.' }).int('Whole units.').min(0, 'Cannot be negative.').max(100_000),
+  reorderQuantity: z.number({ error: 'Must be a number.' }).int('Whole units.').min(1, 'At least one.').max(100_000),
+});
+export type ReorderPointInput = z.input<typeof reorderPointInput>;

@@ -111,7 +111,9 @@ test('a technician on a phone sees their van and records a spare used', async ({
   await expect(jumper.locator('p[aria-label$="on hand"]')).toHaveText(String(count - 1));
 });
 
-test('the office sends a failed part to its maker and takes it back into stock; the restock list says what each site kit needs', async ({ page }, testInfo) => {
+test('the office sends a failed part to its maker and takes it back into stock; the restock list says what each site kit needs', async ({
+  page,
+}, testInfo) => {
   test.setTimeout(90_000);
   await page.setViewportSize({ width: 1366, height: 900 });
   await signIn(page, 'office@gridkeep.test');

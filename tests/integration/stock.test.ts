@@ -323,3 +323,47 @@ describe('reorder points', () => {
     expect(await mails()).toHaveLength(2);
   });
 });
+
+describe('parts, locations and reorder points', () => {
+  it('lets the office add and archive a part, a van and a site kit, and set a reorder point; a technician may not', async () => {
+    const sku = `fan-${stamp()}`;
+    const created = await office.post('/api/parts', { sku, name: 'Cabinet fan 60 mm', kind: 'fan', leadTimeDays: 14 });
+    expect(created.status, JSON.stringify(created.body)).toBe(201);
+    expect(created.body).toMatchObject({ sku: sku.toUpperCase(), kind: 'fan', leadTimeDays: 14, archived: false });
+    expect((await office.post('/api/parts', { sku, name: 'Again', kind: 'fan' })).body.error.code).toBe('sku_taken');
+    expect((await tech.post('/api/parts', { sku: `x-${stamp()}`, name: 'No', kind: 'fan' })).status).toBe(403);
+
+    const van = await office.post('/api/stock-locations', { name: `Van ${stamp()}`, kind: 'van', holderId: otherTech.user.id });
+    expect(van.status).toBe(201);
+    expect(van.body).toMatchObject({ kind: 'van', holder: { id: otherTech.user.id } });
+    const noHolder = await office.post('/api/stock-locations', { name: `Van ${stamp()}`, kind: 'van' });
+    expect(noHolder.body.error.fields).toEqual({ holderId: 'A van is held by a technician.' });
+    const { site } = await createOrganisation();
+    const kit = await office.post('/api/stock-locations', { name: `Kit ${stamp()}`, kind: 'site_kit', siteId: site.id });
+    expect(kit.body).toMatchObject({ kind: 'site_kit', site: { id: site.id } });
+
+    const point = await office.put('/api/reorder-points', {
+      partId: created.body.id,
+      locationId: van.body.id,
+      minQuantity: 1,
+      reorderQuantity: 4,
+    });
+    expect(point.status).toBe(200);
+    const [stored] = await db()
+      .select()
+      .from(reorderPoints)
+      .where(and(eq(reorderPoints.partId, created.body.id), eq(reorderPoints.locationId, van.body.id)));
+    expect(stored).toMatchObject({ minQuantity: 1, reorderQuantity: 4 });
+    expect(
+      (await tech.put('/api/reorder-points', { partId: created.body.id, locationId: van.body.id, minQuantity: 1, reorderQuantity: 4 }))
+        .status,
+    ).toBe(403);
+
+    const archived = await office.patch(`/api/parts/${created.body.id}`, { archived: true });
+    expect(archived.body.archived).toBe(true);
+    const listed = await office.get(`/api/parts?q=${encodeURIComponent('Cabinet fan 60 mm')}`);
+    expect(listed.body.items.map((p: { id: string }) => p.id)).not.toContain(created.body.id);
+    const gone = await office.patch(`/api/stock-locations/${kit.body.id}`, { archived: true });
+    expect(gone.body.archived).toBe(true);
+  });
+});
