@@ -16,6 +16,11 @@ import type {
   VendorReturnInput,
   VendorReturnPatch,
   WallSpare,
+  PartInput,
+  PartPatch,
+  ReorderPointInput,
+  StockLocationInput,
+  StockLocationPatch,
 } from '@shared/schemas/stock';
 import { api } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';
@@ -97,6 +102,12 @@ export const returnQueries = {
 };
 
 export const stockRequests = {
+  createPart: (input: PartInput) => api.post<Part>('/api/parts', input),
+  updatePart: ({ id, ...input }: PartPatch & { id: string }) => api.patch<Part>(`/api/parts/${encodeURIComponent(id)}`, input),
+  createLocation: (input: StockLocationInput) => api.post<StockLocation>('/api/stock-locations', input),
+  updateLocation: ({ id, ...input }: StockLocationPatch & { id: string }) =>
+    api.patch<StockLocation>(`/api/stock-locations/${encodeURIComponent(id)}`, input),
+  setReorderPoint: (input: ReorderPointInput) => api.put<ReorderPointInput>('/api/reorder-points', input),
   openReturn: (input: VendorReturnInput) => api.post<VendorReturn>('/api/vendor-returns', input),
   updateReturn: ({ id, ...input }: VendorReturnPatch & { id: string }) =>
     api.patch<VendorReturn>(`/api/vendor-returns/${encodeURIComponent(id)}`, input),

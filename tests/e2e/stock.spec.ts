@@ -147,3 +147,31 @@ test('the office sends a failed part to its maker and takes it back into stock; 
   await expect(table.getByRole('row').filter({ hasText: 'Main hall centre wall' })).toBeVisible();
   await page.screenshot({ path: testInfo.outputPath('restock.png'), fullPage: true });
 });
+
+test('the office adds a part and sets a reorder point', async ({ page }) => {
+  test.setTimeout(90_000);
+  await page.setViewportSize({ width: 1366, height: 900 });
+  await signIn(page, 'office@gridkeep.test');
+  const name = `Test receiving card ${Date.now().toString(36)}`;
+  await page.goto('/stock?tab=parts');
+  await page.getByRole('button', { name: 'Add a part' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Add a part' });
+  await dialog.getByLabel('Name').fill(name);
+  await dialog.getByLabel('SKU').fill(`rxc-${Date.now().toString(36)}`);
+  await dialog.getByLabel('Kind').selectOption({ label: 'Receiving card' });
+  await dialog.getByRole('button', { name: 'Add part' }).click();
+  await expect(dialog).toBeHidden();
+  await expect(page.getByRole('row').filter({ hasText: name })).toBeVisible();
+
+  await page.getByRole('link', { name: 'On hand' }).click();
+  const row = page.getByRole('row').filter({ hasText: fan }).filter({ hasText: warehouse });
+  await row.getByRole('button', { name: /Reorder point of/ }).click();
+  const point = page.getByRole('dialog', { name: 'Reorder point' });
+  await point.getByLabel('Alert at or below').fill('2');
+  await point.getByLabel('Reorder', { exact: true }).fill('10');
+  await point.getByRole('button', { name: 'Save' }).click();
+  await expect(point).toBeHidden();
+  // What the server keeps: the fan's reorder point at the warehouse is 2.
+  const answer = (await (await page.request.get('/api/stock?limit=500')).json()) as { items: (Balance & { reorderAt: number | null })[] };
+  expect(answer.items.find((b) => b.partName === fan && b.locationName === warehouse)?.reorderAt).toBe(2);
+});

@@ -8,6 +8,13 @@ import { PageHeader } from '@/components/ui/page-header';
 import { SectionTabs } from '@/components/ui/section-tabs';
 import { paths } from '@/config/paths';
 import { RestockTable } from '@/features/stock/components/restock-table';
+import {
+  AddLocationDialog,
+  AddPartDialog,
+  LocationsTable,
+  PartsTable,
+  ReorderPointDialog,
+} from '@/features/stock/components/stock-records';
 import { OpenReturnDialog, VendorReturnsTable } from '@/features/stock/components/vendor-returns';
 import { Card } from '@/components/ui/card';
 import { FilterSelect } from '@/components/ui/filters';
@@ -22,7 +29,7 @@ import { useDocumentTitle } from '@/lib/use-document-title';
 import { stockQueries, type StockFilters } from '@/resources/stock';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
-const tabs = ['on-hand', 'returns', 'restock'] as const;
+const tabs = ['on-hand', 'returns', 'restock', 'parts', 'locations'] as const;
 
 function filtersFrom(params: URLSearchParams): StockFilters {
   const kind = params.get('partKind');
@@ -61,6 +68,8 @@ export function Component() {
   const [params] = useSearchParams();
   const tab = tabs.find((t) => t === params.get('tab')) ?? 'on-hand';
   const [returning, setReturning] = useState(false);
+  const [adding, setAdding] = useState(false);
+  const [reorderOf, setReorderOf] = useState<StockBalance | null>(null);
   const moveFrom = (row: StockBalance) =>
     setMoving({ kind: office ? 'transfer' : 'consumption', partId: row.partId, batch: row.batch, fromLocationId: row.locationId });
 
@@ -78,6 +87,10 @@ export function Component() {
             <Button variant="primary" icon={<Undo2 className="h-4 w-4" aria-hidden="true" />} onClick={() => setReturning(true)}>
               Send a part to its maker
             </Button>
+          ) : (tab === 'parts' || tab === 'locations') && office ? (
+            <Button variant="primary" icon={<Plus className="h-4 w-4" aria-hidden="true" />} onClick={() => setAdding(true)}>
+              {tab === 'parts' ? 'Add a part' : 'Add a location'}
+            </Button>
           ) : (
             <Button variant="primary" icon={<Plus className="h-4 w-4" aria-hidden="true" />} onClick={() => setMoving({})}>
               {office ? 'Record a movement' : 'Take or use stock'}
@@ -93,6 +106,8 @@ export function Component() {
             { key: 'on-hand', label: 'On hand', to: paths.stock.getHref() },
             { key: 'returns', label: 'Vendor returns', to: paths.stock.getHref({ tab: 'returns' }) },
             { key: 'restock', label: 'Restock list', to: paths.stock.getHref({ tab: 'restock' }) },
+            { key: 'parts', label: 'Parts', to: paths.stock.getHref({ tab: 'parts' }) },
+            { key: 'locations', label: 'Locations', to: paths.stock.getHref({ tab: 'locations' }) },
           ]}
         />
       ) : null}
@@ -113,10 +128,27 @@ export function Component() {
         <VendorReturnsTable canEdit />
       ) : tab === 'restock' ? (
         <RestockTable />
+      ) : tab === 'parts' ? (
+        <PartsTable />
+      ) : tab === 'locations' ? (
+        <LocationsTable />
       ) : (
-        <StockTable filters={filters} onFiltersChange={setFilters} locationOptions={locationOptions} onMove={moveFrom} />
+        <StockTable
+          filters={filters}
+          onFiltersChange={setFilters}
+          locationOptions={locationOptions}
+          onMove={moveFrom}
+          onReorderPoint={setReorderOf}
+        />
       )}
-      {office ? <OpenReturnDialog open={returning} onClose={() => setReturning(false)} /> : null}
+      {office ? (
+        <>
+          <OpenReturnDialog open={returning} onClose={() => setReturning(false)} />
+          <AddPartDialog open={adding && tab === 'parts'} onClose={() => setAdding(false)} />
+          <AddLocationDialog open={adding && tab === 'locations'} onClose={() => setAdding(false)} />
+          <ReorderPointDialog row={reorderOf} onClose={() => setReorderOf(null)} />
+        </>
+      ) : null}
       <MovementDialog
         open={moving !== null}
         onClose={() => setMoving(null)}

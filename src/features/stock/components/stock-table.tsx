@@ -31,10 +31,12 @@ interface StockTableProps {
   locationOptions: SelectOption[];
   /** Offers a movement from a row (the office, or a technician for their own van). */
   onMove?: (row: StockBalance) => void;
+  /** Offers the row's reorder point (the office). */
+  onReorderPoint?: (row: StockBalance) => void;
 }
 
 /** On hand per part, batch and location: the ledger's sums, a reorder point marked when reached. */
-export function StockTable({ filters, onFiltersChange, locationOptions, onMove }: StockTableProps) {
+export function StockTable({ filters, onFiltersChange, locationOptions, onMove, onReorderPoint }: StockTableProps) {
   const query = useInfiniteQuery({ ...stockQueries.balances(filters), placeholderData: keepPreviousData });
   const rows = useMemo(() => query.data?.pages.flatMap((p) => p.items) ?? [], [query.data]);
   const columns = useMemo(
@@ -80,27 +82,39 @@ export function StockTable({ filters, onFiltersChange, locationOptions, onMove }
         meta: { align: 'right', hiddenByDefault: true, csv: (r) => (r.reorderAt === null ? '' : String(r.reorderAt)) },
         cell: (c) => (c.getValue() === null ? '—' : n(c.getValue() ?? 0)),
       }),
-      ...(onMove
+      ...(onMove || onReorderPoint
         ? [
             column.display({
               id: 'actions',
               header: () => <span className="sr-only">Actions</span>,
               meta: { noCsv: true, alwaysVisible: true, align: 'right', className: 'w-px whitespace-nowrap' },
-              cell: (c) => (
-                <Button
-                  size="sm"
-                  variant="ghost"
-                  onClick={() => onMove(c.row.original)}
-                  aria-label={`Move ${c.row.original.partName} from ${c.row.original.locationName}`}
-                >
-                  Move
-                </Button>
-              ),
+              cell: (c) => {
+                const r = c.row.original;
+                return (
+                  <span className="inline-flex gap-1">
+                    {onReorderPoint ? (
+                      <Button
+                        size="sm"
+                        variant="ghost"
+                        onClick={() => onReorderPoint(r)}
+                        aria-label={`Reorder point of ${r.partName} at ${r.locationName}`}
+                      >
+                        Reorder point
+                      </Button>
+                    ) : null}
+                    {onMove ? (
+                      <Button size="sm" variant="ghost" onClick={() => onMove(r)} aria-label={`Move ${r.partName} from ${r.locationName}`}>
+                        Move
+                      </Button>
+                    ) : null}
+                  </span>
+                );
+              },
             }),
           ]
         : []),
     ],
-    [onMove],
+    [onMove, onReorderPoint],
   );
   const filtered = Boolean(filters.locationId || filters.partKind);
   return (
