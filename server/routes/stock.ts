@@ -44,6 +44,13 @@ stockRouter.get(
     res.json(await restock.restockList(query.serviceLevel));
   }),
 );
+/** Whole spare cabinets on the shelves, by model, batch and location. */
+stockRouter.get(
+  '/spare-cabinets',
+  validated({ query: z.object({ locationId: z.uuid().optional() }) }, async ({ query }, req, res) => {
+    res.json(await stock.spareCabinets(actorOf(req), query.locationId));
+  }),
+);
 /** Reorder points at or below their mark (the office's low-stock list). */
 stockRouter.get('/low', staff, async (_req, res) => {
   res.json(await stock.lowStock());

@@ -15,6 +15,7 @@ import type {
   StockBalance,
   StockLocation,
   StockMovement,
+  SpareCabinetGroup,
   StockMovementRequest,
   WallSpare,
 } from '../../shared/schemas/stock.js';
@@ -624,4 +625,37 @@ export async function removeReorderPoint(actor: Actor, partId: string, locationI
     await tx.delete(reorderPoints).where(and(eq(reorderPoints.partId, partId), eq(reorderPoints.locationId, locationId)));
     await recordAudit(tx, { actor, entity: 'reorder_point', entityId: partId, action: 'deleted', before: { partId, locationId } });
   });
+}
+
+/**
+ * Whole spare cabinets on the shelves (status `spare`, kept at a location), counted by model,
+ * batch and location beside the parts; client users see those in their own site kits.
+ */
+export async function spareCabinets(actor: Actor, locationId?: string): Promise<{ items: SpareCabinetGroup[] }> {
+  const rows = await db()
+    .select({
+      modelId: cabinetModels.id,
+      modelName: cabinetModels.name,
+      batch: cabinets.batch,
+      locationId: stockLocations.id,
+      locationName: stockLocations.name,
+      locationKind: stockLocations.kind,
+      count: sql<number>`count(*)::int`,
+      serials: sql<string[]>`array_agg(${cabinets.serial} order by ${cabinets.serial})`,
+    })
+    .from(cabinets)
+    .innerJoin(cabinetModels, eq(cabinetModels.id, cabinets.cabinetModelId))
+    .innerJoin(stockLocations, eq(stockLocations.id, cabinets.stockLocationId))
+    .where(and(eq(cabinets.status, 'spare'), locationScope(actor), locationId ? eq(cabinets.stockLocationId, locationId) : undefined))
+    .groupBy(cabinetModels.id, cabinetModels.name, cabinets.batch, stockLocations.id, stockLocations.name, stockLocations.kind)
+    .orderBy(asc(cabinetModels.name), asc(cabinets.batch), asc(stockLocations.name));
+  return {
+    items: rows.map((r) => ({
+      cabinetModel: { id: r.modelId, name: r.modelName },
+      batch: r.batch,
+      location: { id: r.locationId, name: r.locationName, kind: r.locationKind },
+      count: r.count,
+      serials: r.serials,
+    })),
+  };
 }

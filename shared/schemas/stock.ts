@@ -317,3 +317,12 @@ export const reorderPointInput = z.object({
   reorderQuantity: z.number({ error: 'Must be a number.' }).int('Whole units.').min(1, 'At least one.').max(100_000),
 });
 export type ReorderPointInput = z.input<typeof reorderPointInput>;
+
+/** Whole spare cabinets kept at a location (cabinets with status `spare`), by model and batch. */
+export interface SpareCabinetGroup {
+  cabinetModel: { id: string; name: string };
+  batch: string;
+  location: { id: string; name: string; kind: StockLocationKind };
+  count: number;
+  serials: string[];
+}

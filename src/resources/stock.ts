@@ -21,6 +21,7 @@ import type {
   ReorderPointInput,
   StockLocationInput,
   StockLocationPatch,
+  SpareCabinetGroup,
 } from '@shared/schemas/stock';
 import { api } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';
@@ -40,6 +41,7 @@ export const stockKeys = {
   wallSpares: (wallId: string, locationId?: string) => [...stockKeys.all, 'wall-spares', wallId, locationId ?? 'all'] as const,
   vendorReturns: (filters: { overdue?: boolean }) => [...stockKeys.all, 'vendor-returns', filters] as const,
   restock: (serviceLevel: number) => [...stockKeys.all, 'restock', serviceLevel] as const,
+  spareCabinets: (locationId?: string) => [...stockKeys.all, 'spare-cabinets', locationId ?? 'all'] as const,
 };
 
 export const stockQueries = {
@@ -72,6 +74,12 @@ export const stockQueries = {
       queryKey: stockKeys.locations(),
       queryFn: ({ signal }) => api.get<{ items: StockLocation[] }>('/api/stock-locations', { signal }),
       staleTime: 5 * 60_000,
+    }),
+  /** Whole spare cabinets on the shelves, by model, batch and location. */
+  spareCabinets: (locationId?: string) =>
+    queryOptions({
+      queryKey: stockKeys.spareCabinets(locationId),
+      queryFn: ({ signal }) => api.get<{ items: SpareCabinetGroup[] }>('/api/stock/spare-cabinets', { query: { locationId }, signal }),
     }),
   /** Spares of a wall's model, the wall's own batches first. */
   wallSpares: (wallId: string, locationId?: string) =>

@@ -367,3 +367,31 @@ describe('parts, locations and reorder points', () => {
     expect(gone.body.archived).toBe(true);
   });
 });
+
+describe('spare cabinets in the stock views', () => {
+  it('counts whole spare cabinets by model, batch and location; a client user sees those in their own site kit only', async () => {
+    const own = await createOrganisation({ withWall: true });
+    const kit = await createLocation({ kind: 'site_kit', siteId: own.site.id, clientId: own.client.id });
+    const modelId = own.wall!.cabinetModelId;
+    const serials = [`SP-${stamp()}`, `SP-${stamp()}`, `SP-${stamp()}`];
+    await db()
+      .insert(cabinets)
+      .values([
+        { serial: serials[0], cabinetModelId: modelId, status: 'spare', stockLocationId: kit.id, batch: 'K1' },
+        { serial: serials[1], cabinetModelId: modelId, status: 'spare', stockLocationId: kit.id, batch: 'K1' },
+        { serial: serials[2], cabinetModelId: modelId, status: 'spare', stockLocationId: warehouseId, batch: 'K1' },
+      ]);
+    const all = await office.get('/api/stock/spare-cabinets');
+    const mine = all.body.items.filter((g: { cabinetModel: { id: string } }) => g.cabinetModel.id === modelId);
+    expect(mine.map((g: { location: { id: string }; count: number; batch: string }) => [g.location.id, g.count, g.batch]).sort()).toEqual(
+      [
+        [kit.id, 2, 'K1'],
+        [warehouseId, 1, 'K1'],
+      ].sort(),
+    );
+    const clientUser = await signedIn('client', own.client.id);
+    const seen = await clientUser.get('/api/stock/spare-cabinets');
+    expect(seen.body.items.map((g: { location: { id: string } }) => g.location.id)).toEqual([kit.id]);
+    expect(seen.body.items[0].serials.sort()).toEqual(serials.slice(0, 2).sort());
+  });
+});

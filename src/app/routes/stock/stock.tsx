@@ -8,6 +8,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { SectionTabs } from '@/components/ui/section-tabs';
 import { paths } from '@/config/paths';
 import { RestockTable } from '@/features/stock/components/restock-table';
+import { SpareCabinets } from '@/features/stock/components/spare-cabinets';
 import {
   AddLocationDialog,
   AddPartDialog,
@@ -116,6 +117,7 @@ export function Component() {
           {vans.length ? (
             vans.map((van) => (
               <Card key={van.id} title={van.name}>
+                <SpareCabinets locationId={van.id} />
                 <LocationStockCards location={van} onMove={moveFrom} />
               </Card>
             ))
