@@ -60,6 +60,7 @@ describe('a client user and another organisation’s records', () => {
     ['cabinet', () => `/api/cabinets/${theirCabinet.id}`],
     ['cabinet by serial', () => `/api/cabinets/by-serial/${theirCabinet.serial}`],
     ['controller', () => `/api/controllers/${theirController.id}`],
+    ['wall’s spares', () => `/api/walls/${theirs.wall!.id}/spares`],
   ])('reading their %s by id is 404', async (_what, path) => {
     const res = await me.get(path());
     expect(res.status).toBe(404);
