@@ -30,8 +30,9 @@ export const paths = {
   /** Spare stock: on hand per location (a technician's van first on their phone). */
   stock: {
     path: '/stock',
-    /** `tab`: on hand (default), vendor returns, the restock list, parts or locations. */
-    getHref: (filters: { locationId?: string; tab?: 'returns' | 'restock' | 'parts' | 'locations' } = {}) => withParams('/stock', filters),
+    /** `tab`: on hand (default), the ledger (of a part with `partId`), vendor returns, the restock list, parts or locations. */
+    getHref: (filters: { locationId?: string; partId?: string; tab?: 'ledger' | 'returns' | 'restock' | 'parts' | 'locations' } = {}) =>
+      withParams('/stock', filters),
   },
   search: { path: '/search', getHref: (q?: string) => withParams('/search', { q }) },
 

@@ -75,6 +75,14 @@ test('the office receives stock into the warehouse, transfers some to a van, and
   expect(await onHand(page, fan, van)).toBe(before.van + 3);
   await page.screenshot({ path: testInfo.outputPath('stock-office.png'), fullPage: true });
 
+  // The part's ledger: the receipt and the transfer, newest first.
+  await row(warehouse).getByRole('link', { name: fan }).click();
+  await expect(page).toHaveURL(/tab=ledger&partId=/);
+  const ledger = page.getByRole('table', { name: 'Stock ledger' });
+  await expect(ledger.getByRole('row').nth(1)).toContainText('Transfer between locations');
+  await expect(ledger.getByRole('row').nth(2)).toContainText('Receive from a supplier');
+  await page.getByRole('link', { name: 'On hand' }).click();
+
   // Taking more than is on hand is refused, in words.
   await page.getByRole('button', { name: 'Record a movement' }).click();
   dialog = page.getByRole('dialog', { name: 'Record a stock movement' });

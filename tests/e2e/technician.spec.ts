@@ -65,9 +65,9 @@ test('a technician on a phone sees their open tickets, and opens a cabinet by ty
   await expect(page.getByText('Isolate power before opening a cabinet; handle modules with ESD protection')).toBeVisible();
   await shot('technician-home');
 
-  // ---- the bottom navigation: five places, each at least 44 × 44 CSS px (WCAG 2.2 SC 2.5.5) ----
+  // ---- the bottom navigation: six places, each at least 44 × 44 CSS px (WCAG 2.2 SC 2.5.5) ----
   const nav = page.getByRole('navigation', { name: 'Main' });
-  await expect(nav.getByRole('link')).toHaveText(['Today', 'Tickets', 'Walls', 'Scan', 'Me']);
+  await expect(nav.getByRole('link')).toHaveText(['Today', 'Tickets', 'Walls', 'Scan', 'Van', 'Me']);
   for (const link of await nav.getByRole('link').all()) {
     const box = await link.boundingBox();
     expect(box?.height).toBeGreaterThanOrEqual(44);

@@ -7,6 +7,7 @@ import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { SectionTabs } from '@/components/ui/section-tabs';
 import { paths } from '@/config/paths';
+import { LedgerTable } from '@/features/stock/components/ledger-table';
 import { RestockTable } from '@/features/stock/components/restock-table';
 import { SpareCabinets } from '@/features/stock/components/spare-cabinets';
 import {
@@ -27,10 +28,15 @@ import { idParam, useListFilters } from '@/lib/list-filters';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
-import { stockQueries, type StockFilters } from '@/resources/stock';
+import { stockQueries, type MovementFilters, type StockFilters } from '@/resources/stock';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
-const tabs = ['on-hand', 'returns', 'restock', 'parts', 'locations'] as const;
+const tabs = ['on-hand', 'ledger', 'returns', 'restock', 'parts', 'locations'] as const;
+
+const ledgerFiltersFrom = (params: URLSearchParams): MovementFilters => ({
+  partId: idParam(params, 'partId'),
+  locationId: idParam(params, 'locationId'),
+});
 
 function filtersFrom(params: URLSearchParams): StockFilters {
   const kind = params.get('partKind');
@@ -59,6 +65,9 @@ export function Component() {
   const user = useUser();
   const office = isOffice(user);
   const [filters, setFilters] = useListFilters(filtersFrom);
+  const [ledgerFilters, setLedgerFilters] = useListFilters(ledgerFiltersFrom);
+  const parts = useQuery({ ...stockQueries.parts(), enabled: office });
+  const partOptions = useMemo(() => (parts.data?.items ?? []).map((p) => ({ value: p.id, label: `${p.name} · ${p.sku}` })), [parts.data]);
   const locations = useQuery(stockQueries.locations());
   const [moving, setMoving] = useState<Partial<StockMovementInput> | null>(null);
   const locationOptions = useMemo(
@@ -105,6 +114,7 @@ export function Component() {
           current={tab}
           tabs={[
             { key: 'on-hand', label: 'On hand', to: paths.stock.getHref() },
+            { key: 'ledger', label: 'Ledger', to: paths.stock.getHref({ tab: 'ledger' }) },
             { key: 'returns', label: 'Vendor returns', to: paths.stock.getHref({ tab: 'returns' }) },
             { key: 'restock', label: 'Restock list', to: paths.stock.getHref({ tab: 'restock' }) },
             { key: 'parts', label: 'Parts', to: paths.stock.getHref({ tab: 'parts' }) },
@@ -126,6 +136,13 @@ export function Component() {
           )}
           <OtherLocation locations={(locations.data?.items ?? []).filter((l) => !vans.includes(l))} onMove={moveFrom} />
         </div>
+      ) : tab === 'ledger' ? (
+        <LedgerTable
+          filters={ledgerFilters}
+          onFiltersChange={setLedgerFilters}
+          partOptions={partOptions}
+          locationOptions={locationOptions}
+        />
       ) : tab === 'returns' ? (
         <VendorReturnsTable canEdit />
       ) : tab === 'restock' ? (

@@ -3,6 +3,8 @@ import { keepPreviousData, useInfiniteQuery } from '@tanstack/react-query';
 import { createColumnHelper } from '@tanstack/react-table';
 import { Package } from 'lucide-react';
 import { useMemo } from 'react';
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
@@ -46,7 +48,12 @@ export function StockTable({ filters, onFiltersChange, locationOptions, onMove, 
         meta: { alwaysVisible: true, className: 'min-w-[12rem]' },
         cell: (c) => (
           <span>
-            <span className="font-medium text-ink-950">{c.getValue()}</span>
+            <Link
+              to={paths.stock.getHref({ tab: 'ledger', partId: c.row.original.partId })}
+              className="font-medium text-ink-800 hover:underline"
+            >
+              {c.getValue()}
+            </Link>
             <span className="block font-mono text-xs text-stone-600">{c.row.original.partSku}</span>
           </span>
         ),
