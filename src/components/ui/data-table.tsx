@@ -41,7 +41,7 @@ interface PagedQuery {
   error: unknown;
   refetch: () => unknown;
   hasNextPage: boolean;
-  fetchNextPage: () => unknown;
+  fetchNextPage: () => Promise<{ hasNextPage: boolean }>;
   isFetchingNextPage: boolean;
 }
 
@@ -54,6 +54,11 @@ export function pagedQueryProps(query: PagedQuery) {
     hasNextPage: query.hasNextPage,
     onLoadMore: () => void query.fetchNextPage(),
     isLoadingMore: query.isFetchingNextPage,
+    /** Loads the remaining pages (up to `maxPages` more), so an export holds the whole result. */
+    onLoadAll: async (maxPages: number) => {
+      let more = query.hasNextPage;
+      for (let i = 0; more && i < maxPages; i++) more = (await query.fetchNextPage()).hasNextPage;
+    },
   };
 }
 
@@ -93,6 +98,8 @@ export interface DataTableProps<T> {
   hasNextPage?: boolean;
   onLoadMore?: () => void;
   isLoadingMore?: boolean;
+  /** Loads the remaining pages before an export (keyset lists); without it the export holds the rows loaded. */
+  onLoadAll?: (maxPages: number) => Promise<void>;
   /** Rows that open to show more (e.g. an audit event's changes). */
   renderExpanded?: (row: T) => ReactNode;
   expandLabel?: (row: T) => string;
@@ -119,6 +126,7 @@ export function DataTable<T>({
   sorting,
   onSortingChange,
   hasNextPage = false,
+  onLoadAll,
   onLoadMore,
   isLoadingMore = false,
   renderExpanded,
@@ -157,7 +165,7 @@ export function DataTable<T>({
         <div className="flex w-full min-w-0 flex-wrap items-end gap-3 sm:w-auto sm:flex-1">{toolbar}</div>
         <div className="flex items-center gap-2">
           <ColumnChooser table={table} />
-          <CsvExportButton table={table} rows={rows} tableId={tableId} />
+          <CsvExportButton table={table} rows={rows} tableId={tableId} hasNextPage={hasNextPage} onLoadAll={onLoadAll} />
         </div>
       </div>
 

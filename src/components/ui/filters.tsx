@@ -21,19 +21,28 @@ interface FilterSearchProps {
   className?: string;
 }
 
-/** A search box for a list filter; it waits for a pause in typing before asking the server. */
+/**
+ * A search box for a list filter; it waits for a pause in typing before asking the server. Leaving
+ * the box (a click on a result, on another filter) applies what was typed at once and drops the
+ * pending wait, so no late write can follow the person to the page they clicked through to.
+ */
 export function FilterSearch({ label, value, onChange, placeholder, delayMs = 300, className }: FilterSearchProps) {
   const id = useId();
   const [text, setText] = useState(value);
   const latest = useRef(onChange);
   latest.current = onChange;
+  const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
 
   useEffect(() => setText(value), [value]);
   useEffect(() => {
     if (text === value) return;
-    const t = setTimeout(() => latest.current(text), delayMs);
-    return () => clearTimeout(t);
+    timer.current = setTimeout(() => latest.current(text), delayMs);
+    return () => clearTimeout(timer.current);
   }, [text, value, delayMs]);
+  const flush = () => {
+    clearTimeout(timer.current);
+    if (text !== value) latest.current(text);
+  };
 
   return (
     <div className={className ?? 'w-full sm:w-64'}>
@@ -47,8 +56,9 @@ export function FilterSearch({ label, value, onChange, placeholder, delayMs = 30
           placeholder={placeholder}
           onChange={(e) => setText(e.target.value)}
           onKeyDown={(e) => {
-            if (e.key === 'Enter') latest.current(text);
+            if (e.key === 'Enter') flush();
           }}
+          onBlur={flush}
           className={inputClasses(false, 'pl-9 pr-9 [&::-webkit-search-cancel-button]:hidden')}
         />
         {text ? (
