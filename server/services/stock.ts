@@ -150,7 +150,21 @@ function balancesFrom() {
  * Rows at zero show where a reorder point watches them; client users get their site kits only.
  */
 export async function listStock(actor: Actor, query: ListStockQuery): Promise<Page<StockBalance>> {
-  const cursor = decodeCursor(query.cursor, 5) as [string, string, string, string, string] | null;
+  // The sort key, most significant first; the part and location ids make every key unique.
+  const keyColumns = {
+    part: [parts.name, stockBalances.batch, stockLocations.name],
+    location: [stockLocations.name, parts.name, stockBalances.batch],
+    onHand: [stockBalances.quantity, parts.name, stockBalances.batch, stockLocations.name],
+  }[query.sort];
+  const columns = [...keyColumns, stockBalances.partId, stockBalances.locationId];
+  const cursor = decodeCursor(query.cursor, columns.length);
+  const tuple = sql.join(columns, sql`, `);
+  const after = cursor
+    ? sql`(${tuple}) ${sql.raw(query.dir === 'desc' ? '<' : '>')} (${sql.join(
+        cursor.map((v, i) => (i >= columns.length - 2 ? sql`${v}::uuid` : sql`${v}`)),
+        sql`, `,
+      )})`
+    : undefined;
   const rows = await balancesFrom()
     .where(
       and(
@@ -161,20 +175,23 @@ export async function listStock(actor: Actor, query: ListStockQuery): Promise<Pa
         query.batch ? sql`lower(${stockBalances.batch}) = lower(${query.batch})` : undefined,
         query.partKind ? eq(parts.kind, query.partKind) : undefined,
         query.locationKind ? eq(stockLocations.kind, query.locationKind) : undefined,
-        cursor
-          ? sql`(${parts.name}, ${stockBalances.batch}, ${stockLocations.name}, ${stockBalances.partId}, ${stockBalances.locationId}) > (${cursor[0]}, ${cursor[1]}, ${cursor[2]}, ${cursor[3]}::uuid, ${cursor[4]}::uuid)`
-          : undefined,
+        after,
       ),
     )
-    .orderBy(asc(parts.name), asc(stockBalances.batch), asc(stockLocations.name), asc(stockBalances.partId), asc(stockBalances.locationId))
+    .orderBy(...columns.map((c) => (query.dir === 'desc' ? desc(c) : asc(c))))
     .limit(query.limit + 1);
   const more = rows.length > query.limit;
   const items = rows.slice(0, query.limit);
   const last = items[items.length - 1];
-  return {
-    items: items.map(presentBalance),
-    nextCursor: more && last ? encodeCursor([last.partName, last.batch, last.locationName, last.partId, last.locationId]) : null,
+  const keyOf = (r: (typeof rows)[number]) => {
+    const head = {
+      part: [r.partName, r.batch, r.locationName],
+      location: [r.locationName, r.partName, r.batch],
+      onHand: [r.onHand, r.partName, r.batch, r.locationName],
+    }[query.sort];
+    return [...head, r.partId, r.locationId];
   };
+  return { items: items.map(presentBalance), nextCursor: more && last ? encodeCursor(keyOf(last)) : null };
 }
 
 function presentBalance(r: StockBalance): StockBalance {

@@ -1,7 +1,7 @@
 // The spare-stock resources: parts, stock locations, the movement ledger and the quantities on
 // hand it adds up to. Request schemas (forms and server alike), list queries and responses.
 import { z } from 'zod';
-import { optionalId, pageQuery, text } from './common.js';
+import { optionalId, pageQuery, sortDir, text } from './common.js';
 import {
   partKinds,
   stockLocationKinds,
@@ -81,6 +81,9 @@ export const listStockQuery = pageQuery.extend({
   batch: z.string().trim().max(40).optional(),
   partKind: z.enum(partKinds).optional(),
   locationKind: z.enum(stockLocationKinds).optional(),
+  /** By part (then batch and location), by location (then part and batch), or by quantity on hand. */
+  sort: z.enum(['part', 'location', 'onHand']).default('part'),
+  dir: sortDir,
 });
 export type ListStockQuery = z.infer<typeof listStockQuery>;
 

@@ -82,6 +82,15 @@ test('the office receives stock into the warehouse, transfers some to a van, and
   await expect(ledger.getByRole('row').nth(1)).toContainText('Transfer between locations');
   await expect(ledger.getByRole('row').nth(2)).toContainText('Receive from a supplier');
   await page.getByRole('link', { name: 'On hand' }).click();
+  // Sorted by the server: the most on hand first.
+  const header = page.getByRole('button', { name: 'On hand', exact: true });
+  await header.click();
+  await expect(page).toHaveURL(/sort=onHand/);
+  if (!/dir=desc/.test(page.url())) await header.click();
+  await expect(page).toHaveURL(/dir=desc/);
+  const counts = await page.getByRole('table', { name: 'Stock on hand' }).getByRole('row').locator('td:nth-child(5)').allTextContents();
+  const numbers = counts.slice(0, 10).map((t) => Number(t.replace(/\D+/g, ' ').trim().split(' ').pop()));
+  expect(numbers).toEqual([...numbers].sort((x, y) => y - x));
 
   // Taking more than is on hand is refused, in words.
   await page.getByRole('button', { name: 'Record a movement' }).click();

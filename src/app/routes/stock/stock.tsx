@@ -41,9 +41,12 @@ const ledgerFiltersFrom = (params: URLSearchParams): MovementFilters => ({
 function filtersFrom(params: URLSearchParams): StockFilters {
   const kind = params.get('partKind');
   const kinds = ['module', 'power_supply', 'receiving_card', 'cable', 'fan', 'cabinet'] as const;
+  const sort = params.get('sort');
   return {
     locationId: idParam(params, 'locationId'),
     partKind: kinds.find((k) => k === kind),
+    sort: sort === 'location' || sort === 'onHand' ? sort : undefined,
+    dir: params.get('dir') === 'desc' ? 'desc' : undefined,
   };
 }
 
@@ -64,7 +67,7 @@ export function Component() {
   useDocumentTitle('Stock');
   const user = useUser();
   const office = isOffice(user);
-  const [filters, setFilters] = useListFilters(filtersFrom);
+  const [filters, setFilters] = useListFilters(filtersFrom, { sort: 'part', dir: 'asc' });
   const [ledgerFilters, setLedgerFilters] = useListFilters(ledgerFiltersFrom);
   const parts = useQuery({ ...stockQueries.parts(), enabled: office });
   const partOptions = useMemo(() => (parts.data?.items ?? []).map((p) => ({ value: p.id, label: `${p.name} · ${p.sku}` })), [parts.data]);

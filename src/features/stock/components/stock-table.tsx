@@ -14,6 +14,7 @@ import type { SelectOption } from '@/components/ui/select-field';
 import { stockQueries, type StockFilters } from '@/resources/stock';
 
 const column = createColumnHelper<StockBalance>();
+const sortable = ['part', 'location', 'onHand'] as const;
 const n = (v: number) => v.toLocaleString('en');
 
 export const partKindLabels = {
@@ -44,7 +45,9 @@ export function StockTable({ filters, onFiltersChange, locationOptions, onMove, 
   const columns = useMemo(
     () => [
       column.accessor('partName', {
+        id: 'part',
         header: 'Part',
+        enableSorting: true,
         meta: { alwaysVisible: true, className: 'min-w-[12rem]' },
         cell: (c) => (
           <span>
@@ -64,7 +67,9 @@ export function StockTable({ filters, onFiltersChange, locationOptions, onMove, 
         cell: (c) => (c.getValue() ? <span className="font-mono text-sm">{c.getValue()}</span> : '—'),
       }),
       column.accessor('locationName', {
+        id: 'location',
         header: 'Location',
+        enableSorting: true,
         cell: (c) => (
           <span>
             {c.getValue()} <span className="text-sm text-stone-600">({locationKindLabels[c.row.original.locationKind]})</span>
@@ -73,6 +78,7 @@ export function StockTable({ filters, onFiltersChange, locationOptions, onMove, 
       }),
       column.accessor('onHand', {
         header: 'On hand',
+        enableSorting: true,
         meta: { align: 'right' },
         cell: (c) => {
           const low = c.row.original.reorderAt !== null && c.row.original.partOnHandHere <= c.row.original.reorderAt;
@@ -132,6 +138,11 @@ export function StockTable({ filters, onFiltersChange, locationOptions, onMove, 
       data={rows}
       getRowId={(b) => `${b.partId}:${b.batch}:${b.locationId}`}
       {...pagedQueryProps(query)}
+      sorting={[{ id: filters.sort ?? 'part', desc: filters.dir === 'desc' }]}
+      onSortingChange={(next) => {
+        const sort = sortable.find((s) => s === next[0]?.id);
+        if (sort) onFiltersChange({ ...filters, sort, dir: next[0].desc ? 'desc' : 'asc' });
+      }}
       toolbar={
         <>
           <FilterSelect
