@@ -179,6 +179,12 @@ test('the office adds a part and sets a reorder point', async ({ page }) => {
   await dialog.getByRole('button', { name: 'Add part' }).click();
   await expect(dialog).toBeHidden();
   await expect(page.getByRole('row').filter({ hasText: name })).toBeVisible();
+  await page.getByRole('button', { name: `Edit ${name}` }).click();
+  const edit = page.getByRole('dialog', { name: `Edit ${name}` });
+  await edit.getByLabel('Lead time (days)').fill('45');
+  await edit.getByRole('button', { name: 'Save changes' }).click();
+  await expect(edit).toBeHidden();
+  await expect(page.getByRole('row').filter({ hasText: name })).toContainText('45');
 
   await page.getByRole('link', { name: 'On hand' }).click();
   const row = page.getByRole('row').filter({ hasText: fan }).filter({ hasText: warehouse });

@@ -1,8 +1,16 @@
-import { partInput, reorderPointInput, stockLocationInput, type Part, type StockBalance, type StockLocation } from '@shared/schemas/stock';
+import {
+  partInput,
+  partPatch,
+  reorderPointInput,
+  stockLocationInput,
+  type Part,
+  type StockBalance,
+  type StockLocation,
+} from '@shared/schemas/stock';
 import { useQuery } from '@tanstack/react-query';
 import { createColumnHelper } from '@tanstack/react-table';
 import { Boxes, MapPinned } from 'lucide-react';
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { useWatch } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
@@ -29,6 +37,7 @@ export function PartsTable() {
   const parts = useQuery(stockQueries.parts());
   const archive = useUpdatePart();
   const toast = useToast();
+  const [editing, setEditing] = useState<Part | null>(null);
   const columns = useMemo(
     () => [
       partColumn.accessor('name', {
@@ -45,33 +54,85 @@ export function PartsTable() {
         header: () => <span className="sr-only">Actions</span>,
         meta: { noCsv: true, alwaysVisible: true, align: 'right' },
         cell: (c) => (
-          <Button
-            size="sm"
-            variant="ghost"
-            aria-label={`Archive ${c.row.original.name}`}
-            onClick={() =>
-              void archive.mutateAsync({ id: c.row.original.id, archived: true }).then(() => toast(`${c.row.original.name} is archived.`))
-            }
-          >
-            Archive
-          </Button>
+          <span className="inline-flex gap-1">
+            <Button size="sm" variant="ghost" aria-label={`Edit ${c.row.original.name}`} onClick={() => setEditing(c.row.original)}>
+              Edit
+            </Button>
+            <Button
+              size="sm"
+              variant="ghost"
+              aria-label={`Archive ${c.row.original.name}`}
+              onClick={() =>
+                void archive.mutateAsync({ id: c.row.original.id, archived: true }).then(() => toast(`${c.row.original.name} is archived.`))
+              }
+            >
+              Archive
+            </Button>
+          </span>
         ),
       }),
     ],
     [archive, toast],
   );
   return (
-    <DataTable
-      tableId="parts"
-      label="Parts"
-      columns={columns}
-      data={parts.data?.items ?? []}
-      getRowId={(p) => p.id}
-      isLoading={parts.isPending}
-      error={parts.error}
-      onRetry={() => void parts.refetch()}
-      empty={<EmptyState icon={Boxes} title="No parts yet" description="Add the modules, power supplies and cards you keep as spares." />}
-    />
+    <>
+      <EditPartDialog part={editing} onClose={() => setEditing(null)} />
+      <DataTable
+        tableId="parts"
+        label="Parts"
+        columns={columns}
+        data={parts.data?.items ?? []}
+        getRowId={(p) => p.id}
+        isLoading={parts.isPending}
+        error={parts.error}
+        onRetry={() => void parts.refetch()}
+        empty={<EmptyState icon={Boxes} title="No parts yet" description="Add the modules, power supplies and cards you keep as spares." />}
+      />
+    </>
+  );
+}
+
+/** A part's name, the cabinet model it fits and its restock lead time (its SKU and kind stay). */
+function EditPartDialog({ part, onClose }: { part: Part | null; onClose: () => void }) {
+  return (
+    <Dialog open={part !== null} onClose={onClose} title={part ? `Edit ${part.name}` : 'Edit'}>
+      {part ? <EditPartForm key={part.id} part={part} onDone={onClose} /> : null}
+    </Dialog>
+  );
+}
+
+function EditPartForm({ part, onDone }: { part: Part; onDone: () => void }) {
+  const update = useUpdatePart();
+  const toast = useToast();
+  const models = useQuery(cabinetModelQueries.list());
+  const form = useZodForm(partPatch, {
+    defaultValues: { name: part.name, cabinetModelId: part.cabinetModel?.id ?? null, leadTimeDays: part.leadTimeDays },
+  });
+  return (
+    <Form
+      form={form}
+      aria-label={`Edit ${part.name}`}
+      onSubmit={async (values) => {
+        const saved = await update.mutateAsync({ id: part.id, ...values });
+        toast(`${saved.name} is saved.`);
+        onDone();
+      }}
+    >
+      <FormError />
+      <TextField name="name" label="Name" autoComplete="off" />
+      <SelectField
+        name="cabinetModelId"
+        label="Fits"
+        placeholder="Any cabinet"
+        options={(models.data?.items ?? []).map((m) => ({ value: m.id, label: m.name }))}
+        registerOptions={{ setValueAs: (v: string) => v || null }}
+      />
+      <TextField name="leadTimeDays" label="Lead time (days)" type="number" inputMode="numeric" min={0} registerOptions={asNumber} />
+      <DialogActions>
+        <Button onClick={onDone}>Cancel</Button>
+        <SubmitButton>Save changes</SubmitButton>
+      </DialogActions>
+    </Form>
   );
 }
 
