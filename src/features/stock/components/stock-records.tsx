@@ -32,11 +32,25 @@ const locationColumn = createColumnHelper<StockLocation>();
 const optionalId = { setValueAs: (v: string) => v || undefined };
 const asNumber = { valueAsNumber: true };
 
+/** Archives a record of the stock (it leaves the lists; its history stays) and says so. */
+function ArchiveButton({ name, onArchive }: { name: string; onArchive: () => Promise<unknown> }) {
+  const toast = useToast();
+  return (
+    <Button
+      size="sm"
+      variant="ghost"
+      aria-label={`Archive ${name}`}
+      onClick={() => void onArchive().then(() => toast(`${name} is archived.`))}
+    >
+      Archive
+    </Button>
+  );
+}
+
 /** The parts spares are counted in: SKU, kind, the cabinet model they fit, the restock lead time. */
 export function PartsTable() {
   const parts = useQuery(stockQueries.parts());
   const archive = useUpdatePart();
-  const toast = useToast();
   const [editing, setEditing] = useState<Part | null>(null);
   const columns = useMemo(
     () => [
@@ -58,21 +72,12 @@ export function PartsTable() {
             <Button size="sm" variant="ghost" aria-label={`Edit ${c.row.original.name}`} onClick={() => setEditing(c.row.original)}>
               Edit
             </Button>
-            <Button
-              size="sm"
-              variant="ghost"
-              aria-label={`Archive ${c.row.original.name}`}
-              onClick={() =>
-                void archive.mutateAsync({ id: c.row.original.id, archived: true }).then(() => toast(`${c.row.original.name} is archived.`))
-              }
-            >
-              Archive
-            </Button>
+            <ArchiveButton name={c.row.original.name} onArchive={() => archive.mutateAsync({ id: c.row.original.id, archived: true })} />
           </span>
         ),
       }),
     ],
-    [archive, toast],
+    [archive],
   );
   return (
     <>
@@ -140,7 +145,6 @@ function EditPartForm({ part, onDone }: { part: Part; onDone: () => void }) {
 export function LocationsTable() {
   const locations = useQuery(stockQueries.locations());
   const archive = useUpdateLocation();
-  const toast = useToast();
   const columns = useMemo(
     () => [
       locationColumn.accessor('name', {
@@ -159,20 +163,11 @@ export function LocationsTable() {
         header: () => <span className="sr-only">Actions</span>,
         meta: { noCsv: true, alwaysVisible: true, align: 'right' },
         cell: (c) => (
-          <Button
-            size="sm"
-            variant="ghost"
-            aria-label={`Archive ${c.row.original.name}`}
-            onClick={() =>
-              void archive.mutateAsync({ id: c.row.original.id, archived: true }).then(() => toast(`${c.row.original.name} is archived.`))
-            }
-          >
-            Archive
-          </Button>
+          <ArchiveButton name={c.row.original.name} onArchive={() => archive.mutateAsync({ id: c.row.original.id, archived: true })} />
         ),
       }),
     ],
-    [archive, toast],
+    [archive],
   );
   return (
     <DataTable
