@@ -169,6 +169,8 @@ test.describe('signing in', () => {
   test('a session that ends while the app is open sends the person to sign-in and back', async ({ page }) => {
     await signIn(page, 'admin@gridkeep.test');
     await expect(page).toHaveURL(/\/$/);
+    // The board has every answer it asked for before the session ends.
+    await page.waitForLoadState('networkidle');
     // Another tab signs out: the cookie is gone, but this page still believes it is signed in.
     await page.context().clearCookies();
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Audit log' }).click();

@@ -6,14 +6,16 @@ import { TodayBoard } from '@/features/board/components/today-board';
 import { greeting } from '@/app/routes/app/home-section';
 import { firstName } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
+import { stockQueries } from '@/resources/stock';
 import { ticketQueries } from '@/resources/tickets';
 
-/** Warms the today board's three lists. */
+/** Warms the today board: its ticket lists, the clock counts and the low stock. */
 export async function prefetchOfficeHome() {
   await Promise.all([
     queryClient.prefetchQuery(ticketQueries.attention()),
     queryClient.prefetchQuery(ticketQueries.waiting()),
     queryClient.prefetchQuery(ticketQueries.clockCounts()),
+    queryClient.prefetchQuery(stockQueries.low()),
   ]);
 }
 
