@@ -1,7 +1,7 @@
 // The restock list: for each wall with a site kit, the spare modules of its own batches the kit
 // should hold to cover the failures of one restock lead time at the chosen service level
 // (shared/calc/spares.ts, Poisson), against what the kit holds, and how many to send.
-import { and, eq, inArray, isNull, sql } from 'drizzle-orm';
+import { and, eq, isNull, sql } from 'drizzle-orm';
 import { forecastSpares } from '../../shared/calc/spares.js';
 import { failuresPerModuleMonth, moduleMonths } from '../../shared/calc/reliability.js';
 import type { RestockLine } from '../../shared/schemas/stock.js';
@@ -77,6 +77,9 @@ export async function restockList(serviceLevel: number, now = new Date()): Promi
     .from(parts)
     .where(and(eq(parts.kind, 'module'), isNull(parts.archivedAt)));
 
+  const kitStock = await kitModulesByBatch();
+  const batchesOf = await wallBatchesByWall();
+
   const items: RestockLine[] = [];
   for (const f of facts) {
     const kit = kits.find((k) => k.siteId === f.siteId) ?? null;
@@ -88,7 +91,9 @@ export async function restockList(serviceLevel: number, now = new Date()): Promi
     const rate = exposure > 0 ? failuresPerModuleMonth(failures, exposure) : 0;
     const leadTimeMonths = (part?.leadTimeDays ?? 30) / DAYS_PER_MONTH;
     const forecast = forecastSpares({ modules: f.modules, failuresPerModuleMonth: rate, leadTimeMonths, serviceLevel });
-    const onHand = kit && part ? await kitOnHand(kit.id, part.id, f.id) : 0;
+    // Modules of the wall's own batches (any case) in its kit.
+    const onHand =
+      kit && part ? [...(batchesOf.get(f.id) ?? [])].reduce((n, batch) => n + (kitStock.get(`${kit.id}:${part.id}:${batch}`) ?? 0), 0) : 0;
     items.push({
       wallId: f.id,
       wallName: f.name,
@@ -111,14 +116,30 @@ export async function restockList(serviceLevel: number, now = new Date()): Promi
   return { items };
 }
 
-/** Modules of the wall's own batches in a kit (any case), the batches its cabinets carry. */
-async function kitOnHand(kitId: string, partId: string, wallId: string): Promise<number> {
-  const batches = await db().selectDistinct({ batch: cabinets.batch }).from(cabinets).where(eq(cabinets.wallId, wallId));
-  const lower = batches.map((b) => b.batch.toLowerCase()).filter(Boolean);
-  if (!lower.length) return 0;
-  const [row] = await db()
-    .select({ n: sql<number>`coalesce(sum(${stockBalances.quantity}), 0)::int` })
+/** The batches (lower case) of each wall's cabinets: what its spares should match. */
+async function wallBatchesByWall(): Promise<Map<string, Set<string>>> {
+  const rows = await db()
+    .selectDistinct({ wallId: cabinets.wallId, batch: sql<string>`lower(${cabinets.batch})` })
+    .from(cabinets)
+    .where(sql`${cabinets.wallId} is not null and ${cabinets.batch} <> ''`);
+  const byWall = new Map<string, Set<string>>();
+  for (const r of rows) byWall.set(r.wallId!, (byWall.get(r.wallId!) ?? new Set()).add(r.batch));
+  return byWall;
+}
+
+/** Modules on hand in every site kit, by kit, part and batch (lower case), in one query. */
+async function kitModulesByBatch(): Promise<Map<string, number>> {
+  const rows = await db()
+    .select({
+      locationId: stockBalances.locationId,
+      partId: stockBalances.partId,
+      batch: sql<string>`lower(${stockBalances.batch})`,
+      onHand: sql<number>`sum(${stockBalances.quantity})::int`,
+    })
     .from(stockBalances)
-    .where(and(eq(stockBalances.locationId, kitId), eq(stockBalances.partId, partId), inArray(sql`lower(${stockBalances.batch})`, lower)));
-  return row.n;
+    .innerJoin(stockLocations, eq(stockLocations.id, stockBalances.locationId))
+    .innerJoin(parts, eq(parts.id, stockBalances.partId))
+    .where(and(eq(stockLocations.kind, 'site_kit'), eq(parts.kind, 'module')))
+    .groupBy(stockBalances.locationId, stockBalances.partId, sql`lower(${stockBalances.batch})`);
+  return new Map(rows.map((r) => [`${r.locationId}:${r.partId}:${r.batch}`, r.onHand]));
 }

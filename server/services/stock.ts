@@ -19,6 +19,7 @@ import type {
   StockMovementRequest,
   WallSpare,
 } from '../../shared/schemas/stock.js';
+import type { AnyPgColumn } from 'drizzle-orm/pg-core';
 import { config } from '../config.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
@@ -122,6 +123,10 @@ export async function listStockLocations(actor: Actor, query: ListStockLocations
 
 // ---- quantities on hand ----
 
+/** A part on hand at a location, all batches together: what a reorder point watches. */
+const partOnHandAt = (partId: AnyPgColumn, locationId: AnyPgColumn) =>
+  sql<number>`(select coalesce(sum(b.quantity), 0)::int from stock_balances b where b.part_id = ${partId} and b.location_id = ${locationId})`;
+
 const balanceColumns = {
   partId: stockBalances.partId,
   partSku: parts.sku,
@@ -132,7 +137,7 @@ const balanceColumns = {
   locationName: stockLocations.name,
   locationKind: stockLocations.kind,
   onHand: stockBalances.quantity,
-  partOnHandHere: sql<number>`(select coalesce(sum(b.quantity), 0)::int from stock_balances b where b.part_id = ${stockBalances.partId} and b.location_id = ${stockBalances.locationId})`,
+  partOnHandHere: partOnHandAt(stockBalances.partId, stockBalances.locationId),
   reorderAt: reorderPoints.minQuantity,
 };
 
@@ -505,14 +510,12 @@ export async function lowStock(): Promise<{ items: (StockBalance & { reorderQuan
       locationKind: stockLocations.kind,
       minQuantity: reorderPoints.minQuantity,
       reorderQuantity: reorderPoints.reorderQuantity,
-      onHand: sql<number>`coalesce((select sum(b.quantity) from stock_balances b where b.part_id = ${reorderPoints.partId} and b.location_id = ${reorderPoints.locationId}), 0)::int`,
+      onHand: partOnHandAt(reorderPoints.partId, reorderPoints.locationId),
     })
     .from(reorderPoints)
     .innerJoin(parts, eq(parts.id, reorderPoints.partId))
     .innerJoin(stockLocations, eq(stockLocations.id, reorderPoints.locationId))
-    .where(
-      sql`coalesce((select sum(b.quantity) from stock_balances b where b.part_id = ${reorderPoints.partId} and b.location_id = ${reorderPoints.locationId}), 0) <= ${reorderPoints.minQuantity}`,
-    )
+    .where(sql`${partOnHandAt(reorderPoints.partId, reorderPoints.locationId)} <= ${reorderPoints.minQuantity}`)
     .orderBy(asc(parts.name), asc(stockLocations.name));
   return {
     items: rows.map((r) => ({

@@ -1,10 +1,11 @@
 import { eq } from 'drizzle-orm';
 import type { z } from 'zod';
-import { cabinetsPerRun, runLoad, validateRuns, type Run, type RunLimits } from '../../shared/calc/runs.js';
+import { cabinetsPerRun, validateRuns, type Run, type RunLimits } from '../../shared/calc/runs.js';
 import { chainLimit, supplyVoltageProblem } from '../../shared/calc/electrical.js';
 import {
   cabinetPowerOf,
   runLimitsFor,
+  storedRunsOf,
   type PlanSettings,
   type RunCabinet,
   type RunKind,
@@ -14,7 +15,7 @@ import {
 } from '../../shared/schemas/wall-plan.js';
 import { db } from '../db/client.js';
 import { cabinetModels } from '../db/schema/catalogue.js';
-import { walls, type WallRuns } from '../db/schema/walls.js';
+import { walls } from '../db/schema/walls.js';
 import { AppError, validationFailed } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
@@ -47,19 +48,6 @@ function checkedSettings(input: SaveWallPlan['settings'], cabinet: RunCabinet): 
 }
 
 const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
-
-/** Runs as stored: each with its load (pixels or watts), and the limit they were laid against. */
-function storedRuns(input: Pick<WallRunsInput, 'pattern' | 'runs'>, limits: RunLimits): WallRuns {
-  return {
-    pattern: input.pattern,
-    runs: input.runs.map((r) => ({
-      index: r.index,
-      cells: r.cells.map((c) => ({ column: c.column, row: c.row })),
-      ...runLoad(limits, r.cells.length),
-    })),
-    limit: limits.kind === 'data' ? limits.outputCapacityPixels : limits.chainCapacityW,
-  };
-}
 
 /**
  * Stores the supply and capacities a wall is planned with and its data and power runs, after
@@ -111,8 +99,8 @@ export async function saveWallPlan(actor: Actor, wallId: string, input: SaveWall
       .update(walls)
       .set({
         planSettings: settings,
-        dataRuns: dataInput ? storedRuns({ pattern: patternOf(dataInput), runs: dataInput.runs }, dataLimits) : null,
-        powerRuns: powerInput ? storedRuns({ pattern: patternOf(powerInput), runs: powerInput.runs }, powerLimits) : null,
+        dataRuns: dataInput ? storedRunsOf({ pattern: patternOf(dataInput), runs: dataInput.runs }, dataLimits) : null,
+        powerRuns: powerInput ? storedRunsOf({ pattern: patternOf(powerInput), runs: powerInput.runs }, powerLimits) : null,
       })
       .where(eq(walls.id, wallId))
       .returning();

@@ -2,7 +2,7 @@
 // with, and its data and power runs. The planner, the runs page and the server share these.
 import { z } from 'zod';
 import { branchOf, chainLimit, type CabinetPower, type Supply } from '../calc/electrical.js';
-import { runPatterns, type Run, type RunLimits, type RunProblem } from '../calc/runs.js';
+import { runLoad, runPatterns, type Run, type RunLimits, type RunProblem } from '../calc/runs.js';
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../calc/video-signal.js';
 import type { CabinetSpec } from '../calc/wall-plan.js';
 import { supplyInput } from './calc.js';
@@ -72,6 +72,22 @@ export type SaveWallPlanRequest = z.input<typeof saveWallPlanRequest>;
 /** A problem of a saved plan: which set of runs it belongs to, and what is wrong. */
 export interface WallRunProblem extends RunProblem {
   kind: RunKind;
+}
+
+/** Runs as a wall stores them: each with its load (pixels or watts), and the limit they were laid against. */
+export function storedRunsOf(
+  input: { pattern: string; runs: { index: number; cells: { column: number; row: number }[] }[] },
+  limits: RunLimits,
+): StoredWallRuns {
+  return {
+    pattern: input.pattern,
+    runs: input.runs.map((r) => ({
+      index: r.index,
+      cells: r.cells.map((c) => ({ column: c.column, row: c.row })),
+      ...runLoad(limits, r.cells.length),
+    })),
+    limit: limits.kind === 'data' ? limits.outputCapacityPixels : limits.chainCapacityW,
+  };
 }
 
 /** As stored on the wall and returned by GET /api/walls/:id. */

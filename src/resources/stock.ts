@@ -81,6 +81,12 @@ export const stockQueries = {
       queryKey: stockKeys.spareCabinets(locationId),
       queryFn: ({ signal }) => api.get<{ items: SpareCabinetGroup[] }>('/api/stock/spare-cabinets', { query: { locationId }, signal }),
     }),
+  /** Each wall's spares forecast against its site kit. */
+  restock: (serviceLevel: number) =>
+    queryOptions({
+      queryKey: stockKeys.restock(serviceLevel),
+      queryFn: ({ signal }) => api.get<{ items: RestockLine[] }>('/api/stock/restock', { query: { serviceLevel }, signal }),
+    }),
   /** Spares of a wall's model, the wall's own batches first. */
   wallSpares: (wallId: string, locationId?: string) =>
     queryOptions({
@@ -100,12 +106,6 @@ export const returnQueries = {
       queryKey: stockKeys.vendorReturns(filters),
       queryFn: ({ signal }) =>
         api.get<{ items: VendorReturn[] }>('/api/vendor-returns', { query: { overdue: filters.overdue ? 'true' : undefined }, signal }),
-    }),
-  /** Each wall's spares forecast against its site kit. */
-  restock: (serviceLevel: number) =>
-    queryOptions({
-      queryKey: stockKeys.restock(serviceLevel),
-      queryFn: ({ signal }) => api.get<{ items: RestockLine[] }>('/api/stock/restock', { query: { serviceLevel }, signal }),
     }),
 };
 

@@ -1,21 +1,16 @@
 // The as-built plan of a demo wall: its supply and its data and power runs by whole rows, laid
 // by the same shared calculations the planner uses.
-import { generateRuns, runLoad, type RunLimits } from '../../../shared/calc/runs.js';
+import { generateRuns, type RunLimits } from '../../../shared/calc/runs.js';
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../../../shared/calc/video-signal.js';
 import { DEFAULT_RUN_PATTERN } from '../../../shared/calc/wall-plan.js';
-import { runLimitsFor, safeChainCapacityW, type PlanSettings, type RunCabinet } from '../../../shared/schemas/wall-plan.js';
+import { runLimitsFor, safeChainCapacityW, storedRunsOf, type PlanSettings, type RunCabinet } from '../../../shared/schemas/wall-plan.js';
 import type { WallRuns } from '../schema/walls.js';
 import type { WallSpec } from './register.js';
 
 type Grid = Pick<WallSpec, 'columns' | 'rows'>;
 
 function storedRuns(wall: Grid, limits: RunLimits): WallRuns {
-  const runs = generateRuns(wall.columns, wall.rows, DEFAULT_RUN_PATTERN, limits);
-  return {
-    pattern: DEFAULT_RUN_PATTERN,
-    runs: runs.map((r) => ({ index: r.index, cells: r.cells, ...runLoad(limits, r.cells.length) })),
-    limit: limits.kind === 'data' ? limits.outputCapacityPixels : limits.chainCapacityW,
-  };
+  return storedRunsOf({ pattern: DEFAULT_RUN_PATTERN, runs: generateRuns(wall.columns, wall.rows, DEFAULT_RUN_PATTERN, limits) }, limits);
 }
 
 /**

@@ -6,7 +6,7 @@ import { useMemo, useState } from 'react';
 import { DataTable } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSelect } from '@/components/ui/filters';
-import { returnQueries } from '@/resources/stock';
+import { stockQueries } from '@/resources/stock';
 
 const column = createColumnHelper<RestockLine>();
 const fixed = (v: number, digits: number) => v.toLocaleString('en', { minimumFractionDigits: digits, maximumFractionDigits: digits });
@@ -18,7 +18,7 @@ const levels = ['0.9', '0.95', '0.99'] as const;
  */
 export function RestockTable() {
   const [level, setLevel] = useState<(typeof levels)[number]>('0.95');
-  const restock = useQuery(returnQueries.restock(Number(level)));
+  const restock = useQuery(stockQueries.restock(Number(level)));
   // Walls whose kit is short first; walls without a site kit after the ones with one.
   const rows = useMemo(
     () => [...(restock.data?.items ?? [])].sort((a, b) => Number(Boolean(b.kit)) - Number(Boolean(a.kit)) || b.toSend - a.toSend),
