@@ -1,11 +1,34 @@
 import { fileURLToPath, URL } from 'node:url';
 import react from '@vitejs/plugin-react';
+import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
 const apiPort = Number(process.env.API_PORT ?? 3001);
 
 export default defineConfig({
-  plugins: [react()],
+  plugins: [
+    react(),
+    // The service worker (Workbox, generated at build time) keeps the app shell on the phone, so
+    // Gridkeep opens behind a wall with no signal and the outbox can keep its repairs. It caches
+    // the built files only: /api answers are never cached (they are per person and change).
+    VitePWA({
+      strategies: 'generateSW',
+      registerType: 'autoUpdate',
+      // Registered by src/lib/service-worker.ts, in production builds only.
+      injectRegister: false,
+      manifest: false,
+      workbox: {
+        globPatterns: ['**/*.{html,js,css,woff2,svg}'],
+        navigateFallback: '/index.html',
+        navigateFallbackDenylist: [/^\/api(\/|$)/],
+        runtimeCaching: [],
+        cleanupOutdatedCaches: true,
+        clientsClaim: true,
+        skipWaiting: true,
+        sourcemap: false,
+      },
+    }),
+  ],
   resolve: {
     alias: {
       '@': fileURLToPath(new URL('./src', import.meta.url)),

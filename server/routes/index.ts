@@ -24,9 +24,11 @@ import {
   sitesRouter,
   wallsRouter,
 } from './register.js';
+import { repairsRouter } from './repairs.js';
 import { staffRouter } from './staff.js';
 import { ticketsRouter, ticketViewsRouter } from './tickets.js';
 import { auditRouter, usersRouter } from './users.js';
+import { visitsRouter } from './visits.js';
 import { wallPlanRouter } from './wall-plan.js';
 
 /** Mounts every API router under /api. Keep one line per domain. */
@@ -59,4 +61,6 @@ export function apiRoutes(api: Router) {
   api.use('/stock-locations', stockLocationsRouter);
   api.use('/vendor-returns', vendorReturnsRouter);
   api.use('/reorder-points', reorderPointsRouter);
+  api.use('/repairs', repairsRouter);
+  api.use('/visits', visitsRouter);
 }

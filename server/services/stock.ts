@@ -364,6 +364,11 @@ async function assertMayMove(tx: Tx, actor: Actor, m: StockMovementRequest) {
   );
 }
 
+/** Refuses (403) unless the actor may take something out of the location, a part or a spare cabinet: assertMayMove's rule. */
+export async function assertMayTakeFrom(tx: Tx, actor: Actor, locationId: string) {
+  await assertMayMove(tx, actor, { kind: 'consumption', partId: '', batch: '', fromLocationId: locationId, quantity: 1 });
+}
+
 /** A spare taken for a wall must be of the wall's own batch, or taken knowingly. */
 async function checkBatch(tx: Tx, m: StockMovementRequest): Promise<boolean> {
   if (!m.forWallId) return false;
@@ -462,7 +467,7 @@ export async function applyMovement(
   tx: Tx,
   actor: Actor,
   m: StockMovementRequest,
-  links: { vendorReturnId?: string } = {},
+  links: { vendorReturnId?: string; repairId?: string } = {},
 ): Promise<number> {
   await assertMayMove(tx, actor, m);
   const [part] = await tx.select({ id: parts.id }).from(parts).where(eq(parts.id, m.partId));
@@ -482,6 +487,7 @@ export async function applyMovement(
       reason: m.reason ?? '',
       wallId: m.forWallId ?? null,
       vendorReturnId: links.vendorReturnId ?? null,
+      repairId: links.repairId ?? null,
       batchMismatch,
       actorId: actor.userId,
     })
@@ -661,7 +667,9 @@ export async function spareCabinets(actor: Actor, locationId?: string): Promise<
       locationName: stockLocations.name,
       locationKind: stockLocations.kind,
       count: sql<number>`count(*)::int`,
-      serials: sql<string[]>`array_agg(${cabinets.serial} order by ${cabinets.serial})`,
+      cabinets: sql<
+        { id: string; serial: string }[]
+      >`json_agg(json_build_object('id', ${cabinets.id}, 'serial', ${cabinets.serial}) order by ${cabinets.serial})`,
     })
     .from(cabinets)
     .innerJoin(cabinetModels, eq(cabinetModels.id, cabinets.cabinetModelId))
@@ -675,7 +683,7 @@ export async function spareCabinets(actor: Actor, locationId?: string): Promise<
       batch: r.batch,
       location: { id: r.locationId, name: r.locationName, kind: r.locationKind },
       count: r.count,
-      serials: r.serials,
+      cabinets: r.cabinets,
     })),
   };
 }

@@ -1,13 +1,11 @@
 // The e-mails a ticket sends. Queued in the same transaction as the change that causes them
 // (server/integrations/mail.ts sends them); internal comments never appear in a client's mail.
-import { createEvent } from 'ics';
 import { eq } from 'drizzle-orm';
 import { statusLabels, ticketRef } from '../../shared/schemas/tickets.js';
 import { cellLabel } from '../../shared/calc/grid.js';
 import { config } from '../config.js';
 import type { DbOrTx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
-import type { MailAttachmentRef } from '../db/schema/mail.js';
 import { queueMail } from '../integrations/mail.js';
 import { updateRecipients } from './clients.js';
 
@@ -62,36 +60,8 @@ export type ClientUpdate =
   | { kind: 'acknowledged' }
   | { kind: 'resolved' }
   | { kind: 'status'; status: string }
-  | { kind: 'comment'; commentId: string; authorName: string; body: string; excludeEmail?: string }
-  | { kind: 'scheduled'; visitId: string; start: Date; end: Date; technicianNames: string[]; timeZone: string };
-
-function calendarInvite(t: TicketForMail, u: Extract<ClientUpdate, { kind: 'scheduled' }>): MailAttachmentRef {
-  const { value, error } = createEvent({
-    productId: 'gridkeep/service-visits',
-    uid: `visit-${u.visitId}@gridkeep`,
-    method: 'REQUEST',
-    title: `Service visit: ${t.wallName ?? t.siteName} (${ticketRef(t.number)})`,
-    description: `${summary(t)}\n\nTechnician(s): ${u.technicianNames.join(', ') || 'to be confirmed'}\n${ticketLink(t.id)}`,
-    location: t.siteName,
-    start: u.start.getTime(),
-    startInputType: 'utc',
-    startOutputType: 'utc',
-    end: u.end.getTime(),
-    endInputType: 'utc',
-    endOutputType: 'utc',
-    organizer: { name: 'Gridkeep service desk', email: config().OFFICE_EMAIL },
-    status: 'CONFIRMED',
-  });
-  if (error || !value) throw error ?? new Error('could not build the calendar invitation');
-  return { fileName: 'visit.ics', contentType: 'text/calendar; method=REQUEST; charset=UTF-8', content: value };
-}
-
-function formatWindow(start: Date, end: Date, timeZone: string) {
-  const day = new Intl.DateTimeFormat('en-US', { timeZone, weekday: 'long', month: 'long', day: 'numeric', year: 'numeric' }).format(start);
-  const time = (d: Date) =>
-    new Intl.DateTimeFormat('en-US', { timeZone, hour: 'numeric', minute: '2-digit', timeZoneName: 'short' }).format(d);
-  return `${day}, ${time(start)} – ${time(end)}`;
-}
+  | { kind: 'comment'; commentId: string; authorName: string; body: string; excludeEmail?: string };
+// A booked visit mails its own invitation (visit-mail.ts).
 
 /** An update for the client's people. Never called with an internal comment. */
 export async function mailClientUpdate(tx: DbOrTx, t: TicketForMail, update: ClientUpdate) {
@@ -100,19 +70,12 @@ export async function mailClientUpdate(tx: DbOrTx, t: TicketForMail, update: Cli
   const ref = ticketRef(t.number);
   let subject: string;
   let body: string;
-  let attachments: MailAttachmentRef[] | undefined;
   let dedupeKey: string;
   switch (update.kind) {
     case 'acknowledged':
       subject = `We are on it: ${ref} ${t.title}`;
       body = `We have received your ticket and are looking at it.`;
       dedupeKey = `ticket:${t.id}:acknowledged`;
-      break;
-    case 'scheduled':
-      subject = `Visit scheduled for ${ref}: ${t.title}`;
-      body = `A technician visit is planned for ${formatWindow(update.start, update.end, update.timeZone)}.\nTechnician(s): ${update.technicianNames.join(', ') || 'to be confirmed'}.\nThe invitation is attached for your calendar.`;
-      attachments = [calendarInvite(t, update)];
-      dedupeKey = `ticket:${t.id}:scheduled:${update.visitId}`;
       break;
     case 'comment':
       subject = `New reply on ${ref}: ${t.title}`;
@@ -134,7 +97,6 @@ export async function mailClientUpdate(tx: DbOrTx, t: TicketForMail, update: Cli
     to,
     subject,
     text: `${body}\n\n${summary(t)}\n\nFollow it in the portal: ${ticketLink(t.id)}\n`,
-    attachments,
     dedupeKey,
   });
 }

@@ -1,6 +1,6 @@
 import { aliasedTable, and, asc, eq, ilike, inArray, isNull, or, sql } from 'drizzle-orm';
 import type { Page } from '../../shared/schemas/common.js';
-import type { Role } from '../../shared/schemas/enums.js';
+import type { Role, TicketPriority, TicketStatus } from '../../shared/schemas/enums.js';
 import {
   allowedNextStatuses,
   openStatuses,
@@ -25,7 +25,7 @@ import { users } from '../db/schema/accounts.js';
 import { clients, servicePlans, sites } from '../db/schema/clients.js';
 import { savedViews, ticketComments, tickets } from '../db/schema/tickets.js';
 import { parts } from '../db/schema/stock.js';
-import { repairs, visits, visitTechnicians } from '../db/schema/visits.js';
+import { repairs, visits } from '../db/schema/visits.js';
 import { cabinets, walls } from '../db/schema/walls.js';
 import { badRequest, conflict, forbidden } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
@@ -35,6 +35,7 @@ import { afterCursor, decodeCursor, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 import { clockStateOf, pausedClockMs, planClock, ticketDueTimes, worstState } from './ticket-clock.js';
 import { mailClientUpdate, mailOfficeNewTicket, type TicketForMail } from './ticket-mail.js';
+import { bookVisit } from './visits.js';
 
 const assignee = aliasedTable(users, 'assignee');
 const reporter = aliasedTable(users, 'reporter');
@@ -381,6 +382,60 @@ function assertMayUpdate(role: Role, current: typeof tickets.$inferSelect, input
   }
 }
 
+type Clock = Awaited<ReturnType<typeof clockFor>>;
+
+/**
+ * The columns a move to `to` changes, by the ticket's rules: only allowed moves; leaving `new`
+ * acknowledges; waiting on the client pauses the resolution clock and leaving it resumes it.
+ */
+function statusChanges(
+  before: typeof tickets.$inferSelect,
+  to: TicketStatus,
+  clock: Clock,
+  now: Date,
+  priority?: TicketPriority,
+): Partial<typeof tickets.$inferInsert> {
+  if (!allowedNextStatuses(before.status).includes(to)) {
+    throw conflict('bad_transition', `A ${before.status.replace('_', ' ')} ticket cannot move to ${to.replace('_', ' ')}.`, {
+      status: 'Not allowed from the current status.',
+    });
+  }
+  const changes: Partial<typeof tickets.$inferInsert> = { status: to };
+  if (before.status === 'new' && !before.acknowledgedAt) changes.acknowledgedAt = now;
+  let pausedSeconds = before.pausedSeconds;
+  if (to === 'waiting_client') changes.pausedAt = now;
+  if (before.status === 'waiting_client' && before.pausedAt) {
+    pausedSeconds += Math.round(pausedClockMs(clock, before.pausedAt, now) / 1000);
+    changes.pausedAt = null;
+    changes.pausedSeconds = pausedSeconds;
+  }
+  if (to === 'resolved') changes.resolvedAt = now;
+  if (to === 'closed') changes.closedAt = now;
+  if (before.status === 'resolved' && to === 'in_progress') changes.resolvedAt = null;
+  if (changes.pausedSeconds !== undefined || priority) {
+    Object.assign(changes, ticketDueTimes(clock, priority ?? before.priority, before.createdAt, pausedSeconds * 1000));
+  }
+  return changes;
+}
+
+/**
+ * A visit moves its ticket on: booking one schedules a new or acknowledged ticket, starting one
+ * puts a scheduled or acknowledged ticket in progress. Only from the statuses given; by the
+ * ticket's rules, audited in the visit's transaction.
+ */
+export async function moveTicketForVisit(tx: Tx, actor: Actor, ticketId: string, to: TicketStatus, from: TicketStatus[]) {
+  const [before] = await tx.select().from(tickets).where(eq(tickets.id, ticketId)).for('update');
+  if (!before || before.mergedIntoId || !from.includes(before.status)) return;
+  const now = new Date();
+  const changes = statusChanges(before, to, await clockFor(tx, before.siteId), now);
+  const [after] = await tx
+    .update(tickets)
+    .set({ ...changes, updatedAt: now })
+    .where(eq(tickets.id, ticketId))
+    .returning();
+  await recordAudit(tx, { actor, entity: 'ticket', entityId: ticketId, action: 'updated', before, after });
+}
+
 export async function updateTicket(actor: Actor, id: string, input: UpdateTicketInput): Promise<TicketDetail> {
   await db().transaction(async (tx) => {
     const before = await visibleTicket(tx, actor, id, true);
@@ -393,31 +448,10 @@ export async function updateTicket(actor: Actor, id: string, input: UpdateTicket
     if (input.title !== undefined) changes.title = input.title;
     if (input.description !== undefined) changes.description = input.description;
     if (input.assigneeId !== undefined) changes.assigneeId = await assertAssignable(tx, input.assigneeId);
-    const status = input.status ?? before.status;
+    if (input.schedule && (input.status ?? before.status) !== 'scheduled')
+      throw badRequest('validation_failed', 'A visit is planned with the status “scheduled”.', { status: 'Set to scheduled.' });
     if (input.status && input.status !== before.status) {
-      if (!allowedNextStatuses(before.status).includes(input.status)) {
-        throw conflict('bad_transition', `A ${before.status.replace('_', ' ')} ticket cannot move to ${input.status.replace('_', ' ')}.`, {
-          status: 'Not allowed from the current status.',
-        });
-      }
-      changes.status = input.status;
-      if (before.status === 'new' && !before.acknowledgedAt) changes.acknowledgedAt = now;
-      // Waiting on the client pauses the resolution clock; leaving it resumes the clock.
-      let pausedSeconds = before.pausedSeconds;
-      if (input.status === 'waiting_client') changes.pausedAt = now;
-      if (before.status === 'waiting_client' && before.pausedAt) {
-        pausedSeconds += Math.round(pausedClockMs(clock, before.pausedAt, now) / 1000);
-        changes.pausedAt = null;
-        changes.pausedSeconds = pausedSeconds;
-      }
-      if (input.status === 'resolved') changes.resolvedAt = now;
-      if (input.status === 'closed') changes.closedAt = now;
-      if (before.status === 'resolved' && input.status === 'in_progress') {
-        changes.resolvedAt = null;
-      }
-      if (changes.pausedSeconds !== undefined || input.priority) {
-        Object.assign(changes, ticketDueTimes(clock, input.priority ?? before.priority, before.createdAt, pausedSeconds * 1000));
-      }
+      Object.assign(changes, statusChanges(before, input.status, clock, now, input.priority));
     }
     if (input.priority && input.priority !== before.priority) {
       changes.priority = input.priority;
@@ -426,20 +460,24 @@ export async function updateTicket(actor: Actor, id: string, input: UpdateTicket
         ticketDueTimes(clock, input.priority, before.createdAt, (changes.pausedSeconds ?? before.pausedSeconds) * 1000),
       );
     }
-    let scheduled: { visitId: string; start: Date; end: Date; technicianNames: string[] } | undefined;
-    if (input.schedule) {
-      if (status !== 'scheduled')
-        throw badRequest('validation_failed', 'A visit is planned with the status “scheduled”.', { status: 'Set to scheduled.' });
-      scheduled = await planVisit(tx, before, input.schedule);
-    }
     const [after] = await tx.update(tickets).set(changes).where(eq(tickets.id, id)).returning();
     await recordAudit(tx, { actor, entity: 'ticket', entityId: id, action: 'updated', before, after });
+    if (input.schedule) {
+      // One path for every booking: the visit, its technicians and the invitations (visits.ts).
+      await bookVisit(tx, actor, {
+        kind: 'ticket',
+        ticketId: id,
+        windowStart: input.schedule.start,
+        windowEnd: input.schedule.end,
+        technicianIds: input.schedule.technicianIds,
+        fieldPrefix: 'schedule.',
+      });
+    }
 
-    // Tell the client what they need to know.
-    if (after.status !== before.status || scheduled) {
+    // Tell the client what they need to know (a booking has its own invitation).
+    if (after.status !== before.status && !input.schedule) {
       const mail = await forMail(tx, id);
-      if (scheduled) await mailClientUpdate(tx, mail, { kind: 'scheduled', ...scheduled, timeZone: clock.timeZone });
-      else if (after.status === 'acknowledged') await mailClientUpdate(tx, mail, { kind: 'acknowledged' });
+      if (after.status === 'acknowledged') await mailClientUpdate(tx, mail, { kind: 'acknowledged' });
       else if (after.status === 'resolved') await mailClientUpdate(tx, mail, { kind: 'resolved' });
     }
   });
@@ -452,31 +490,6 @@ async function assertAssignable(tx: Tx, userId: string | null) {
   if (!u || u.role === 'client' || u.disabledAt)
     throw badRequest('validation_failed', 'Assign the ticket to an active staff member.', { assigneeId: 'Not a staff member.' });
   return userId;
-}
-
-async function planVisit(tx: Tx, t: typeof tickets.$inferSelect, schedule: NonNullable<UpdateTicketInput['schedule']>) {
-  const techs = schedule.technicianIds.length
-    ? await tx.select({ id: users.id, name: users.name, role: users.role }).from(users).where(inArray(users.id, schedule.technicianIds))
-    : [];
-  if (techs.length !== schedule.technicianIds.length || techs.some((u) => u.role !== 'technician')) {
-    throw badRequest('validation_failed', 'Choose technicians from the team.', { 'schedule.technicianIds': 'Not a technician.' });
-  }
-  const start = new Date(schedule.start);
-  const end = new Date(schedule.end);
-  const [visit] = await tx
-    .insert(visits)
-    .values({
-      clientId: t.clientId,
-      siteId: t.siteId,
-      wallId: t.wallId,
-      ticketId: t.id,
-      kind: 'ticket',
-      windowStart: start,
-      windowEnd: end,
-    })
-    .returning({ id: visits.id });
-  if (techs.length) await tx.insert(visitTechnicians).values(techs.map((u) => ({ visitId: visit.id, userId: u.id })));
-  return { visitId: visit.id, start, end, technicianNames: techs.map((u) => u.name) };
 }
 
 /** Closes a duplicate into the ticket that carries on, leaving a note on both. */

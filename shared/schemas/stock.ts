@@ -327,5 +327,6 @@ export interface SpareCabinetGroup {
   batch: string;
   location: { id: string; name: string; kind: StockLocationKind };
   count: number;
-  serials: string[];
+  /** The cabinets themselves, in serial order (a swap names the spare by its id). */
+  cabinets: { id: string; serial: string }[];
 }

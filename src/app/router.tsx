@@ -38,6 +38,12 @@ const router = createBrowserRouter([
           { path: paths.planner.path, lazy: () => import('@/app/routes/planner/planner') },
           { path: paths.stock.path, lazy: () => import('@/app/routes/stock/stock') },
           { path: paths.wallRuns.path, lazy: () => import('@/app/routes/planner/wall-runs') },
+          { path: paths.dispatch.path, lazy: () => import('@/app/routes/visits/dispatch') },
+          { path: paths.visits.path, lazy: () => import('@/app/routes/visits/list') },
+          { path: paths.closeVisit.path, lazy: () => import('@/app/routes/visits/close-visit') },
+          { path: paths.visit.path, lazy: () => import('@/app/routes/visits/visit') },
+          { path: paths.logRepair.path, lazy: () => import('@/app/routes/repairs/log-repair') },
+          { path: paths.outbox.path, lazy: () => import('@/app/routes/repairs/outbox') },
           { path: paths.scan.path, lazy: () => import('@/app/routes/scan/scan') },
           { path: paths.cabinetLabel.path, lazy: () => import('@/app/routes/register/cabinet-label') },
 

@@ -88,6 +88,32 @@ export const paths = {
   /** The runs as a sheet for the crew, outside the app's shell. */
   wallRunsPrint: { path: '/walls/:id/runs/print', getHref: (id: string) => `/walls/${encodeURIComponent(id)}/runs/print` },
 
+  /** The office's week of visits by technician (`week`: any date of it, YYYY-MM-DD; `ticketId`: plan a visit for that ticket). */
+  dispatch: {
+    path: '/dispatch',
+    getHref: (options: { week?: string; ticketId?: string } = {}) => withParams('/dispatch', options),
+  },
+  /** Visits as a list: a client's visits and reports, a technician's coming days. */
+  visits: { path: '/visits', getHref: () => '/visits' },
+  /** A visit: address, access, contacts, wall, ticket, checklist, repairs; start and close it. */
+  visit: { path: '/visits/:id', getHref: (id: string) => `/visits/${encodeURIComponent(id)}` },
+  /** Closing a visit: summary, checklist, the client's signature. */
+  closeVisit: { path: '/visits/:id/close', getHref: (id: string) => `/visits/${encodeURIComponent(id)}/close` },
+  /** Logging a repair from a visit (`visitId`) or a ticket (`ticketId`), on the wall's map. */
+  logRepair: {
+    path: '/repairs/new',
+    getHref: (from: { visitId?: string; ticketId?: string; wallId?: string; col?: number; row?: number }) =>
+      withParams('/repairs/new', {
+        visitId: from.visitId,
+        ticketId: from.ticketId,
+        wallId: from.wallId,
+        col: from.col ? String(from.col) : null,
+        row: from.row ? String(from.row) : null,
+      }),
+  },
+  /** Repairs waiting on this phone to be sent (logged without signal). */
+  outbox: { path: '/outbox', getHref: () => '/outbox' },
+
   /** Type or scan a cabinet's serial (technicians and office). */
   scan: { path: '/scan', getHref: () => '/scan' },
 

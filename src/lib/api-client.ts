@@ -37,6 +37,8 @@ interface RequestOptions {
   query?: Record<string, QueryValue>;
   body?: unknown;
   signal?: AbortSignal;
+  /** Extra request headers, e.g. an `Idempotency-Key`. */
+  headers?: Record<string, string>;
 }
 
 function isErrorBody(value: unknown): value is ApiErrorBody {
@@ -90,7 +92,7 @@ export function readResponse<T>(status: number, statusText: string, text: string
 export const networkError = () => new ApiError(0, 'network_error', 'The server could not be reached.');
 
 async function request<T>(method: string, path: string, options: RequestOptions = {}): Promise<T> {
-  const headers = requestHeaders(method);
+  const headers = { ...requestHeaders(method), ...options.headers };
   let body: BodyInit | undefined;
   if (options.body !== undefined) {
     headers['Content-Type'] = 'application/json';

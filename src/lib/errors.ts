@@ -24,6 +24,19 @@ const words: Record<string, { text: string; useServerMessage?: boolean }> = {
   payload_too_large: { text: 'That is more than can be sent at once.' },
   file_too_large: { text: 'The file is larger than the upload limit.' },
   internal_error: { text: 'Something went wrong on our side. Try again in a moment.' },
+  // Field work: the server's message names the cabinet, the position, the visit or the stock.
+  cabinet_moved: {
+    text: 'The cabinet has moved since the repair was logged. Check the wall map and log it again.',
+    useServerMessage: true,
+  },
+  not_installed: { text: 'That cabinet is not on a wall any more.', useServerMessage: true },
+  visit_closed: { text: 'That visit is already closed or cancelled.', useServerMessage: true },
+  not_on_visit: { text: 'You are not one of the technicians of that visit. Ask the office to add you.', useServerMessage: true },
+  not_a_spare: { text: 'That cabinet is not a spare in stock.', useServerMessage: true },
+  spare_not_at_hand: { text: 'That spare cabinet is not in a van or a site kit.', useServerMessage: true },
+  model_mismatch: { text: 'That spare is another cabinet model than the wall’s.', useServerMessage: true },
+  stock_not_yours: { text: 'That stock is not in your van or a site kit you are working at.', useServerMessage: true },
+  idempotency_key_reused: { text: 'This repair was already sent with other details. Discard it and log it again.' },
   network_error: { text: 'Gridkeep could not be reached. Check your connection and try again.' },
   unexpected_response: { text: 'The server answered in a way we did not expect. Try again in a moment.' },
 };

@@ -71,7 +71,7 @@ test('a client sees their walls by site with open tickets, their open tickets, a
   await testInfo.attach('client-overview', { body: await page.screenshot({ fullPage: true }), contentType: 'image/png' });
 
   // The portal offers only places that exist.
-  await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link')).toHaveText(['Overview', 'Walls', 'Tickets']);
+  await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link')).toHaveText(['Overview', 'Walls', 'Tickets', 'Visits']);
 
   await page.getByRole('link', { name: 'Report a fault' }).click();
   await expect(page).toHaveURL(/\/tickets\/new$/);
@@ -88,17 +88,18 @@ test("the office's navigation offers only screens that exist", async ({ browser 
     'Cabinets',
     'Catalogue',
     'Tickets',
+    'Dispatch',
     'Stock',
     'Planner',
   ]);
   // Each of them opens a page of its own, not "not found".
-  for (const name of ['Clients', 'Sites', 'Walls', 'Cabinets', 'Catalogue', 'Tickets', 'Stock', 'Planner']) {
+  for (const name of ['Clients', 'Sites', 'Walls', 'Cabinets', 'Catalogue', 'Tickets', 'Dispatch', 'Stock', 'Planner']) {
     await nav.getByRole('link', { name }).click();
     await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
     await expect(page.getByText('We could not find that page')).toHaveCount(0);
   }
   // Addresses of screens that are not built answer "not found".
-  for (const path of ['/schedule', '/reports', '/van', '/visits']) {
+  for (const path of ['/schedule', '/reports', '/van']) {
     await page.goto(path);
     await expect(page.getByText('We could not find that page')).toBeVisible();
   }

@@ -392,7 +392,7 @@ describe('spare cabinets in the stock views', () => {
     const clientUser = await signedIn('client', own.client.id);
     const seen = await clientUser.get('/api/stock/spare-cabinets');
     expect(seen.body.items.map((g: { location: { id: string } }) => g.location.id)).toEqual([kit.id]);
-    expect(seen.body.items[0].serials.sort()).toEqual(serials.slice(0, 2).sort());
+    expect(seen.body.items[0].cabinets.map((c: { serial: string }) => c.serial).sort()).toEqual(serials.slice(0, 2).sort());
   });
 });
 

@@ -5,6 +5,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { db } from '../../server/db/client.js';
 import { contacts } from '../../server/db/schema/clients.js';
 import { cabinets, controllers } from '../../server/db/schema/walls.js';
+import { repairs, visits } from '../../server/db/schema/visits.js';
 import { createOrganisation, signedIn, unique, type Session } from '../factories/index.js';
 
 let mine: Awaited<ReturnType<typeof createOrganisation>>;
@@ -13,6 +14,8 @@ let me: Session;
 let theirCabinet: typeof cabinets.$inferSelect;
 let theirController: typeof controllers.$inferSelect;
 let theirContact: typeof contacts.$inferSelect;
+let theirVisit: typeof visits.$inferSelect;
+let theirRepair: typeof repairs.$inferSelect;
 
 beforeAll(async () => {
   mine = await createOrganisation({ withWall: true });
@@ -47,6 +50,35 @@ beforeAll(async () => {
     .insert(contacts)
     .values({ clientId: theirs.client.id, name: 'Their contact', email: 'them@example.test' })
     .returning();
+  const start = new Date(Date.now() - 3 * 3600_000);
+  [theirVisit] = await db()
+    .insert(visits)
+    .values({
+      clientId: theirs.client.id,
+      siteId: theirs.site.id,
+      wallId: theirs.wall!.id,
+      kind: 'maintenance',
+      status: 'completed',
+      windowStart: start,
+      windowEnd: new Date(start.getTime() + 2 * 3600_000),
+      summary: 'Their visit',
+      completedAt: new Date(),
+    })
+    .returning();
+  [theirRepair] = await db()
+    .insert(repairs)
+    .values({
+      clientId: theirs.client.id,
+      wallId: theirs.wall!.id,
+      visitId: theirVisit.id,
+      cabinetId: theirCabinet.id,
+      column: 1,
+      row: 1,
+      component: 'fan',
+      fault: 'other',
+      action: 'cleaned',
+    })
+    .returning();
 });
 
 const json = { 'X-Requested-With': 'gridkeep' };
@@ -61,6 +93,9 @@ describe('a client user and another organisation’s records', () => {
     ['cabinet by serial', () => `/api/cabinets/by-serial/${theirCabinet.serial}`],
     ['controller', () => `/api/controllers/${theirController.id}`],
     ['wall’s spares', () => `/api/walls/${theirs.wall!.id}/spares`],
+    ['visit', () => `/api/visits/${theirVisit.id}`],
+    ['visit report', () => `/api/visits/${theirVisit.id}/report.pdf`],
+    ['repair’s photos', () => `/api/repairs/${theirRepair.id}/photos`],
   ])('reading their %s by id is 404', async (_what, path) => {
     const res = await me.get(path());
     expect(res.status).toBe(404);
@@ -76,6 +111,8 @@ describe('a client user and another organisation’s records', () => {
     ['change their cabinet', 'patch', () => `/api/cabinets/${theirCabinet.id}`, { status: 'retired' }],
     ['edit their controller', 'patch', () => `/api/controllers/${theirController.id}`, { firmware: 'x' }],
     ['edit their contact', 'patch', () => `/api/contacts/${theirContact.id}`, { name: 'x' }],
+    ['change their visit', 'patch', () => `/api/visits/${theirVisit.id}`, { summary: 'Mine now' }],
+    ['close their visit', 'post', () => `/api/visits/${theirVisit.id}/close`, { summary: 'x', checklist: [], unsignedReason: 'x' }],
   ] as const)('trying to %s is 404', async (_what, method, path, body) => {
     const res = await me[method](path(), typeof body === 'function' ? body() : body);
     expect(res.status).toBe(404);
@@ -97,6 +134,11 @@ describe('a client user and another organisation’s records', () => {
     ['cabinets', () => `/api/cabinets?wallId=${theirs.wall!.id}`],
     ['cabinets by serial prefix', () => `/api/cabinets?serial=${theirCabinet.serial}`],
     ['controllers', () => `/api/controllers?wallId=${theirs.wall!.id}`],
+    ['visits by site', () => `/api/visits?siteId=${theirs.site.id}`],
+    ['visits by wall', () => `/api/visits?wallId=${theirs.wall!.id}`],
+    ['repairs by wall', () => `/api/repairs?wallId=${theirs.wall!.id}`],
+    ['repairs by cabinet', () => `/api/repairs?cabinetId=${theirCabinet.id}`],
+    ['repairs by visit', () => `/api/repairs?visitId=${theirVisit.id}`],
   ])('filtering %s by their ids finds nothing', async (_what, path) => {
     const res = await me.get(path());
     expect(res.status).toBe(200);
@@ -126,6 +168,8 @@ describe('a client user and another organisation’s records', () => {
     }
     expect((await me.post('/api/contacts', { clientId: mine.client.id, name: 'x' })).status).toBe(404);
     expect((await me.post('/api/clients', { name: 'x' })).status).toBe(404);
+    expect((await me.post('/api/visits', { kind: 'maintenance', wallId: mine.wall!.id })).status).toBe(404);
+    expect((await me.post('/api/repairs', { cabinetId: theirCabinet.id })).status).toBe(404);
   });
 
   it('sees its own records without internal notes', async () => {

@@ -1,4 +1,5 @@
 import { eq, sql } from 'drizzle-orm';
+import ICAL from 'ical.js';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dueAt } from '../../shared/calc/service-clock.js';
 import { closeDb, db } from '../../server/db/client.js';
@@ -6,7 +7,7 @@ import { contacts } from '../../server/db/schema/clients.js';
 import { outboundMail } from '../../server/db/schema/mail.js';
 import { parts, stockLocations } from '../../server/db/schema/stock.js';
 import { tickets } from '../../server/db/schema/tickets.js';
-import { repairs } from '../../server/db/schema/visits.js';
+import { repairs, visits } from '../../server/db/schema/visits.js';
 import { cabinets } from '../../server/db/schema/walls.js';
 import { closeMail, processMailOnce } from '../../server/integrations/mail.js';
 import { createOrganisation, createServicePlan, createUser, signIn, signedIn, type Session } from '../factories/index.js';
@@ -384,6 +385,16 @@ describe('e-mail', () => {
     expect(ics).toMatch(/DTSTART:20261210T150000Z/);
     expect(ics).toMatch(/DTEND:20261210T170000Z/);
     expect(ics).toMatch(/METHOD:REQUEST/);
+    // The ticket's booking goes through the visit's invitation: RFC 5546 §3.2.2 one ATTENDEE per
+    // invitee (the technician and the client's people), RFC 5545 §3.8.7.4 SEQUENCE 0 at first.
+    const event = new ICAL.Component(ICAL.parse(ics)).getFirstSubcomponent('vevent')!;
+    expect(event.getFirstPropertyValue('sequence')).toBe(0);
+    const attendees = event.getAllProperties('attendee').map((p) => String(p.getFirstValue()).replace(/^mailto:/i, ''));
+    expect(attendees.sort()).toEqual([tech.user.email, ...clientPeople].sort());
+    const [visit] = await db().select().from(visits).where(eq(visits.ticketId, t.id));
+    expect(event.getFirstPropertyValue('uid')).toBe(`visit-${visit.id}@gridkeep`);
+    const techMail = mail.filter((m) => (m.mail.subject ?? '').startsWith('New visit for you'));
+    expect(techMail.map(toOf)).toEqual([[tech.user.email]]);
     const rows = await db().select().from(outboundMail).where(eq(outboundMail.status, 'sent'));
     expect(rows.length).toBeGreaterThanOrEqual(5);
   });

@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { check, foreignKey, index, integer, jsonb, pgTable, primaryKey, text, uuid } from 'drizzle-orm/pg-core';
+import { boolean, check, foreignKey, index, integer, jsonb, pgTable, primaryKey, text, uuid } from 'drizzle-orm/pg-core';
 import { at, createdAt, updatedAt } from './columns.js';
 import { removedPartFateEnum, repairActionEnum, repairComponentEnum, repairFaultEnum, visitKindEnum, visitStatusEnum } from './enums.js';
 import { clients, sites } from './clients.js';
@@ -35,8 +35,18 @@ export const visits = pgTable(
     /** Shown to the client in the visit report. */
     summary: text().notNull().default(''),
     internalNotes: text().notNull().default(''),
+    /** Bumped on each move, reassignment or cancellation the invitees hear of: the invitation's SEQUENCE (RFC 5545). */
+    sequence: integer().notNull().default(0),
+    cancelReason: text().notNull().default(''),
+    cancelledAt: at(),
     signedByName: text(),
     signedAt: at(),
+    /** The signature pad's PNG in object storage. */
+    signatureKey: text(),
+    /** Why no one signed, when no one could. */
+    unsignedReason: text(),
+    /** The visit report PDF in object storage, kept once made. */
+    reportKey: text(),
     reportSentAt: at(),
     startedAt: at(),
     completedAt: at(),
@@ -91,6 +101,10 @@ export const repairs = pgTable(
     partBatch: text(),
     fromLocationId: uuid().references(() => stockLocations.id, { onDelete: 'restrict' }),
     removedPartFate: removedPartFateEnum().notNull().default('none'),
+    /** A cabinet swap's spare cabinet that took the position. */
+    replacementCabinetId: uuid().references(() => cabinets.id, { onDelete: 'set null' }),
+    /** The spare fitted was of another batch than the wall's, and the technician accepted it. */
+    batchMismatch: boolean().notNull().default(false),
     notes: text().notNull().default(''),
     technicianId: uuid().references(() => users.id, { onDelete: 'set null' }),
     performedAt: at().notNull().defaultNow(),
@@ -106,11 +120,38 @@ export const repairs = pgTable(
     index('repairs_part_idx').on(t.partId),
     index('repairs_from_location_idx').on(t.fromLocationId),
     index('repairs_technician_idx').on(t.technicianId),
+    index('repairs_replacement_cabinet_idx').on(t.replacementCabinetId),
     check('repairs_position_positive', sql`${t.column} >= 1 and ${t.row} >= 1`),
     check(
       'repairs_module_position',
       sql`(${t.moduleColumn} is null or ${t.moduleColumn} >= 1) and (${t.moduleRow} is null or ${t.moduleRow} >= 1)`,
     ),
     check('repairs_part_with_location', sql`(${t.partId} is null) = (${t.fromLocationId} is null)`),
+  ],
+);
+
+/**
+ * A write sent with an `Idempotency-Key` header: the first request's answer, kept so the same key
+ * again returns it and writes nothing (a double tap, a retry after a lost answer, a phone's queue).
+ * The key is the sender's own, so it is unique per user.
+ */
+export const idempotentRequests = pgTable(
+  'idempotent_requests',
+  {
+    userId: uuid()
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    key: text().notNull(),
+    /** `POST /api/repairs`: a key used on one route cannot be replayed on another. */
+    route: text().notNull(),
+    /** SHA-256 of the request body: the same key with another body is refused. */
+    requestHash: text().notNull(),
+    statusCode: integer().notNull(),
+    response: jsonb().notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    primaryKey({ name: 'idempotent_requests_pk', columns: [t.userId, t.key] }),
+    index('idempotent_requests_created_idx').on(t.createdAt),
   ],
 );

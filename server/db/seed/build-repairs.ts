@@ -83,6 +83,7 @@ function logRepair(demo: Demo, sources: RepairSources, spec: RepairSpec, ctx: Re
     partBatch: part ? batch : null,
     fromLocationId: from ? ids.location[from] : null,
     removedPartFate: spec.fate ?? 'none',
+    replacementCabinetId: swap ? sources.kitSpareCabinet.id : null,
     notes: spec.notes,
     technicianId: ids.user[ctx.tech],
     performedAt: ctx.performedAt,

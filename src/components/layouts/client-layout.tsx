@@ -8,6 +8,7 @@ const items = [
   { to: paths.home.getHref(), label: 'Overview', end: true },
   { to: paths.walls.getHref(), label: 'Walls' },
   { to: paths.tickets.getHref(), label: 'Tickets' },
+  { to: paths.visits.getHref(), label: 'Visits' },
 ];
 
 /** The client portal: the organisation's name up top and a few plain sections. */

@@ -3,6 +3,7 @@ import type { LucideIcon } from 'lucide-react';
 import {
   Building2,
   Calculator,
+  CalendarRange,
   Grid3x3,
   History,
   Inbox,
@@ -38,6 +39,7 @@ const workItems: NavItem[] = [
   { to: paths.cabinets.getHref(), label: 'Cabinets', icon: Square },
   { to: paths.catalogue.getHref(), label: 'Catalogue', icon: Layers },
   { to: paths.tickets.getHref(), label: 'Tickets', icon: Ticket },
+  { to: paths.dispatch.getHref(), label: 'Dispatch', icon: CalendarRange },
   { to: paths.stock.getHref(), label: 'Stock', icon: Package },
   { to: paths.planner.getHref(), label: 'Planner', icon: Calculator },
 ];

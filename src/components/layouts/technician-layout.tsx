@@ -3,6 +3,7 @@ import type { LucideIcon } from 'lucide-react';
 import { CircleUser, Grid3x3, House, Package, ScanLine, Ticket } from 'lucide-react';
 import { NavLink } from 'react-router-dom';
 import { SkipLink, UserMenu, type ShellProps } from '@/components/layouts/user-menu';
+import { PendingRepairsBanner } from '@/components/ui/pending-repairs-banner';
 import { Logo } from '@/components/ui/logo';
 import { paths } from '@/config/paths';
 
@@ -38,6 +39,8 @@ export function TechnicianLayout({ user, onSignOut, signingOut, children }: Shel
         tabIndex={-1}
         className="mx-auto w-full max-w-3xl px-4 pb-[calc(6rem+env(safe-area-inset-bottom))] pt-5 text-md focus:outline-none"
       >
+        {/* Repairs logged without signal stay in sight on every screen until they are sent. */}
+        <PendingRepairsBanner className="mb-4" />
         {children}
       </main>
       <nav

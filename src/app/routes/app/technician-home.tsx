@@ -4,10 +4,12 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { SerialLookupForm } from '@/features/scan/components/serial-lookup-form';
 import { TicketCardList } from '@/features/tickets/components/ticket-card-list';
+import { myVisitQueries, TeamToday, TodayVisits, UpcomingVisits } from '@/features/visits/components/my-visits';
 import { ServiceCaution } from '@/features/walls/components/service-caution';
 import { greeting, HomeSection, MoreLink } from '@/app/routes/app/home-section';
 import { firstName } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
+import { useUser } from '@/lib/session';
 import { useQuery } from '@tanstack/react-query';
 import { ticketQueries, type TicketFilters } from '@/resources/tickets';
 
@@ -15,18 +17,36 @@ import { ticketQueries, type TicketFilters } from '@/resources/tickets';
 const myOpenTickets: TicketFilters = { assigneeId: 'me', open: 'true', sort: 'resolutionDueAt', dir: 'asc' };
 const myTicketsLimit = 25;
 
-/** Warms the technician's open tickets. */
+/** Warms the technician's visits and open tickets. */
 export async function prefetchTechnicianHome() {
-  await queryClient.prefetchQuery(ticketQueries.page(myOpenTickets, myTicketsLimit));
+  const visits = myVisitQueries();
+  await Promise.all([
+    queryClient.prefetchQuery(visits.today),
+    queryClient.prefetchQuery(visits.leftOpen),
+    queryClient.prefetchQuery(visits.upcoming),
+    queryClient.prefetchQuery(ticketQueries.page(myOpenTickets, myTicketsLimit)),
+  ]);
 }
 
-/** The technician's start page: their open tickets, the soonest due first, and a cabinet lookup. */
+/**
+ * The technician's start page: today's visits and the coming ones in time order, their open
+ * tickets (the soonest due first), a cabinet lookup, and who else is out today.
+ */
 export function TechnicianHome({ name }: { name: string }) {
+  const user = useUser();
   const tickets = useQuery(ticketQueries.page(myOpenTickets, myTicketsLimit));
   return (
     <>
-      <PageHeader title={`${greeting()}, ${firstName(name)}`} description="Your open tickets, the soonest due first." />
+      <PageHeader title={`${greeting()}, ${firstName(name)}`} description="Your visits, then your open tickets, the soonest due first." />
       <div className="space-y-6">
+        <HomeSection id="home-today-visits" title="Today">
+          <TodayVisits />
+        </HomeSection>
+
+        <HomeSection id="home-upcoming-visits" title="Coming up">
+          <UpcomingVisits />
+        </HomeSection>
+
         <HomeSection
           id="home-my-tickets"
           title={
@@ -67,6 +87,10 @@ export function TechnicianHome({ name }: { name: string }) {
           <Card>
             <SerialLookupForm hint="Printed on the cabinet's label, above the QR code." />
           </Card>
+        </HomeSection>
+
+        <HomeSection id="home-team-today" title="Team today">
+          <TeamToday meId={user.id} />
         </HomeSection>
 
         <ServiceCaution />

@@ -1,10 +1,10 @@
 import type { TicketDetail } from '@shared/schemas/tickets';
 import { useQuery } from '@tanstack/react-query';
-import { ArrowLeft, CircleCheck, GitMerge } from 'lucide-react';
+import { ArrowLeft, CircleCheck, GitMerge, Wrench } from 'lucide-react';
 import { useState } from 'react';
 import { data, Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
-import { Button } from '@/components/ui/button';
+import { Button, ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageSpinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
@@ -90,6 +90,18 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
               <ClockBadge state={ticket.clockState} what="Service-plan clock" className="px-2.5 py-1 text-sm" />
             ) : null}
           </span>
+        }
+        actions={
+          !forClient && !closed ? (
+            <ButtonLink
+              variant="primary"
+              size="lg"
+              to={paths.logRepair.getHref({ ticketId: ticket.id })}
+              icon={<Wrench className="h-5 w-5" aria-hidden="true" />}
+            >
+              Log a repair
+            </ButtonLink>
+          ) : null
         }
       />
 

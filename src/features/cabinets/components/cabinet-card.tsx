@@ -1,9 +1,10 @@
 import { cellLabel } from '@shared/calc/grid';
 import { cabinetPatch } from '@shared/schemas/cabinets';
-import { ArrowLeftRight, Move, Pencil, X } from 'lucide-react';
+import { ArrowLeftRight, Move, Pencil, Wrench, X } from 'lucide-react';
 import { useState, type ReactNode } from 'react';
 import { Alert } from '@/components/ui/alert';
-import { Button } from '@/components/ui/button';
+import { Button, ButtonLink } from '@/components/ui/button';
+import { paths } from '@/config/paths';
 import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField } from '@/components/ui/select-field';
@@ -118,6 +119,15 @@ export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, on
           <Button onClick={() => setEditing(true)} icon={<Pencil className="h-4 w-4" aria-hidden="true" />}>
             Status and batch
           </Button>
+          {cabinet.wall && cabinet.column && cabinet.row ? (
+            <ButtonLink
+              variant="primary"
+              to={paths.logRepair.getHref({ wallId: cabinet.wall.id, col: cabinet.column, row: cabinet.row })}
+              icon={<Wrench className="h-4 w-4" aria-hidden="true" />}
+            >
+              Log repair
+            </ButtonLink>
+          ) : null}
         </div>
       ) : null}
 

@@ -24,8 +24,8 @@ export function SpareCabinets({ locationId }: { locationId?: string }) {
               {g.batch ? <span className="font-mono text-sm text-stone-700"> · batch {g.batch}</span> : null}
               <span className="block text-sm text-stone-600">
                 {g.location.name} ·{' '}
-                {g.serials.map((serial, i) => (
-                  <span key={serial}>
+                {g.cabinets.map(({ id, serial }, i) => (
+                  <span key={id}>
                     {i ? ', ' : ''}
                     <Link to={paths.cabinetLabel.getHref(serial)} className="font-mono hover:underline">
                       {serial}

@@ -1,7 +1,9 @@
 import type { visitStatuses } from '@shared/schemas/enums';
-import { CalendarDays } from 'lucide-react';
+import { CalendarDays, ChevronRight } from 'lucide-react';
+import { Link } from 'react-router-dom';
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
+import { paths } from '@/config/paths';
 import type { TicketDetail, TicketVisit } from '@shared/schemas/tickets';
 import { formatAgo, formatDateTime } from '@/lib/format';
 import { formatSiteTime } from '@/lib/site-time';
@@ -66,11 +68,21 @@ export function TicketVisits({ visits, timeZone }: { visits: TicketVisit[]; time
     >
       <ul className="space-y-2" aria-label="Visits for this ticket">
         {visits.map((v) => (
-          <li key={v.id} className="rounded-md border border-stone-200 px-3 py-2">
-            <p className="text-sm font-medium text-ink-950">{formatSiteTime(v.windowStart, timeZone)}</p>
-            <p className="text-xs text-stone-600">
-              until {formatSiteTime(v.windowEnd, timeZone, 'HH:mm')} · {visitStatusText[v.status]}
-            </p>
+          <li key={v.id}>
+            <Link
+              to={paths.visit.getHref(v.id)}
+              className="group flex items-center gap-2 rounded-md border border-stone-200 px-3 py-2 hover:border-ink-300 hover:bg-ink-50/40"
+            >
+              <span className="min-w-0 flex-1">
+                <span className="block text-sm font-medium text-ink-950 group-hover:underline">
+                  {formatSiteTime(v.windowStart, timeZone)}
+                </span>
+                <span className="block text-xs text-stone-600">
+                  until {formatSiteTime(v.windowEnd, timeZone, 'HH:mm')} · {visitStatusText[v.status]}
+                </span>
+              </span>
+              <ChevronRight className="h-4 w-4 shrink-0 text-stone-400 group-hover:text-ink-700" aria-hidden="true" />
+            </Link>
           </li>
         ))}
       </ul>

@@ -1,0 +1,83 @@
+import type { VisitDetail } from '@shared/schemas/visits';
+import { useQuery } from '@tanstack/react-query';
+import { ArrowLeft } from 'lucide-react';
+import { data, Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Alert } from '@/components/ui/alert';
+import { PageHeader } from '@/components/ui/page-header';
+import { PageSpinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { CloseVisitForm } from '@/features/visits/components/close-visit-form';
+import { visitWindowText } from '@/features/visits/utils/visit-time';
+import { requireUser, staff } from '@/app/auth-guard';
+import { errorMessage } from '@/lib/errors';
+import { queryClient } from '@/lib/query-client';
+import { isRecordId } from '@/lib/record-id';
+import { useDocumentTitle } from '@/lib/use-document-title';
+import { visitQueries } from '@/resources/visits';
+export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
+
+export async function loader({ request, params }: LoaderFunctionArgs) {
+  await requireUser(request, staff);
+  const id = params.id ?? '';
+  if (!isRecordId(id)) throw data('Not found', { status: 404 });
+  await queryClient.ensureQueryData(visitQueries.detail(id));
+  return null;
+}
+
+export function Component() {
+  const { id = '' } = useParams();
+  const visit = useQuery(visitQueries.detail(id));
+  useDocumentTitle(visit.data ? `Close visit: ${visit.data.site.name}` : 'Close visit');
+  if (visit.isPending) return <PageSpinner label="Loading the visit" />;
+  if (visit.isError)
+    return (
+      <Alert tone="danger" title="The visit could not be loaded.">
+        {errorMessage(visit.error)}
+      </Alert>
+    );
+  return <ClosePage visit={visit.data} />;
+}
+
+/** Closing a visit on the phone: summary, checklist, the client's signature; then back to the visit. */
+function ClosePage({ visit }: { visit: VisitDetail }) {
+  const navigate = useNavigate();
+  const back = paths.visit.getHref(visit.id);
+  const open = visit.status === 'planned' || visit.status === 'in_progress';
+  const repairs = visit.repairs.length;
+  return (
+    <>
+      <PageHeader
+        eyebrow={
+          <Link to={back} className="inline-flex min-h-touch items-center gap-1 hover:underline md:min-h-0">
+            <ArrowLeft className="h-4 w-4" aria-hidden="true" /> The visit
+          </Link>
+        }
+        title="Close visit"
+        description={
+          <>
+            {visit.site.name} · {visitWindowText(visit.windowStart, visit.windowEnd, visit.site.timeZone)}
+            <span className="block">
+              {repairs === 0 ? 'No repairs logged.' : repairs === 1 ? '1 repair logged.' : `${repairs} repairs logged.`} The report lists
+              them for the client.
+            </span>
+          </>
+        }
+      />
+      {!visit.can.work ? (
+        <Alert tone="info" title="Only the visit's technicians close it.">
+          <Link to={back} className="link">
+            Back to the visit
+          </Link>
+        </Alert>
+      ) : !open ? (
+        <Alert tone="info" title={visit.status === 'completed' ? 'This visit is already closed.' : 'This visit was cancelled.'}>
+          <Link to={back} className="link">
+            Back to the visit
+          </Link>
+        </Alert>
+      ) : (
+        <CloseVisitForm visit={visit} onClosed={() => navigate(back, { state: { closed: true } })} />
+      )}
+    </>
+  );
+}

@@ -1,0 +1,228 @@
+// Visits as a list: a table for the office, cards for the client portal and for phones. Times are
+// written at the site; a completed visit links to its report.
+import { visitStatusLabels, type VisitListItem } from '@shared/schemas/visits';
+import { TZDate } from '@date-fns/tz';
+import { createColumnHelper } from '@tanstack/react-table';
+import { format, parseISO } from 'date-fns';
+import { CalendarDays, ChevronRight, FileDown, Grid3x3, MapPin, UserRound } from 'lucide-react';
+import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { DataTable } from '@/components/ui/data-table';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { VisitStatusBadge } from '@/features/visits/components/visit-status';
+import { errorMessage } from '@/lib/errors';
+import { formatSiteTime, zoneAbbreviation } from '@/lib/site-time';
+import { visitReportHref } from '@/resources/visits';
+
+/** "Thu 10 Dec, 09:00–11:00 CST" at the site. */
+export function visitWhen(v: Pick<VisitListItem, 'windowStart' | 'windowEnd' | 'site'>) {
+  const zone = v.site.timeZone;
+  const at = (iso: string, pattern: string) => format(new TZDate(parseISO(iso), zone), pattern);
+  return `${at(v.windowStart, 'EEE d MMM yyyy, HH:mm')}–${at(v.windowEnd, 'HH:mm')} ${zoneAbbreviation(parseISO(v.windowStart), zone)}`;
+}
+
+const purpose = (v: VisitListItem) => (v.ticket ? `${v.ticket.ref} · ${v.ticket.title}` : 'Planned maintenance');
+const hasReport = (v: VisitListItem) => v.status === 'completed';
+
+/** The report of a completed visit (a PDF, made on first download). */
+export function VisitReportLink({ visit }: { visit: VisitListItem }) {
+  if (!hasReport(visit)) return null;
+  return (
+    <a
+      href={visitReportHref(visit.id)}
+      target="_blank"
+      rel="noopener"
+      className="inline-flex min-h-touch items-center gap-1.5 font-medium text-ink-700 hover:underline md:min-h-0"
+      aria-label={`Report (PDF) of the visit on ${formatSiteTime(visit.windowStart, visit.site.timeZone, 'EEE d MMM yyyy')}`}
+    >
+      <FileDown className="h-4 w-4" aria-hidden="true" />
+      Report (PDF)
+    </a>
+  );
+}
+
+const column = createColumnHelper<VisitListItem>();
+const dash = <span className="text-stone-400">—</span>;
+
+const columns = [
+  column.accessor('windowStart', {
+    header: 'When (at the site)',
+    meta: { alwaysVisible: true, className: 'whitespace-nowrap', csv: (v) => visitWhen(v) },
+    cell: ({ row: { original: v } }) => (
+      <Link to={paths.visit.getHref(v.id)} className="font-medium text-ink-700 hover:underline">
+        {visitWhen(v)}
+      </Link>
+    ),
+  }),
+  column.accessor('status', {
+    header: 'Status',
+    meta: { csv: (v) => visitStatusLabels[v.status] },
+    cell: (c) => <VisitStatusBadge status={c.getValue()} />,
+  }),
+  column.accessor((v) => v.site.name, {
+    id: 'site',
+    header: 'Site',
+    meta: { className: 'min-w-[11rem]' },
+    cell: ({ row: { original: v } }) => (
+      <>
+        <span className="block text-stone-900">{v.site.name}</span>
+        <span className="block text-xs text-stone-600">{v.client.name}</span>
+      </>
+    ),
+  }),
+  column.accessor((v) => v.wall?.name ?? '', { id: 'wall', header: 'Wall', cell: (c) => c.getValue() || dash }),
+  column.accessor((v) => purpose(v), {
+    id: 'for',
+    header: 'For',
+    meta: { className: 'min-w-[12rem]' },
+    cell: ({ row: { original: v } }) =>
+      v.ticket ? (
+        <Link to={paths.ticket.getHref(v.ticket.id)} className="hover:underline">
+          <span className="font-mono text-ink-700">{v.ticket.ref}</span> {v.ticket.title}
+        </Link>
+      ) : (
+        <span className="italic text-stone-700">Planned maintenance</span>
+      ),
+  }),
+  column.accessor((v) => v.technicians.map((t) => t.name).join(', '), { id: 'technicians', header: 'Technicians' }),
+  column.display({
+    id: 'report',
+    header: 'Report',
+    meta: { noCsv: true },
+    cell: ({ row: { original: v } }) => (hasReport(v) ? <VisitReportLink visit={v} /> : dash),
+  }),
+];
+
+interface ListState {
+  items: VisitListItem[];
+  isLoading: boolean;
+  error: unknown;
+  onRetry: () => void;
+  hasNextPage: boolean;
+  onLoadMore: () => void;
+  isLoadingMore: boolean;
+  onLoadAll?: (maxPages: number) => Promise<void>;
+  empty: { title: string; description?: ReactNode };
+}
+
+/** The office's table of visits (filters in the toolbar), latest first. */
+export function VisitTable({ toolbar, ...list }: ListState & { toolbar: ReactNode }) {
+  return (
+    <DataTable
+      tableId="visits"
+      label="Visits"
+      columns={columns}
+      data={list.items}
+      getRowId={(v) => v.id}
+      isLoading={list.isLoading}
+      error={list.error}
+      onRetry={list.onRetry}
+      hasNextPage={list.hasNextPage}
+      onLoadMore={list.onLoadMore}
+      isLoadingMore={list.isLoadingMore}
+      onLoadAll={list.onLoadAll}
+      toolbar={toolbar}
+      empty={<EmptyState icon={CalendarDays} title={list.empty.title} description={list.empty.description} />}
+    />
+  );
+}
+
+/** Visits as cards: the client's visit history, or the list on a phone. `linkToVisit` opens each visit (staff). */
+export function VisitCardList({ linkToVisit, showClient, ...list }: ListState & { linkToVisit: boolean; showClient: boolean }) {
+  if (list.error && list.items.length === 0) {
+    return (
+      <Alert tone="danger" title="The visits could not be loaded.">
+        <p>{errorMessage(list.error)}</p>
+        <Button size="sm" className="mt-2" onClick={list.onRetry}>
+          Try again
+        </Button>
+      </Alert>
+    );
+  }
+  if (list.isLoading && list.items.length === 0) {
+    return (
+      <p className="flex items-center justify-center gap-2 py-12 text-stone-600">
+        <Spinner label="" /> Loading visits…
+      </p>
+    );
+  }
+  if (list.items.length === 0) {
+    return (
+      <div className="rounded-md border border-stone-200 bg-white shadow-card">
+        <EmptyState icon={CalendarDays} title={list.empty.title} description={list.empty.description} />
+      </div>
+    );
+  }
+  return (
+    <div className="space-y-3">
+      <ul aria-label="Visits" className="space-y-2">
+        {list.items.map((v) => (
+          <li key={v.id}>
+            <VisitCard visit={v} linkToVisit={linkToVisit} showClient={showClient} />
+          </li>
+        ))}
+      </ul>
+      <div className="flex flex-wrap items-center justify-between gap-3 text-sm text-stone-600">
+        <p aria-live="polite">
+          {list.items.length === 1 ? '1 visit shown' : `${list.items.length} visits shown`}
+          {list.hasNextPage ? ', more available' : ''}
+        </p>
+        {list.hasNextPage ? (
+          <Button size="sm" onClick={list.onLoadMore} loading={list.isLoadingMore}>
+            Load more
+          </Button>
+        ) : null}
+      </div>
+    </div>
+  );
+}
+
+function VisitCard({ visit: v, linkToVisit, showClient }: { visit: VisitListItem; linkToVisit: boolean; showClient: boolean }) {
+  const when = visitWhen(v);
+  return (
+    <article className="flex items-start gap-3 rounded-md border border-stone-200 bg-white p-4 shadow-card">
+      <div className="min-w-0 flex-1 space-y-2">
+        <div className="flex flex-wrap items-center gap-x-2 gap-y-1">
+          <VisitStatusBadge status={v.status} />
+          <span className="text-sm text-stone-700">
+            {v.ticket ? <span className="font-mono">{v.ticket.ref}</span> : 'Planned maintenance'}
+          </span>
+        </div>
+        <h3 className="text-md font-semibold leading-snug text-ink-950">
+          {linkToVisit ? (
+            <Link to={paths.visit.getHref(v.id)} className="hover:underline">
+              {when}
+            </Link>
+          ) : (
+            when
+          )}
+        </h3>
+        {v.ticket ? <p className="text-sm text-stone-800">{v.ticket.title}</p> : null}
+        <p className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-stone-600">
+          <span className="inline-flex items-center gap-1">
+            <MapPin className="h-3.5 w-3.5" aria-hidden="true" />
+            {showClient ? `${v.client.name} · ${v.site.name}` : v.site.name}
+          </span>
+          {v.wall ? (
+            <span className="inline-flex items-center gap-1">
+              <Grid3x3 className="h-3.5 w-3.5" aria-hidden="true" />
+              {v.wall.name}
+            </span>
+          ) : null}
+          {v.technicians.length ? (
+            <span className="inline-flex items-center gap-1">
+              <UserRound className="h-3.5 w-3.5" aria-hidden="true" />
+              {v.technicians.map((t) => t.name).join(', ')}
+            </span>
+          ) : null}
+        </p>
+        <VisitReportLink visit={v} />
+      </div>
+      {linkToVisit ? <ChevronRight className="mt-1 h-5 w-5 shrink-0 text-stone-400" aria-hidden="true" /> : null}
+    </article>
+  );
+}
