@@ -10,6 +10,7 @@ import { runMigrations } from './db/migrate.js';
 import { closeMail, startMailWorker, type MailWorker } from './integrations/mail.js';
 import { closeStorage, ensureBucket } from './integrations/s3.js';
 import { logger } from './logger.js';
+import { forgetOldKeys } from './services/idempotency.js';
 
 export interface RunningServer {
   server: Server;
@@ -48,6 +49,11 @@ export async function startServer(options: StartServerOptions = {}): Promise<Run
 
   let worker: MailWorker | undefined;
   if (cfg.MAIL_WORKER) worker = startMailWorker();
+  // Idempotency keys past any retry's reach are forgotten once an hour.
+  const housekeeping = setInterval(() => {
+    forgetOldKeys().catch((err: Error) => logger.warn('could not forget old idempotency keys', { err: err.message }));
+  }, 3600_000);
+  housekeeping.unref();
 
   let stopping: Promise<void> | undefined;
   const stop = () => {
@@ -57,6 +63,7 @@ export async function startServer(options: StartServerOptions = {}): Promise<Run
       const cut = setTimeout(() => server.closeAllConnections(), options.drainMs ?? 10_000);
       await closed;
       clearTimeout(cut);
+      clearInterval(housekeeping);
       await worker?.stop();
       closeMail();
       closeStorage();

@@ -2,7 +2,7 @@
 // Header Field"): a double tap, a retry after a lost answer or a phone's queue sending again gets
 // the first answer back and writes nothing twice.
 import { createHash } from 'node:crypto';
-import { and, eq } from 'drizzle-orm';
+import { and, eq, lt } from 'drizzle-orm';
 import { idempotencyKey } from '../../shared/schemas/repairs.js';
 import { db, type Tx } from '../db/client.js';
 import { idempotentRequests } from '../db/schema/visits.js';
@@ -89,4 +89,20 @@ export async function oncePerKey<T>(
       .where(and(eq(idempotentRequests.userId, actor.userId), eq(idempotentRequests.key, request.key)));
     return { ...answer, replayed: false };
   });
+}
+
+/**
+ * How long a key's answer is kept. Longer than a queued repair may wait (a repair done more than
+ * 30 days ago is refused), so a phone's retry always finds its first answer.
+ */
+export const KEEP_KEYS_DAYS = 35;
+
+/** Forgets the answers older than `KEEP_KEYS_DAYS`; returns how many went. Run hourly by the server. */
+export async function forgetOldKeys(now = new Date()): Promise<number> {
+  const cutoff = new Date(now.getTime() - KEEP_KEYS_DAYS * 24 * 3600_000);
+  const gone = await db()
+    .delete(idempotentRequests)
+    .where(lt(idempotentRequests.createdAt, cutoff))
+    .returning({ key: idempotentRequests.key });
+  return gone.length;
 }

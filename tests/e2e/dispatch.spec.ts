@@ -1,4 +1,5 @@
-import { expect, test, type Browser, type BrowserContext, type Page } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
+import { attachShot, csrf, escapeRegExp, phone, signIn } from './support.js';
 
 // Dispatch against the real app and its demo data: the office plans a visit for a ticket on the
 // week view, moves it (with the edit dialog, then by dragging it), sees a double booking, and
@@ -9,27 +10,11 @@ import { expect, test, type Browser, type BrowserContext, type Page } from '@pla
 // §3.8.7.4 (SEQUENCE goes up with each revision) and RFC 5546 §3.2.2 / §3.2.5 (METHOD:REQUEST
 // for a booking or a change, METHOD:CANCEL for a cancellation).
 
-const password = 'gridkeep-demo';
 const office = 'office@gridkeep.test';
 const admin = 'admin@gridkeep.test';
 const technician = { name: 'Rafael Dunmore', email: 'tech2@gridkeep.test' };
 const desktop = { viewport: { width: 1280, height: 800 } };
-const phone = { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
-const csrf = { 'X-Requested-With': 'gridkeep' };
 const moved = 'Moved. The technicians and the client’s contacts were sent an updated invitation.';
-
-async function signIn(browser: Browser, email: string, options: object = desktop): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext(options);
-  const page = await context.newPage();
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).not.toHaveURL(/\/sign-in/);
-  return { context, page };
-}
-
-const escapeRegExp = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
 /** Dates of the week `ahead` weeks from this one (Monday first) in the browser's zone, as YYYY-MM-DD, with their names. */
 function weekAhead(ahead: number) {
@@ -84,16 +69,13 @@ test('the office plans a visit for a ticket, moves it, sees a double booking and
   browser,
 }, testInfo) => {
   test.setTimeout(240_000);
-  const shot = async (page: Page, name: string) => {
-    const body = await page.screenshot({ path: `/tmp/dispatch-${name}.png` });
-    await testInfo.attach(name, { body, contentType: 'image/png' });
-  };
+  const shot = (page: Page, name: string) => attachShot(testInfo, page, name);
   const errors: string[] = [];
 
-  const desk = await signIn(browser, office);
+  const desk = await signIn(browser, office, desktop);
   const { page } = desk;
   // The development mailbox is the admin's.
-  const adminSession = await signIn(browser, admin);
+  const adminSession = await signIn(browser, admin, desktop);
   const mailbox = adminSession.page;
   page.on('pageerror', (err) => errors.push(err.message));
 
@@ -286,7 +268,7 @@ async function technicianId(page: Page, name: string) {
   return staff.items.find((s) => s.name === name)?.id;
 }
 
-test('a technician does not see dispatch; a client sees their visits with the report of a completed one', async ({ browser }) => {
+test('a technician does not see dispatch; a client sees their visits with the report of a completed one', async ({ browser }, testInfo) => {
   test.setTimeout(120_000);
   const tech = await signIn(browser, technician.email, phone);
   await tech.page.goto('/dispatch');
@@ -294,7 +276,7 @@ test('a technician does not see dispatch; a client sees their visits with the re
   await tech.context.close();
 
   // A client user whose organisation has a completed visit (the demo data has some).
-  const adminSession = await signIn(browser, admin);
+  const adminSession = await signIn(browser, admin, desktop);
   const done = (await (await adminSession.page.request.get('/api/visits?status=completed&dir=desc&limit=100')).json()) as {
     items: { id: string; client: { id: string } }[];
   };
@@ -312,7 +294,7 @@ test('a technician does not see dispatch; a client sees their visits with the re
     const report = page.getByRole('link', { name: /^Report \(PDF\) of the visit on / }).first();
     await expect(report).toBeVisible();
     await expect(page.getByText('Completed').first()).toBeVisible();
-    await page.screenshot({ path: `/tmp/dispatch-client-visits-${options === phone ? 'phone' : 'desktop'}.png`, fullPage: true });
+    await attachShot(testInfo, page, `client-visits-${options === phone ? 'phone' : 'desktop'}`, { fullPage: true });
     if (options === phone) {
       // The report is made on first download, and is a PDF (ISO 32000: a file starts with "%PDF-").
       const answer = await page.request.get((await report.getAttribute('href'))!);

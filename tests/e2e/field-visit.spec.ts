@@ -1,16 +1,12 @@
-import fs from 'node:fs';
-import { expect, test, type APIRequestContext, type Browser, type BrowserContext, type Page } from '@playwright/test';
+import { expect, test, type APIRequestContext, type Page, type TestInfo } from '@playwright/test';
+import type { WallCabinet as Cabinet } from '../../shared/schemas/walls.js';
+import { attachShot, csrf, getJson, phone, signIn, signInToApi } from './support.js';
 
 // The technician's day on a phone, against the real app with the seeded demo data: the office
 // books a visit for today on a wall whose batch of spare modules is in the technician's van; the
 // technician opens it from the start page, starts it, logs a module replaced with the van's
 // spare, ticks the checklist, and closes it with the client's signature drawn on the screen; the
 // report e-mail with its PDF reaches the development mailbox.
-
-const password = 'gridkeep-demo';
-const csrf = { 'X-Requested-With': 'gridkeep' };
-const phone = { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
-const shots = '/tmp/shots-d1';
 
 interface Spare {
   partId: string;
@@ -22,37 +18,16 @@ interface Spare {
   onHand: number;
   matchesWallBatch: boolean;
 }
-interface Cabinet {
-  id: string;
-  serial: string;
-  column: number;
-  row: number;
-  batch: string;
-  status: string;
-}
-
-async function apiSession(browser: Browser, email: string): Promise<{ context: BrowserContext; request: APIRequestContext }> {
-  const context = await browser.newContext();
-  const res = await context.request.post('/api/auth/login', { data: { email, password }, headers: csrf });
-  expect(res.status()).toBe(200);
-  return { context, request: context.request };
-}
-
-async function json<T>(request: APIRequestContext, url: string): Promise<T> {
-  const res = await request.get(url);
-  expect(res.ok(), `GET ${url}`).toBe(true);
-  return (await res.json()) as T;
-}
 
 /**
  * A demo wall with an installed cabinet whose module batch is on hand at the warehouse or in the
  * van: the module spare of that batch, the cabinet, and the wall.
  */
 async function wallWithMatchingSpare(request: APIRequestContext, vanId: string) {
-  const walls = await json<{ items: { id: string; name: string; siteName: string }[] }>(request, '/api/walls?limit=100');
+  const walls = await getJson<{ items: { id: string; name: string; siteName: string }[] }>(request, '/api/walls?limit=100');
   for (const wall of walls.items) {
-    const spares = await json<{ items: Spare[] }>(request, `/api/walls/${wall.id}/spares`);
-    const cabinets = (await json<{ items: Cabinet[] }>(request, `/api/walls/${wall.id}/cabinets`)).items.filter(
+    const spares = await getJson<{ items: Spare[] }>(request, `/api/walls/${wall.id}/spares`);
+    const cabinets = (await getJson<{ items: Cabinet[] }>(request, `/api/walls/${wall.id}/cabinets`)).items.filter(
       (c) => c.status === 'installed',
     );
     const fits = (s: Spare) => s.partKind === 'module' && s.matchesWallBatch && s.onHand > 0;
@@ -67,21 +42,10 @@ async function wallWithMatchingSpare(request: APIRequestContext, vanId: string) 
   throw new Error('The demo data has no wall with a module spare of its batch in the warehouse or the van.');
 }
 
-async function signInOnPhone(browser: Browser, email: string): Promise<Page> {
-  const context = await browser.newContext(phone);
-  const page = await context.newPage();
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/$/);
-  return page;
-}
-
 /** The screen as the phone shows it, and the whole page scrolled through. */
-async function shot(page: Page, name: string) {
-  await page.screenshot({ path: `${shots}/${name}.png` });
-  await page.screenshot({ path: `${shots}/${name}-full.png`, fullPage: true });
+async function shot(testInfo: TestInfo, page: Page, name: string) {
+  await attachShot(testInfo, page, name);
+  await attachShot(testInfo, page, `${name}-full`, { fullPage: true });
 }
 
 /** A stroke across the signature pad: with the mouse, or with a finger (CDP touch events). */
@@ -107,17 +71,16 @@ async function drawStroke(page: Page, how: 'mouse' | 'touch', from: [number, num
 
 test('a technician on a phone opens today’s visit, logs a module from the van, and the client signs: the report is e-mailed', async ({
   browser,
-}) => {
+}, testInfo) => {
   test.setTimeout(240_000);
-  fs.mkdirSync(shots, { recursive: true });
   const startedAt = new Date();
 
   // ---- the office: the demo technician, their van, a wall with a spare of its batch ----
-  const office = await apiSession(browser, 'office@gridkeep.test');
-  const staff = await json<{ items: { id: string; name: string; role: string }[] }>(office.request, '/api/staff');
+  const office = await signInToApi(browser, 'office@gridkeep.test');
+  const staff = await getJson<{ items: { id: string; name: string; role: string }[] }>(office.request, '/api/staff');
   const technician = staff.items.find((s) => s.role === 'technician' && s.name === 'Jonah Ellery');
   expect(technician, 'the demo technician').toBeTruthy();
-  const locations = await json<{ items: { id: string; kind: string; holder: { id: string } | null }[] }>(
+  const locations = await getJson<{ items: { id: string; kind: string; holder: { id: string } | null }[] }>(
     office.request,
     '/api/stock-locations?kind=van',
   );
@@ -142,7 +105,7 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
     expect(moved.status(), await moved.text()).toBe(201);
   }
   const inVan = async () =>
-    (await json<{ items: Spare[] }>(office.request, `/api/walls/${wall.id}/spares?locationId=${van!.id}`)).items.find(
+    (await getJson<{ items: Spare[] }>(office.request, `/api/walls/${wall.id}/spares?locationId=${van!.id}`)).items.find(
       (s) => s.partId === spare.partId && s.batch === spare.batch,
     )?.onHand ?? 0;
   const vanBefore = await inVan();
@@ -167,7 +130,8 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
   const visit = (await booked.json()) as { id: string; client: { id: string }; site: { name: string; address: string } };
 
   // ---- the technician's phone: today's visit on the start page ----
-  const page = await signInOnPhone(browser, 'tech@gridkeep.test');
+  const { page } = await signIn(browser, 'tech@gridkeep.test', phone);
+  await expect(page).toHaveURL(/\/$/);
   const today = page.getByRole('list', { name: 'Your visits today' });
   const card = today.getByRole('listitem').filter({ has: page.locator(`a[href="/visits/${visit.id}"]`) });
   await expect(card).toBeVisible();
@@ -178,7 +142,7 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
     'href',
     `geo:0,0?q=${encodeURIComponent(visit.site.address)}`,
   );
-  await shot(page, 'home');
+  await shot(testInfo, page, 'home');
 
   await card.locator(`a[href="/visits/${visit.id}"]`).click();
   await expect(page).toHaveURL(`/visits/${visit.id}`);
@@ -193,7 +157,7 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
   const target = await startButton.boundingBox();
   // Bigger than the 44 × 44 CSS px of WCAG 2.2 SC 2.5.5: the field buttons are min-h-touch-lg.
   expect(target?.height, 'a target for a dusty thumb').toBeGreaterThan(44);
-  await shot(page, 'visit');
+  await shot(testInfo, page, 'visit');
 
   // ---- log a module replaced with the van's spare (the repair screen's steps) ----
   await startButton.click();
@@ -234,7 +198,7 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
   await expect(saveState).toHaveText('Saved');
   await page.getByRole('checkbox', { name: checklist[1] }).check();
   await expect(saveState).toHaveText('Saved');
-  const saved = await json<{ checklist: { label: string; done: boolean }[] }>(page.request, `/api/visits/${visit.id}`);
+  const saved = await getJson<{ checklist: { label: string; done: boolean }[] }>(page.request, `/api/visits/${visit.id}`);
   expect(saved.checklist.map((i) => i.done)).toEqual([true, true]);
 
   // ---- close: a summary, the drawn signature and the signer's name ----
@@ -261,7 +225,7 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
   await page.getByLabel('Name of the person signing').fill('Tobin Ashgrove');
   await drawStroke(page, 'mouse', [0.1, 0.6], [0.45, 0.35]);
   await drawStroke(page, 'touch', [0.45, 0.35], [0.9, 0.6]);
-  await shot(page, 'close');
+  await shot(testInfo, page, 'close');
   await page.getByRole('button', { name: 'Close visit and send the report' }).click();
 
   // ---- back on the visit: completed, signed, the report ----
@@ -271,24 +235,24 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
   await expect(page.getByText('Signed by Tobin Ashgrove')).toBeVisible();
   const reportLink = page.getByRole('link', { name: 'Report (PDF)' });
   await expect(reportLink).toHaveAttribute('href', `/api/visits/${visit.id}/report.pdf`);
-  await shot(page, 'visit-closed');
+  await shot(testInfo, page, 'visit-closed');
   const pdf = await page.request.get(`/api/visits/${visit.id}/report.pdf`);
   expect(pdf.status()).toBe(200);
   expect(pdf.headers()['content-type']).toContain('application/pdf');
   expect((await pdf.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
-  const closed = await json<{ status: string; signedByName: string; signedAt: string | null }>(page.request, `/api/visits/${visit.id}`);
+  const closed = await getJson<{ status: string; signedByName: string; signedAt: string | null }>(page.request, `/api/visits/${visit.id}`);
   expect(closed).toMatchObject({ status: 'completed', signedByName: 'Tobin Ashgrove' });
   expect(closed.signedAt).not.toBeNull();
 
   // ---- the report e-mail with its PDF, in the development mailbox ----
-  const admin = await apiSession(browser, 'admin@gridkeep.test');
+  const admin = await signInToApi(browser, 'admin@gridkeep.test');
   type Mail = { id: string; subject: string; date: string; attachments: { filename: string; contentType: string }[] };
   let mail: Mail | undefined;
   // The mail worker polls the outbox every 2 s.
   await expect
     .poll(
       async () => {
-        const box = await json<{ items: Mail[] }>(admin.request, '/api/dev/mailbox');
+        const box = await getJson<{ items: Mail[] }>(admin.request, '/api/dev/mailbox');
         mail = box.items.find(
           (m) => m.subject === `Visit report: ${visit.site.name}` && new Date(m.date) >= new Date(startedAt.getTime() - 1000),
         );
@@ -303,13 +267,13 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
   expect((await attached.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
 
   // ---- the client reads the visit and its report: nothing to start or close, no internal notes ----
-  const users = await json<{ items: { email: string; clientId: string | null; disabled: boolean; invitePending: boolean }[] }>(
+  const users = await getJson<{ items: { email: string; clientId: string | null; disabled: boolean; invitePending: boolean }[] }>(
     admin.request,
     '/api/users?role=client&limit=100',
   );
   const clientUser = users.items.find((u) => u.clientId === visit.client.id && !u.disabled && !u.invitePending);
   expect(clientUser, 'a client user of the visit’s organisation').toBeTruthy();
-  const client = await signInOnPhone(browser, clientUser!.email);
+  const { page: client } = await signIn(browser, clientUser!.email, phone);
   await client.goto(`/visits/${visit.id}`);
   await expect(client.getByRole('heading', { level: 1, name: visit.site.name })).toBeVisible();
   await expect(client.getByText('Signed by Tobin Ashgrove')).toBeVisible();
@@ -320,7 +284,7 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
     await expect(client.getByRole('link', { name }).or(client.getByRole('button', { name }))).toHaveCount(0);
   await expect(client.getByText('Internal notes')).toHaveCount(0);
   await expect(client.getByText(internalNotes)).toHaveCount(0);
-  await shot(client, 'visit-client');
+  await shot(testInfo, client, 'visit-client');
 
-  await Promise.all([office.context.close(), admin.context.close(), page.context().close(), client.context().close()]);
+  await Promise.all([office.close(), admin.close(), page.context().close(), client.context().close()]);
 });

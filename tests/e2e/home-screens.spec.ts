@@ -1,23 +1,9 @@
-import { expect, test, type Browser, type BrowserContext, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
+import { attachShot, desktop, escapeRegExp, phone, signIn } from './support.js';
 
 // The client portal's overview and the navigation of each shell, against the real app with the
 // seeded demo data: every place the navigation offers exists, and the overview shows the
 // organisation's walls by site with their open tickets.
-
-const password = 'gridkeep-demo';
-const phone = { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
-const desktop = { viewport: { width: 1366, height: 800 } };
-
-async function signIn(browser: Browser, email: string, options: object): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext(options);
-  const page = await context.newPage();
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).not.toHaveURL(/\/sign-in/);
-  return { context, page };
-}
 
 interface Wall {
   id: string;
@@ -49,7 +35,7 @@ test('a client sees their walls by site with open tickets, their open tickets, a
   const siteNames = [...new Set(walls.map((w) => w.siteName))];
   for (const site of siteNames) await expect(section.getByRole('heading', { name: site, exact: true })).toBeVisible();
   for (const wall of walls) {
-    const row = section.getByRole('link', { name: new RegExp(`^${wall.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) });
+    const row = section.getByRole('link', { name: new RegExp(`^${escapeRegExp(wall.name)}`) });
     await expect(row).toHaveCount(1);
     await expect(row).toHaveAttribute('href', `/walls/${wall.id}`);
     await expect(row).toContainText(
@@ -68,7 +54,7 @@ test('a client sees their walls by site with open tickets, their open tickets, a
     await expect(tickets).toHaveCount(open.items.length);
     await expect(tickets.first()).toContainText('Status:');
   }
-  await testInfo.attach('client-overview', { body: await page.screenshot({ fullPage: true }), contentType: 'image/png' });
+  await attachShot(testInfo, page, 'client-overview', { fullPage: true });
 
   // The portal offers only places that exist.
   await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link')).toHaveText(['Overview', 'Walls', 'Tickets', 'Visits']);

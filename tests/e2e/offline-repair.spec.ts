@@ -1,6 +1,7 @@
-import fs from 'node:fs';
-import { expect, test, type APIRequestContext, type Browser, type BrowserContext, type Page } from '@playwright/test';
+import { expect, test, type APIRequestContext, type Browser, type BrowserContext, type Page, type TestInfo } from '@playwright/test';
 import type { SpareCabinetGroup } from '../../shared/schemas/stock.js';
+import type { WallCabinet as Cabinet } from '../../shared/schemas/walls.js';
+import { attachShot, csrf, getJson, phone, signInOn, signInToApi } from './support.js';
 
 // A repair logged on a phone with no signal, against the real app with the seeded demo data: it
 // is kept on the phone (IndexedDB) and sent when the network is back, exactly once even when an
@@ -8,19 +9,6 @@ import type { SpareCabinetGroup } from '../../shared/schemas/stock.js';
 // worker); a repair the server refuses on arrival (the cabinet moved meanwhile) waits in the
 // outbox for the technician to fix it in the form.
 
-const password = 'gridkeep-demo';
-const csrf = { 'X-Requested-With': 'gridkeep' };
-const phone = { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
-const shots = '/tmp/shots-d2';
-
-interface Cabinet {
-  id: string;
-  serial: string;
-  column: number;
-  row: number;
-  batch: string;
-  status: string;
-}
 interface Repair {
   id: string;
   ticketId: string | null;
@@ -33,31 +21,22 @@ interface Repair {
   notes?: string;
 }
 
-async function json<T>(request: APIRequestContext, url: string): Promise<T> {
-  const res = await request.get(url);
-  expect(res.ok(), `GET ${url}`).toBe(true);
-  return (await res.json()) as T;
-}
-
 /** A phone signed in as the demo technician; `serviceWorker` lets this test's pages register the offline shell. */
 async function phoneOf(browser: Browser, options: { serviceWorker: boolean }): Promise<{ context: BrowserContext; page: Page }> {
   const context = await browser.newContext(phone);
   // The app registers its service worker in automated browsers only when asked (src/lib/service-worker.ts).
   if (options.serviceWorker) await context.addInitScript(() => localStorage.setItem('gridkeep:service-worker', 'on'));
   const page = await context.newPage();
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail address').fill('tech@gridkeep.test');
-  await page.getByLabel('Password', { exact: true }).fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await signInOn(page, 'tech@gridkeep.test');
   await expect(page).toHaveURL(/\/$/);
   return { context, page };
 }
 
 /** A demo wall with two installed cabinets, read through the API. */
 async function demoWall(request: APIRequestContext) {
-  const walls = await json<{ items: { id: string; name: string }[] }>(request, '/api/walls?limit=100');
+  const walls = await getJson<{ items: { id: string; name: string }[] }>(request, '/api/walls?limit=100');
   for (const wall of walls.items) {
-    const cabinets = (await json<{ items: Cabinet[] }>(request, `/api/walls/${wall.id}/cabinets`)).items.filter(
+    const cabinets = (await getJson<{ items: Cabinet[] }>(request, `/api/walls/${wall.id}/cabinets`)).items.filter(
       (c) => c.status === 'installed',
     );
     if (cabinets.length >= 2) return { wall, cabinets };
@@ -67,13 +46,13 @@ async function demoWall(request: APIRequestContext) {
 
 /** An open demo ticket on a wall, and an installed cabinet of that wall. */
 async function demoTicket(request: APIRequestContext) {
-  const tickets = await json<{ items: { id: string; ref: string; wall: { id: string; name: string } | null }[] }>(
+  const tickets = await getJson<{ items: { id: string; ref: string; wall: { id: string; name: string } | null }[] }>(
     request,
     '/api/tickets?open=true&limit=50',
   );
   for (const ticket of tickets.items) {
     if (!ticket.wall) continue;
-    const cabinets = (await json<{ items: Cabinet[] }>(request, `/api/walls/${ticket.wall.id}/cabinets`)).items.filter(
+    const cabinets = (await getJson<{ items: Cabinet[] }>(request, `/api/walls/${ticket.wall.id}/cabinets`)).items.filter(
       (c) => c.status === 'installed',
     );
     if (cabinets.length) return { ticket, wall: ticket.wall, cabinet: cabinets[0] };
@@ -81,9 +60,21 @@ async function demoTicket(request: APIRequestContext) {
   throw new Error('The demo data has no open ticket on a wall with cabinets.');
 }
 
+/** The signed-in technician's van. */
+async function myVan(request: APIRequestContext) {
+  const { user } = await getJson<{ user: { id: string } }>(request, '/api/auth/me');
+  const locations = await getJson<{ items: { id: string; kind: string; holder: { id: string } | null }[] }>(
+    request,
+    '/api/stock-locations',
+  );
+  const van = locations.items.find((l) => l.kind === 'van' && l.holder?.id === user.id);
+  expect(van, 'the demo technician has a van').toBeTruthy();
+  return van!;
+}
+
 /** The repairs of a wall whose notes carry `marker` (this test's own). */
 async function repairsMarked(request: APIRequestContext, wallId: string, marker: string): Promise<Repair[]> {
-  const page = await json<{ items: Repair[] }>(request, `/api/repairs?wallId=${wallId}&limit=100`);
+  const page = await getJson<{ items: Repair[] }>(request, `/api/repairs?wallId=${wallId}&limit=100`);
   return page.items.filter((r) => r.notes?.includes(marker));
 }
 
@@ -116,11 +107,12 @@ async function logReseatedCard(page: Page, cabinet: Cabinet, notes: string, shot
   await shot?.('04-notes');
 }
 
-test.beforeAll(() => fs.mkdirSync(shots, { recursive: true }));
+/** Whole-page screenshots of `page`, attached to the test's report. */
+const shotsOf = (testInfo: TestInfo, page: Page) => (name: string) => attachShot(testInfo, page, name, { fullPage: true });
 
-test('a repair logged with no signal waits on the phone and is sent once when the network is back', async ({ browser }) => {
+test('a repair logged with no signal waits on the phone and is sent once when the network is back', async ({ browser }, testInfo) => {
   const { context, page } = await phoneOf(browser, { serviceWorker: true });
-  const shot = async (name: string) => void (await page.screenshot({ path: `${shots}/${name}.png`, fullPage: true }));
+  const shot = shotsOf(testInfo, page);
   const { ticket, wall, cabinet } = await demoTicket(page.request);
   const marker = `offline-${Date.now()}`;
 
@@ -198,7 +190,7 @@ test('a repair logged with no signal waits on the phone and is sent once when th
   expect(new Set(posts).size, 'every try of one repair carries the same Idempotency-Key').toBe(1);
   const sent = await repairsMarked(context.request, wall.id, marker);
   expect(sent, 'the repair is recorded exactly once').toHaveLength(1);
-  const photos = await json<{ items: { name?: string; filename?: string }[] }>(context.request, `/api/repairs/${sent[0].id}/photos`);
+  const photos = await getJson<{ items: { name?: string; filename?: string }[] }>(context.request, `/api/repairs/${sent[0].id}/photos`);
   expect(photos.items, 'the photo taken offline followed the repair').toHaveLength(1);
   expect(sent[0]).toMatchObject({
     ticketId: ticket.id,
@@ -214,9 +206,9 @@ test('a repair logged with no signal waits on the phone and is sent once when th
 
 test('a repair refused on arrival (the cabinet moved meanwhile) waits for the technician, who fixes it in the form', async ({
   browser,
-}) => {
+}, testInfo) => {
   const { context, page } = await phoneOf(browser, { serviceWorker: false });
-  const shot = async (name: string) => void (await page.screenshot({ path: `${shots}/${name}.png`, fullPage: true }));
+  const shot = shotsOf(testInfo, page);
   const { wall, cabinets } = await demoWall(page.request);
   const [cabinet, other] = [cabinets[cabinets.length - 1], cabinets[cabinets.length - 2]];
   const marker = `moved-${Date.now()}`;
@@ -229,10 +221,7 @@ test('a repair refused on arrival (the cabinet moved meanwhile) waits for the te
   await expect(page.getByText('Saved on this phone, will send when the network is back')).toBeVisible();
 
   // Meanwhile the office swaps the cabinet with its neighbour.
-  const office = await browser.newContext();
-  expect(
-    (await office.request.post('/api/auth/login', { data: { email: 'office@gridkeep.test', password }, headers: csrf })).status(),
-  ).toBe(200);
+  const office = await signInToApi(browser, 'office@gridkeep.test');
   const swapped = await office.request.post(`/api/cabinets/${cabinet.id}/swap`, {
     data: { otherCabinetId: other.id, note: 'Matched batches' },
     headers: csrf,
@@ -273,33 +262,26 @@ test('a repair refused on arrival (the cabinet moved meanwhile) waits for the te
 
 test('a module replaced with a spare of another batch: the module grid mirrors in the rear view, and the batch mismatch needs a yes', async ({
   browser,
-}) => {
+}, testInfo) => {
   const { context, page } = await phoneOf(browser, { serviceWorker: false });
-  const shot = async (name: string) => void (await page.screenshot({ path: `${shots}/${name}.png`, fullPage: true }));
+  const shot = shotsOf(testInfo, page);
   const { wall, cabinets } = await demoWall(page.request);
   const cabinet = cabinets[Math.floor(cabinets.length / 2)];
-  const detail = await json<{ cabinetModel: { id: string; modulesWide: number; modulesHigh: number } }>(
+  const detail = await getJson<{ cabinetModel: { id: string; modulesWide: number; modulesHigh: number } }>(
     page.request,
     `/api/walls/${wall.id}`,
   );
-  const { user } = await json<{ user: { id: string } }>(page.request, '/api/auth/me');
-  const van = (
-    await json<{ items: { id: string; kind: string; holder: { id: string } | null }[] }>(page.request, '/api/stock-locations')
-  ).items.find((l) => l.kind === 'van' && l.holder?.id === user.id);
-  expect(van, 'the demo technician has a van').toBeTruthy();
+  const van = await myVan(page.request);
   const part = (
-    await json<{ items: { id: string; kind: string; cabinetModel: { id: string } | null }[] }>(page.request, '/api/parts?limit=500')
+    await getJson<{ items: { id: string; kind: string; cabinetModel: { id: string } | null }[] }>(page.request, '/api/parts?limit=500')
   ).items.find((p) => p.kind === 'module' && p.cabinetModel?.id === detail.cabinetModel.id);
   expect(part, 'the wall’s model has a module part').toBeTruthy();
 
   // The office puts one module of a batch no wall has into the technician's van.
   const batch = `ZZ-${Date.now()}`;
-  const office = await browser.newContext();
-  expect(
-    (await office.request.post('/api/auth/login', { data: { email: 'office@gridkeep.test', password }, headers: csrf })).status(),
-  ).toBe(200);
+  const office = await signInToApi(browser, 'office@gridkeep.test');
   const receipt = await office.request.post('/api/stock-movements', {
-    data: { kind: 'receipt', partId: part!.id, batch, toLocationId: van!.id, quantity: 1 },
+    data: { kind: 'receipt', partId: part!.id, batch, toLocationId: van.id, quantity: 1 },
     headers: csrf,
   });
   expect(receipt.status(), await receipt.text()).toBe(201);
@@ -368,14 +350,14 @@ test('a module replaced with a spare of another batch: the module grid mirrors i
   await shot('14-recorded');
 
   const recorded = (
-    await json<{
+    await getJson<{
       items: { cabinetId: string; moduleColumn: number; moduleRow: number; part: { batch: string } | null; batchMismatch?: boolean }[];
     }>(office.request, `/api/repairs?cabinetId=${cabinet.id}&limit=5`)
   ).items[0];
   expect(recorded).toMatchObject({ cabinetId: cabinet.id, moduleColumn: 1, moduleRow: 1, part: { batch }, batchMismatch: true });
-  const left = await json<{ items: { batch: string; onHand: number }[] }>(
+  const left = await getJson<{ items: { batch: string; onHand: number }[] }>(
     office.request,
-    `/api/stock?locationId=${van!.id}&partId=${part!.id}&limit=100`,
+    `/api/stock?locationId=${van.id}&partId=${part!.id}&limit=100`,
   );
   expect(left.items.find((b) => b.batch === batch)?.onHand ?? 0, 'the spare left the van').toBe(0);
   await office.close();
@@ -384,30 +366,24 @@ test('a module replaced with a spare of another batch: the module grid mirrors i
 
 test('a whole cabinet swapped for a spare from the van: the spare takes the position, the removed one goes to the bench', async ({
   browser,
-}) => {
+}, testInfo) => {
   const { context, page } = await phoneOf(browser, { serviceWorker: false });
-  const shot = async (name: string) => void (await page.screenshot({ path: `${shots}/${name}.png`, fullPage: true }));
-  const { user } = await json<{ user: { id: string } }>(page.request, '/api/auth/me');
-  const van = (
-    await json<{ items: { id: string; kind: string; holder: { id: string } | null }[] }>(page.request, '/api/stock-locations')
-  ).items.find((l) => l.kind === 'van' && l.holder?.id === user.id)!;
-  const groups = (await json<{ items: SpareCabinetGroup[] }>(page.request, '/api/stock/spare-cabinets')).items;
+  const shot = shotsOf(testInfo, page);
+  const van = await myVan(page.request);
+  const groups = (await getJson<{ items: SpareCabinetGroup[] }>(page.request, '/api/stock/spare-cabinets')).items;
   // A wall whose model has a spare cabinet on some shelf.
-  const walls = await json<{ items: { id: string; cabinetModel: { id: string } }[] }>(page.request, '/api/walls?limit=100');
+  const walls = await getJson<{ items: { id: string; cabinetModel: { id: string } }[] }>(page.request, '/api/walls?limit=100');
   const wall = walls.items.find((w) => groups.some((g) => g.cabinetModel.id === w.cabinetModel.id && g.cabinets.length));
   expect(wall, 'the demo data keeps a spare cabinet of some wall’s model').toBeTruthy();
   const spare = groups.find((g) => g.cabinetModel.id === wall!.cabinetModel.id && g.cabinets.length)!.cabinets[0];
-  const installed = (await json<{ items: Cabinet[] }>(page.request, `/api/walls/${wall!.id}/cabinets`)).items.filter(
+  const installed = (await getJson<{ items: Cabinet[] }>(page.request, `/api/walls/${wall!.id}/cabinets`)).items.filter(
     (c) => c.status === 'installed',
   );
   // Away from the cabinets the other tests of this file work on.
   const cabinet = installed[Math.floor(installed.length / 3)];
 
   // The office loads that spare cabinet into the technician's van.
-  const office = await browser.newContext();
-  expect(
-    (await office.request.post('/api/auth/login', { data: { email: 'office@gridkeep.test', password }, headers: csrf })).status(),
-  ).toBe(200);
+  const office = await signInToApi(browser, 'office@gridkeep.test');
   const loaded = await office.request.patch(`/api/cabinets/${spare.id}`, { data: { stockLocationId: van.id }, headers: csrf });
   expect(loaded.status(), await loaded.text()).toBe(200);
 
@@ -435,9 +411,9 @@ test('a whole cabinet swapped for a spare from the van: the spare takes the posi
   await expect(page.getByText('Repair recorded')).toBeVisible();
 
   // The spare sits at the position now; the removed cabinet is at the bench.
-  const now = (await json<{ items: Cabinet[] }>(office.request, `/api/walls/${wall!.id}/cabinets`)).items;
+  const now = (await getJson<{ items: Cabinet[] }>(office.request, `/api/walls/${wall!.id}/cabinets`)).items;
   expect(now.find((c) => c.column === cabinet.column && c.row === cabinet.row)?.serial).toBe(spare.serial);
-  expect((await json<{ status: string }>(office.request, `/api/cabinets/${cabinet.id}`)).status).toBe('at_bench');
+  expect((await getJson<{ status: string }>(office.request, `/api/cabinets/${cabinet.id}`)).status).toBe('at_bench');
   await office.close();
   await context.close();
 });

@@ -1,31 +1,16 @@
-import { expect, test, type Browser, type BrowserContext, type Page } from '@playwright/test';
+import { expect, test, type BrowserContext, type Page } from '@playwright/test';
+import { escapeRegExp, phone, signIn } from './support.js';
 
 // The ticket journey across the three audiences, against the real app with the seeded demo
 // data: a client reports a fault from a phone (two tapped cabinets and a photo), the office
 // answers in public, and the e-mail to the client shows in the development mailbox.
 
-const password = 'gridkeep-demo';
 const admin = 'admin@gridkeep.test';
 const office = 'office@gridkeep.test';
-const desktop = { viewport: { width: 1366, height: 800 } };
-const phone = { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
 
 // A 1 × 1 PNG (the PNG signature and IHDR/IDAT/IEND chunks, RFC 2083), so the server's
 // content check sees a real image.
 const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==', 'base64');
-
-async function signIn(browser: Browser, email: string, options = desktop): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext(options);
-  const page = await context.newPage();
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).not.toHaveURL(/\/sign-in/);
-  return { context, page };
-}
-
-const escapeRegExp = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
 interface Wall {
   id: string;

@@ -8,6 +8,7 @@ import { ticketComments, tickets } from '../../server/db/schema/tickets.js';
 import { idempotentRequests, repairs, visits, visitTechnicians } from '../../server/db/schema/visits.js';
 import { cabinetEvents, cabinets, walls } from '../../server/db/schema/walls.js';
 import { ensureBucket } from '../../server/integrations/s3.js';
+import { forgetOldKeys } from '../../server/services/idempotency.js';
 import { startTestS3, type TestS3 } from '../setup/fakes.js';
 import { createCabinetModel, createOrganisation, signedIn, unique, type Session } from '../factories/index.js';
 
@@ -285,6 +286,19 @@ describe('POST /api/repairs: Idempotency-Key', () => {
     expect(short.status).toBe(400);
     expect(short.body.error.fields).toHaveProperty(['Idempotency-Key']);
     expect(await repairsOf(s.cabinet.id)).toEqual([]);
+  });
+
+  it('keeps an answer as long as a queued repair may be retried (35 days), then forgets it', async () => {
+    const s = await scene();
+    const key = randomUUID();
+    expect((await post(s.tech, s.moduleRepair(), key)).status).toBe(201);
+    const mine = and(eq(idempotentRequests.userId, s.tech.user.id), eq(idempotentRequests.key, key));
+    const day = 24 * 3600_000;
+    // 34 days on, a retry still finds its answer; 36 days on, the key is gone.
+    await forgetOldKeys(new Date(Date.now() + 34 * day));
+    expect(await db().select().from(idempotentRequests).where(mine)).toHaveLength(1);
+    await forgetOldKeys(new Date(Date.now() + 36 * day));
+    expect(await db().select().from(idempotentRequests).where(mine)).toHaveLength(0);
   });
 });
 

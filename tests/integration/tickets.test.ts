@@ -9,8 +9,9 @@ import { parts, stockLocations } from '../../server/db/schema/stock.js';
 import { tickets } from '../../server/db/schema/tickets.js';
 import { repairs, visits } from '../../server/db/schema/visits.js';
 import { cabinets } from '../../server/db/schema/walls.js';
-import { closeMail, processMailOnce } from '../../server/integrations/mail.js';
+import { closeMail } from '../../server/integrations/mail.js';
 import { createOrganisation, createServicePlan, createUser, signIn, signedIn, type Session } from '../factories/index.js';
+import { deliverMail } from '../setup/deliver-mail.js';
 import { createIsolatedDatabase } from '../setup/isolated-database.js';
 import { setEnv, startTestSmtp, type TestSmtp } from '../setup/fakes.js';
 
@@ -68,13 +69,7 @@ async function open(session: Session, overrides: object = {}) {
   return res.body;
 }
 
-async function deliver() {
-  for (let i = 0; i < 5; i++) {
-    const round = await processMailOnce({ backoffBaseMs: 10, backoffMaxMs: 20 });
-    if (round.claimed === 0) break;
-  }
-  return smtp.parsed();
-}
+const deliver = () => deliverMail(smtp);
 
 describe('opening a ticket', () => {
   it('a client user opens a ticket on their wall with tapped cells; due times come from the plan', async () => {

@@ -10,11 +10,12 @@ import { outboundMail } from '../../server/db/schema/mail.js';
 import { tickets } from '../../server/db/schema/tickets.js';
 import { repairs, visits, visitTechnicians } from '../../server/db/schema/visits.js';
 import { maintenancePlans } from '../../server/db/schema/walls.js';
-import { closeMail, processMailOnce } from '../../server/integrations/mail.js';
+import { closeMail } from '../../server/integrations/mail.js';
 import { closeStorage, ensureBucket, newStorageKey, putObject } from '../../server/integrations/s3.js';
 import { winAnsi } from '../../server/services/visit-report.js';
 import { addMonths } from '../../server/services/visits.js';
 import { anonymous, createOrganisation, createUser, signIn, signedIn, type Session } from '../factories/index.js';
+import { deliverMail } from '../setup/deliver-mail.js';
 import { createIsolatedDatabase } from '../setup/isolated-database.js';
 import { setEnv, startTestS3, startTestSmtp, type TestS3, type TestSmtp } from '../setup/fakes.js';
 
@@ -153,13 +154,7 @@ function invitation(mail: typeof outboundMail.$inferSelect) {
   };
 }
 
-async function deliver() {
-  for (let i = 0; i < 5; i++) {
-    const round = await processMailOnce({ backoffBaseMs: 10, backoffMaxMs: 20 });
-    if (round.claimed === 0) break;
-  }
-  return smtp.parsed();
-}
+const deliver = () => deliverMail(smtp);
 
 describe('the visits API', () => {
   it('refuses the signed out, bad bodies naming the field, and writes from outside the office', async () => {

@@ -1,18 +1,15 @@
 import type { VisitDetail } from '@shared/schemas/visits';
-import { useQuery } from '@tanstack/react-query';
 import { ArrowLeft } from 'lucide-react';
 import { data, Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { PageHeader } from '@/components/ui/page-header';
-import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { CloseVisitForm } from '@/features/visits/components/close-visit-form';
+import { VisitGate } from '@/features/visits/components/visit-gate';
 import { visitWindowText } from '@/features/visits/utils/visit-time';
 import { requireUser, staff } from '@/app/auth-guard';
-import { errorMessage } from '@/lib/errors';
 import { queryClient } from '@/lib/query-client';
 import { isRecordId } from '@/lib/record-id';
-import { useDocumentTitle } from '@/lib/use-document-title';
 import { visitQueries } from '@/resources/visits';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
@@ -26,16 +23,11 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
 
 export function Component() {
   const { id = '' } = useParams();
-  const visit = useQuery(visitQueries.detail(id));
-  useDocumentTitle(visit.data ? `Close visit: ${visit.data.site.name}` : 'Close visit');
-  if (visit.isPending) return <PageSpinner label="Loading the visit" />;
-  if (visit.isError)
-    return (
-      <Alert tone="danger" title="The visit could not be loaded.">
-        {errorMessage(visit.error)}
-      </Alert>
-    );
-  return <ClosePage visit={visit.data} />;
+  return (
+    <VisitGate id={id} title="Close visit">
+      {(visit) => <ClosePage visit={visit} />}
+    </VisitGate>
+  );
 }
 
 /** Closing a visit on the phone: summary, checklist, the client's signature; then back to the visit. */

@@ -6,6 +6,7 @@ import { useMemo, useState } from 'react';
 import { useSearchParams, type LoaderFunctionArgs, type ShouldRevalidateFunctionArgs } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button, ButtonLink } from '@/components/ui/button';
+import { LoadError } from '@/components/ui/load-error';
 import { PageHeader } from '@/components/ui/page-header';
 import { Spinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
@@ -150,12 +151,7 @@ export function Component() {
       />
       <ConflictSummary bookings={bookings} visits={inWeek} />
       {visits.isError && !visits.data ? (
-        <Alert tone="danger" title="The week’s visits could not be loaded.">
-          <p>{errorMessage(visits.error)}</p>
-          <Button size="sm" className="mt-2" onClick={() => void visits.refetch()}>
-            Try again
-          </Button>
-        </Alert>
+        <LoadError title="The week’s visits could not be loaded." error={visits.error} onRetry={() => void visits.refetch()} />
       ) : visits.isPending || staff.isPending ? (
         <p className="flex items-center justify-center gap-2 py-12 text-stone-600">
           <Spinner label="" /> Loading the week…

@@ -1,15 +1,14 @@
 import type { VisitDetail } from '@shared/schemas/visits';
-import { useQuery } from '@tanstack/react-query';
 import { ArrowLeft, Lock } from 'lucide-react';
 import { data, Link, useLocation, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Card } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
-import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { ServiceCaution } from '@/features/walls/components/service-caution';
 import { VisitActions } from '@/features/visits/components/visit-actions';
 import { VisitChecklist } from '@/features/visits/components/visit-checklist';
+import { VisitGate } from '@/features/visits/components/visit-gate';
 import { VisitOutcome } from '@/features/visits/components/visit-outcome';
 import { VisitContacts, VisitPlace } from '@/features/visits/components/visit-place';
 import { VisitRepairs } from '@/features/visits/components/visit-repairs';
@@ -18,11 +17,9 @@ import { VisitWork } from '@/features/visits/components/visit-work';
 import { useVisitChecklist } from '@/features/visits/hooks/use-visit-checklist';
 import { visitWindowText } from '@/features/visits/utils/visit-time';
 import { requireUser } from '@/app/auth-guard';
-import { errorMessage } from '@/lib/errors';
 import { queryClient } from '@/lib/query-client';
 import { isRecordId } from '@/lib/record-id';
 import { audienceOf, useUser } from '@/lib/session';
-import { useDocumentTitle } from '@/lib/use-document-title';
 import { visitQueries } from '@/resources/visits';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
@@ -36,16 +33,11 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
 
 export function Component() {
   const { id = '' } = useParams();
-  const visit = useQuery(visitQueries.detail(id));
-  useDocumentTitle(visit.data ? `Visit: ${visit.data.site.name}` : 'Visit');
-  if (visit.isPending) return <PageSpinner label="Loading the visit" />;
-  if (visit.isError)
-    return (
-      <Alert tone="danger" title="The visit could not be loaded.">
-        {errorMessage(visit.error)}
-      </Alert>
-    );
-  return <VisitPage visit={visit.data} />;
+  return (
+    <VisitGate id={id} title="Visit">
+      {(visit) => <VisitPage visit={visit} />}
+    </VisitGate>
+  );
 }
 
 /** A visit, phone first: what to do next, where and whom to ask, the work, the checklist, the repairs. */

@@ -2,10 +2,10 @@ import { moveCabinetInput, type Position } from '@shared/schemas/cabinets';
 import { cellLabel } from '@shared/calc/grid';
 import { MousePointerClick } from 'lucide-react';
 import { useMemo, useState, type ReactNode } from 'react';
-import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Dialog } from '@/components/ui/dialog';
+import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
@@ -18,7 +18,6 @@ import type { WallCabinet } from '@shared/schemas/walls';
 import { CabinetCard } from '@/features/cabinets/components/cabinet-card';
 import { EmptyCellCard } from '@/features/cabinets/components/empty-cell-card';
 import { useMediaQuery } from '@/lib/use-media-query';
-import { errorMessage } from '@/lib/errors';
 import { z } from 'zod';
 import { useQuery } from '@tanstack/react-query';
 import { wallQueries } from '@/resources/walls';
@@ -192,12 +191,7 @@ export function CabinetWallMap({
             </div>
           ) : null}
           {query.isError ? (
-            <Alert tone="danger" title="The cabinets could not be loaded.">
-              {errorMessage(query.error)}
-              <Button size="sm" className="mt-2" onClick={() => query.refetch()}>
-                Try again
-              </Button>
-            </Alert>
+            <LoadError title="The cabinets could not be loaded." error={query.error} onRetry={() => query.refetch()} />
           ) : (
             // Drawn in outline while the cabinets load, so that their arrival only names and
             // colours the cells already there (2,000 cells are drawn well before the list comes).

@@ -4,9 +4,8 @@ import { cellLabel } from '@shared/calc/grid';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
-import { Button } from '@/components/ui/button';
+import { LoadError } from '@/components/ui/load-error';
 import { WallMap, WallViewToggle, type WallMapCell } from '@/components/wall-map/wall-map';
-import { errorMessage } from '@/lib/errors';
 import { wallQueries } from '@/resources/walls';
 
 type View = 'front' | 'rear';
@@ -47,14 +46,7 @@ export function CellStep({
   const selected = useMemo(() => (value ? [value] : []), [value]);
 
   if (query.isError) {
-    return (
-      <Alert tone="danger" title="The wall’s cabinets could not be loaded.">
-        {errorMessage(query.error)}
-        <Button size="sm" className="mt-2" onClick={() => query.refetch()}>
-          Try again
-        </Button>
-      </Alert>
-    );
+    return <LoadError title="The wall’s cabinets could not be loaded." error={query.error} onRetry={() => query.refetch()} />;
   }
 
   return (

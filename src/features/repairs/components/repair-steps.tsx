@@ -7,6 +7,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Badge } from '@/components/ui/badge';
+import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { CellStep } from '@/features/repairs/components/cell-step';
 import { ChoiceButtons } from '@/features/repairs/components/choice-buttons';
@@ -15,7 +16,6 @@ import { PhotoPicker } from '@/features/repairs/components/photo-picker';
 import { SpareCabinetList } from '@/features/repairs/components/spare-cabinet-picker';
 import { BatchMismatchConfirm, SourceTabs, SpareList, spareSources } from '@/features/repairs/components/spare-picker';
 import { actionsFor, describeWork, withAction, withComponent, type RepairDraft, type StepId } from '@/features/repairs/utils/repair-draft';
-import { errorMessage } from '@/lib/errors';
 import { formatDate } from '@/lib/format';
 import { stockQueries } from '@/resources/stock';
 import { wallQueries } from '@/resources/walls';
@@ -208,11 +208,7 @@ function SpareStep({ draft, wall, userId, choose, update }: StepProps) {
 
   if (locations.isPending) return <Spinner label="Loading your van and the site kit" />;
   if (locations.isError) {
-    return (
-      <Alert tone="danger" title="Your van and the site kit could not be loaded.">
-        {errorMessage(locations.error)}
-      </Alert>
-    );
+    return <LoadError title="Your van and the site kit could not be loaded." error={locations.error} />;
   }
   return (
     <StepTitle title={swap ? 'Which spare cabinet takes the position?' : 'Which spare did you fit?'}>

@@ -2,11 +2,10 @@ import type { StockLocation } from '@shared/schemas/stock';
 import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { Check } from 'lucide-react';
-import { Alert } from '@/components/ui/alert';
 import { Badge } from '@/components/ui/badge';
+import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import type { DraftReplacement } from '@/features/repairs/utils/repair-draft';
-import { errorMessage } from '@/lib/errors';
 import { stockQueries } from '@/resources/stock';
 
 /**
@@ -31,11 +30,7 @@ export function SpareCabinetList({
 
   if (query.isPending) return <Spinner label={`Loading the spare cabinets in ${location.name}`} />;
   if (query.isError) {
-    return (
-      <Alert tone="danger" title="The spare cabinets could not be loaded.">
-        {errorMessage(query.error)}
-      </Alert>
-    );
+    return <LoadError title="The spare cabinets could not be loaded." error={query.error} />;
   }
   const same = (b: string) => b.trim().toLowerCase() === batch.trim().toLowerCase();
   const groups = query.data.items

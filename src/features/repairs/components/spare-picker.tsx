@@ -3,12 +3,11 @@ import type { StockLocation, WallSpare } from '@shared/schemas/stock';
 import { useInfiniteQuery, useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { Check, TriangleAlert } from 'lucide-react';
-import { Alert } from '@/components/ui/alert';
 import { Badge } from '@/components/ui/badge';
+import { LoadError } from '@/components/ui/load-error';
 import { Button } from '@/components/ui/button';
 import { Spinner } from '@/components/ui/spinner';
 import type { DraftSpare } from '@/features/repairs/utils/repair-draft';
-import { errorMessage } from '@/lib/errors';
 import { stockQueries } from '@/resources/stock';
 
 export const locationWords = (l: StockLocation) => (l.kind === 'van' ? `${l.name} (your van)` : `${l.name} (site kit)`);
@@ -86,11 +85,7 @@ export function SpareList({
   const spares = useSpares(wallId, location, kind);
   if (spares.isPending) return <Spinner label={`Loading the spares in ${location.name}`} />;
   if (spares.error) {
-    return (
-      <Alert tone="danger" title="The spares could not be loaded.">
-        {errorMessage(spares.error)}
-      </Alert>
-    );
+    return <LoadError title="The spares could not be loaded." error={spares.error} />;
   }
   if (!spares.items.length) return <p className="text-base text-stone-700">No spare that fits is on hand in {location.name}.</p>;
   return (

@@ -1,8 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { Alert } from '@/components/ui/alert';
+import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { ChoiceButtons } from '@/features/repairs/components/choice-buttons';
-import { errorMessage } from '@/lib/errors';
 import { wallQueries } from '@/resources/walls';
 
 /** A visit or ticket that names no wall: the technician picks the site's wall first. */
@@ -10,11 +10,7 @@ export function WallChooser({ siteId, onChoose }: { siteId: string | null; onCho
   const walls = useQuery(wallQueries.page(siteId ? { siteId } : {}));
   if (walls.isPending) return <Spinner label="Loading the walls" />;
   if (walls.isError) {
-    return (
-      <Alert tone="danger" title="The walls could not be loaded.">
-        {errorMessage(walls.error)}
-      </Alert>
-    );
+    return <LoadError title="The walls could not be loaded." error={walls.error} />;
   }
   if (!walls.data.items.length) return <Alert tone="info">This site has no wall in the register.</Alert>;
   return (

@@ -1,13 +1,10 @@
 import { ChevronRight, Grid3x3, MapPin, Ticket } from 'lucide-react';
 import { Link } from 'react-router-dom';
-import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { EmptyState } from '@/components/ui/empty-state';
-import { Spinner } from '@/components/ui/spinner';
+import { ListStates } from '@/components/ui/list-states';
 import { paths } from '@/config/paths';
 import type { TicketListItem } from '@shared/schemas/tickets';
 import { ClockBadge, PriorityBadge, TicketStatusBadge } from '@/features/tickets/components/ticket-status';
-import { errorMessage } from '@/lib/errors';
 import { formatAgo, formatDateTime } from '@/lib/format';
 import type { ReactNode } from 'react';
 
@@ -45,30 +42,6 @@ export function TicketCardList({
   clock = forClient ? 'never' : 'problems',
   empty,
 }: TicketCardListProps) {
-  if (error && items.length === 0) {
-    return (
-      <Alert tone="danger" title="The tickets could not be loaded.">
-        <p>{errorMessage(error)}</p>
-        <Button size="sm" className="mt-2" onClick={onRetry}>
-          Try again
-        </Button>
-      </Alert>
-    );
-  }
-  if (isLoading && items.length === 0) {
-    return (
-      <p className="flex items-center justify-center gap-2 py-12 text-stone-600">
-        <Spinner label="" /> Loading tickets…
-      </p>
-    );
-  }
-  if (items.length === 0) {
-    return (
-      <div className="rounded-md border border-stone-200 bg-white shadow-card">
-        <EmptyState icon={Ticket} title={empty.title} description={empty.description} action={empty.action} />
-      </div>
-    );
-  }
   const list = (
     <ul aria-label={label} className="space-y-2">
       {items.map((t) => (
@@ -108,21 +81,26 @@ export function TicketCardList({
       ))}
     </ul>
   );
-  if (!onLoadMore) return list;
   return (
-    <div className="space-y-3">
-      {list}
-      <div className="flex flex-wrap items-center justify-between gap-3 text-sm text-stone-600">
-        <p aria-live="polite">
-          {items.length === 1 ? '1 ticket shown' : `${items.length} tickets shown`}
-          {hasNextPage ? ', more available' : ''}
-        </p>
-        {hasNextPage ? (
-          <Button size="sm" onClick={onLoadMore} loading={isLoadingMore}>
-            Load more
-          </Button>
-        ) : null}
-      </div>
-    </div>
+    <ListStates noun="tickets" icon={Ticket} count={items.length} isLoading={isLoading} error={error} onRetry={onRetry} empty={empty}>
+      {onLoadMore ? (
+        <div className="space-y-3">
+          {list}
+          <div className="flex flex-wrap items-center justify-between gap-3 text-sm text-stone-600">
+            <p aria-live="polite">
+              {items.length === 1 ? '1 ticket shown' : `${items.length} tickets shown`}
+              {hasNextPage ? ', more available' : ''}
+            </p>
+            {hasNextPage ? (
+              <Button size="sm" onClick={onLoadMore} loading={isLoadingMore}>
+                Load more
+              </Button>
+            ) : null}
+          </div>
+        </div>
+      ) : (
+        list
+      )}
+    </ListStates>
   );
 }

@@ -2,15 +2,11 @@ import type { VisitListItem } from '@shared/schemas/visits';
 import { CalendarDays, ChevronRight, Grid3x3, Ticket, Wrench } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { Alert } from '@/components/ui/alert';
-import { Button } from '@/components/ui/button';
-import { EmptyState } from '@/components/ui/empty-state';
-import { Spinner } from '@/components/ui/spinner';
+import { ListStates } from '@/components/ui/list-states';
 import { paths } from '@/config/paths';
 import { AddressLink } from '@/features/visits/components/address-link';
 import { VisitStatusBadge } from '@/features/visits/components/visit-status';
 import { visitWindowText } from '@/features/visits/utils/visit-time';
-import { errorMessage } from '@/lib/errors';
 
 interface VisitCardsProps {
   label: string;
@@ -25,38 +21,25 @@ interface VisitCardsProps {
 
 /** Visits as big cards for the technician's phone: the card opens the visit, the address opens the maps app. */
 export function VisitCards({ label, items, isLoading, error, onRetry, withDay, empty }: VisitCardsProps) {
-  if (error && items.length === 0) {
-    return (
-      <Alert tone="danger" title="The visits could not be loaded.">
-        <p>{errorMessage(error)}</p>
-        <Button size="sm" className="mt-2" onClick={onRetry}>
-          Try again
-        </Button>
-      </Alert>
-    );
-  }
-  if (isLoading && items.length === 0) {
-    return (
-      <p className="flex items-center justify-center gap-2 py-8 text-stone-600">
-        <Spinner label="" /> Loading visits…
-      </p>
-    );
-  }
-  if (items.length === 0) {
-    return (
-      <div className="rounded-md border border-stone-200 bg-white shadow-card">
-        <EmptyState icon={CalendarDays} title={empty.title} description={empty.description} className="py-8" />
-      </div>
-    );
-  }
   return (
-    <ul aria-label={label} className="space-y-3">
-      {items.map((v) => (
-        <li key={v.id} className="rounded-md border border-stone-200 bg-white shadow-card">
-          <VisitCard visit={v} withDay={withDay} />
-        </li>
-      ))}
-    </ul>
+    <ListStates
+      noun="visits"
+      icon={CalendarDays}
+      count={items.length}
+      isLoading={isLoading}
+      error={error}
+      onRetry={onRetry}
+      empty={empty}
+      compact
+    >
+      <ul aria-label={label} className="space-y-3">
+        {items.map((v) => (
+          <li key={v.id} className="rounded-md border border-stone-200 bg-white shadow-card">
+            <VisitCard visit={v} withDay={withDay} />
+          </li>
+        ))}
+      </ul>
+    </ListStates>
   );
 }
 

@@ -7,14 +7,12 @@ import { format, parseISO } from 'date-fns';
 import { CalendarDays, ChevronRight, FileDown, Grid3x3, MapPin, UserRound } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
-import { Spinner } from '@/components/ui/spinner';
+import { ListStates } from '@/components/ui/list-states';
 import { paths } from '@/config/paths';
 import { VisitStatusBadge } from '@/features/visits/components/visit-status';
-import { errorMessage } from '@/lib/errors';
 import { formatSiteTime, zoneAbbreviation } from '@/lib/site-time';
 import { visitReportHref } from '@/resources/visits';
 
@@ -133,51 +131,37 @@ export function VisitTable({ toolbar, ...list }: ListState & { toolbar: ReactNod
 
 /** Visits as cards: the client's visit history, or the list on a phone. `linkToVisit` opens each visit (staff). */
 export function VisitCardList({ linkToVisit, showClient, ...list }: ListState & { linkToVisit: boolean; showClient: boolean }) {
-  if (list.error && list.items.length === 0) {
-    return (
-      <Alert tone="danger" title="The visits could not be loaded.">
-        <p>{errorMessage(list.error)}</p>
-        <Button size="sm" className="mt-2" onClick={list.onRetry}>
-          Try again
-        </Button>
-      </Alert>
-    );
-  }
-  if (list.isLoading && list.items.length === 0) {
-    return (
-      <p className="flex items-center justify-center gap-2 py-12 text-stone-600">
-        <Spinner label="" /> Loading visits…
-      </p>
-    );
-  }
-  if (list.items.length === 0) {
-    return (
-      <div className="rounded-md border border-stone-200 bg-white shadow-card">
-        <EmptyState icon={CalendarDays} title={list.empty.title} description={list.empty.description} />
-      </div>
-    );
-  }
   return (
-    <div className="space-y-3">
-      <ul aria-label="Visits" className="space-y-2">
-        {list.items.map((v) => (
-          <li key={v.id}>
-            <VisitCard visit={v} linkToVisit={linkToVisit} showClient={showClient} />
-          </li>
-        ))}
-      </ul>
-      <div className="flex flex-wrap items-center justify-between gap-3 text-sm text-stone-600">
-        <p aria-live="polite">
-          {list.items.length === 1 ? '1 visit shown' : `${list.items.length} visits shown`}
-          {list.hasNextPage ? ', more available' : ''}
-        </p>
-        {list.hasNextPage ? (
-          <Button size="sm" onClick={list.onLoadMore} loading={list.isLoadingMore}>
-            Load more
-          </Button>
-        ) : null}
+    <ListStates
+      noun="visits"
+      icon={CalendarDays}
+      count={list.items.length}
+      isLoading={list.isLoading}
+      error={list.error}
+      onRetry={list.onRetry}
+      empty={list.empty}
+    >
+      <div className="space-y-3">
+        <ul aria-label="Visits" className="space-y-2">
+          {list.items.map((v) => (
+            <li key={v.id}>
+              <VisitCard visit={v} linkToVisit={linkToVisit} showClient={showClient} />
+            </li>
+          ))}
+        </ul>
+        <div className="flex flex-wrap items-center justify-between gap-3 text-sm text-stone-600">
+          <p aria-live="polite">
+            {list.items.length === 1 ? '1 visit shown' : `${list.items.length} visits shown`}
+            {list.hasNextPage ? ', more available' : ''}
+          </p>
+          {list.hasNextPage ? (
+            <Button size="sm" onClick={list.onLoadMore} loading={list.isLoadingMore}>
+              Load more
+            </Button>
+          ) : null}
+        </div>
       </div>
-    </div>
+    </ListStates>
   );
 }
 
