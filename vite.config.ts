@@ -16,7 +16,18 @@ export default defineConfig({
       registerType: 'autoUpdate',
       // Registered by src/lib/service-worker.ts, in production builds only.
       injectRegister: false,
-      manifest: false,
+      // Lets a technician put Gridkeep on the phone's home screen and open it full screen.
+      manifest: {
+        name: 'Gridkeep',
+        short_name: 'Gridkeep',
+        description: 'Service desk and installed-base register for LED video walls',
+        start_url: '/',
+        scope: '/',
+        display: 'standalone',
+        theme_color: '#12343b',
+        background_color: '#12343b',
+        icons: [{ src: '/favicon.svg', sizes: 'any', type: 'image/svg+xml', purpose: 'any' }],
+      },
       workbox: {
         globPatterns: ['**/*.{html,js,css,woff2,svg}'],
         navigateFallback: '/index.html',

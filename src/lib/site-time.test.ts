@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatSiteTime, fromLocalInput, toLocalInput, utcOffset } from '@/lib/site-time';
+import { formatSiteTime, formatSiteWindow, fromLocalInput, toLocalInput, utcOffset } from '@/lib/site-time';
 
 // Offsets from the IANA time zone database: America/Chicago is UTC−6 in winter (CST) and
 // UTC−5 in summer (CDT); America/Phoenix keeps UTC−7 all year (no daylight saving).
@@ -24,5 +24,30 @@ describe('site local time', () => {
     expect(new Date(fromLocalInput('2026-07-10T09:00', 'America/Phoenix')!).toISOString()).toBe('2026-07-10T16:00:00.000Z');
     expect(toLocalInput(new Date('2026-12-10T15:00:00Z'), 'America/Chicago')).toBe('2026-12-10T09:00');
     expect(fromLocalInput('not a date', 'America/Chicago')).toBeNull();
+  });
+});
+
+describe('a window of time at the site', () => {
+  it('writes the window in the site’s zone, the zone named once', () => {
+    // 15:00 UTC on 10 December 2026 is 09:00 in Chicago (CST, UTC−6, no daylight time in December).
+    expect(formatSiteWindow('2026-12-10T15:00:00Z', '2026-12-10T17:30:00Z', 'America/Chicago')).toBe('Thu 10 Dec, 09:00–11:30 CST');
+    expect(formatSiteWindow('2026-12-10T15:00:00Z', '2026-12-10T17:30:00Z', 'America/Chicago', { withDay: false })).toBe('09:00–11:30 CST');
+  });
+
+  it('names both days when the window runs over the site’s midnight', () => {
+    // 05:00 UTC on 11 December is 23:00 on the 10th in Chicago.
+    expect(formatSiteWindow('2026-12-11T03:00:00Z', '2026-12-11T07:00:00Z', 'America/Chicago')).toBe(
+      'Thu 10 Dec, 21:00 – Fri 11 Dec, 01:00 CST',
+    );
+  });
+
+  it('adds the year when asked (a list over several years)', () => {
+    expect(formatSiteWindow('2026-12-10T15:00:00Z', '2026-12-10T17:30:00Z', 'America/Chicago', { withYear: true })).toBe(
+      'Thu 10 Dec 2026, 09:00–11:30 CST',
+    );
+  });
+
+  it('says nothing it cannot read', () => {
+    expect(formatSiteWindow('not a date', '2026-12-10T17:30:00Z', 'America/Chicago')).toBe('—');
   });
 });

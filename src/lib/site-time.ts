@@ -30,6 +30,34 @@ export function formatSiteTime(at: Date | string | null | undefined, timeZone: s
   }
 }
 
+/**
+ * A window of time in the site's local time, the zone named once: "09:00–11:00 CST", with the day
+ * in front when asked ("Thu 10 Dec, 09:00–11:00 CST", and the year with `withYear`); a window over
+ * the site's midnight names both days. '—' for what it cannot read.
+ */
+export function formatSiteWindow(
+  start: string,
+  end: string,
+  timeZone: string,
+  { withDay = true, withYear = false }: { withDay?: boolean; withYear?: boolean } = {},
+): string {
+  const at = (iso: string) => {
+    const d = parseISO(iso);
+    if (!isValid(d)) return null;
+    try {
+      return new TZDate(d, timeZone);
+    } catch {
+      return null;
+    }
+  };
+  const [s, e] = [at(start), at(end)];
+  if (!s || !e) return '—';
+  const zone = zoneAbbreviation(s, timeZone);
+  const day = withYear ? 'EEE d MMM yyyy' : 'EEE d MMM';
+  if (format(s, 'yyyy-MM-dd') !== format(e, 'yyyy-MM-dd')) return `${format(s, `${day}, HH:mm`)} – ${format(e, `${day}, HH:mm`)} ${zone}`;
+  return `${withDay ? `${format(s, day)}, ` : ''}${format(s, 'HH:mm')}–${format(e, 'HH:mm')} ${zone}`;
+}
+
 /** "in 3 hours", "5 minutes ago". */
 export function relativeTime(iso: string | null | undefined): string {
   if (!iso) return '';

@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { attachShot, desktop, escapeRegExp, phone, signIn } from './support.js';
+import { attachShot, desktop, escapeRegExp, getJson, phone, signIn } from './support.js';
 
 // The client portal's overview and the navigation of each shell, against the real app with the
 // seeded demo data: every place the navigation offers exists, and the overview shows the
@@ -65,6 +65,17 @@ test('a client sees their walls by site with open tickets, their open tickets, a
 
 test("the office's navigation offers only screens that exist", async ({ browser }) => {
   const { page } = await signIn(browser, 'office@gridkeep.test', desktop);
+  // The board's visits of the day include the demo's visit under way (other tests may book more today).
+  const start = new Date();
+  start.setHours(0, 0, 0, 0);
+  const end = new Date(start.getTime() + 24 * 3600_000);
+  const onSite = await getJson<{ items: { site: { name: string } }[] }>(
+    page.request,
+    `/api/visits?from=${encodeURIComponent(start.toISOString())}&to=${encodeURIComponent(end.toISOString())}&status=in_progress&limit=500`,
+  );
+  expect(onSite.items.length, 'the demo keeps a visit under way today').toBeGreaterThan(0);
+  const visitsToday = page.getByRole('list', { name: 'Visits today' });
+  await expect(visitsToday.getByRole('listitem').filter({ hasText: onSite.items[0].site.name }).first()).toContainText('On site');
   const nav = page.getByRole('navigation', { name: 'Main' });
   await expect(nav.getByRole('link')).toHaveText([
     'Today',

@@ -1,10 +1,7 @@
 import { flexRender, type Row } from '@tanstack/react-table';
 import clsx from 'clsx';
 import { Fragment, type ReactNode } from 'react';
-import { Alert } from '@/components/ui/alert';
-import { Button } from '@/components/ui/button';
 import { Spinner } from '@/components/ui/spinner';
-import { errorMessage } from '@/lib/errors';
 
 interface DataTableBodyProps<T> {
   rows: Row<T>[];
@@ -62,19 +59,5 @@ function DataRow<T>({ row, renderExpanded, span }: { row: Row<T>; renderExpanded
         </tr>
       ) : null}
     </Fragment>
-  );
-}
-
-/** In place of the table when the first page could not be loaded. */
-export function TableLoadError({ error, onRetry }: { error: unknown; onRetry?: () => void }) {
-  return (
-    <Alert tone="danger" title="The list could not be loaded.">
-      <p>{errorMessage(error)}</p>
-      {onRetry ? (
-        <Button size="sm" className="mt-2" onClick={onRetry}>
-          Try again
-        </Button>
-      ) : null}
-    </Alert>
   );
 }

@@ -10,7 +10,8 @@ import {
 } from '@tanstack/react-table';
 import { useMemo, useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
-import { DataTableBody, TableLoadError } from '@/components/ui/data-table-body';
+import { DataTableBody } from '@/components/ui/data-table-body';
+import { LoadError } from '@/components/ui/load-error';
 import { ColumnChooser } from '@/components/ui/data-table-column-chooser';
 import { useColumnVisibility, withExpander } from '@/components/ui/data-table-columns';
 import { CsvExportButton, type CsvValue } from '@/components/ui/data-table-csv';
@@ -170,7 +171,7 @@ export function DataTable<T>({
       </div>
 
       {error && rows.length === 0 ? (
-        <TableLoadError error={error} onRetry={onRetry} />
+        <LoadError title="The list could not be loaded." error={error} onRetry={onRetry} />
       ) : (
         <div className="overflow-x-auto rounded-md border border-stone-200 bg-white shadow-card">
           <table className="w-full border-collapse text-left text-sm">

@@ -6,7 +6,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { CloseVisitForm } from '@/features/visits/components/close-visit-form';
 import { VisitGate } from '@/features/visits/components/visit-gate';
-import { visitWindowText } from '@/features/visits/utils/visit-time';
+import { formatSiteWindow } from '@/lib/site-time';
 import { requireUser, staff } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isRecordId } from '@/lib/record-id';
@@ -47,7 +47,7 @@ function ClosePage({ visit }: { visit: VisitDetail }) {
         title="Close visit"
         description={
           <>
-            {visit.site.name} · {visitWindowText(visit.windowStart, visit.windowEnd, visit.site.timeZone)}
+            {visit.site.name} · {formatSiteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone)}
             <span className="block">
               {repairs === 0 ? 'No repairs logged.' : repairs === 1 ? '1 repair logged.' : `${repairs} repairs logged.`} The report lists
               them for the client.

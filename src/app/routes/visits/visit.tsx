@@ -15,7 +15,7 @@ import { VisitRepairs } from '@/features/visits/components/visit-repairs';
 import { VisitStatusBadge } from '@/features/visits/components/visit-status';
 import { VisitWork } from '@/features/visits/components/visit-work';
 import { useVisitChecklist } from '@/features/visits/hooks/use-visit-checklist';
-import { visitWindowText } from '@/features/visits/utils/visit-time';
+import { formatSiteWindow } from '@/lib/site-time';
 import { requireUser } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isRecordId } from '@/lib/record-id';
@@ -64,7 +64,7 @@ function VisitPage({ visit }: { visit: VisitDetail }) {
           <span className="mt-1 flex flex-col gap-1.5">
             <span className="flex flex-wrap items-center gap-2">
               <span className="text-md font-semibold tabular-nums text-ink-900">
-                {visitWindowText(visit.windowStart, visit.windowEnd, visit.site.timeZone)}
+                {formatSiteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone)}
               </span>
               <VisitStatusBadge status={visit.status} size="md" />
             </span>

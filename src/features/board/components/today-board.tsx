@@ -1,4 +1,5 @@
 import { LowStockList } from '@/features/board/components/low-stock-list';
+import { VisitsToday } from '@/features/board/components/visits-today';
 import { priorityGuidance, type OpenClockState, type TicketClockState, type TicketListItem } from '@shared/schemas/tickets';
 import { useQuery } from '@tanstack/react-query';
 import clsx from 'clsx';
@@ -38,7 +39,10 @@ export function TodayBoard() {
         <AttentionList />
         <WaitingList />
       </div>
-      <LowStockList />
+      <div className="grid gap-5 xl:grid-cols-2">
+        <VisitsToday />
+        <LowStockList />
+      </div>
     </div>
   );
 }

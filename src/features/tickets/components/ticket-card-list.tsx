@@ -1,6 +1,6 @@
 import { ChevronRight, Grid3x3, MapPin, Ticket } from 'lucide-react';
 import { Link } from 'react-router-dom';
-import { Button } from '@/components/ui/button';
+import { Pager } from '@/components/ui/data-table-pager';
 import { ListStates } from '@/components/ui/list-states';
 import { paths } from '@/config/paths';
 import type { TicketListItem } from '@shared/schemas/tickets';
@@ -86,17 +86,13 @@ export function TicketCardList({
       {onLoadMore ? (
         <div className="space-y-3">
           {list}
-          <div className="flex flex-wrap items-center justify-between gap-3 text-sm text-stone-600">
-            <p aria-live="polite">
-              {items.length === 1 ? '1 ticket shown' : `${items.length} tickets shown`}
-              {hasNextPage ? ', more available' : ''}
-            </p>
-            {hasNextPage ? (
-              <Button size="sm" onClick={onLoadMore} loading={isLoadingMore}>
-                Load more
-              </Button>
-            ) : null}
-          </div>
+          <Pager
+            shown={items.length}
+            hasNextPage={hasNextPage}
+            onLoadMore={onLoadMore}
+            isLoadingMore={isLoadingMore}
+            noun={['ticket', 'tickets']}
+          />
         </div>
       ) : (
         list

@@ -6,7 +6,7 @@ import { ListStates } from '@/components/ui/list-states';
 import { paths } from '@/config/paths';
 import { AddressLink } from '@/features/visits/components/address-link';
 import { VisitStatusBadge } from '@/features/visits/components/visit-status';
-import { visitWindowText } from '@/features/visits/utils/visit-time';
+import { formatSiteWindow } from '@/lib/site-time';
 
 interface VisitCardsProps {
   label: string;
@@ -50,7 +50,7 @@ function VisitCard({ visit: v, withDay }: { visit: VisitListItem; withDay: boole
         <div className="min-w-0 flex-1 space-y-1.5">
           <div className="flex flex-wrap items-center gap-x-2 gap-y-1">
             <span className="text-md font-semibold tabular-nums text-ink-900">
-              {visitWindowText(v.windowStart, v.windowEnd, v.site.timeZone, { withDay })}
+              {formatSiteWindow(v.windowStart, v.windowEnd, v.site.timeZone, { withDay })}
             </span>
             <VisitStatusBadge status={v.status} />
           </div>
@@ -96,7 +96,7 @@ export function TeamVisits({ items }: { items: VisitListItem[] }) {
           <Link to={paths.visit.getHref(v.id)} className="flex min-h-touch items-center gap-3 px-4 py-2.5 hover:bg-ink-50/40">
             <span className="min-w-0 flex-1">
               <span className="block text-sm font-medium tabular-nums text-ink-800">
-                {visitWindowText(v.windowStart, v.windowEnd, v.site.timeZone, { withDay: false })}
+                {formatSiteWindow(v.windowStart, v.windowEnd, v.site.timeZone, { withDay: false })}
               </span>
               <span className="block truncate text-base text-ink-950">{v.site.name}</span>
               <span className="block truncate text-sm text-stone-600">{v.technicians.map((t) => t.name).join(', ')}</span>

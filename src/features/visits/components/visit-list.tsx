@@ -1,26 +1,22 @@
 // Visits as a list: a table for the office, cards for the client portal and for phones. Times are
 // written at the site; a completed visit links to its report.
 import { visitStatusLabels, type VisitListItem } from '@shared/schemas/visits';
-import { TZDate } from '@date-fns/tz';
 import { createColumnHelper } from '@tanstack/react-table';
-import { format, parseISO } from 'date-fns';
 import { CalendarDays, ChevronRight, FileDown, Grid3x3, MapPin, UserRound } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { Button } from '@/components/ui/button';
+import { Pager } from '@/components/ui/data-table-pager';
 import { DataTable } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ListStates } from '@/components/ui/list-states';
 import { paths } from '@/config/paths';
 import { VisitStatusBadge } from '@/features/visits/components/visit-status';
-import { formatSiteTime, zoneAbbreviation } from '@/lib/site-time';
+import { formatSiteTime, formatSiteWindow } from '@/lib/site-time';
 import { visitReportHref } from '@/resources/visits';
 
 /** "Thu 10 Dec, 09:00–11:00 CST" at the site. */
 export function visitWhen(v: Pick<VisitListItem, 'windowStart' | 'windowEnd' | 'site'>) {
-  const zone = v.site.timeZone;
-  const at = (iso: string, pattern: string) => format(new TZDate(parseISO(iso), zone), pattern);
-  return `${at(v.windowStart, 'EEE d MMM yyyy, HH:mm')}–${at(v.windowEnd, 'HH:mm')} ${zoneAbbreviation(parseISO(v.windowStart), zone)}`;
+  return formatSiteWindow(v.windowStart, v.windowEnd, v.site.timeZone, { withYear: true });
 }
 
 const purpose = (v: VisitListItem) => (v.ticket ? `${v.ticket.ref} · ${v.ticket.title}` : 'Planned maintenance');
@@ -149,17 +145,13 @@ export function VisitCardList({ linkToVisit, showClient, ...list }: ListState & 
             </li>
           ))}
         </ul>
-        <div className="flex flex-wrap items-center justify-between gap-3 text-sm text-stone-600">
-          <p aria-live="polite">
-            {list.items.length === 1 ? '1 visit shown' : `${list.items.length} visits shown`}
-            {list.hasNextPage ? ', more available' : ''}
-          </p>
-          {list.hasNextPage ? (
-            <Button size="sm" onClick={list.onLoadMore} loading={list.isLoadingMore}>
-              Load more
-            </Button>
-          ) : null}
-        </div>
+        <Pager
+          shown={list.items.length}
+          hasNextPage={list.hasNextPage}
+          onLoadMore={list.onLoadMore}
+          isLoadingMore={list.isLoadingMore}
+          noun={['visit', 'visits']}
+        />
       </div>
     </ListStates>
   );
