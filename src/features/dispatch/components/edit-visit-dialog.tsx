@@ -12,7 +12,8 @@ import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
 import { useUpdateVisit } from '@/features/dispatch/api/mutations';
 import { editVisitForm, TechnicianChecks, WhenFields } from '@/features/dispatch/components/visit-form';
-import { siteClock, siteDate, siteDay, siteWindow } from '@/features/dispatch/utils/week';
+import { siteClock, siteDate } from '@/features/dispatch/utils/week';
+import { formatSiteWindow } from '@/lib/site-time';
 import { formatSiteTime } from '@/lib/site-time';
 
 export const movedMessage = 'Moved. The technicians and the client’s contacts were sent an updated invitation.';
@@ -37,7 +38,7 @@ export function EditVisitDialog({ visit, technicians, onClose }: EditVisitDialog
       title={visit ? visitTitle(visit) : ''}
       description={
         visit
-          ? `${visitStatusLabels[visit.status]} · ${siteDay(visit.windowStart, visit.site.timeZone)}, ${siteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone)}`
+          ? `${visitStatusLabels[visit.status]} · ${formatSiteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone)}`
           : undefined
       }
       size="lg"

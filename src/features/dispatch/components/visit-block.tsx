@@ -4,7 +4,7 @@ import clsx from 'clsx';
 import { TriangleAlert } from 'lucide-react';
 import type { DragEvent, KeyboardEvent } from 'react';
 import { canChange, visitTitle } from '@/features/dispatch/components/edit-visit-dialog';
-import { siteDay, siteWindow } from '@/features/dispatch/utils/week';
+import { formatSiteWindow } from '@/lib/site-time';
 
 // Written out in full so Tailwind finds every class name. Colour is never the only signal: the status is written too.
 const statusLook: Record<VisitStatus, string> = {
@@ -30,7 +30,7 @@ export function VisitBlock({ visit, technicianId, onOpen, onDragStart, onDragEnd
   const movable = canChange(visit) && visit.status === 'planned';
   const label = [
     visitTitle(visit),
-    `${siteDay(visit.windowStart, visit.site.timeZone)}, ${siteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone)}`,
+    formatSiteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone),
     visitStatusLabels[visit.status],
     bookedTwice ? 'booked twice' : '',
   ]
@@ -66,7 +66,7 @@ export function VisitBlock({ visit, technicianId, onOpen, onDragStart, onDragEnd
       )}
     >
       <span className={clsx('block font-semibold tabular-nums', cancelled && 'line-through')}>
-        {siteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone)}
+        {formatSiteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone, { withDay: false })}
       </span>
       <span className={clsx('block truncate', cancelled && 'line-through')}>{visit.site.name}</span>
       <span className={clsx('block truncate', visit.ticket ? 'font-mono' : 'italic')}>

@@ -5,6 +5,7 @@ import { createVisitInput, updateVisitInput, type CreateVisitInput, type UpdateV
 import type { StaffMember } from '@shared/schemas/users';
 import { visitKinds } from '@shared/schemas/enums';
 import { get, useController, useFormContext } from 'react-hook-form';
+import { addDays, format, parseISO } from 'date-fns';
 import { z } from 'zod';
 import { FieldErrorText } from '@/components/ui/field';
 import { Spinner } from '@/components/ui/spinner';
@@ -23,11 +24,16 @@ const whenAndWho = {
   technicianIds: z.array(z.string()),
 };
 
-/** The window at the site; a time the zone skips (the hour clocks go forward) comes back empty and the contract names it. */
-const windowAt = (v: { date: string; windowStart: string; windowEnd: string }, timeZone: string) => ({
-  windowStart: atSite(v.date, v.windowStart.slice(0, 5), timeZone) ?? '',
-  windowEnd: atSite(v.date, v.windowEnd.slice(0, 5), timeZone) ?? '',
-});
+/**
+ * The window at the site; an end earlier than the start is on the next day (an overnight visit,
+ * 22:00–02:00). A time the zone skips (the hour clocks go forward) comes back empty and the
+ * contract names it.
+ */
+export const windowAt = (v: { date: string; windowStart: string; windowEnd: string }, timeZone: string) => {
+  const [start, end] = [v.windowStart.slice(0, 5), v.windowEnd.slice(0, 5)];
+  const endDate = end < start && day.safeParse(v.date).success ? format(addDays(parseISO(v.date), 1), 'yyyy-MM-dd') : v.date;
+  return { windowStart: atSite(v.date, start, timeZone) ?? '', windowEnd: atSite(endDate, end, timeZone) ?? '' };
+};
 
 /**
  * The plan form: its values become a `CreateVisitInput` and are checked by the contract itself,
@@ -71,7 +77,8 @@ export function WhenFields({ timeZone }: { timeZone: string | undefined }) {
       <p className="text-sm text-stone-600">
         {timeZone
           ? `Times at the site (${zoneAbbreviation(new Date(), timeZone)}, ${timeZone.replace(/_/g, ' ')}).`
-          : 'Times at the site, once the ticket or wall is chosen.'}
+          : 'Times at the site, once the ticket or wall is chosen.'}{' '}
+        An end before the start is on the next day.
       </p>
       <div className="grid gap-3 sm:grid-cols-3">
         <TextField name="date" label="Day" type="date" />

@@ -3,7 +3,8 @@ import { format, parseISO } from 'date-fns';
 import { ChevronLeft, ChevronRight } from 'lucide-react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { siteDay, siteWindow, type DoubleBooking } from '@/features/dispatch/utils/week';
+import { type DoubleBooking } from '@/features/dispatch/utils/week';
+import { formatSiteWindow } from '@/lib/site-time';
 import { formatSiteTime } from '@/lib/site-time';
 
 interface WeekBarProps {
@@ -58,9 +59,7 @@ export function WeekBar({ days, isThisWeek, onWeek, showCancelled, onShowCancell
 
 const bookingTime = (b: DoubleBooking['first'], zoneOf: (visitId: string) => string | undefined) => {
   const zone = zoneOf(b.visitId);
-  return zone
-    ? `${siteDay(b.windowStart, zone)} ${siteWindow(b.windowStart, b.windowEnd, zone)}`
-    : formatSiteTime(b.windowStart, undefined);
+  return zone ? formatSiteWindow(b.windowStart, b.windowEnd, zone) : formatSiteTime(b.windowStart, undefined);
 };
 
 /** The week's double bookings in words, above the grid, so none is missed. */

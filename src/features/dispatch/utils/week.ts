@@ -4,7 +4,7 @@
 import { TZDate } from '@date-fns/tz';
 import { addDays, differenceInCalendarDays, format, isValid, parseISO, startOfWeek } from 'date-fns';
 import type { VisitListItem } from '@shared/schemas/visits';
-import { fromLocalInput, zoneAbbreviation } from '@/lib/site-time';
+import { fromLocalInput } from '@/lib/site-time';
 
 const dateOnly = /^\d{4}-\d{2}-\d{2}$/;
 const ymd = (d: Date) => format(d, 'yyyy-MM-dd');
@@ -40,15 +40,8 @@ export function weekWindow(monday: string): { from: string; to: string } {
 /** The date (YYYY-MM-DD) of a moment at the site. */
 export const siteDate = (at: string, timeZone: string) => format(new TZDate(parseISO(at), timeZone), 'yyyy-MM-dd');
 
-/** The day of a moment at the site, "Thu 10 Dec" (the zone goes with the times). */
-export const siteDay = (at: string, timeZone: string) => format(new TZDate(parseISO(at), timeZone), 'EEE d MMM');
-
 /** The time of day (HH:mm) of a moment at the site. */
 export const siteClock = (at: string, timeZone: string) => format(new TZDate(parseISO(at), timeZone), 'HH:mm');
-
-/** "09:00–11:00 CST": a window at the site. */
-export const siteWindow = (windowStart: string, windowEnd: string, timeZone: string) =>
-  `${siteClock(windowStart, timeZone)}–${siteClock(windowEnd, timeZone)} ${zoneAbbreviation(parseISO(windowStart), timeZone)}`;
 
 /** A date and a time of day at the site, as an instant with its offset; null when either is not valid. */
 export const atSite = (date: string, time: string, timeZone: string) => fromLocalInput(`${date}T${time}`, timeZone);
