@@ -90,14 +90,17 @@ export default {
     },
     extend: {
       spacing: {
-        /** The smallest touch target (WCAG 2.2 SC 2.5.5 AAA asks 44 × 44 CSS px). */
-        touch: '2.75rem',
+        /**
+         * The smallest touch target (WCAG 2.2 SC 2.5.5 AAA asks 44 × 44 CSS px). In px, not rem:
+         * the root font is 15 px, where 2.75rem would be 41.25 px.
+         */
+        touch: '44px',
         'touch-lg': '3.5rem',
         sidebar: '15rem',
         topbar: '3.5rem',
       },
-      minHeight: { touch: '2.75rem', 'touch-lg': '3.5rem' },
-      minWidth: { touch: '2.75rem' },
+      minHeight: { touch: '44px', 'touch-lg': '3.5rem' },
+      minWidth: { touch: '44px' },
       maxWidth: { prose: '65ch', form: '28rem' },
       borderRadius: { DEFAULT: '0.375rem', md: '0.5rem', lg: '0.75rem' },
       boxShadow: {

@@ -1,6 +1,6 @@
 import { Router, type Request, type Response } from 'express';
 import { z } from 'zod';
-import { changePasswordInput, forgotPasswordInput, loginInput, redeemTokenInput } from '../../shared/schemas/auth.js';
+import { changePasswordInput, forgotPasswordInput, loginInput, redeemTokenInput, type SessionAnswer } from '../../shared/schemas/auth.js';
 import { actorOf, requireAuth, sessionCookieName, sessionCookieOptions } from '../middleware/auth.js';
 import { validated } from '../middleware/validate.js';
 import * as auth from '../services/auth.js';
@@ -29,6 +29,14 @@ authRouter.post('/logout', async (req, res) => {
 
 authRouter.get('/me', requireAuth, async (req, res) => {
   res.json({ user: await auth.currentUser(actorOf(req)) });
+});
+
+// What the app asks on every first load: signed out is an answer here (200, no user), not an
+// error, so a browser opening the sign-in page logs nothing. `/me` keeps its 401 for callers
+// that need a session.
+authRouter.get('/session', async (req, res) => {
+  const answer: SessionAnswer = { user: req.actor ? await auth.currentUser(req.actor) : null };
+  res.json(answer);
 });
 
 authRouter.post(

@@ -29,7 +29,7 @@ import { staffRouter } from './staff.js';
 import { ticketsRouter, ticketViewsRouter } from './tickets.js';
 import { auditRouter, usersRouter } from './users.js';
 import { visitsRouter } from './visits.js';
-import { wallPlanRouter } from './wall-plan.js';
+import { wallFromPlanRouter, wallPlanRouter } from './wall-plan.js';
 
 /** Mounts every API router under /api. Keep one line per domain. */
 export function apiRoutes(api: Router) {
@@ -46,6 +46,7 @@ export function apiRoutes(api: Router) {
   api.use('/walls/:id/documents', wallDocumentsRouter);
   api.use('/walls/:id/plan', wallPlanRouter);
   api.use('/walls/:id/spares', wallSparesRouter);
+  api.use('/walls/from-plan', wallFromPlanRouter);
   api.use('/walls', wallsRouter);
   api.use('/attachments', attachmentsRouter);
   api.use('/cabinets', cabinetsRouter);

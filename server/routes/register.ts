@@ -5,7 +5,7 @@ import { cabinetModelInput, cabinetModelPatch } from '../../shared/schemas/cabin
 import { cabinetPatch, listCabinetsQuery, moveCabinetInput, placeCabinetInput, swapCabinetInput } from '../../shared/schemas/cabinets.js';
 import { clientInput, clientPatch, contactInput, contactPatch, listClientsQuery } from '../../shared/schemas/clients.js';
 import { controllerInput, controllerPatch } from '../../shared/schemas/controllers.js';
-import { searchQuery } from '../../shared/schemas/search.js';
+import { searchQuery, serialTailQuery } from '../../shared/schemas/search.js';
 import { listSitesQuery, siteInput, sitePatch } from '../../shared/schemas/sites.js';
 import { listWallsQuery, wallInput, wallPatch } from '../../shared/schemas/walls.js';
 import { actorOf, requireAuth, requireRole } from '../middleware/auth.js';
@@ -13,7 +13,7 @@ import { validated } from '../middleware/validate.js';
 import * as cabinets from '../services/cabinets.js';
 import * as catalogue from '../services/catalogue.js';
 import * as clients from '../services/clients.js';
-import { search } from '../services/search.js';
+import { search, serialsEndingIn } from '../services/search.js';
 import * as sites from '../services/sites.js';
 import * as walls from '../services/walls.js';
 
@@ -257,5 +257,13 @@ searchRouter.get(
   requireAuth,
   validated({ query: searchQuery }, async ({ query }, req, res) => {
     res.json(await search(actorOf(req), query.q));
+  }),
+);
+// The Scan page's typed lookup: the serial, or the serials ending in what was read off a label.
+searchRouter.get(
+  '/serials',
+  requireAuth,
+  validated({ query: serialTailQuery }, async ({ query }, req, res) => {
+    res.json(await serialsEndingIn(actorOf(req), query.tail));
   }),
 );

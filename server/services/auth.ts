@@ -7,6 +7,7 @@ import { authTokens, sessions, signInAttempts, users } from '../db/schema/accoun
 import { clients } from '../db/schema/clients.js';
 import { AppError, badRequest, notFound, tooManyRequests } from '../errors.js';
 import { queueMail } from '../integrations/mail.js';
+import { renderMail } from './mail-layout.js';
 import { logger } from '../logger.js';
 import type { Actor } from '../middleware/auth.js';
 import { signSessionToken } from '../middleware/auth.js';
@@ -205,10 +206,17 @@ export async function queueInviteMail(tx: DbOrTx, user: { id: string; email: str
   await queueMail(tx, {
     to: [user.email],
     subject: 'You are invited to Gridkeep',
-    text:
-      `Hello ${user.name},\n\n${invitedBy} has invited you to Gridkeep.\n\n` +
-      `Choose your password here (the link works once and expires in 7 days):\n${link}\n\n` +
-      `If you did not expect this, you can ignore this message.\n`,
+    ...renderMail({
+      preview: `${invitedBy} has invited you to Gridkeep.`,
+      heading: 'You are invited to Gridkeep',
+      paragraphs: [
+        `Hello ${user.name},`,
+        `${invitedBy} has invited you to Gridkeep.`,
+        'Choose your password: the link works once and expires in 7 days.',
+      ],
+      action: { label: 'Choose your password', url: link },
+      footnote: 'If you did not expect this, you can ignore this message.',
+    }),
   });
 }
 
@@ -227,10 +235,17 @@ export async function requestPasswordReset(email: string) {
     await queueMail(tx, {
       to: [user.email],
       subject: 'Reset your Gridkeep password',
-      text:
-        `Hello ${user.name},\n\nSomeone (we hope you) asked to reset your Gridkeep password.\n\n` +
-        `Choose a new password here (the link works once and expires in 1 hour):\n${setPasswordLink(token)}\n\n` +
-        `If you did not ask for this, ignore this message: your password stays as it is.\n`,
+      ...renderMail({
+        preview: 'Choose a new password for Gridkeep.',
+        heading: 'Reset your Gridkeep password',
+        paragraphs: [
+          `Hello ${user.name},`,
+          'Someone (we hope you) asked to reset your Gridkeep password.',
+          'Choose a new password: the link works once and expires in 1 hour.',
+        ],
+        action: { label: 'Choose a new password', url: setPasswordLink(token) },
+        footnote: 'If you did not ask for this, ignore this message: your password stays as it is.',
+      }),
     });
   });
 }

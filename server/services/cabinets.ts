@@ -1,4 +1,5 @@
 import type { CabinetDetail, CabinetEvent, CabinetSummary } from '../../shared/schemas/cabinets.js';
+import type { CabinetStatus } from '../../shared/schemas/enums.js';
 import type { Page } from '../../shared/schemas/common.js';
 import Papa from 'papaparse';
 import { aliasedTable, and, desc, eq, inArray, like, sql } from 'drizzle-orm';
@@ -30,6 +31,13 @@ import { found, isStaff, tenantWhere } from './scope.js';
 import { visibleWall } from './walls.js';
 
 const escapeLike = (s: string) => s.replace(/[%_\\]/g, '\\$&');
+
+/**
+ * A recall names a batch family ("K7-2403" for K7-2403-A, -B…): the codes that start with it, in
+ * any case (typed from a maker's letter as often as copied). The index on lower(batch) with
+ * text_pattern_ops serves this prefix match over a million cabinets.
+ */
+export const batchFamily = (prefix: string) => sql`lower(${cabinets.batch}) like ${`${escapeLike(prefix.toLowerCase())}%`}`;
 
 /** Cabinets a caller may see: client users only those on their own walls. */
 function visibleCabinets(actor: Actor) {
@@ -101,8 +109,7 @@ export async function listCabinets(actor: Actor, query: ListCabinetsQuery): Prom
         query.siteId ? eq(walls.siteId, query.siteId) : undefined,
         query.modelId ? eq(cabinets.cabinetModelId, query.modelId) : undefined,
         query.status ? eq(cabinets.status, query.status) : undefined,
-        // Batch codes are typed from a maker's letter as often as copied: any case matches.
-        query.batch ? sql`lower(${cabinets.batch}) = lower(${query.batch})` : undefined,
+        query.batch ? batchFamily(query.batch) : undefined,
         query.sort === 'installedOn'
           ? afterCursorNullsLast(sortColumn, cabinets.id, cursor, query.dir)
           : afterCursor(sortColumn, cabinets.id, cursor, query.dir),
@@ -459,6 +466,47 @@ export async function updateCabinet(actor: Actor, id: string, input: CabinetPatc
   return getCabinet(actor, { id });
 }
 
+const statusWords: Record<CabinetStatus, string> = {
+  installed: 'installed',
+  spare: 'a spare',
+  at_bench: 'at the bench',
+  returned_to_vendor: 'returned to the vendor',
+  retired: 'retired',
+};
+
+/**
+ * Where a serial the import names is registered now, for the import's wall: its wall and
+ * position, or where it is kept, or its status. Another organisation's wall or on-site kit is
+ * only "elsewhere": a refusal (which the office may forward to the client) never tells one
+ * client what another has.
+ */
+function whereRegistered(
+  found: {
+    status: CabinetStatus;
+    wallId: string | null;
+    wallName: string | null;
+    siteName: string | null;
+    wallClientId: string | null;
+    column: number | null;
+    row: number | null;
+    locationName: string | null;
+    locationClientId: string | null;
+  },
+  importing: { wallId: string; clientId: string },
+): string {
+  const position = found.column && found.row ? cellLabel({ column: found.column, row: found.row }) : null;
+  if (found.wallId) {
+    if (found.wallId === importing.wallId) return ` on this wall at ${position}`;
+    if (found.wallClientId !== importing.clientId) return ' elsewhere';
+    return ` on ${found.wallName} (${found.siteName}) at ${position}`;
+  }
+  if (found.locationName) {
+    if (found.locationClientId && found.locationClientId !== importing.clientId) return ' elsewhere';
+    return `, ${statusWords[found.status]} kept at ${found.locationName}`;
+  }
+  return `, off any wall (${statusWords[found.status]})`;
+}
+
 // ---------------------------------------------------------------------------------------------
 // CSV import: serial, column, row, batch. Every bad row is reported with its line number and
 // reason; nothing is written unless the whole file is good.
@@ -534,17 +582,33 @@ export async function importCabinets(actor: Actor, wallId: string, csv: string):
     else byCell.set(cell, { line: r.line, serial: r.serial });
   }
 
-  // Against what is already registered.
+  // Against what is already registered, saying where each serial is now.
   const serials = [...bySerial.keys()];
   for (let i = 0; i < serials.length; i += 5000) {
     const existing = await db()
-      .select({ serial: cabinets.serial, wallId: cabinets.wallId, column: cabinets.column, row: cabinets.row })
+      .select({
+        serial: cabinets.serial,
+        status: cabinets.status,
+        wallId: cabinets.wallId,
+        wallName: walls.name,
+        siteName: sites.name,
+        wallClientId: walls.clientId,
+        column: cabinets.column,
+        row: cabinets.row,
+        locationName: stockLocations.name,
+        locationClientId: stockLocations.clientId,
+      })
       .from(cabinets)
+      .leftJoin(walls, eq(walls.id, cabinets.wallId))
+      .leftJoin(sites, eq(sites.id, walls.siteId))
+      .leftJoin(stockLocations, eq(stockLocations.id, cabinets.stockLocationId))
       .where(inArray(cabinets.serial, serials.slice(i, i + 5000)));
     for (const e of existing) {
-      const where =
-        e.wallId === wallId && e.column && e.row ? ` (already on this wall at ${cellLabel({ column: e.column, row: e.row })})` : '';
-      errors.push({ line: bySerial.get(e.serial)!, serial: e.serial, message: `duplicate serial: already registered${where}` });
+      errors.push({
+        line: bySerial.get(e.serial)!,
+        serial: e.serial,
+        message: `duplicate serial: already registered${whereRegistered(e, { wallId, clientId: wall.clientId })}`,
+      });
     }
   }
   const occupied = await db()

@@ -31,6 +31,7 @@ import { visits, visitTechnicians } from '../db/schema/visits.js';
 import { cabinets, walls } from '../db/schema/walls.js';
 import { AppError, conflict, forbidden } from '../errors.js';
 import { queueMail } from '../integrations/mail.js';
+import { renderMail } from './mail-layout.js';
 import type { Actor } from '../middleware/auth.js';
 import type { z } from 'zod';
 import type { partInput, partPatch, reorderPointInput, stockLocationInput, stockLocationPatch } from '../../shared/schemas/stock.js';
@@ -454,7 +455,24 @@ async function watchReorderPoint(tx: Tx, partId: string, locationId: string, mov
   await queueMail(tx, {
     to: [config().OFFICE_EMAIL],
     subject: `Low stock: ${names.part} at ${names.location} (${onHand} left)`,
-    text: `${names.part} (${names.sku}) at ${names.location} is down to ${onHand}, at or below its reorder point of ${point.minQuantity}.\nReorder ${point.reorderQuantity}.\n`,
+    ...renderMail({
+      preview: `${names.part} at ${names.location}: ${onHand} left. Reorder ${point.reorderQuantity}.`,
+      heading: `Low stock: ${names.part}`,
+      paragraphs: [
+        `${names.part} (${names.sku}) at ${names.location} is down to ${onHand}, at or below its reorder point of ${point.minQuantity}.`,
+      ],
+      facts: [
+        { label: 'Part', value: `${names.part} (${names.sku})` },
+        { label: 'Location', value: names.location },
+        { label: 'On hand', value: String(onHand) },
+        { label: 'Reorder point', value: String(point.minQuantity) },
+        { label: 'Reorder', value: String(point.reorderQuantity) },
+      ],
+      action: {
+        label: 'Open the stock',
+        url: `${config().APP_URL}/stock?${new URLSearchParams({ locationId, partId })}`,
+      },
+    }),
     dedupeKey: `low-stock:${partId}:${locationId}:${movementId}`,
   });
 }

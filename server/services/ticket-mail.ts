@@ -1,12 +1,14 @@
-// The e-mails a ticket sends. Queued in the same transaction as the change that causes them
-// (server/integrations/mail.ts sends them); internal comments never appear in a client's mail.
+// The e-mails a ticket sends, each as HTML with a plain-text alternative (mail-layout.ts). Queued
+// in the same transaction as the change that causes them (server/integrations/mail.ts sends
+// them); internal comments never appear in a client's mail, and a comment's author never gets it.
 import { eq } from 'drizzle-orm';
-import { statusLabels, ticketRef } from '../../shared/schemas/tickets.js';
+import { priorityGuidance, statusLabels, ticketRef } from '../../shared/schemas/tickets.js';
 import { cellLabel } from '../../shared/calc/grid.js';
 import { config } from '../config.js';
 import type { DbOrTx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
 import { queueMail } from '../integrations/mail.js';
+import { renderMail, type MailFact, type MailMessage } from './mail-layout.js';
 import { updateRecipients } from './clients.js';
 
 export interface TicketForMail {
@@ -28,13 +30,27 @@ export interface TicketForMail {
 
 const ticketLink = (id: string) => `${config().APP_URL}/tickets/${id}`;
 
-function summary(t: TicketForMail) {
-  const where = [t.clientName, t.siteName, t.wallName].filter(Boolean).join(' · ');
-  const cells = t.cells.length ? `\nCells: ${t.cells.map(cellLabel).join(', ')}` : '';
-  return `${ticketRef(t.number)} — ${t.title}\n${where}\nPriority: ${t.priority}${cells}`;
+const statusLabel = (status: string) => statusLabels[status as keyof typeof statusLabels] ?? status;
+
+/** What every ticket mail shows: its reference, state, place and the cells reported. */
+function ticketFacts(t: TicketForMail): MailFact[] {
+  const facts: MailFact[] = [
+    { label: 'Ticket', value: `${ticketRef(t.number)} — ${t.title}` },
+    { label: 'State', value: statusLabel(t.status) },
+    { label: 'Priority', value: priorityGuidance[t.priority as keyof typeof priorityGuidance]?.label ?? t.priority },
+    { label: 'Where', value: [t.clientName, t.siteName, t.wallName].filter(Boolean).join(' · ') },
+  ];
+  if (t.cells.length) facts.push({ label: t.cells.length === 1 ? 'Cell' : 'Cells', value: t.cells.map(cellLabel).join(', ') });
+  return facts;
 }
 
-/** The client people who hear about a ticket: its reporter (if a client user) and the site's contacts. */
+const sameAddress = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
+
+/**
+ * The client people who hear about a ticket: its reporter (if a client user) and the site's
+ * contacts, each address once. `excludeEmail` (a comment's author) is left out however a contact
+ * spells it: nobody is mailed their own words.
+ */
 async function clientRecipients(tx: DbOrTx, t: TicketForMail, excludeEmail?: string) {
   const list = await updateRecipients(tx, t.clientId, t.siteId);
   if (t.reporterId) {
@@ -44,14 +60,23 @@ async function clientRecipients(tx: DbOrTx, t: TicketForMail, excludeEmail?: str
       .where(eq(users.id, t.reporterId));
     if (reporter && reporter.role === 'client' && !reporter.disabledAt) list.unshift(reporter.email);
   }
-  return [...new Set(list)].filter((e) => e !== excludeEmail);
+  const unique = list.filter((e, i) => list.findIndex((other) => sameAddress(other, e)) === i);
+  return excludeEmail ? unique.filter((e) => !sameAddress(e, excludeEmail)) : unique;
 }
 
 export async function mailOfficeNewTicket(tx: DbOrTx, t: TicketForMail, reporterName: string) {
+  const ref = ticketRef(t.number);
   await queueMail(tx, {
     to: [config().OFFICE_EMAIL],
-    subject: `New ${t.priority} ticket ${ticketRef(t.number)}: ${t.title}`,
-    text: `${reporterName} opened a ticket.\n\n${summary(t)}\n\n${t.description}\n\nOpen it: ${ticketLink(t.id)}\n`,
+    subject: `New ${t.priority} ticket ${ref}: ${t.title}`,
+    ...renderMail({
+      preview: `${reporterName} opened ${ref}: ${t.title}`,
+      heading: `New ticket ${ref}`,
+      paragraphs: [`${reporterName} opened a ${t.priority}-priority ticket.`],
+      ...(t.description ? { quote: { author: reporterName, body: t.description } } : {}),
+      facts: ticketFacts(t),
+      action: { label: 'Open the ticket', url: ticketLink(t.id) },
+    }),
     dedupeKey: `ticket:${t.id}:opened`,
   });
 }
@@ -69,34 +94,47 @@ export async function mailClientUpdate(tx: DbOrTx, t: TicketForMail, update: Cli
   if (to.length === 0) return;
   const ref = ticketRef(t.number);
   let subject: string;
-  let body: string;
+  let heading: string;
+  let paragraphs: string[] = [];
+  let quote: MailMessage['quote'];
   let dedupeKey: string;
   switch (update.kind) {
     case 'acknowledged':
       subject = `We are on it: ${ref} ${t.title}`;
-      body = `We have received your ticket and are looking at it.`;
+      heading = `We are on it: ${ref}`;
+      paragraphs = ['We have received your ticket and are looking at it.'];
       dedupeKey = `ticket:${t.id}:acknowledged`;
       break;
     case 'comment':
       subject = `New reply on ${ref}: ${t.title}`;
-      body = `${update.authorName} wrote:\n\n${update.body}`;
+      heading = `New reply on ${ref}`;
+      quote = { author: update.authorName, body: update.body };
       dedupeKey = `ticket:${t.id}:comment:${update.commentId}`;
       break;
     case 'resolved':
       subject = `Resolved: ${ref} ${t.title}`;
-      body = `We have marked this ticket resolved. If the fault is still there, reply in the portal and we will reopen it.`;
+      heading = `Resolved: ${ref}`;
+      paragraphs = ['We have marked this ticket resolved. If the fault is still there, reply in the portal and we will reopen it.'];
       dedupeKey = `ticket:${t.id}:resolved:${Date.now()}`;
       break;
     case 'status':
-      subject = `${ref} is now ${statusLabels[update.status as keyof typeof statusLabels] ?? update.status}`;
-      body = `The status of your ticket changed to: ${statusLabels[update.status as keyof typeof statusLabels] ?? update.status}.`;
+      subject = `${ref} is now ${statusLabel(update.status)}`;
+      heading = subject;
+      paragraphs = [`The status of your ticket changed to: ${statusLabel(update.status)}.`];
       dedupeKey = `ticket:${t.id}:status:${update.status}:${Date.now()}`;
       break;
   }
   await queueMail(tx, {
     to,
     subject,
-    text: `${body}\n\n${summary(t)}\n\nFollow it in the portal: ${ticketLink(t.id)}\n`,
+    ...renderMail({
+      preview: quote ? `${quote.author}: ${quote.body.slice(0, 120)}` : (paragraphs[0] ?? subject),
+      heading,
+      paragraphs,
+      ...(quote ? { quote } : {}),
+      facts: ticketFacts(t),
+      action: { label: 'Follow it in the portal', url: ticketLink(t.id) },
+    }),
     dedupeKey,
   });
 }

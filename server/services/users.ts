@@ -8,7 +8,7 @@ import { auditEvents, authTokens, users } from '../db/schema/accounts.js';
 import { clients } from '../db/schema/clients.js';
 import { badRequest, conflict } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
-import { recordAudit } from './audit.js';
+import { nameAuditEvents, recordAudit, type NamedAuditEvent } from './audit.js';
 import { queueInviteMail, revokeSessions } from './auth.js';
 import { afterCursor, decodeCursor, pageOf } from './pagination.js';
 import { found } from './scope.js';
@@ -162,25 +162,30 @@ const auditColumns = {
   createdAt: auditEvents.createdAt,
 };
 
-function presentAuditEvent(r: {
-  id: number;
-  actorId: string | null;
-  actorName: string | null;
-  entity: string;
-  entityId: string;
-  action: string;
-  before: unknown;
-  after: unknown;
-  createdAt: Date;
-}): AuditEventView {
+function presentAuditEvent(
+  r: {
+    id: number;
+    actorId: string | null;
+    actorName: string | null;
+    entity: string;
+    entityId: string;
+    action: string;
+    before: unknown;
+    after: unknown;
+    createdAt: Date;
+  },
+  named: NamedAuditEvent,
+): AuditEventView {
   return {
     id: r.id,
     actor: r.actorId ? { id: r.actorId, name: r.actorName ?? '' } : null,
     entity: r.entity,
     entityId: r.entityId,
+    record: named.record,
     action: r.action,
-    before: r.before,
-    after: r.after,
+    before: named.before,
+    after: named.after,
+    references: named.references,
     createdAt: r.createdAt.toISOString(),
   };
 }
@@ -202,7 +207,8 @@ export async function listAudit(query: ListAuditQuery): Promise<Page<AuditEventV
     .orderBy(desc(auditEvents.createdAt), desc(auditEvents.id))
     .limit(query.limit + 1);
   const page = pageOf(rows, query.limit, (r) => [r.createdAt.toISOString(), r.id]);
-  return { items: page.items.map(presentAuditEvent), nextCursor: page.nextCursor };
+  const named = await nameAuditEvents(page.items);
+  return { items: page.items.map((r, i) => presentAuditEvent(r, named[i])), nextCursor: page.nextCursor };
 }
 
 /** A member of the team as a picker shows them: no e-mail address, phone or password state. */

@@ -12,6 +12,7 @@ import { users } from '../db/schema/accounts.js';
 import { contacts } from '../db/schema/clients.js';
 import type { MailAttachmentRef } from '../db/schema/mail.js';
 import { queueMail } from '../integrations/mail.js';
+import { renderMail, type MailFact } from './mail-layout.js';
 import { updateRecipients } from './clients.js';
 
 export interface VisitForMail {
@@ -73,7 +74,9 @@ async function clientInvitees(tx: DbOrTx, v: Pick<VisitForMail, 'clientId' | 'si
       .where(eq(users.id, v.ticket.reporterId));
     if (reporter && reporter.role === 'client' && !reporter.disabledAt) people.unshift({ email: reporter.email, name: reporter.name });
   }
-  return people.filter((p, i) => people.findIndex((q) => q.email === p.email) === i);
+  // One line per person: addresses that differ only in capitals reach one mailbox in practice (RFC 5321 §2.4 lets the
+  // local part be case-sensitive; mail providers do not make use of it).
+  return people.filter((p, i) => people.findIndex((q) => q.email.toLowerCase() === p.email.toLowerCase()) === i);
 }
 
 function title(v: VisitForMail) {
@@ -165,15 +168,63 @@ function subjectFor(v: VisitForMail, change: VisitChange, audience: 'technicians
   return `${verb} for ${ref}`;
 }
 
-function opening(v: VisitForMail, change: VisitChange, audience: 'technicians' | 'client' | 'removed') {
+/** The first paragraphs of a change's mail: what happened, and that the calendar file is attached. */
+function opening(v: VisitForMail, change: VisitChange, audience: 'technicians' | 'client' | 'removed'): string[] {
   const when = formatWindow(v.windowStart, v.windowEnd, v.timeZone);
-  if (audience === 'removed') return `You are no longer booked on this visit (${when}). The cancellation is attached for your calendar.`;
+  if (audience === 'removed')
+    return [`You are no longer booked on this visit (${when}).`, 'The cancellation is attached for your calendar.'];
   if (change === 'cancelled') {
-    const why = v.cancelReason ? `\nReason: ${v.cancelReason}` : '';
-    return `The visit planned for ${when} is cancelled.${why}\nThe cancellation is attached for your calendar.`;
+    return [
+      `The visit planned for ${when} is cancelled.`,
+      ...(v.cancelReason ? [`Reason: ${v.cancelReason}`] : []),
+      'The cancellation is attached for your calendar.',
+    ];
   }
   const lead = change === 'booked' ? 'A technician visit is planned' : 'The visit has moved; it is now planned';
-  return `${lead} for ${when}.\nThe invitation is attached for your calendar.`;
+  return [`${lead} for ${when}.`, 'The invitation is attached for your calendar.'];
+}
+
+/** The facts of a visit mail: the window at the site, the address and who comes, then what it is about. */
+function visitFacts(v: VisitForMail, audience: 'technicians' | 'client'): MailFact[] {
+  const facts: MailFact[] = [
+    { label: 'When', value: formatWindow(v.windowStart, v.windowEnd, v.timeZone) },
+    { label: 'Where', value: [v.siteName, v.address].filter(Boolean).join('\n') },
+    {
+      label: v.technicians.length === 1 ? 'Technician' : 'Technicians',
+      value: v.technicians.map((t) => t.name).join(', ') || 'to be confirmed',
+    },
+    { label: 'Client', value: v.clientName },
+    ...(v.wallName ? [{ label: 'Wall', value: v.wallName }] : []),
+    { label: 'For', value: v.ticket ? `Ticket ${ticketRef(v.ticket.number)} — ${v.ticket.title}` : 'Planned maintenance' },
+  ];
+  if (v.ticket?.cells.length)
+    facts.push({ label: v.ticket.cells.length === 1 ? 'Cell' : 'Cells', value: v.ticket.cells.map(cellLabel).join(', ') });
+  if (v.accessNotes) facts.push({ label: 'Access', value: v.accessNotes });
+  if (audience === 'technicians' && v.internalNotes) facts.push({ label: 'Internal notes', value: v.internalNotes });
+  return facts;
+}
+
+/** Technicians open the visit; the client's people follow the ticket, or the visit when there is none. */
+function visitAction(v: VisitForMail, audience: 'technicians' | 'client') {
+  if (audience === 'client' && v.ticket) return { label: 'Follow it in the portal', url: `${config().APP_URL}/tickets/${v.ticket.id}` };
+  return { label: audience === 'technicians' ? 'Open the visit' : 'Open the visit in the portal', url: visitLink(v.id) };
+}
+
+function changeMail(v: VisitForMail, change: VisitChange, audience: 'technicians' | 'client' | 'removed') {
+  const subject = subjectFor(v, change, audience);
+  const paragraphs = opening(v, change, audience);
+  const facts = audience === 'removed' ? 'technicians' : audience;
+  return {
+    subject,
+    ...renderMail({
+      preview: paragraphs[0],
+      heading: subject,
+      paragraphs,
+      facts: visitFacts(v, facts),
+      // A technician taken off the visit has nothing left to open.
+      ...(audience === 'removed' ? {} : { action: visitAction(v, audience) }),
+    }),
+  };
 }
 
 /**
@@ -195,8 +246,7 @@ export async function mailVisitChange(
   if (technicians.length) {
     await queueMail(tx, {
       to: technicians.map((t) => t.email),
-      subject: subjectFor(v, change, 'technicians'),
-      text: `${opening(v, change, 'technicians')}\n\n${about(v, 'technicians')}\n`,
+      ...changeMail(v, change, 'technicians'),
       attachments: [visitInvitation(v, 'technicians', method, invitees)],
       dedupeKey: key('technicians'),
     });
@@ -204,8 +254,7 @@ export async function mailVisitChange(
   if (client.length) {
     await queueMail(tx, {
       to: client.map((p) => p.email),
-      subject: subjectFor(v, change, 'client'),
-      text: `${opening(v, change, 'client')}\n\n${about(v, 'client')}\n${v.ticket ? `\nFollow it in the portal: ${config().APP_URL}/tickets/${v.ticket.id}\n` : ''}`,
+      ...changeMail(v, change, 'client'),
       attachments: [visitInvitation(v, 'client', method, invitees)],
       dedupeKey: key('client'),
     });
@@ -214,8 +263,7 @@ export async function mailVisitChange(
     const removed = removedTechnicians.map((t) => ({ name: t.name, email: t.email }));
     await queueMail(tx, {
       to: removed.map((t) => t.email),
-      subject: subjectFor(v, change, 'removed'),
-      text: `${opening(v, change, 'removed')}\n\n${about(v, 'technicians')}\n`,
+      ...changeMail(v, change, 'removed'),
       // RFC 5546 §3.2.5: a CANCEL naming the attendees being removed from the event.
       attachments: [visitInvitation(v, 'technicians', 'CANCEL', { technicians: removed, client: [] })],
       dedupeKey: key('removed'),
@@ -231,9 +279,15 @@ export async function mailVisitReport(tx: DbOrTx, v: VisitForMail, report: { sto
   await queueMail(tx, {
     to,
     subject: `Visit report: ${v.siteName}${ref}`,
-    text:
-      `Our visit to ${v.siteName} is complete. The report is attached: the work done, the parts fitted, ` +
-      `photos and the sign-off.\n\n${about(v, 'client')}\n\nYou can also download it from the portal: ${visitLink(v.id)}\n`,
+    ...renderMail({
+      preview: `Our visit to ${v.siteName} is complete.`,
+      heading: `Visit report: ${v.siteName}${ref}`,
+      paragraphs: [
+        `Our visit to ${v.siteName} is complete. The report is attached: the work done, the parts fitted, photos and the sign-off.`,
+      ],
+      facts: visitFacts(v, 'client'),
+      action: { label: 'Download it from the portal', url: visitLink(v.id) },
+    }),
     attachments: [{ fileName: report.fileName, contentType: 'application/pdf', storageKey: report.storageKey }],
     dedupeKey: `visit-report:${v.id}`,
   });

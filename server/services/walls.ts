@@ -1,8 +1,9 @@
-import { and, asc, eq, ilike, isNull, notInArray, or, sql } from 'drizzle-orm';
+import { and, asc, eq, ilike, inArray, isNull, notInArray, or, sql } from 'drizzle-orm';
 import type { Page } from '../../shared/schemas/common.js';
 import type { ListWallsQuery, WallInput, WallPatch } from '../../shared/schemas/walls.js';
 import type { WallCabinet, WallController, WallDetail, WallSummary } from '../../shared/schemas/walls.js';
-import { db, type DbOrTx } from '../db/client.js';
+import { ticketRef } from '../../shared/schemas/tickets.js';
+import { db, type DbOrTx, type Tx } from '../db/client.js';
 import { cabinetModels } from '../db/schema/catalogue.js';
 import { clients, sites } from '../db/schema/clients.js';
 import { tickets } from '../db/schema/tickets.js';
@@ -56,6 +57,7 @@ export async function listWalls(actor: Actor, query: ListWallsQuery): Promise<Pa
     .orderBy(...orderFor(sortColumn, walls.id, query.dir))
     .limit(query.limit + 1);
   const page = pageOf(rows, query.limit, (r) => [cursorValue(query.sort === 'name' ? r.name : r.createdAt), r.id]);
+  const installed = await installedCounts(page.items.map((r) => r.id));
   return {
     items: page.items.map((r): WallSummary => ({
       id: r.id,
@@ -67,6 +69,8 @@ export async function listWalls(actor: Actor, query: ListWallsQuery): Promise<Pa
       columns: r.columns,
       rows: r.rows,
       cabinetCount: r.columns * r.rows,
+      installedCabinets: installed.get(r.id) ?? 0,
+      freePositions: Math.max(0, r.columns * r.rows - (installed.get(r.id) ?? 0)),
       mounting: r.mounting,
       installDate: r.installDate,
       warrantyEnd: r.warrantyEnd,
@@ -75,6 +79,20 @@ export async function listWalls(actor: Actor, query: ListWallsQuery): Promise<Pa
     })),
     nextCursor: page.nextCursor,
   };
+}
+
+/**
+ * The cabinets installed on each of a page of walls: one grouped count for the page (read from
+ * the wall-position index), never one count per wall.
+ */
+async function installedCounts(wallIds: string[]): Promise<Map<string, number>> {
+  if (wallIds.length === 0) return new Map();
+  const rows = await db()
+    .select({ wallId: cabinets.wallId, installed: sql<number>`count(*)::int` })
+    .from(cabinets)
+    .where(inArray(cabinets.wallId, wallIds))
+    .groupBy(cabinets.wallId);
+  return new Map(rows.map((r) => [r.wallId ?? '', r.installed]));
 }
 
 /** The wall a caller may see, or 404. */
@@ -154,18 +172,21 @@ async function assertModel(tx: DbOrTx, id: string | undefined) {
 }
 
 export async function createWall(actor: Actor, input: WallInput) {
-  const id = await db().transaction(async (tx) => {
-    const [site] = await tx.select({ clientId: sites.clientId }).from(sites).where(eq(sites.id, input.siteId));
-    if (!site) throw badRequest('validation_failed', 'That site does not exist.', { siteId: 'Unknown site.' });
-    await assertModel(tx, input.cabinetModelId);
-    const [row] = await tx
-      .insert(walls)
-      .values({ ...input, clientId: site.clientId })
-      .returning();
-    await recordAudit(tx, { actor, entity: 'wall', entityId: row.id, action: 'created', after: row });
-    return row.id;
-  });
+  const id = await db().transaction((tx) => insertWall(tx, actor, input));
   return getWall(actor, id);
+}
+
+/** A new wall at a site, audited, inside the caller's transaction (the planner stores a plan on it in the same one). */
+export async function insertWall(tx: Tx, actor: Actor, input: WallInput): Promise<string> {
+  const [site] = await tx.select({ clientId: sites.clientId }).from(sites).where(eq(sites.id, input.siteId));
+  if (!site) throw badRequest('validation_failed', 'That site does not exist.', { siteId: 'Unknown site.' });
+  await assertModel(tx, input.cabinetModelId);
+  const [row] = await tx
+    .insert(walls)
+    .values({ ...input, clientId: site.clientId })
+    .returning();
+  await recordAudit(tx, { actor, entity: 'wall', entityId: row.id, action: 'created', after: row });
+  return row.id;
 }
 
 export async function updateWall(actor: Actor, id: string, input: WallPatch) {
@@ -202,12 +223,19 @@ export async function wallCabinets(actor: Actor, id: string): Promise<{ items: W
       .where(eq(cabinets.wallId, id))
       .orderBy(asc(cabinets.row), asc(cabinets.column)),
     db()
-      .select({ cells: tickets.cells })
+      .select({ id: tickets.id, number: tickets.number, cells: tickets.cells })
       .from(tickets)
-      .where(and(eq(tickets.wallId, id), notInArray(tickets.status, ['resolved', 'closed']))),
+      .where(and(eq(tickets.wallId, id), notInArray(tickets.status, ['resolved', 'closed'])))
+      .orderBy(asc(tickets.number)),
   ]);
-  const perCell = new Map<string, number>();
-  for (const t of open) for (const c of t.cells) perCell.set(`${c.column}:${c.row}`, (perCell.get(`${c.column}:${c.row}`) ?? 0) + 1);
+  // The cabinet card links each of them, so the ticket is one tap from the cell.
+  const perCell = new Map<string, { id: string; ref: string }[]>();
+  for (const t of open) {
+    for (const c of t.cells) {
+      const key = `${c.column}:${c.row}`;
+      perCell.set(key, [...(perCell.get(key) ?? []), { id: t.id, ref: ticketRef(t.number) }]);
+    }
+  }
   return {
     items: rows.map((r): WallCabinet => ({
       id: r.id,
@@ -217,7 +245,8 @@ export async function wallCabinets(actor: Actor, id: string): Promise<{ items: W
       batch: r.batch,
       status: r.status,
       installedOn: r.installedOn,
-      openTickets: perCell.get(`${r.column}:${r.row}`) ?? 0,
+      openTickets: perCell.get(`${r.column}:${r.row}`)?.length ?? 0,
+      openTicketRefs: perCell.get(`${r.column}:${r.row}`) ?? [],
     })),
   };
 }

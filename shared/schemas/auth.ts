@@ -29,6 +29,11 @@ export interface SessionUser {
   clientName?: string | null;
 }
 
+/** `GET /api/auth/session`: who is signed in, or null (signed out is an answer, not an error). */
+export interface SessionAnswer {
+  user: SessionUser | null;
+}
+
 export const changePasswordInput = z.object({
   currentPassword: z.string().min(1, 'Enter your current password.').max(passwordMaxLength),
   newPassword,

@@ -60,7 +60,7 @@ export const listCabinetsQuery = pageQuery.extend({
   /** The cabinet's own model. */
   modelId: optionalId,
   status: z.enum(cabinetStatuses).optional(),
-  /** A production batch, matched whole (any case): the filter of a batch recall. */
+  /** A production batch or batch family: the codes that start with it (any case), the filter of a recall. */
   batch: z.string().trim().max(40).optional(),
   sort: z.enum(['serial', 'batch', 'installedOn']).default('serial'),
   dir: sortDir,

@@ -1,25 +1,79 @@
-// The search resource: what one search box finds (`GET /api/search?q=`, server/services/search.ts).
-import type { CabinetStatus } from './enums.js';
+// The search resource: what one search box finds (`GET /api/search?q=`), and the Scan page's
+// typed lookup of a serial by its tail (`GET /api/search/serials?tail=`); server/services/search.ts.
+import type { CabinetStatus, TicketPriority, TicketStatus } from './enums.js';
 import { z } from 'zod';
+import { serial } from './cabinets.js';
 
 // ---- request ----
 export const searchQuery = z.object({ q: z.string().trim().min(1, 'Type something to search for.').max(100) });
 
+/** The end of a serial as read off a label (or the whole serial), checked like a serial. */
+export const serialTailQuery = z.object({ tail: serial });
+
+/**
+ * Fewer characters than a trigram match a serial or batch only whole: two characters are part of
+ * nearly every serial, and a contains-match that short cannot use the trigram index.
+ */
+export const partMinLength = 3;
+
+/** Counts stop here: "1000+" says enough, and counting a million cabinets would not. */
+export const searchCountCap = 1000;
+
+/**
+ * The ticket number a query names, or null: "GK-1041", "gk1041", "GK 1041", "#1041" and a bare
+ * "1041" all name ticket 1041.
+ */
+export function ticketNumberIn(q: string): number | null {
+  const digits = /^(?:gk[\s-]?|#)?0*(\d{1,9})$/i.exec(q.trim())?.[1];
+  return digits ? Number(digits) : null;
+}
+
 // ---- response ----
 
+export const searchKinds = ['tickets', 'clients', 'sites', 'walls', 'cabinets', 'batches'] as const;
+export type SearchKind = (typeof searchKinds)[number];
+
+/** A cabinet found by its serial; the wall and cell are null for a cabinet off any wall. */
+export interface SearchCabinet {
+  id: string;
+  serial: string;
+  status: CabinetStatus;
+  batch: string;
+  wallId: string | null;
+  wallName: string | null;
+  siteName: string | null;
+  column: number | null;
+  row: number | null;
+}
+
 export interface SearchResults {
+  /** The ticket the number names, then tickets with every word in their title or description. */
+  tickets: {
+    id: string;
+    /** `GK-1042`. */
+    ref: string;
+    title: string;
+    status: TicketStatus;
+    priority: TicketPriority;
+    clientName: string;
+    siteName: string;
+    wallName: string | null;
+  }[];
   /** Client names containing the words. */
   clients: { id: string; name: string }[];
   sites: { id: string; name: string; clientName: string; city: string }[];
   walls: { id: string; name: string; siteName: string; clientName: string }[];
-  /** Serials starting with the words; the wall and cell are null for a cabinet off any wall. */
-  cabinets: {
-    id: string;
-    serial: string;
-    status: CabinetStatus;
-    wallId: string | null;
-    wallName: string | null;
-    column: number | null;
-    row: number | null;
-  }[];
+  /** Serials containing the words anywhere: the whole serial first, then those ending in it. */
+  cabinets: SearchCabinet[];
+  /** Batch codes containing the words, with how many cabinets carry each. */
+  batches: { batch: string; cabinetCount: number }[];
+  /** How many of each kind match in all (the lists hold the first few), counted up to searchCountCap. */
+  counts: Record<SearchKind, number>;
+}
+
+/** Cabinets whose serial is, or ends in, what was typed: the whole serial first. */
+export interface SerialTailMatches {
+  items: SearchCabinet[];
+  /** How many match in all, counted up to searchCountCap. */
+  total: number;
 }

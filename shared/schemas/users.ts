@@ -41,6 +41,24 @@ export interface StaffMember {
   role: Role;
 }
 
+/** Where a record of the log is seen in the app; the client turns it into an address. */
+export type AuditRecordPage =
+  | { kind: 'client' | 'site' | 'wall' | 'ticket' | 'visit' | 'part' | 'stock_location'; id: string }
+  | { kind: 'cabinet'; serial: string }
+  | { kind: 'user'; email: string }
+  | { kind: 'catalogue'; tab: 'models' | 'controllers' }
+  | { kind: 'vendor_returns' };
+
+/** A record as people know it, for the audit log. */
+export interface AuditRecordRef {
+  /** A client's or site's name, a cabinet's serial, a ticket's reference, a part's SKU and name… */
+  name: string;
+  /** What places it when the name alone may not (a wall's site, a cabinet's wall and cell), or null. */
+  context: string | null;
+  /** Its page, or null when it has none or no longer exists. */
+  page: AuditRecordPage | null;
+}
+
 /** One change in the audit log (`GET /api/audit`), newest first. */
 export interface AuditEventView {
   id: number;
@@ -48,9 +66,13 @@ export interface AuditEventView {
   actor: { id: string; name: string } | null;
   entity: string;
   entityId: string;
+  /** The record by name, with its page; null when nothing names it any more. */
+  record: AuditRecordRef | null;
   action: string;
-  /** The changed fields only, before and after (secrets left out). */
+  /** The changed fields only, before and after (secrets and the record's own id and times left out). */
   before: unknown;
   after: unknown;
+  /** The records the changed fields point at (a wall id, a technician's id), by id. */
+  references: Record<string, AuditRecordRef>;
   createdAt: string;
 }

@@ -6,6 +6,7 @@ import { runLoad, runPatterns, type Run, type RunLimits, type RunProblem } from 
 import { DEFAULT_OUTPUT_CAPACITY_PIXELS } from '../calc/video-signal.js';
 import type { CabinetSpec } from '../calc/wall-plan.js';
 import { supplyInput } from './calc.js';
+import { wallInput } from './walls.js';
 
 /** How a set of runs was laid: by one of the generator's patterns, or by hand. */
 export const storedRunPatterns = [...runPatterns, 'custom'] as const;
@@ -68,6 +69,15 @@ export const saveWallPlanRequest = z.object({
   powerRuns: wallRunsInput.nullable().optional(),
 });
 export type SaveWallPlanRequest = z.input<typeof saveWallPlanRequest>;
+
+/**
+ * A new wall made from the planner's result (POST /api/walls/from-plan): its site and name, the
+ * plan's catalogue model and grid, and the plan's settings and runs, stored in one transaction.
+ */
+export const createWallFromPlanRequest = wallInput
+  .pick({ siteId: true, name: true, cabinetModelId: true, columns: true, rows: true, mounting: true })
+  .extend(saveWallPlanRequest.shape);
+export type CreateWallFromPlanRequest = z.input<typeof createWallFromPlanRequest>;
 
 /** A problem of a saved plan: which set of runs it belongs to, and what is wrong. */
 export interface WallRunProblem extends RunProblem {

@@ -46,7 +46,12 @@ export interface WallSummary {
   siteName: string;
   columns: number;
   rows: number;
+  /** The wall's positions: columns × rows. */
   cabinetCount: number;
+  /** Positions holding a cabinet. */
+  installedCabinets: number;
+  /** Positions without a cabinet (positions − installed). */
+  freePositions: number;
   mounting: Mounting;
   installDate: string | null;
   warrantyEnd: string | null;
@@ -97,4 +102,6 @@ export interface WallCabinet {
   installedOn: string | null;
   /** Open tickets that name this cell. */
   openTickets: number;
+  /** Those tickets, the oldest first (`GK-1041`). */
+  openTicketRefs: { id: string; ref: string }[];
 }

@@ -88,10 +88,13 @@ export const paths = {
   /** The runs as a sheet for the crew, outside the app's shell. */
   wallRunsPrint: { path: '/walls/:id/runs/print', getHref: (id: string) => `/walls/${encodeURIComponent(id)}/runs/print` },
 
-  /** The office's week of visits by technician (`week`: any date of it, YYYY-MM-DD; `ticketId`: plan a visit for that ticket). */
+  /**
+   * The office's week of visits by technician (`week`: any date of it, YYYY-MM-DD; `ticketId`: plan
+   * a visit for that ticket; `visit`: open that visit of the week to move, reassign or cancel it).
+   */
   dispatch: {
     path: '/dispatch',
-    getHref: (options: { week?: string; ticketId?: string } = {}) => withParams('/dispatch', options),
+    getHref: (options: { week?: string; ticketId?: string; visit?: string } = {}) => withParams('/dispatch', options),
   },
   /** Visits as a list: a client's visits and reports, a technician's coming days. */
   visits: { path: '/visits', getHref: () => '/visits' },

@@ -39,6 +39,24 @@ export const cabinetQueries = {
   /** Pages of cabinets, filtered and sorted by the server. */
   list: (filters: CabinetFilters) =>
     pagedQueryOptions(cabinetKeys.list(filters), (cursor, signal) => getCabinets({ ...filters, cursor }, signal)),
+  /**
+   * Every cabinet on a wall with its own model (a cabinet moved in from another wall may be of
+   * another model than the wall's): what the QR labels print. Read 500 at a time.
+   */
+  onWall: (wallId: string) =>
+    queryOptions({
+      queryKey: [...cabinetKeys.lists(), 'wall', wallId] as const,
+      queryFn: async ({ signal }) => {
+        const items: CabinetSummary[] = [];
+        let cursor: string | undefined;
+        do {
+          const page = await api.get<Page<CabinetSummary>>('/api/cabinets', { query: { wallId, limit: 500, cursor }, signal });
+          items.push(...page.items);
+          cursor = page.nextCursor ?? undefined;
+        } while (cursor);
+        return items;
+      },
+    }),
   /** A cabinet with its model, where it is, and its whole history (newest first). */
   detail: (id: string) =>
     queryOptions({

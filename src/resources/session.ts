@@ -1,8 +1,16 @@
-// The session resource: who is signed in (`/api/auth/me`), what an invite or reset link is for,
+// The session resource: who is signed in (`/api/auth/session`), what an invite or reset link is for,
 // and the writes that start, change and end a session.
 import { queryOptions } from '@tanstack/react-query';
-import type { ChangePasswordInput, ForgotPasswordInput, LinkToken, LoginInput, RedeemTokenInput, SessionUser } from '@shared/schemas/auth';
-import { api, isApiError } from '@/lib/api-client';
+import type {
+  ChangePasswordInput,
+  ForgotPasswordInput,
+  LinkToken,
+  LoginInput,
+  RedeemTokenInput,
+  SessionAnswer,
+  SessionUser,
+} from '@shared/schemas/auth';
+import { api } from '@/lib/api-client';
 
 export const sessionKeys = {
   all: ['session'] as const,
@@ -11,15 +19,13 @@ export const sessionKeys = {
   linkToken: (token: string) => [...sessionKeys.linkTokens(), token] as const,
 };
 
-/** The signed-in user, or null when nobody is signed in (the 401 is an answer here, not an error). */
+/**
+ * The signed-in user, or null when nobody is signed in. `/api/auth/session` answers 200 either
+ * way, so a first load signed out shows no failed request in the browser's console.
+ */
 async function getMe(signal?: AbortSignal): Promise<SessionUser | null> {
-  try {
-    const { user } = await api.get<{ user: SessionUser }>('/api/auth/me', { signal });
-    return user;
-  } catch (error) {
-    if (isApiError(error) && error.status === 401) return null;
-    throw error;
-  }
+  const { user } = await api.get<SessionAnswer>('/api/auth/session', { signal });
+  return user;
 }
 
 export const sessionQueries = {

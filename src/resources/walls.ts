@@ -4,7 +4,7 @@ import { queryOptions } from '@tanstack/react-query';
 import type { z } from 'zod';
 import type { Page } from '@shared/schemas/common';
 import type { listWallsQuery, WallCabinet, WallDetail, WallInput, WallPatch, WallSummary } from '@shared/schemas/walls';
-import type { SaveWallPlanRequest } from '@shared/schemas/wall-plan';
+import type { CreateWallFromPlanRequest, SaveWallPlanRequest } from '@shared/schemas/wall-plan';
 import { api } from '@/lib/api-client';
 import { pagedQueryOptions } from '@/lib/paged-query';
 
@@ -53,4 +53,6 @@ export const wallRequests = {
   /** Stores the supply, capacities and runs a wall is planned with (office). */
   savePlan: ({ wallId, ...input }: SaveWallPlanRequest & { wallId: string }) =>
     api.put<WallDetail>(`/api/walls/${encodeURIComponent(wallId)}/plan`, input),
+  /** A new wall from the planner's result, with its settings and runs, in one request (office). */
+  createFromPlan: (input: CreateWallFromPlanRequest) => api.post<WallDetail>('/api/walls/from-plan', input),
 };

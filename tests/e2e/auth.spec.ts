@@ -29,7 +29,7 @@ async function whoAmI(page: Page): Promise<Me> {
 }
 
 async function signOutFromUserMenu(page: Page, me: Me) {
-  await page.getByRole('button', { name: `Account menu for ${me.name}` }).click();
+  await page.getByRole('button', { name: `${me.name}, account menu` }).click();
   await page.getByRole('group', { name: 'Account menu' }).getByRole('button', { name: 'Sign out' }).click();
   await expect(page).toHaveURL(/\/sign-in$/);
   await expect(page.getByRole('heading', { name: 'Sign in to Gridkeep' })).toBeVisible();

@@ -91,7 +91,8 @@ for (const viewport of [
 
     await page.getByRole('button', { name: 'Save onto a wall…' }).click();
     const dialog = page.getByRole('dialog', { name: 'Save onto a wall' });
-    await chooseOption(dialog.getByLabel('Wall'), `${wall.name} (12 × 6)`);
+    await dialog.getByText('An existing wall', { exact: true }).click();
+    await chooseOption(dialog.getByLabel('Wall', { exact: true }), `${wall.name} (12 × 6)`);
     await dialog.getByRole('button', { name: 'Save onto wall' }).click();
     await expect(dialog.getByText('Plan saved')).toBeVisible();
     await dialog.getByRole('link', { name: `Open the runs of ${wall.name}` }).click();

@@ -104,6 +104,20 @@ describe('sign-in', () => {
     expect(res.body.error.code).toBe('unauthenticated');
   });
 
+  it('answers /session with the user, or 200 with no user when signed out (the app asks it on every first load)', async () => {
+    const signedOut = await anonymous().get('/api/auth/session');
+    expect(signedOut.status).toBe(200);
+    expect(signedOut.body).toEqual({ user: null });
+    const user = await createUser({ role: 'client', clientId });
+    const session = await signIn(user);
+    const me = await session.get('/api/auth/session');
+    expect(me.status).toBe(200);
+    expect(me.body.user).toMatchObject({ id: user.id, email: user.email, role: 'client', clientId });
+    expect(me.body.user.passwordHash).toBeUndefined();
+    expect((await session.post('/api/auth/logout')).status).toBe(204);
+    expect((await session.get('/api/auth/session')).body).toEqual({ user: null });
+  });
+
   it('hashes with argon2id at or above the OWASP minimum (m=19 MiB, t=2, p=1)', async () => {
     const user = await createUser({ role: 'coordinator', password: 'a fresh password 9' });
     // PHC string: $argon2id$v=19$m=<KiB>,t=<iterations>,p=<lanes>$…

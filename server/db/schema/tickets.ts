@@ -56,6 +56,8 @@ export const tickets = pgTable(
     index('tickets_reporter_idx').on(t.reporterId),
     index('tickets_merged_into_idx').on(t.mergedIntoId),
     index('tickets_resolution_due_idx').on(t.resolutionDueAt),
+    // Search by words of the title or description: one trigram index over both (pg_trgm).
+    index('tickets_text_trgm_idx').using('gin', sql`(${t.title} || ' ' || ${t.description}) gin_trgm_ops`),
     check('tickets_title_present', sql`length(trim(${t.title})) > 0`),
     check('tickets_paused_seconds', sql`${t.pausedSeconds} >= 0`),
   ],

@@ -122,6 +122,11 @@ export const cabinets = pgTable(
     uniqueIndex('cabinets_wall_position_key').on(t.wallId, t.column, t.row),
     index('cabinets_stock_location_idx').on(t.stockLocationId),
     index('cabinets_model_idx').on(t.cabinetModelId),
+    // The batch filter of a recall matches a code's start in any case: lower(batch) like 'k7-2403%'.
+    index('cabinets_batch_prefix_idx').using('btree', sql`lower(${t.batch}) text_pattern_ops`),
+    // Search by any part of a serial or batch code (LIKE '%…%'): trigram indexes (pg_trgm, migration 0007).
+    index('cabinets_serial_trgm_idx').using('gin', t.serial.op('gin_trgm_ops')),
+    index('cabinets_batch_trgm_idx').using('gin', t.batch.op('gin_trgm_ops')),
     check('cabinets_position_positive', sql`(${t.column} is null or ${t.column} >= 1) and (${t.row} is null or ${t.row} >= 1)`),
     check('cabinets_position_with_wall', sql`(${t.wallId} is null) = (${t.column} is null) and (${t.wallId} is null) = (${t.row} is null)`),
     check('cabinets_installed_on_wall', sql`(${t.status} = 'installed') = (${t.wallId} is not null)`),

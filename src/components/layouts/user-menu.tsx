@@ -25,6 +25,12 @@ interface UserMenuProps {
   showName?: boolean;
 }
 
+/**
+ * The button's name starts with what it shows (the initials, then the name where there is room),
+ * so a person who says or reads "AL" finds it (WCAG 2.5.3, label in name).
+ */
+const accountMenuName = (name: string) => `${initials(name)} ${name}, account menu`;
+
 /** The person's initials; opens their account link and sign-out. */
 export function UserMenu({ user, onSignOut, signingOut, tone = 'light', showName = true }: UserMenuProps) {
   return (
@@ -33,7 +39,7 @@ export function UserMenu({ user, onSignOut, signingOut, tone = 'light', showName
         <button
           type="button"
           {...props}
-          aria-label={`Account menu for ${user.name}`}
+          aria-label={accountMenuName(user.name)}
           className={clsx(
             'flex min-h-touch items-center gap-2 rounded-md px-1.5 md:min-h-10',
             tone === 'light' ? 'text-stone-800 hover:bg-stone-100' : 'text-white hover:bg-white/10',
@@ -47,7 +53,8 @@ export function UserMenu({ user, onSignOut, signingOut, tone = 'light', showName
             )}
           >
             {initials(user.name)}
-          </span>
+          </span>{' '}
+          {/* The space keeps "AL Ada Lovelace" two words in the text the name is checked against. */}
           {showName ? <span className="hidden max-w-[12rem] truncate text-sm font-medium md:block">{user.name}</span> : null}
           <ChevronDown className="hidden h-4 w-4 opacity-70 md:block" aria-hidden="true" />
         </button>

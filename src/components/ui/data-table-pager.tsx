@@ -18,7 +18,8 @@ export function Pager({ shown, hasNextPage, onLoadMore, isLoadingMore, noun = ['
         {hasNextPage ? ', more available' : ''}
       </p>
       {hasNextPage && onLoadMore ? (
-        <Button size="sm" onClick={onLoadMore} loading={isLoadingMore}>
+        // Small on a desk; a full 44 px target on a phone.
+        <Button size="sm" className="max-sm:h-touch max-sm:px-4" onClick={onLoadMore} loading={isLoadingMore}>
           Load more
         </Button>
       ) : null}

@@ -11,12 +11,14 @@ import {
 import { useMemo, useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
 import { DataTableBody } from '@/components/ui/data-table-body';
+import { CardSort, DataTableCards } from '@/components/ui/data-table-cards';
 import { LoadError } from '@/components/ui/load-error';
 import { ColumnChooser } from '@/components/ui/data-table-column-chooser';
 import { useColumnVisibility, withExpander } from '@/components/ui/data-table-columns';
 import { CsvExportButton, type CsvValue } from '@/components/ui/data-table-csv';
 import { DataTableHead } from '@/components/ui/data-table-head';
 import { Pager } from '@/components/ui/data-table-pager';
+import { useMediaQuery } from '@/lib/use-media-query';
 
 declare module '@tanstack/react-table' {
   interface ColumnMeta<TData extends RowData, TValue> {
@@ -110,10 +112,14 @@ export interface DataTableProps<T> {
   empty?: ReactNode;
 }
 
+/** Below Tailwind's `sm` (640 px) a list is read on a phone: cards, not a squeezed table. */
+const phoneQuery = '(max-width: 639.98px)';
+
 /**
  * The one table of the app (TanStack Table): server-side sort, "load more" over keyset pages,
  * a column chooser that is remembered per table, expandable rows, and CSV export of the rows
- * and columns on screen.
+ * and columns on screen. On a phone the same rows are cards with large targets, sorted from a
+ * select; choosing columns and exporting are desk work and stay on the wide screen.
  */
 export function DataTable<T>({
   tableId,
@@ -159,21 +165,41 @@ export function DataTable<T>({
 
   const rows = table.getRowModel().rows;
   const span = table.getVisibleLeafColumns().length;
+  const onPhone = useMediaQuery(phoneQuery);
 
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <div className="flex w-full min-w-0 flex-wrap items-end gap-3 sm:w-auto sm:flex-1">{toolbar}</div>
-        <div className="flex items-center gap-2">
-          <ColumnChooser table={table} />
-          <CsvExportButton table={table} rows={rows} tableId={tableId} hasNextPage={hasNextPage} onLoadAll={onLoadAll} />
+        <div className="flex w-full min-w-0 flex-wrap items-end gap-3 sm:w-auto sm:flex-1">
+          {toolbar}
+          {onPhone && onSortingChange ? <CardSort table={table} /> : null}
         </div>
+        {onPhone ? null : (
+          <div className="flex items-center gap-2">
+            <ColumnChooser table={table} />
+            <CsvExportButton table={table} rows={rows} tableId={tableId} hasNextPage={hasNextPage} onLoadAll={onLoadAll} />
+          </div>
+        )}
       </div>
 
       {error && rows.length === 0 ? (
         <LoadError title="The list could not be loaded." error={error} onRetry={onRetry} />
+      ) : onPhone ? (
+        <DataTableCards
+          rows={rows}
+          label={label}
+          isLoading={isLoading}
+          empty={empty}
+          renderExpanded={renderExpanded}
+          expandLabel={expandLabel}
+        />
       ) : (
-        <div className="overflow-x-auto rounded-md border border-stone-200 bg-white shadow-card">
+        // A box no taller than the screen below the top bar: its sideways scrollbar and sticky
+        // header stay in sight, so a wide table scrolls inside it and never off the page.
+        <div
+          data-table-box=""
+          className="max-h-[calc(100dvh-theme(spacing.topbar)-1.5rem)] overflow-auto rounded-md border border-stone-200 bg-white shadow-card"
+        >
           <table className="w-full border-collapse text-left text-sm">
             <caption className="sr-only">{label}</caption>
             <DataTableHead table={table} />

@@ -9,6 +9,20 @@ interface Toast {
   message: string;
 }
 
+/**
+ * Where toasts show, covering as little as possible. On a phone: full width, above the
+ * technician's bottom navigation (and the home indicator). On a wide screen: bottom left, clear of
+ * the right-hand panels (a ticket's details, a cabinet card); in the office shell, inside the side
+ * navigation's width, below its links. The technician shell keeps its bottom navigation at every
+ * width, so its toasts stay above it there too.
+ */
+const placement = clsx(
+  'pointer-events-none fixed inset-x-0 bottom-[calc(5rem+env(safe-area-inset-bottom))] z-50 flex flex-col items-center gap-2 px-4',
+  'md:right-auto md:items-start md:px-0 md:left-6 md:w-96 md:bottom-6',
+  'lg:left-3 lg:w-[calc(theme(spacing.sidebar)-1.5rem)] lg:bottom-3',
+  'md:[body:has([data-shell=technician])_&]:bottom-[calc(5.5rem+env(safe-area-inset-bottom))]',
+);
+
 const ToastContext = createContext<((message: string, tone?: Tone) => void) | null>(null);
 
 /** Short confirmations ("Invitation sent") at the bottom of the screen, read out politely. */
@@ -30,10 +44,7 @@ export function ToastProvider({ children }: { children: ReactNode }) {
   return (
     <ToastContext.Provider value={value}>
       {children}
-      <div
-        aria-live="polite"
-        className="pointer-events-none fixed inset-x-0 bottom-20 z-50 flex flex-col items-center gap-2 px-4 md:bottom-6 md:items-end md:px-6"
-      >
+      <div aria-live="polite" className={placement}>
         {toasts.map((t) => (
           <div
             key={t.id}

@@ -21,6 +21,7 @@ import {
   type PlannerFormInput,
 } from '@/features/planner/utils/planner-form';
 import { num } from '@/features/planner/utils/format';
+import { mountingOptions } from '@/features/walls/components/wall-labels';
 import { requireUser, staff } from '@/app/auth-guard';
 import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
@@ -145,6 +146,8 @@ export function Component() {
           settings={result.settings}
           dataRuns={{ pattern: result.patterns.data, runs: result.runs.data }}
           powerRuns={{ pattern: result.patterns.power, runs: result.runs.power }}
+          startWallId={startWall ? startWall.id : null}
+          mountingOptions={mountingOptions}
           onUseGrid={(columns, rows) => {
             form.setValue('gridMode', 'grid');
             form.setValue('columns', columns, { shouldValidate: true });

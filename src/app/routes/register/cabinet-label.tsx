@@ -8,7 +8,7 @@ import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { CabinetFacts } from '@/features/cabinets/components/cabinet-card';
 import { CabinetHistory } from '@/features/cabinets/components/cabinet-history';
-import { CabinetStatusPill } from '@/features/cabinets/components/cabinet-status';
+import { CabinetStatusPill, cabinetStatusLabels } from '@/features/cabinets/components/cabinet-status';
 import { ServiceCaution } from '@/features/walls/components/service-caution';
 import { requireUser } from '@/app/auth-guard';
 import { errorMessage, isNotFound } from '@/lib/errors';
@@ -26,7 +26,7 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
   return null;
 }
 
-/** Where a cabinet's QR label lands: phone first, the serial large, where it sits, its history. */
+/** Where a cabinet's QR label lands: phone first, the serial and model as printed, where it is now, its history. */
 export function Component() {
   const { serial = '' } = useParams();
   const user = useUser();
@@ -62,11 +62,15 @@ export function Component() {
       <header className="space-y-2">
         <p className="text-sm font-semibold uppercase tracking-wide text-stone-600">Cabinet</p>
         <h1 className="break-all font-mono text-[1.75rem] font-bold leading-tight text-ink-950 sm:text-[2.25rem]">{cabinet.serial}</h1>
+        <p className="text-lg text-ink-900" data-testid="cabinet-model">
+          {cabinet.model.name}
+        </p>
         <CabinetStatusPill status={cabinet.status} className="text-sm" />
       </header>
 
+      {/* The label prints no position (a move or a swap would make it wrong): this is where the cabinet is now. */}
       {cabinet.wall ? (
-        <Card>
+        <Card title="Where it is now">
           <div className="space-y-3">
             <div>
               <p className="text-xs font-semibold text-stone-600">Position</p>
@@ -94,8 +98,10 @@ export function Component() {
           </div>
         </Card>
       ) : (
-        <Alert tone="info" title="Not on a wall">
-          {cabinet.stockLocation ? `Kept at ${cabinet.stockLocation.name}.` : 'This cabinet is not installed on any wall.'}
+        <Alert tone="info" title={`Where it is now: not on a wall (${cabinetStatusLabels[cabinet.status].toLowerCase()})`}>
+          <span data-testid="cabinet-kept">
+            {cabinet.stockLocation ? `Kept at ${cabinet.stockLocation.name}.` : 'This cabinet is not installed on any wall.'}
+          </span>
         </Alert>
       )}
 

@@ -17,6 +17,7 @@ import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { idParam } from '@/app/routes/register/id-param';
+import { prefetchRecordWork, RecordWork } from '@/app/routes/register/record-work';
 import { useQuery } from '@tanstack/react-query';
 import { clientQueries } from '@/resources/clients';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
@@ -26,6 +27,7 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
   const id = idParam(params);
   // A client that does not exist (or is another organisation's) is a 404 page.
   await queryClient.ensureQueryData(clientQueries.detail(id));
+  prefetchRecordWork({ clientId: id });
   if (isOffice(user)) void queryClient.prefetchQuery(clientQueries.servicePlans());
   return null;
 }
@@ -121,6 +123,7 @@ export function Component() {
           ) : null}
         </div>
       </div>
+      <RecordWork scope={{ clientId: client.id }} name={client.name} staff={staff} />
       {canEdit ? (
         <>
           <EditClientDialog client={client} open={editing} onClose={() => setEditing(false)} />

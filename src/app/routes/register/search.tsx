@@ -14,7 +14,7 @@ export async function loader({ request }: LoaderFunctionArgs) {
   return null;
 }
 
-/** The results of the top bar's search box: clients, sites, walls and cabinet serials. */
+/** The results of the top bar's search box, grouped by kind: tickets, cabinets, batches, clients, sites, walls. */
 export function Component() {
   const [params] = useSearchParams();
   const q = params.get('q')?.trim() ?? '';
@@ -23,7 +23,7 @@ export function Component() {
     <>
       <PageHeader
         title={q ? `Results for “${q}”` : 'Search'}
-        description="Names match anywhere in the name; serials match from their first characters."
+        description="Tickets by number or words; names, serials and batch codes by any part."
       />
       <SearchResults q={q} />
     </>

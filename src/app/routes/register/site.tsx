@@ -19,6 +19,7 @@ import { queryClient } from '@/lib/query-client';
 import { isOffice, useUser } from '@/lib/session';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { idParam } from '@/app/routes/register/id-param';
+import { prefetchRecordWork, RecordWork } from '@/app/routes/register/record-work';
 import { useQuery } from '@tanstack/react-query';
 import { cabinetModelQueries } from '@/resources/cabinet-models';
 import { siteQueries } from '@/resources/sites';
@@ -28,6 +29,7 @@ export async function loader({ request, params }: LoaderFunctionArgs) {
   const user = await requireUser(request);
   const id = idParam(params);
   await queryClient.ensureQueryData(siteQueries.detail(id));
+  prefetchRecordWork({ siteId: id });
   if (isOffice(user)) void queryClient.prefetchQuery(cabinetModelQueries.list());
   return null;
 }
@@ -123,6 +125,7 @@ export function Component() {
           </div>
         </div>
       </div>
+      <RecordWork scope={{ siteId: site.id }} name={site.name} staff={staff} />
       {canEdit ? (
         <>
           <EditSiteDialog site={site} open={editing} onClose={() => setEditing(false)} />

@@ -13,24 +13,30 @@ import { queryClient } from '@/lib/query-client';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { idParam } from '@/app/routes/register/id-param';
 import { useQuery } from '@tanstack/react-query';
+import { cabinetQueries } from '@/resources/cabinets';
 import { wallQueries } from '@/resources/walls';
+import type { CabinetSummary } from '@shared/schemas/cabinets';
+import { useMemo } from 'react';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
 export async function loader({ request, params }: LoaderFunctionArgs) {
   await requireUser(request, staff);
   const id = idParam(params);
-  await Promise.all([queryClient.ensureQueryData(wallQueries.detail(id)), queryClient.prefetchQuery(wallQueries.cabinets(id))]);
+  await Promise.all([queryClient.ensureQueryData(wallQueries.detail(id)), queryClient.prefetchQuery(cabinetQueries.onWall(id))]);
   return null;
 }
+
+/** Labels in the order the crew meets the cabinets: row by row from the top, left to right. */
+const byPosition = (a: CabinetSummary, b: CabinetSummary) => (a.row ?? 0) - (b.row ?? 0) || (a.column ?? 0) - (b.column ?? 0);
 
 /** A printable sheet of QR labels, one per cabinet of the wall. */
 export function Component() {
   const { id } = useParams() as { id: string };
   const wall = useQuery(wallQueries.detail(id));
-  const cabinets = useQuery(wallQueries.cabinets(id));
+  const cabinets = useQuery(cabinetQueries.onWall(id));
   useDocumentTitle(wall.data ? `Labels · ${wall.data.name}` : 'Labels');
+  const items = useMemo(() => [...(cabinets.data ?? [])].sort(byPosition), [cabinets.data]);
   if (!wall.data) return <PageSpinner />;
-  const items = cabinets.data?.items ?? [];
 
   return (
     <>
@@ -41,7 +47,7 @@ export function Component() {
           </Link>
         }
         title="QR labels"
-        description="One label per cabinet: scanning it opens the cabinet in Gridkeep. Prints three across, seven down (63 × 36 mm) on A4 or Letter."
+        description="One label per cabinet with its serial and model: scanning it opens the cabinet in Gridkeep, where it is now. No position is printed, so a move or a swap never makes a label wrong. Prints three across, seven down (63 × 36 mm) on A4 or Letter."
         actions={
           <Button
             variant="primary"
@@ -62,11 +68,7 @@ export function Component() {
       ) : items.length === 0 ? (
         <EmptyState icon={QrCode} title="No cabinets on this wall yet" description="Register or import the cabinets first." />
       ) : (
-        <CabinetLabelsSheet
-          wall={{ name: wall.data.name, siteName: wall.data.siteName, clientName: wall.data.clientName }}
-          cabinets={items}
-          origin={window.location.origin}
-        />
+        <CabinetLabelsSheet cabinets={items} origin={window.location.origin} />
       )}
     </>
   );

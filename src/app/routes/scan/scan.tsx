@@ -22,10 +22,13 @@ export function Component() {
   const open = useCallback((serial: string) => navigate(paths.cabinetLabel.getHref(serial)), [navigate]);
   return (
     <div className="mx-auto max-w-xl">
-      <PageHeader title="Scan a label" description="Open a cabinet from the label on its back: type the serial, or scan the QR code." />
+      <PageHeader
+        title="Scan a label"
+        description="Open a cabinet from the label on its back: type the serial (or its end), or scan the QR code."
+      />
       <div className="space-y-4">
         <Card>
-          <SerialLookupForm autoFocus hint="Printed on the label, above the QR code." />
+          <SerialLookupForm autoFocus hint="Printed on the label, above the QR code. The last few characters are enough." />
         </Card>
         <CameraScanner onSerial={open} />
         <p className="flex gap-3 rounded-md border border-stone-200 bg-white px-4 py-3 text-base text-stone-700">

@@ -68,7 +68,11 @@ function OfficeTickets() {
   };
   return (
     <>
-      <PageHeader title="Tickets" description="Every service request, with its service-plan clock." actions={newTicketButton} />
+      <PageHeader
+        title="Tickets"
+        description="Open service requests with their service-plan clock; the Status filter brings back resolved and closed ones."
+        actions={newTicketButton}
+      />
       <SavedViews filters={filters} onApply={apply} />
       <TicketsTable filters={filters} onFiltersChange={apply} />
     </>

@@ -1,3 +1,4 @@
+import type { Position } from '@shared/schemas/cabinets';
 import type { TicketDetail } from '@shared/schemas/tickets';
 import { useQuery } from '@tanstack/react-query';
 import { ArrowLeft, CircleCheck, GitMerge, Wrench } from 'lucide-react';
@@ -9,6 +10,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { PageSpinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
+import { CabinetCellDialog } from '@/features/cabinets/components/cabinet-card';
 import { useUpdateTicket } from '@/features/tickets/api/mutations';
 import { AttachmentsPanel } from '@/features/tickets/components/attachments-panel';
 import { Conversation } from '@/features/tickets/components/conversation';
@@ -67,6 +69,8 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
   // Beside the ticket on a wide screen; on a phone right at the top, where the thumb is.
   const wide = useMediaQuery('(min-width: 1024px)');
   const triage = forClient ? null : <TriagePanel ticket={ticket} office={office} timeZone={timeZone} />;
+  // A cell of the map opens its cabinet: the same card as on the wall page.
+  const [openCell, setOpenCell] = useState<Position | null>(null);
 
   return (
     <>
@@ -122,14 +126,14 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
         <div className="min-w-0 space-y-5">
           {triage && !wide ? triage : null}
           <TicketClocks ticket={ticket} timeZone={timeZone} />
-          <TicketSummary ticket={ticket} />
+          <TicketSummary ticket={ticket} onOpenCell={setOpenCell} />
           <AttachmentsPanel ticketId={ticket.id} canUpload={!closed} />
           <Conversation ticketId={ticket.id} staff={!forClient} closed={closed} />
         </div>
         <aside className="min-w-0 space-y-5" aria-label="Ticket details">
           {triage && wide ? triage : null}
           <TicketFacts ticket={ticket} forClient={forClient} />
-          <TicketVisits visits={ticket.visits} timeZone={timeZone} />
+          <TicketVisits visits={ticket.visits} timeZone={timeZone} office={office} />
           <TicketRepairs repairs={ticket.repairs} timeZone={timeZone} />
           {ticket.mergedInto ? (
             <p className="flex items-center gap-2 text-sm text-stone-600">
@@ -138,6 +142,9 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
           ) : null}
         </aside>
       </div>
+      {ticket.wall ? (
+        <CabinetCellDialog wall={ticket.wall} position={openCell} onClose={() => setOpenCell(null)} canOperate={!forClient} />
+      ) : null}
     </>
   );
 }

@@ -75,7 +75,10 @@ export function Component() {
   const visits = useQuery({ ...weekQuery(monday), placeholderData: keepPreviousData });
   const staff = useQuery(userQueries.staff());
   const [showCancelled, setShowCancelled] = useState(false);
-  const [editing, setEditing] = useState<string | null>(null);
+  const [picked, setPicked] = useState<string | null>(null);
+  // A link from a ticket or a visit names the visit to open (`?visit=`); a tap on the grid opens another.
+  const asked = idParam(params, 'visit');
+  const editing = picked ?? asked ?? null;
   const planFor = idParam(params, 'ticketId');
   const [planning, setPlanning] = useState(false);
 
@@ -165,7 +168,7 @@ export function Component() {
             today={today}
             visits={shown}
             technicians={rows}
-            onOpen={(v) => setEditing(v.id)}
+            onOpen={(v) => setPicked(v.id)}
             onMove={(v, from, to, date) => void move(v, from, to, date)}
           />
           <p className="mt-2 text-sm text-stone-600" aria-live="polite">
@@ -185,7 +188,14 @@ export function Component() {
           if (week !== monday) setParam('week', week);
         }}
       />
-      <EditVisitDialog visit={editingVisit} technicians={technicians} onClose={() => setEditing(null)} />
+      <EditVisitDialog
+        visit={editingVisit}
+        technicians={technicians}
+        onClose={() => {
+          setPicked(null);
+          if (asked) setParam('visit', undefined);
+        }}
+      />
     </>
   );
 }

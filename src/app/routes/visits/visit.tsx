@@ -1,7 +1,10 @@
+import { TZDate } from '@date-fns/tz';
 import type { VisitDetail } from '@shared/schemas/visits';
-import { ArrowLeft, Lock } from 'lucide-react';
+import { format, parseISO } from 'date-fns';
+import { ArrowLeft, CalendarCog, Lock } from 'lucide-react';
 import { data, Link, useLocation, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
+import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -40,6 +43,16 @@ export function Component() {
   );
 }
 
+/** The office moves, reassigns or cancels a visit in dispatch: its week, with the visit open. */
+function MoveInDispatch({ visit }: { visit: VisitDetail }) {
+  const week = format(new TZDate(parseISO(visit.windowStart), visit.site.timeZone), 'yyyy-MM-dd');
+  return (
+    <ButtonLink to={paths.dispatch.getHref({ week, visit: visit.id })} icon={<CalendarCog className="h-4 w-4" aria-hidden="true" />}>
+      Move or cancel
+    </ButtonLink>
+  );
+}
+
 /** A visit, phone first: what to do next, where and whom to ask, the work, the checklist, the repairs. */
 function VisitPage({ visit }: { visit: VisitDetail }) {
   const audience = audienceOf(useUser());
@@ -73,6 +86,7 @@ function VisitPage({ visit }: { visit: VisitDetail }) {
             </span>
           </span>
         }
+        actions={visit.can.edit ? <MoveInDispatch visit={visit} /> : null}
       />
       <div className="space-y-5">
         {justClosed ? <Alert tone="success" title="Visit closed." /> : null}

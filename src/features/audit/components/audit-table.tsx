@@ -7,41 +7,17 @@ import { Badge } from '@/components/ui/badge';
 import { DataTable, pagedQueryProps } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FilterSearch, FilterSelect } from '@/components/ui/filters';
-import { AuditChanges } from '@/features/audit/components/audit-changes';
+import { AuditChanges, RecordName } from '@/features/audit/components/audit-changes';
+import { actionLabel, changedFields, entityLabel, entityLabels, fieldLabel } from '@/features/audit/utils/audit-record';
 import { formatDateTime } from '@/lib/format';
 import { auditQueries, type AuditFilters } from '@/resources/audit';
 
-/** The kinds of record the log speaks of (the server's `entity` names). */
-const entityLabels: Record<string, string> = {
-  user: 'User',
-  client: 'Client',
-  site: 'Site',
-  contact: 'Contact',
-  service_plan: 'Service plan',
-  wall: 'Wall',
-  cabinet: 'Cabinet',
-  cabinet_model: 'Cabinet model',
-  controller: 'Controller',
-  ticket: 'Ticket',
-  visit: 'Visit',
-  repair: 'Repair',
-  maintenance_plan: 'Maintenance plan',
-  part: 'Part',
-  stock_location: 'Stock location',
-  stock_movement: 'Stock movement',
-  vendor_return: 'Vendor return',
-  company_settings: 'Company settings',
-};
-
-const entityLabel = (entity: string) => entityLabels[entity] ?? entity.replace(/_/g, ' ');
-const actionLabel = (action: string) => {
-  const text = action.replace(/_/g, ' ');
-  return text.charAt(0).toUpperCase() + text.slice(1);
-};
-
 const column = createColumnHelper<AuditEventView>();
 
-/** The log's columns; a record id narrows the log to that record's history (`onShowRecord`). */
+/** The record's name for the CSV and the expand button: its name, else its kind and id. */
+const recordText = (e: AuditEventView) => (e.record ? e.record.name : `${entityLabel(e.entity)} ${e.entityId}`);
+
+/** The log's columns; "History" narrows the log to that record's history (`onShowRecord`). */
 function auditColumns(onShowRecord: (entity: string, entityId: string) => void) {
   return [
     column.accessor('createdAt', {
@@ -56,41 +32,52 @@ function auditColumns(onShowRecord: (entity: string, entityId: string) => void) 
       cell: (c) => (c.row.original.actor ? c.getValue() : <span className="italic text-stone-500">System</span>),
     }),
     column.accessor('entity', {
-      header: 'Record',
+      header: 'Kind',
       meta: { csv: (e) => entityLabel(e.entity) },
       cell: (c) => <Badge tone="ink">{entityLabel(c.getValue())}</Badge>,
     }),
-    column.accessor('entityId', {
-      header: 'Record id',
-      meta: { className: 'whitespace-nowrap' },
-      cell: (c) => {
-        const id = c.getValue();
-        // Long ids (uuids) show their first characters; the full id is in the title and the CSV.
-        const short = id.length > 13 ? `${id.slice(0, 8)}…` : id;
-        return (
-          <button
-            type="button"
-            className="font-mono text-xs text-ink-700 underline decoration-ink-200 underline-offset-2 hover:decoration-ink-600"
-            title={`${id}: show only this record's history`}
-            aria-label={`Show only the history of ${entityLabel(c.row.original.entity).toLowerCase()} ${id}`}
-            onClick={() => onShowRecord(c.row.original.entity, id)}
-          >
-            {short}
-          </button>
-        );
-      },
+    column.accessor(recordText, {
+      id: 'record',
+      header: 'Record',
+      meta: { csv: (e) => `${recordText(e)} (${e.entityId})` },
+      cell: (c) => <RecordCell event={c.row.original} onShowRecord={onShowRecord} />,
     }),
     column.accessor('action', {
       header: 'Action',
       meta: { csv: (e) => e.action },
       cell: (c) => <span className="font-medium">{actionLabel(c.getValue())}</span>,
     }),
-    column.accessor((e) => JSON.stringify({ before: e.before, after: e.after }), {
+    column.accessor((e) => changedFields(e.before, e.after).map(fieldLabel).join(', '), {
       id: 'changes',
-      header: 'Changes (raw)',
-      meta: { hiddenByDefault: true, className: 'max-w-md truncate font-mono text-xs' },
+      header: 'Fields',
+      meta: { className: 'max-w-xs text-stone-700' },
+      cell: (c) => c.getValue() || <span className="text-stone-500">—</span>,
     }),
   ];
+}
+
+/** The record by name (linked to its page), and a button for its history alone. */
+function RecordCell({ event, onShowRecord }: { event: AuditEventView; onShowRecord: (entity: string, entityId: string) => void }) {
+  const kind = entityLabel(event.entity).toLowerCase();
+  return (
+    <div className="flex flex-wrap items-baseline gap-x-2">
+      {event.record ? (
+        <RecordName record={event.record} />
+      ) : (
+        <span className="font-mono text-xs text-stone-600" title={event.entityId}>
+          {event.entityId.length > 13 ? `${event.entityId.slice(0, 8)}…` : event.entityId}
+        </span>
+      )}
+      <button
+        type="button"
+        className="text-xs text-stone-600 underline decoration-stone-300 underline-offset-2 hover:text-ink-800"
+        aria-label={`History of ${kind} ${event.record?.name ?? event.entityId}`}
+        onClick={() => onShowRecord(event.entity, event.entityId)}
+      >
+        History
+      </button>
+    </div>
+  );
 }
 
 interface AuditTableProps {
@@ -117,8 +104,10 @@ export function AuditTable({ filters, onFiltersChange }: AuditTableProps) {
       data={rows}
       getRowId={(e) => String(e.id)}
       {...pagedQueryProps(query)}
-      renderExpanded={(e) => <AuditChanges before={e.before} after={e.after} />}
-      expandLabel={(e) => `Show changes: ${actionLabel(e.action)} ${entityLabel(e.entity)} ${formatDateTime(e.createdAt)}`}
+      renderExpanded={(e) => <AuditChanges before={e.before} after={e.after} references={e.references} />}
+      expandLabel={(e) =>
+        `Show changes: ${actionLabel(e.action)} ${entityLabel(e.entity).toLowerCase()} ${recordText(e)}, ${formatDateTime(e.createdAt)}`
+      }
       toolbar={<AuditFilterBar filters={filters} onFiltersChange={onFiltersChange} />}
       empty={
         <EmptyState

@@ -1,13 +1,15 @@
 import { cellLabel } from '@shared/calc/grid';
-import { cabinetPatch } from '@shared/schemas/cabinets';
+import { cabinetPatch, type Position } from '@shared/schemas/cabinets';
 import { ArrowLeftRight, Move, Pencil, Wrench, X } from 'lucide-react';
 import { useState, type ReactNode } from 'react';
+import { Link, useLocation } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { paths } from '@/config/paths';
 import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { SelectField } from '@/components/ui/select-field';
+import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
@@ -15,12 +17,14 @@ import type { CabinetDetail } from '@shared/schemas/cabinets';
 import type { WallCabinet } from '@shared/schemas/walls';
 import { useUpdateCabinet } from '@/features/cabinets/api/mutations';
 import { CabinetHistory } from '@/features/cabinets/components/cabinet-history';
+import { EmptyCellCard } from '@/features/cabinets/components/empty-cell-card';
 import { CabinetStatusPill, cabinetStatusOptions } from '@/features/cabinets/components/cabinet-status';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { errorMessage } from '@/lib/errors';
 import { formatDate } from '@/lib/format';
 import { useQuery } from '@tanstack/react-query';
 import { cabinetQueries } from '@/resources/cabinets';
+import { wallQueries } from '@/resources/walls';
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
   return (
@@ -50,6 +54,33 @@ export function CabinetFacts({ cabinet }: { cabinet: CabinetDetail }) {
         </div>
       ) : null}
     </dl>
+  );
+}
+
+/** The open tickets that name the cabinet's position, each one tap away (a thumb-sized target on a phone). */
+function OpenTicketLinks({ tickets }: { tickets: WallCabinet['openTicketRefs'] }) {
+  const { pathname } = useLocation();
+  if (tickets.length === 0) return null;
+  return (
+    <div className="flex flex-wrap items-center gap-x-2 text-sm font-medium text-state-open-ticket">
+      <span>{tickets.length === 1 ? '1 open ticket names this position:' : `${tickets.length} open tickets name this position:`}</span>
+      {tickets.map((t) =>
+        // Opened from that ticket's own page: say so rather than link to where we are.
+        paths.ticket.getHref(t.id) === pathname ? (
+          <span key={t.id} className="font-mono" aria-current="page">
+            {t.ref} (this ticket)
+          </span>
+        ) : (
+          <Link
+            key={t.id}
+            to={paths.ticket.getHref(t.id)}
+            className="inline-flex min-h-touch items-center font-mono underline underline-offset-2 hover:text-ink-900 md:min-h-0"
+          >
+            {t.ref}
+          </Link>
+        ),
+      )}
+    </div>
   );
 }
 
@@ -86,11 +117,7 @@ export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, on
             {serial}
           </h2>
           {status ? <CabinetStatusPill status={status} /> : null}
-          {summary && summary.openTickets > 0 ? (
-            <p className="text-sm font-medium text-state-open-ticket">
-              {summary.openTickets === 1 ? '1 open ticket names this position' : `${summary.openTickets} open tickets name this position`}
-            </p>
-          ) : null}
+          {summary ? <OpenTicketLinks tickets={summary.openTicketRefs} /> : null}
         </div>
         {onClose ? (
           <button
@@ -152,6 +179,45 @@ export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, on
         </>
       ) : null}
     </article>
+  );
+}
+
+interface CabinetCellDialogProps {
+  wall: { id: string; name: string };
+  /** The cell to open; null keeps the dialog closed. */
+  position: Position | null;
+  onClose: () => void;
+  canOperate: boolean;
+}
+
+/**
+ * The cabinet card of one cell, opened from a map outside the wall page (a ticket's map): the
+ * same card, in a dialog, with the way to the wall page, where the cabinet is moved or swapped.
+ */
+export function CabinetCellDialog({ wall, position, onClose, canOperate }: CabinetCellDialogProps) {
+  const cabinets = useQuery({ ...wallQueries.cabinets(wall.id), enabled: position !== null });
+  const occupant = position ? cabinets.data?.items.find((c) => c.column === position.column && c.row === position.row) : undefined;
+  const label = position ? cellLabel(position) : '';
+  return (
+    <Dialog open={position !== null} onClose={onClose} title={occupant ? `Cabinet at ${label}` : `${label} on ${wall.name}`}>
+      {position === null ? null : cabinets.isPending ? (
+        <p className="text-stone-600">
+          <Spinner className="mr-2" label="" /> Loading the cabinets…
+        </p>
+      ) : cabinets.isError ? (
+        <LoadError title="The cabinets could not be loaded." error={cabinets.error} onRetry={() => void cabinets.refetch()} />
+      ) : occupant ? (
+        <CabinetCard key={occupant.id} cabinetId={occupant.id} summary={occupant} canOperate={canOperate} titled />
+      ) : (
+        <EmptyCellCard wallId={wall.id} position={position} canRegister={false} titled />
+      )}
+      {position ? (
+        <DialogActions>
+          <ButtonLink to={paths.wall.getHref(wall.id, { col: position.column, row: position.row })}>Open on the wall page</ButtonLink>
+          <Button onClick={onClose}>Close</Button>
+        </DialogActions>
+      ) : null}
+    </Dialog>
   );
 }
 

@@ -1,38 +1,86 @@
 import { cellLabel } from '@shared/calc/grid';
 import { ArrowLeftRight, ArrowRight, CircleDot, FileUp, MapPin, PackageMinus, RefreshCw, Wrench } from 'lucide-react';
+import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import type { CabinetEvent } from '@shared/schemas/cabinets';
+import { paths } from '@/config/paths';
 import { cabinetStatusLabels } from '@/features/cabinets/components/cabinet-status';
 import { formatDateTime } from '@/lib/format';
 
 const pos = (column: number | null, row: number | null) => (column && row ? cellLabel({ column, row }) : null);
+const linkClass = 'text-ink-700 underline underline-offset-2 hover:text-ink-900';
 
-/** Where on which wall, naming the wall only when the move crossed walls. */
-function place(wallName: string | null, column: number | null, row: number | null, showWall: boolean) {
-  const p = pos(column, row);
-  if (!p) return wallName ?? 'stock';
-  return showWall && wallName ? `${p} on ${wallName}` : p;
+/** A wall named in the history, linked to its page. */
+function WallName({ id, name }: { id: string | null; name: string }) {
+  return id ? (
+    <Link to={paths.wall.getHref(id)} className={linkClass}>
+      {name}
+    </Link>
+  ) : (
+    <>{name}</>
+  );
 }
 
-/** One line that says what happened, positions written C{col}·R{row}. */
-export function describeEvent(e: CabinetEvent): string {
+/** Where on which wall, naming (and linking) the wall only when the move crossed walls. */
+function place(wallId: string | null, wallName: string | null, column: number | null, row: number | null, showWall: boolean): ReactNode {
+  const p = pos(column, row);
+  if (!p) return wallName ? <WallName id={wallId} name={wallName} /> : 'stock';
+  return showWall && wallName ? (
+    <>
+      {p} on <WallName id={wallId} name={wallName} />
+    </>
+  ) : (
+    p
+  );
+}
+
+/** The other cabinet of a swap, linked to its card. */
+function OtherCabinet({ serial }: { serial: string | null }) {
+  if (!serial) return <>another cabinet</>;
+  return (
+    <Link to={paths.cabinetLabel.getHref(serial)} className={`font-mono ${linkClass}`}>
+      {serial}
+    </Link>
+  );
+}
+
+/** One line that says what happened, positions written C{col}·R{row}, the records it names linked. */
+export function EventText({ event: e }: { event: CabinetEvent }): ReactNode {
   const crossWalls = Boolean(e.fromWallId && e.toWallId && e.fromWallId !== e.toWallId);
-  const from = place(e.fromWallName, e.fromColumn, e.fromRow, crossWalls);
-  const to = place(e.toWallName, e.toColumn, e.toRow, crossWalls || !e.fromWallId);
+  const from = place(e.fromWallId, e.fromWallName, e.fromColumn, e.fromRow, crossWalls);
+  const to = place(e.toWallId, e.toWallName, e.toColumn, e.toRow, crossWalls || !e.fromWallId);
   switch (e.kind) {
     case 'placed':
-      return e.fromStatus && e.fromStatus !== 'installed'
-        ? `Placed at ${to} (was ${cabinetStatusLabels[e.fromStatus].toLowerCase()})`
-        : `Placed at ${to}`;
+      return e.fromStatus && e.fromStatus !== 'installed' ? (
+        <>
+          Placed at {to} (was {cabinetStatusLabels[e.fromStatus].toLowerCase()})
+        </>
+      ) : (
+        <>Placed at {to}</>
+      );
     case 'imported':
-      return `Registered at ${to} by CSV import`;
+      return <>Registered at {to} by CSV import</>;
     case 'moved':
-      return `Moved from ${from} to ${to}`;
+      return (
+        <>
+          Moved from {from} to {to}
+        </>
+      );
     case 'swapped':
-      return `Swapped with ${e.otherSerial ?? 'another cabinet'}: from ${from} to ${to}`;
+      return (
+        <>
+          Swapped with <OtherCabinet serial={e.otherSerial} />: from {from} to {to}
+        </>
+      );
     case 'removed':
-      return `Taken off the wall at ${from}${e.toStatus ? `: ${cabinetStatusLabels[e.toStatus].toLowerCase()}` : ''}`;
+      return (
+        <>
+          Taken off the wall at {from}
+          {e.toStatus ? `: ${cabinetStatusLabels[e.toStatus].toLowerCase()}` : ''}
+        </>
+      );
     case 'repaired':
-      return pos(e.fromColumn, e.fromRow) ? `Repaired at ${from}` : 'Repaired';
+      return pos(e.fromColumn, e.fromRow) ? <>Repaired at {from}</> : 'Repaired';
     case 'status_changed':
       return `Status ${e.fromStatus ? `changed from ${cabinetStatusLabels[e.fromStatus].toLowerCase()} ` : ''}to ${
         e.toStatus ? cabinetStatusLabels[e.toStatus].toLowerCase() : '—'
@@ -64,7 +112,9 @@ export function CabinetHistory({ events }: { events: CabinetEvent[] }) {
             <span className="absolute -left-[1.95rem] top-0 flex h-6 w-6 items-center justify-center rounded-full border border-stone-200 bg-white text-ink-600">
               <Icon className="h-3.5 w-3.5" aria-hidden="true" />
             </span>
-            <p className="text-base text-stone-900">{describeEvent(e)}</p>
+            <p className="text-base text-stone-900">
+              <EventText event={e} />
+            </p>
             <p className="text-xs text-stone-600">
               <time dateTime={e.createdAt}>{formatDateTime(e.createdAt)}</time>
               {e.actorName ? ` · ${e.actorName}` : ''}

@@ -12,12 +12,50 @@ import { errorMessage } from '@/lib/errors';
 const templateHeader = ['serial', 'column', 'row', 'batch'];
 
 interface CabinetImportProps {
-  wall: { id: string; name: string; columns: number; rows: number };
+  /** `installedCabinets`: the cabinets on the wall now; an import only fills the free positions. */
+  wall: { id: string; name: string; columns: number; rows: number; installedCabinets: number };
   /** Where "see them on the map" goes after a successful import. */
   mapHref: string;
 }
 
 type Outcome = { kind: 'imported'; count: number } | { kind: 'refused'; error: unknown } | null;
+
+/** The cabinet lines of a picked file (every non-empty line after the header), for a warning before upload. */
+async function cabinetLines(file: File) {
+  const lines = (await file.text()).split(/\r\n|\n|\r/).filter((l) => l.trim() !== '');
+  return Math.max(0, lines.length - 1);
+}
+
+const positions = (n: number) => `${n.toLocaleString('en')} ${n === 1 ? 'position' : 'positions'}`;
+
+/**
+ * How many positions the wall has free, said before a file is picked: a full wall refuses every
+ * line, and a file with more lines than free positions cannot fit.
+ */
+function FreePositions({ wall, lines }: { wall: CabinetImportProps['wall']; lines: number | null }) {
+  const total = wall.columns * wall.rows;
+  const free = Math.max(0, total - wall.installedCabinets);
+  if (free === 0) {
+    return (
+      <Alert
+        tone="danger"
+        title={`Every position of ${wall.name} is taken (${total.toLocaleString('en')} of ${total.toLocaleString('en')})`}
+      >
+        An import only adds cabinets at free positions, so any file for this wall would be refused. Move cabinets off the wall, or enlarge
+        its grid, first.
+      </Alert>
+    );
+  }
+  const tooMany = lines !== null && lines > free;
+  if (wall.installedCabinets === 0 && !tooMany) return null;
+  return (
+    <Alert tone={tooMany ? 'danger' : 'info'} title={`${positions(free)} free of ${total.toLocaleString('en')}`} live={tooMany}>
+      {tooMany
+        ? `The file has ${lines.toLocaleString('en')} cabinet lines: more than the wall has free positions, so some would land on taken ones and the file would be refused.`
+        : `${wall.installedCabinets.toLocaleString('en')} ${wall.installedCabinets === 1 ? 'cabinet is' : 'cabinets are'} registered on this wall already; the file may only name free positions.`}
+    </Alert>
+  );
+}
 
 function fileSize(bytes: number) {
   if (bytes < 1024) return `${bytes} bytes`;
@@ -35,7 +73,15 @@ export function CabinetImport({ wall, mapHref }: CabinetImportProps) {
   const [file, setFile] = useState<File | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
   const [outcome, setOutcome] = useState<Outcome>(null);
+  const [lines, setLines] = useState<number | null>(null);
   const importCabinets = useImportCabinets();
+
+  const pick = (picked: File | null) => {
+    setFile(picked);
+    setOutcome(null);
+    setLines(null);
+    if (picked) void cabinetLines(picked).then(setLines, () => setLines(null));
+  };
 
   const upload = async () => {
     if (!file) return;
@@ -45,6 +91,7 @@ export function CabinetImport({ wall, mapHref }: CabinetImportProps) {
       const result = await importCabinets.mutateAsync({ wallId: wall.id, file, onProgress: setProgress });
       setOutcome({ kind: 'imported', count: result.imported });
       setFile(null);
+      setLines(null);
       if (inputRef.current) inputRef.current.value = '';
     } catch (error) {
       setOutcome({ kind: 'refused', error });
@@ -61,6 +108,7 @@ export function CabinetImport({ wall, mapHref }: CabinetImportProps) {
       description={`One line per cabinet of ${wall.name}: its serial, its position (column 1–${wall.columns}, row 1–${wall.rows}, counted from the top-left as the audience sees the wall) and its module batch.`}
     >
       <div className="space-y-5">
+        {outcome?.kind === 'imported' ? null : <FreePositions wall={wall} lines={file ? lines : null} />}
         <div className="flex flex-wrap items-center gap-3">
           <Button
             size="sm"
@@ -84,10 +132,7 @@ export function CabinetImport({ wall, mapHref }: CabinetImportProps) {
             id={inputId}
             type="file"
             accept=".csv,text/csv"
-            onChange={(e) => {
-              setFile(e.target.files?.[0] ?? null);
-              setOutcome(null);
-            }}
+            onChange={(e) => pick(e.target.files?.[0] ?? null)}
             className="block w-full text-base text-stone-800 file:mr-3 file:min-h-touch file:cursor-pointer file:rounded file:border file:border-stone-300 file:bg-white file:px-4 file:text-base file:font-medium file:text-ink-900 hover:file:bg-stone-50 md:file:min-h-10"
           />
           {file ? (

@@ -1,8 +1,6 @@
-import { cellLabel } from '@shared/calc/grid';
 import QRCode from 'qrcode';
 import { useEffect, useState } from 'react';
 import { Spinner } from '@/components/ui/spinner';
-import type { WallCabinet } from '@shared/schemas/walls';
 
 /** The address a cabinet's QR label opens: `${origin}/c/<serial>`. */
 export const labelUrl = (origin: string, serial: string) => `${origin}/c/${encodeURIComponent(serial)}`;
@@ -44,14 +42,23 @@ const printCss = `
   * { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 }`;
 
+/** What a label prints: only what stays true when the cabinet moves or is swapped. */
+export interface LabelCabinet {
+  id: string;
+  serial: string;
+  modelName: string;
+}
+
 interface CabinetLabelsSheetProps {
-  wall: { name: string; siteName: string; clientName: string };
-  cabinets: WallCabinet[];
+  cabinets: LabelCabinet[];
   origin: string;
 }
 
-/** A printable sheet: one label per cabinet with its QR code, serial, wall and position. */
-export function CabinetLabelsSheet({ wall, cabinets, origin }: CabinetLabelsSheetProps) {
+/**
+ * A printable sheet: one label per cabinet with its QR code, serial and model. No grid position
+ * and no wall: a move or a swap would make them wrong, so the scan shows where the cabinet is now.
+ */
+export function CabinetLabelsSheet({ cabinets, origin }: CabinetLabelsSheetProps) {
   const codes = useQrCodes(cabinets.map((c) => labelUrl(origin, c.serial)));
   return (
     <>
@@ -68,6 +75,7 @@ export function CabinetLabelsSheet({ wall, cabinets, origin }: CabinetLabelsShee
               <div
                 key={c.id}
                 className="cabinet-label flex flex-col gap-1 overflow-hidden rounded-md border border-stone-300 bg-white px-3 py-2.5 shadow-card"
+                data-testid="cabinet-label"
               >
                 <p className="serial break-all font-mono text-[12pt] font-bold leading-tight text-black">{c.serial}</p>
                 <div className="flex min-h-0 flex-1 items-center gap-2">
@@ -79,11 +87,8 @@ export function CabinetLabelsSheet({ wall, cabinets, origin }: CabinetLabelsShee
                     dangerouslySetInnerHTML={{ __html: codes.get(url) ?? '' }}
                   />
                   <div className="min-w-0 flex-1 leading-tight">
-                    <p className="text-[16pt] font-bold text-black">{cellLabel(c)}</p>
-                    <p className="mt-1 line-clamp-2 text-[8pt] text-stone-800">{wall.name}</p>
-                    <p className="mt-0.5 line-clamp-2 text-[7pt] text-stone-600">
-                      {wall.siteName} · {wall.clientName}
-                    </p>
+                    <p className="model line-clamp-3 text-[10pt] font-semibold text-black">{c.modelName}</p>
+                    <p className="mt-1 text-[7pt] text-stone-700">Scan for where it is now and its history</p>
                   </div>
                 </div>
               </div>

@@ -3,8 +3,8 @@ import type { VisitStatus } from '@shared/schemas/enums';
 import clsx from 'clsx';
 import { TriangleAlert } from 'lucide-react';
 import type { DragEvent, KeyboardEvent } from 'react';
-import { canChange, visitTitle } from '@/features/dispatch/components/edit-visit-dialog';
-import { formatSiteWindow } from '@/lib/site-time';
+import { canChange } from '@/features/dispatch/components/edit-visit-dialog';
+import { formatSiteTime, formatSiteWindow } from '@/lib/site-time';
 
 // Written out in full so Tailwind finds every class name. Colour is never the only signal: the status is written too.
 const statusLook: Record<VisitStatus, string> = {
@@ -28,11 +28,17 @@ export function VisitBlock({ visit, technicianId, onOpen, onDragStart, onDragEnd
   const bookedTwice = visit.status !== 'cancelled' && visit.conflicts.some((c) => c.technician.id === technicianId);
   const cancelled = visit.status === 'cancelled';
   const movable = canChange(visit) && visit.status === 'planned';
+  // The name starts with the words the block shows, in their order (WCAG 2.5.3, label in name),
+  // then the day and the status where the block does not show them.
+  const statusShown = visit.status !== 'planned';
   const label = [
-    visitTitle(visit),
-    formatSiteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone),
-    visitStatusLabels[visit.status],
+    formatSiteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone, { withDay: false }),
+    visit.site.name,
+    visit.ticket ? visit.ticket.ref : 'Maintenance',
+    statusShown ? visitStatusLabels[visit.status] : '',
     bookedTwice ? 'booked twice' : '',
+    formatSiteTime(visit.windowStart, visit.site.timeZone, 'EEE d MMM'),
+    statusShown ? '' : visitStatusLabels[visit.status],
   ]
     .filter(Boolean)
     .join(', ');
@@ -67,14 +73,12 @@ export function VisitBlock({ visit, technicianId, onOpen, onDragStart, onDragEnd
     >
       <span className={clsx('block font-semibold tabular-nums', cancelled && 'line-through')}>
         {formatSiteWindow(visit.windowStart, visit.windowEnd, visit.site.timeZone, { withDay: false })}
-      </span>
-      <span className={clsx('block truncate', cancelled && 'line-through')}>{visit.site.name}</span>
+      </span>{' '}
+      <span className={clsx('block truncate', cancelled && 'line-through')}>{visit.site.name}</span>{' '}
       <span className={clsx('block truncate', visit.ticket ? 'font-mono' : 'italic')}>
         {visit.ticket ? visit.ticket.ref : 'Maintenance'}
-      </span>
-      {visit.status !== 'planned' ? (
-        <span className="block text-2xs font-semibold uppercase">{visitStatusLabels[visit.status]}</span>
-      ) : null}
+      </span>{' '}
+      {statusShown ? <span className="block text-2xs font-semibold uppercase">{visitStatusLabels[visit.status]}</span> : null}{' '}
       {bookedTwice ? (
         <span className="mt-0.5 flex items-center gap-1 font-semibold text-danger-700">
           <TriangleAlert className="h-3.5 w-3.5 shrink-0" aria-hidden="true" />

@@ -5,13 +5,16 @@ import { useId, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
-import { SelectBox } from '@/components/ui/select-field';
+import { SelectBox, type SelectOption } from '@/components/ui/select-field';
 import { Spinner } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
 import { paths } from '@/config/paths';
 import { wallQueries } from '@/resources/walls';
 import { useQuery } from '@tanstack/react-query';
 import { useSaveWallPlan } from '@/features/planner/api/mutations';
+import { ChoiceGroup } from '@/features/planner/components/choice-group';
+import { NewWallFromPlan, newWallDefaults, newWallSchema } from '@/features/planner/components/new-wall-from-plan';
+import { useZodForm } from '@/components/ui/form';
 import { errorMessage } from '@/lib/errors';
 import type { WallSummary } from '@shared/schemas/walls';
 
@@ -27,21 +30,49 @@ interface SavePlanDialogProps {
   powerRuns: { pattern: StoredRunPattern; runs: Run[] };
   /** Switch the plan to a wall's grid (the runs follow). */
   onUseGrid: (columns: number, rows: number) => void;
+  /** The wall the planner was opened from: saving onto it is offered first. */
+  startWallId?: string | null;
+  /** The mountings a new wall may have. */
+  mountingOptions: readonly SelectOption[];
 }
+
+type Target = 'new' | 'existing';
+const targets = [
+  { value: 'new', label: 'A new wall' },
+  { value: 'existing', label: 'An existing wall' },
+] as const;
 
 const choiceLabel = (w: WallSummary) => `${w.clientName} · ${w.siteName} · ${w.name} (${w.columns} × ${w.rows})`;
 const bare = (runs: Run[]) => runs.map((r) => ({ index: r.index, cells: r.cells.map((c) => ({ column: c.column, row: c.row })) }));
 
 /**
- * Stores the plan's settings and runs on a wall of the same cabinet model. The runs must match the
+ * Stores the plan's settings and runs on a new wall (the plan's model and grid, at a site the
+ * office picks) or on an existing wall of the same cabinet model. The runs must match an existing
  * wall's grid, so a wall of another size offers to switch the plan to its grid first.
  */
-export function SavePlanDialog({ open, onClose, model, columns, rows, settings, dataRuns, powerRuns, onUseGrid }: SavePlanDialogProps) {
+export function SavePlanDialog({
+  open,
+  onClose,
+  model,
+  columns,
+  rows,
+  settings,
+  dataRuns,
+  powerRuns,
+  onUseGrid,
+  startWallId,
+  mountingOptions,
+}: SavePlanDialogProps) {
   const selectId = useId();
-  const [wallId, setWallId] = useState('');
+  const [target, setTarget] = useState<Target>(startWallId ? 'existing' : 'new');
+  const [wallId, setWallId] = useState(startWallId ?? '');
+  const newWallForm = useZodForm(newWallSchema, { defaultValues: newWallDefaults });
   const [saved, setSaved] = useState<WallSummary | null>(null);
   // Walls built from the plan's cabinet model, by name.
-  const walls = useQuery({ ...wallQueries.page({ cabinetModelId: model?.id, sort: 'name' }), enabled: open && Boolean(model) });
+  const walls = useQuery({
+    ...wallQueries.page({ cabinetModelId: model?.id, sort: 'name' }),
+    enabled: open && Boolean(model) && target === 'existing',
+  });
   const save = useSaveWallPlan();
   const toast = useToast();
   const wall = walls.data?.items.find((w) => w.id === wallId) ?? null;
@@ -69,8 +100,17 @@ export function SavePlanDialog({ open, onClose, model, columns, rows, settings, 
   if (!model) {
     body = (
       <Alert tone="info" title="Choose the cabinet model from the catalogue">
-        A plan is saved onto a wall built from the same catalogue model. A cabinet typed in by hand matches no wall.
+        A plan is saved onto a wall built from a catalogue model. A cabinet typed in by hand makes no wall and matches none.
       </Alert>
+    );
+  } else if (target === 'new') {
+    body = (
+      <NewWallFromPlan
+        form={newWallForm}
+        plan={{ model, columns, rows, settings, dataRuns, powerRuns }}
+        mountingOptions={mountingOptions}
+        onCancel={close}
+      />
     );
   } else if (saved) {
     body = (
@@ -128,8 +168,9 @@ export function SavePlanDialog({ open, onClose, model, columns, rows, settings, 
       onClose={close}
       title="Save onto a wall"
       description="Stores the supply, the capacities and the data and power runs as drawn."
+      size="lg"
       footer={
-        saved || !model ? (
+        model && target === 'new' ? undefined : saved || !model ? (
           <Button onClick={close}>Close</Button>
         ) : (
           <>
@@ -146,7 +187,10 @@ export function SavePlanDialog({ open, onClose, model, columns, rows, settings, 
         )
       }
     >
-      {body}
+      <div className="space-y-5">
+        {model && !saved ? <ChoiceGroup legend="Save the plan onto" value={target} onChange={setTarget} choices={targets} /> : null}
+        {body}
+      </div>
     </Dialog>
   );
 }

@@ -45,7 +45,7 @@ export function LocationStockCards({ location, onMove }: { location: StockLocati
               {b.onHand}
             </p>
             <Button size="lg" onClick={() => onMove(b)} aria-label={`Use or move ${b.partName}${b.batch ? ` batch ${b.batch}` : ''}`}>
-              Use / move
+              Use or move
             </Button>
           </li>
         );

@@ -1,5 +1,7 @@
+import { TZDate } from '@date-fns/tz';
 import type { visitStatuses } from '@shared/schemas/enums';
-import { CalendarDays, ChevronRight } from 'lucide-react';
+import { format, parseISO } from 'date-fns';
+import { CalendarCog, CalendarDays, ChevronRight } from 'lucide-react';
 import { Link } from 'react-router-dom';
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
@@ -30,14 +32,35 @@ function Fact({ label, children }: { label: string; children: ReactNode }) {
   );
 }
 
+/** The name of a record, linked to its page. */
+function RecordLink({ to, children }: { to: string; children: ReactNode }) {
+  return (
+    <Link to={to} className="inline-flex min-h-touch items-center text-ink-700 underline-offset-2 hover:underline lg:min-h-0">
+      {children}
+    </Link>
+  );
+}
+
 /** Who, where and when, at a glance. */
 export function TicketFacts({ ticket, forClient }: { ticket: TicketDetail; forClient: boolean }) {
   return (
     <Card title="Details">
       <dl className="divide-y divide-stone-100">
-        {forClient ? null : <Fact label="Client">{ticket.client.name}</Fact>}
-        <Fact label="Site">{ticket.site.name}</Fact>
-        <Fact label="Wall">{ticket.wall?.name ?? <span className="font-normal text-stone-500">None</span>}</Fact>
+        {forClient ? null : (
+          <Fact label="Client">
+            <RecordLink to={paths.client.getHref(ticket.client.id)}>{ticket.client.name}</RecordLink>
+          </Fact>
+        )}
+        <Fact label="Site">
+          <RecordLink to={paths.site.getHref(ticket.site.id)}>{ticket.site.name}</RecordLink>
+        </Fact>
+        <Fact label="Wall">
+          {ticket.wall ? (
+            <RecordLink to={paths.wall.getHref(ticket.wall.id)}>{ticket.wall.name}</RecordLink>
+          ) : (
+            <span className="font-normal text-stone-500">None</span>
+          )}
+        </Fact>
         <Fact label="Affects">{scopeText[ticket.scope]}</Fact>
         <Fact label="Reported by">{ticket.reporterName ?? '—'}</Fact>
         <Fact label="Opened">
@@ -54,8 +77,8 @@ export function TicketFacts({ ticket, forClient }: { ticket: TicketDetail; forCl
   );
 }
 
-/** The visits planned for this ticket, in the site's local time. */
-export function TicketVisits({ visits, timeZone }: { visits: TicketVisit[]; timeZone?: string }) {
+/** The visits planned for this ticket, in the site's local time; the office moves or cancels one in dispatch. */
+export function TicketVisits({ visits, timeZone, office = false }: { visits: TicketVisit[]; timeZone?: string; office?: boolean }) {
   if (visits.length === 0) return null;
   return (
     <Card
@@ -68,11 +91,8 @@ export function TicketVisits({ visits, timeZone }: { visits: TicketVisit[]; time
     >
       <ul className="space-y-2" aria-label="Visits for this ticket">
         {visits.map((v) => (
-          <li key={v.id}>
-            <Link
-              to={paths.visit.getHref(v.id)}
-              className="group flex items-center gap-2 rounded-md border border-stone-200 px-3 py-2 hover:border-ink-300 hover:bg-ink-50/40"
-            >
+          <li key={v.id} className="flex items-stretch rounded-md border border-stone-200 hover:border-ink-300">
+            <Link to={paths.visit.getHref(v.id)} className="group flex min-w-0 flex-1 items-center gap-2 px-3 py-2 hover:bg-ink-50/40">
               <span className="min-w-0 flex-1">
                 <span className="block text-sm font-medium text-ink-950 group-hover:underline">
                   {formatSiteTime(v.windowStart, timeZone)}
@@ -83,9 +103,27 @@ export function TicketVisits({ visits, timeZone }: { visits: TicketVisit[]; time
               </span>
               <ChevronRight className="h-4 w-4 shrink-0 text-stone-400 group-hover:text-ink-700" aria-hidden="true" />
             </Link>
+            {office && (v.status === 'planned' || v.status === 'in_progress') ? <MoveInDispatch visit={v} timeZone={timeZone} /> : null}
           </li>
         ))}
       </ul>
     </Card>
+  );
+}
+
+/** The visit's week in dispatch, its edit dialog open: move, reassign or cancel it there. */
+function MoveInDispatch({ visit, timeZone }: { visit: TicketVisit; timeZone?: string }) {
+  // Any date of the week opens that week; the date is the site's, as dispatch files visits.
+  const start = parseISO(visit.windowStart);
+  const week = format(timeZone ? new TZDate(start, timeZone) : start, 'yyyy-MM-dd');
+  return (
+    <Link
+      to={paths.dispatch.getHref({ week, visit: visit.id })}
+      aria-label={`Move or cancel the visit of ${formatSiteTime(visit.windowStart, timeZone)} in dispatch`}
+      className="flex min-h-touch shrink-0 items-center gap-1.5 border-l border-stone-200 px-3 text-xs font-medium text-ink-700 hover:bg-ink-50/40 hover:underline"
+    >
+      <CalendarCog className="h-4 w-4" aria-hidden="true" />
+      Move or cancel
+    </Link>
   );
 }

@@ -37,6 +37,19 @@ describe('ticket list filters in the address', () => {
     });
   });
 
+  it('opens on the open tickets; open=all, and only that, shows every ticket', () => {
+    expect(filtersFromParams(new URLSearchParams('')).open).toBe('true');
+    expect(filtersFromParams(new URLSearchParams('q=fan')).open).toBe('true');
+    expect(filtersFromParams(new URLSearchParams('status=bogus')).open).toBe('true');
+    expect(filtersFromParams(new URLSearchParams('open=all')).open).toBeUndefined();
+    expect(filtersFromParams(new URLSearchParams('open=false')).open).toBe('false');
+    expect(filtersFromParams(new URLSearchParams('status=closed')).open).toBeUndefined();
+    // "Any status" is written into the address, so that a reload keeps every ticket.
+    expect(filtersToRecord({ q: 'fan' })).toEqual({ q: 'fan', open: 'all' });
+    expect(filtersFromParams(new URLSearchParams(filtersToRecord({ q: 'fan' }))).open).toBeUndefined();
+    expect(filtersToRecord({ open: 'true' })).toEqual({ open: 'true' });
+  });
+
   it('accepts an assignee id, "none" and "me", and nothing else', () => {
     const id = '0b7f5a7e-3c1d-4b7e-9d8a-0a1b2c3d4e5f';
     expect(filtersFromParams(new URLSearchParams(`assigneeId=${id}`)).assigneeId).toBe(id);

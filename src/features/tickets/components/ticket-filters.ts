@@ -25,16 +25,23 @@ export const filterKeys = [
 ] as const;
 
 /**
+ * `open=all` in the address: every ticket, closed ones included. Without `open` or `status` the
+ * list shows the open tickets, which is what a desk works from.
+ */
+export const everyTicket = 'all';
+
+/**
  * The list's filters from the address. Unknown or malformed values are dropped, so a pasted or
  * old link still opens the list rather than an error.
  */
 export function filtersFromParams(params: URLSearchParams): TicketFilters {
-  const open = params.get('open');
+  const status = csvOf(params.get('status'), ticketStatuses);
+  const open = params.get('open') ?? (status ? null : 'true');
   const sort = params.get('sort');
   const dir = params.get('dir');
   const assignee = params.get('assigneeId');
   return {
-    status: csvOf(params.get('status'), ticketStatuses),
+    status,
     open: open === 'true' || open === 'false' ? open : undefined,
     priority: csvOf(params.get('priority'), ticketPriorities),
     clock: csvOf(params.get('clock'), ticketClockStates),
@@ -48,13 +55,17 @@ export function filtersFromParams(params: URLSearchParams): TicketFilters {
   };
 }
 
-/** The filters as a plain object of strings (what a saved view stores), leaving out empty ones. */
+/**
+ * The filters as a plain object of strings (the address, and what a saved view stores), leaving
+ * out empty ones; no status filter at all is written `open=all`, as an empty one means open.
+ */
 export function filtersToRecord(filters: TicketFilters): Record<string, string> {
   const out: Record<string, string> = {};
   for (const key of filterKeys) {
     const value = filters[key];
     if (value) out[key] = value;
   }
+  if (!filters.open && !filters.status) out.open = everyTicket;
   return out;
 }
 

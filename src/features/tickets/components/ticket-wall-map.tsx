@@ -3,6 +3,7 @@ import type { WallDetail } from '@shared/schemas/walls';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { WallMap, WallViewToggle, type WallMapCell } from '@/components/wall-map/wall-map';
+import { SmallCellsHint } from '@/features/tickets/components/small-cells-hint';
 import { wallQueries } from '@/resources/walls';
 
 /** A cabinet's height ÷ width, so the map draws cells the shape they are. */
@@ -11,14 +12,16 @@ const cellAspectOf = ({ cabinetModel: { widthMm, heightMm } }: WallDetail) => (w
 interface TicketWallMapProps {
   wall: { id: string; name: string; columns: number; rows: number };
   selected: Position[];
-  /** Tapping toggles a cell; leave out for a read-only map. */
+  /** Tapping toggles a cell (picking the faulty cabinets). */
   onToggle?: (p: Position) => void;
+  /** Tapping opens the cell's cabinet (a ticket's map). Leave both out for a map that only shows. */
+  onOpenCell?: (p: Position) => void;
   /** Cells with an open ticket get their own tone (useful while reporting; noise on a ticket). */
   markOpenTickets?: boolean;
 }
 
 /** The wall map for a ticket: cabinets with their serials, the reported cells highlighted, front/rear. */
-export function TicketWallMap({ wall, selected, onToggle, markOpenTickets = false }: TicketWallMapProps) {
+export function TicketWallMap({ wall, selected, onToggle, onOpenCell, markOpenTickets = false }: TicketWallMapProps) {
   const [view, setView] = useState<'front' | 'rear'>('front');
   const cabinets = useQuery(wallQueries.cabinets(wall.id));
   const cellAspect = useQuery({ ...wallQueries.detail(wall.id), select: cellAspectOf });
@@ -42,9 +45,14 @@ export function TicketWallMap({ wall, selected, onToggle, markOpenTickets = fals
         cellAspect={cellAspect.data}
         view={view}
         selected={selected}
-        onCellActivate={onToggle}
-        ariaLabel={onToggle ? `${wall.name}: tap the faulty cabinets` : `${wall.name}: reported cabinets highlighted`}
+        onCellActivate={onToggle ?? onOpenCell}
+        ariaLabel={
+          onToggle
+            ? `${wall.name}: tap the faulty cabinets`
+            : `${wall.name}: reported cabinets highlighted${onOpenCell ? '; open a cell for its cabinet' : ''}`
+        }
       />
+      {onToggle ? <SmallCellsHint columns={wall.columns} rows={wall.rows} cellAspect={cellAspect.data} /> : null}
     </div>
   );
 }

@@ -24,6 +24,17 @@ interface WallsTableProps {
   emptyAction?: ReactNode;
 }
 
+/** How full a wall is: cabinets installed and positions still free (columns × rows − installed). */
+function Positions({ wall }: { wall: WallSummary }) {
+  return (
+    <span className="whitespace-nowrap tabular-nums" title={`${wall.cabinetCount} positions (${wall.columns} × ${wall.rows})`}>
+      {wall.installedCabinets} filled
+      <span className="text-stone-400"> · </span>
+      <span className={wall.freePositions > 0 ? 'font-medium text-ink-800' : 'text-stone-500'}>{wall.freePositions} free</span>
+    </span>
+  );
+}
+
 /** Every wall of the register, filtered by client, site and cabinet model; search by name. */
 export function WallsTable({ filters, onFiltersChange, filterOptions, emptyAction }: WallsTableProps) {
   const query = useInfiniteQuery({ ...wallQueries.list(filters), placeholderData: keepPreviousData });
@@ -57,7 +68,16 @@ export function WallsTable({ filters, onFiltersChange, filterOptions, emptyActio
         meta: { align: 'right' },
         cell: (c) => <span className="tabular-nums">{c.getValue()}</span>,
       }),
-      column.accessor('cabinetCount', { header: 'Cabinets', meta: { align: 'right', hiddenByDefault: true } }),
+      column.accessor('installedCabinets', {
+        id: 'positions',
+        header: 'Positions',
+        meta: {
+          align: 'right',
+          csv: (w) => `${w.installedCabinets} filled, ${w.freePositions} free`,
+        },
+        cell: (c) => <Positions wall={c.row.original} />,
+      }),
+      column.accessor('cabinetCount', { header: 'All positions', meta: { align: 'right', hiddenByDefault: true } }),
       column.accessor((w) => w.cabinetModel.pixelPitchMm, {
         id: 'pitch',
         header: 'Pitch',

@@ -1,0 +1,1 @@
+CREATE INDEX "cabinets_batch_prefix_idx" ON "cabinets" USING btree (lower("batch") text_pattern_ops);
