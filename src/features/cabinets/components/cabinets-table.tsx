@@ -161,7 +161,7 @@ export function CabinetsTable({ filters, onFiltersChange, staff, filterOptions }
           />
           <FilterSearch
             label="Batch"
-            placeholder="Exact code"
+            placeholder="Code or start of it"
             className="w-full sm:w-48"
             value={filters.batch ?? ''}
             onChange={(batch) => onFiltersChange({ ...filters, batch: batch.trim() || undefined })}

@@ -1,14 +1,15 @@
 // The tickets feature's writes. A ticket's status and cells show in wall and client counts too
 // (open tickets per wall, per cell, per client), so the ticket writes refresh those as well; the
-// today board lives under the tickets' root key.
+// today board lives under the tickets' root key; search results name tickets by title and state.
 import type { CommentVisibility } from '@shared/schemas/enums';
 import { attachmentKeys, attachmentRequests } from '@/resources/attachments';
 import { clientKeys } from '@/resources/clients';
+import { searchKeys } from '@/resources/search';
 import { ticketKeys, ticketRequests } from '@/resources/tickets';
 import { wallKeys } from '@/resources/walls';
 import { useWrite } from '@/lib/mutation';
 
-const owners = [ticketKeys.all, wallKeys.all, clientKeys.all];
+const owners = [ticketKeys.all, wallKeys.all, clientKeys.all, searchKeys.all];
 
 export const useCreateTicket = () => useWrite(ticketRequests.create, owners, (ticket, set) => set(ticketKeys.detail(ticket.id), ticket));
 export const useUpdateTicket = () => useWrite(ticketRequests.update, owners, (ticket, set) => set(ticketKeys.detail(ticket.id), ticket));
