@@ -301,6 +301,16 @@ test('a technician does not see dispatch; a client sees their visits with the re
       expect(answer.status()).toBe(200);
       expect(answer.headers()['content-type']).toContain('application/pdf');
       expect((await answer.body()).subarray(0, 5).toString()).toBe('%PDF-');
+    } else {
+      // A visit's ticket is a link to the ticket, not a dead end.
+      const ref = page
+        .getByRole('article')
+        .getByRole('link', { name: /^GK-\d+$/ })
+        .first();
+      const name = (await ref.textContent())!;
+      await ref.click();
+      await expect(page).toHaveURL(/\/tickets\/[0-9a-f-]{36}$/);
+      await expect(page.getByRole('heading', { level: 1 })).toContainText(name);
     }
     await context.close();
   }

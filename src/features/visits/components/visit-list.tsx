@@ -63,12 +63,27 @@ const columns = [
     meta: { className: 'min-w-[11rem]' },
     cell: ({ row: { original: v } }) => (
       <>
-        <span className="block text-stone-900">{v.site.name}</span>
-        <span className="block text-xs text-stone-600">{v.client.name}</span>
+        <Link to={paths.site.getHref(v.site.id)} className="block text-stone-900 hover:underline">
+          {v.site.name}
+        </Link>
+        <Link to={paths.client.getHref(v.client.id)} className="block text-xs text-stone-600 hover:underline">
+          {v.client.name}
+        </Link>
       </>
     ),
   }),
-  column.accessor((v) => v.wall?.name ?? '', { id: 'wall', header: 'Wall', cell: (c) => c.getValue() || dash }),
+  column.accessor((v) => v.wall?.name ?? '', {
+    id: 'wall',
+    header: 'Wall',
+    cell: ({ row: { original: v } }) =>
+      v.wall ? (
+        <Link to={paths.wall.getHref(v.wall.id)} className="hover:underline">
+          {v.wall.name}
+        </Link>
+      ) : (
+        dash
+      ),
+  }),
   column.accessor((v) => purpose(v), {
     id: 'for',
     header: 'For',
@@ -165,7 +180,13 @@ function VisitCard({ visit: v, linkToVisit, showClient }: { visit: VisitListItem
         <div className="flex flex-wrap items-center gap-x-2 gap-y-1">
           <VisitStatusBadge status={v.status} />
           <span className="text-sm text-stone-700">
-            {v.ticket ? <span className="font-mono">{v.ticket.ref}</span> : 'Planned maintenance'}
+            {v.ticket ? (
+              <Link to={paths.ticket.getHref(v.ticket.id)} className="font-mono hover:underline">
+                {v.ticket.ref}
+              </Link>
+            ) : (
+              'Planned maintenance'
+            )}
           </span>
         </div>
         <h3 className="text-md font-semibold leading-snug text-ink-950">
@@ -186,7 +207,9 @@ function VisitCard({ visit: v, linkToVisit, showClient }: { visit: VisitListItem
           {v.wall ? (
             <span className="inline-flex items-center gap-1">
               <Grid3x3 className="h-3.5 w-3.5" aria-hidden="true" />
-              {v.wall.name}
+              <Link to={paths.wall.getHref(v.wall.id)} className="hover:underline">
+                {v.wall.name}
+              </Link>
             </span>
           ) : null}
           {v.technicians.length ? (
