@@ -26,6 +26,31 @@ export function useLeavingPage() {
   return leaving;
 }
 
+/** `prev` with the filters of `next` written in, leaving out empty values and the defaults. */
+export function withFilters(prev: URLSearchParams, next: object, defaults: Record<string, string> = {}): URLSearchParams {
+  const p = new URLSearchParams(prev);
+  for (const [key, value] of Object.entries(next)) {
+    if (value === undefined || value === '' || value === false || defaults[key] === String(value)) p.delete(key);
+    else p.set(key, String(value));
+  }
+  return p;
+}
+
+/**
+ * Makes the address after each filter change. Two changes made quickly (a technician, then a
+ * status, before the list shows the first) both stay: while the router has not yet shown a
+ * write, the next one builds on it rather than on the address the screen was drawn from.
+ */
+export function createFilterWriter(defaults: Record<string, string> = {}) {
+  let pending: { from: URLSearchParams; to: URLSearchParams } | null = null;
+  return (rendered: URLSearchParams, next: object): URLSearchParams => {
+    const base = pending && pending.from === rendered ? pending.to : rendered;
+    const to = withFilters(base, next, defaults);
+    pending = { from: rendered, to };
+    return to;
+  };
+}
+
 /**
  * A list's filters kept in the address, so that a sorted, filtered list can be bookmarked and
  * shared: `read` makes the filters from the search parameters; the setter writes them back,
@@ -34,19 +59,11 @@ export function useLeavingPage() {
 export function useListFilters<F extends object>(read: (params: URLSearchParams) => F, defaults: Record<string, string> = {}) {
   const [params, setParams] = useSearchParams();
   const leaving = useLeavingPage();
+  const writer = useRef<ReturnType<typeof createFilterWriter> | null>(null);
+  writer.current ??= createFilterWriter(defaults);
   const setFilters = (next: F) => {
-    if (leaving.current) return;
-    setParams(
-      (prev) => {
-        const p = new URLSearchParams(prev);
-        for (const [key, value] of Object.entries(next)) {
-          if (value === undefined || value === '' || value === false || defaults[key] === String(value)) p.delete(key);
-          else p.set(key, String(value));
-        }
-        return p;
-      },
-      { replace: true },
-    );
+    if (leaving.current || !writer.current) return;
+    setParams(writer.current(params, next), { replace: true });
   };
   return [read(params), setFilters] as const;
 }

@@ -73,7 +73,7 @@ test('from a ticket: the client page lists its tickets and visits; a map cell op
   // Visits, the latest first, each opening its page.
   const visitList = page.getByRole('region', { name: 'Visits' }).getByRole('list', { name: 'Visits' });
   await expect(visitList.getByRole('listitem')).toHaveCount(Math.min(visits.length, 100));
-  await expect(visitList.getByRole('link').first()).toHaveAttribute('href', `/visits/${visits[0].id}`);
+  await expect(visitList.locator('a[href^="/visits/"]').first()).toHaveAttribute('href', `/visits/${visits[0].id}`);
   await attachShot(testInfo, page, 'client-page', { fullPage: true });
 
   // ---- back on the ticket, a reported cell opens its cabinet card ----
