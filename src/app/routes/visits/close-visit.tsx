@@ -1,25 +1,17 @@
 import type { VisitDetail } from '@shared/schemas/visits';
 import { ArrowLeft } from 'lucide-react';
-import { data, Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { CloseVisitForm } from '@/features/visits/components/close-visit-form';
 import { VisitGate } from '@/features/visits/components/visit-gate';
 import { formatSiteWindow } from '@/lib/site-time';
-import { requireUser, staff } from '@/app/auth-guard';
-import { queryClient } from '@/lib/query-client';
-import { isRecordId } from '@/lib/record-id';
-import { visitQueries } from '@/resources/visits';
+import { staff } from '@/app/auth-guard';
+import { visitLoader } from '@/app/routes/visits/load-visit';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
-export async function loader({ request, params }: LoaderFunctionArgs) {
-  await requireUser(request, staff);
-  const id = params.id ?? '';
-  if (!isRecordId(id)) throw data('Not found', { status: 404 });
-  await queryClient.ensureQueryData(visitQueries.detail(id));
-  return null;
-}
+export const loader = visitLoader(staff);
 
 export function Component() {
   const { id = '' } = useParams();

@@ -2,7 +2,7 @@ import { TZDate } from '@date-fns/tz';
 import type { VisitDetail } from '@shared/schemas/visits';
 import { format, parseISO } from 'date-fns';
 import { ArrowLeft, CalendarCog, Lock } from 'lucide-react';
-import { data, Link, useLocation, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useLocation, useParams } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -19,20 +19,11 @@ import { VisitStatusBadge } from '@/features/visits/components/visit-status';
 import { VisitWork } from '@/features/visits/components/visit-work';
 import { useVisitChecklist } from '@/features/visits/hooks/use-visit-checklist';
 import { formatSiteWindow } from '@/lib/site-time';
-import { requireUser } from '@/app/auth-guard';
-import { queryClient } from '@/lib/query-client';
-import { isRecordId } from '@/lib/record-id';
+import { visitLoader } from '@/app/routes/visits/load-visit';
 import { audienceOf, useUser } from '@/lib/session';
-import { visitQueries } from '@/resources/visits';
 export { RouteErrorBoundary as ErrorBoundary } from '@/app/route-error';
 
-export async function loader({ request, params }: LoaderFunctionArgs) {
-  await requireUser(request);
-  const id = params.id ?? '';
-  if (!isRecordId(id)) throw data('Not found', { status: 404 });
-  await queryClient.ensureQueryData(visitQueries.detail(id));
-  return null;
-}
+export const loader = visitLoader();
 
 export function Component() {
   const { id = '' } = useParams();
