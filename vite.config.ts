@@ -70,7 +70,7 @@ export default defineConfig({
           include: ['tests/integration/**/*.test.ts'],
           environment: 'node',
           globalSetup: ['tests/setup/global-setup.ts'],
-          setupFiles: ['tests/setup/integration-setup.ts'],
+          setupFiles: ['tests/setup/integration-setup.ts', 'tests/setup/without-tenant-filter.ts'],
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },

@@ -106,6 +106,12 @@ async function main(): Promise<number> {
     code: vitestCode,
   });
 
+  // The tenant tests must fail without the organisation filter (scripts/check-tenant-tests.ts).
+  if (!interrupted && args.length === 0) {
+    const code = await run(bin('tsx'), [path.join(projectRoot, 'scripts/check-tenant-tests.ts')], baseEnv);
+    tallies.push({ name: 'tenant', passed: code === 0 ? 1 : 0, failed: code === 0 ? 0 : 1, skipped: 0, code });
+  }
+
   // Playwright: against the app started by its webServer, exactly as `npm start` runs it
   if (!interrupted && args.length === 0 && hasSpecs(path.join(projectRoot, 'tests/e2e'))) {
     if (!fs.existsSync('/usr/bin/chromium')) {

@@ -8,6 +8,8 @@ import { config } from './config.js';
 import { authenticate, requireSameOriginWrites } from './middleware/auth.js';
 import { apiNotFound, errorHandler } from './middleware/error-handler.js';
 import { requestId } from './middleware/request-id.js';
+import { refuseNul } from './middleware/validate.js';
+import { healthRouter } from './routes/health.js';
 import { apiRoutes } from './routes/index.js';
 
 const distDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist');
@@ -36,12 +38,15 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   );
 
   const api = express.Router();
-  api.use(express.json({ limit: '1mb' }));
-  api.use(cookieParser());
   api.use((_req, res, next) => {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
+  // Health never depends on a session (or on the database answering the session check).
+  api.use('/health', healthRouter);
+  api.use(express.json({ limit: '1mb' }));
+  api.use(cookieParser());
+  api.use(refuseNul);
   api.use(requireSameOriginWrites);
   api.use(authenticate);
   apiRoutes(api);

@@ -1,3 +1,4 @@
+import { isIP } from 'node:net';
 import { z } from 'zod';
 
 // Every setting comes from the environment; `npm start` fills in local defaults
@@ -6,6 +7,20 @@ const bool = z
   .enum(['true', 'false', '1', '0', ''])
   .optional()
   .transform((v) => v === 'true' || v === '1');
+
+const trustProxyNames = new Set(['loopback', 'linklocal', 'uniquelocal']);
+/** A valid Express "trust proxy" value that does not trust everyone. */
+export function isTrustProxySetting(value: string): boolean {
+  if (/^\d+$/.test(value.trim())) return true;
+  return value.split(',').every((entry) => {
+    const [address, prefix, ...rest] = entry.trim().split('/');
+    if (rest.length) return false;
+    if (trustProxyNames.has(address) && prefix === undefined) return true;
+    const family = isIP(address);
+    if (!family) return false;
+    return prefix === undefined || (/^\d+$/.test(prefix) && Number(prefix) <= (family === 4 ? 32 : 128));
+  });
+}
 
 const schema = z.object({
   NODE_ENV: z.string().default('development'),
@@ -19,7 +34,16 @@ const schema = z.object({
   SESSION_HOURS: z.coerce.number().positive().default(12),
   /** Set when the app is served over HTTPS: Secure cookies with the __Host- prefix. */
   COOKIE_SECURE: bool,
-  TRUST_PROXY: z.string().optional(),
+  /**
+   * Which proxies may name the caller's address (X-Forwarded-For): their addresses or subnets, or
+   * Express's names loopback, linklocal, uniquelocal, comma-separated. A hop count is accepted but
+   * is only safe when nothing can reach the app except through that many proxies; "true" (believe
+   * anyone) is refused. Unset: the connection's own address is used.
+   */
+  TRUST_PROXY: z
+    .string()
+    .optional()
+    .refine((v) => !v || isTrustProxySetting(v), 'TRUST_PROXY: list proxy addresses or subnets (e.g. 172.29.41.1 or 10.0.0.0/8)'),
 
   S3_ENDPOINT: z.string().url().optional(),
   S3_REGION: z.string().default('us-east-1'),

@@ -27,4 +27,10 @@ export const notFound = (what = 'Record') => new AppError(404, 'not_found', `${w
 export const conflict = (code: string, message: string, fields?: FieldErrors) => new AppError(409, code, message, fields);
 export const tooManyRequests = (message: string, retryAfterSeconds: number) =>
   new AppError(429, 'too_many_requests', message, undefined, { 'Retry-After': String(retryAfterSeconds) });
-export const serviceUnavailable = (code: string, message: string) => new AppError(503, code, message);
+/** A service the app depends on is down: 503 with Retry-After (RFC 9110 §15.6.4) and a code naming it. */
+export const serviceUnavailable = (code: string, message: string, retryAfterSeconds = 5) =>
+  new AppError(503, code, message, undefined, { 'Retry-After': String(retryAfterSeconds) });
+export const databaseUnavailable = () =>
+  serviceUnavailable('database_unavailable', 'The database is not answering. Try again in a moment.');
+export const storageUnavailable = () =>
+  serviceUnavailable('storage_unavailable', 'File storage is not answering, so the file was not saved. Try again in a moment.');

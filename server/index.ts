@@ -10,6 +10,7 @@ import { runMigrations } from './db/migrate.js';
 import { closeMail, startMailWorker, type MailWorker } from './integrations/mail.js';
 import { closeStorage, ensureBucket } from './integrations/s3.js';
 import { logger } from './logger.js';
+import { workAfterAnswers } from './services/auth.js';
 import { forgetOldKeys } from './services/idempotency.js';
 
 export interface RunningServer {
@@ -63,6 +64,8 @@ export async function startServer(options: StartServerOptions = {}): Promise<Run
       const cut = setTimeout(() => server.closeAllConnections(), options.drainMs ?? 10_000);
       await closed;
       clearTimeout(cut);
+      // Work a route started after answering (a password reset's mail) finishes before the pool closes.
+      await workAfterAnswers();
       clearInterval(housekeeping);
       await worker?.stop();
       closeMail();

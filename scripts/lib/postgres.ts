@@ -106,19 +106,37 @@ export interface ClusterOptions {
   log?: (line: string) => void;
 }
 
+/** Where the cluster for `dataDir` really lives: under /tmp when the postgres user cannot enter the folder. */
+function clusterFolder(folder: string): { dataDir: string; relocated: boolean } {
+  const dataDir = path.resolve(folder);
+  if (postgresCanEnter(path.dirname(dataDir))) return { dataDir, relocated: false };
+  const tag = createHash('sha1').update(dataDir).digest('hex').slice(0, 10);
+  return { dataDir: path.join('/tmp', `gridkeep-pg-${tag}`, path.basename(dataDir)), relocated: true };
+}
+
+/**
+ * The loopback URL of a cluster another process (a running `npm start`) has started on
+ * `dataDir`, or null when none runs there. Read from its postmaster.pid (line 4: the port).
+ */
+export function runningClusterUrl(folder: string, database: string): string | null {
+  const bin = findPgBin();
+  const { dataDir } = clusterFolder(folder);
+  const pidFile = path.join(dataDir, 'postmaster.pid');
+  if (!bin || !fs.existsSync(pidFile)) return null;
+  const exe = path.join(bin, 'pg_ctl');
+  const [cmd, full] = isRoot ? ['runuser', ['-u', 'postgres', '--', exe, '-D', dataDir, 'status']] : [exe, ['-D', dataDir, 'status']];
+  if (spawnSync(cmd, full).status !== 0) return null;
+  const port = Number(fs.readFileSync(pidFile, 'utf8').split('\n')[3]);
+  return Number.isInteger(port) && port > 0 ? `postgres://postgres@127.0.0.1:${port}/${database}` : null;
+}
+
 /** Creates the cluster when missing, starts it on 127.0.0.1 and returns how to reach it. */
 export async function startCluster(options: ClusterOptions): Promise<Cluster> {
   const log = options.log ?? console.log;
   const bin = ensurePostgres(log);
-  let dataDir = path.resolve(options.dataDir);
-  fs.mkdirSync(path.dirname(dataDir), { recursive: true });
-  let relocated = false;
-  if (!postgresCanEnter(path.dirname(dataDir))) {
-    const tag = createHash('sha1').update(dataDir).digest('hex').slice(0, 10);
-    dataDir = path.join('/tmp', `gridkeep-pg-${tag}`, path.basename(dataDir));
-    relocated = true;
-    log(`The postgres user cannot enter the project folder; keeping the cluster at ${dataDir}`);
-  }
+  fs.mkdirSync(path.dirname(path.resolve(options.dataDir)), { recursive: true });
+  const { dataDir, relocated } = clusterFolder(options.dataDir);
+  if (relocated) log(`The postgres user cannot enter the project folder; keeping the cluster at ${dataDir}`);
   const tag = createHash('sha1').update(dataDir).digest('hex').slice(0, 10);
   const socketDir = path.join('/tmp', `gridkeep-sock-${tag}`);
   fs.mkdirSync(socketDir, { recursive: true });

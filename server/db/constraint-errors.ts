@@ -32,6 +32,8 @@ const byConstraint: Record<string, () => AppError> = {
   parts_sku_key: () => new AppError(409, 'sku_taken', 'Another part already has that SKU.', { sku: 'Already in use.' }),
   stock_locations_name_key: () =>
     new AppError(409, 'name_taken', 'A stock location with that name already exists.', { name: 'Already in use.' }),
+  contacts_client_user_key: () =>
+    new AppError(409, 'user_linked', 'Another contact already signs in as that person.', { userId: 'Already linked.' }),
   users_email_key: () =>
     new AppError(409, 'email_taken', 'Someone already has an account with that e-mail address.', { email: 'Already in use.' }),
   stock_balances_not_negative: () =>

@@ -25,8 +25,9 @@ async function writeDemo(tx: Tx, rows: DemoRows) {
   await insertAll(tx, schema.servicePlans, rows.servicePlans);
   await insertAll(tx, schema.clients, rows.clients);
   await insertAll(tx, schema.sites, rows.sites);
-  await insertAll(tx, schema.contacts, rows.contacts);
   await insertAll(tx, schema.users, rows.users);
+  // After the users: a contact may be linked to the account it signs in as.
+  await insertAll(tx, schema.contacts, rows.contacts);
   await insertAll(tx, schema.cabinetModels, rows.cabinetModels);
   await insertAll(tx, schema.parts, rows.parts);
   await insertAll(tx, schema.stockLocations, rows.stockLocations);

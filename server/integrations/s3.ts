@@ -68,7 +68,13 @@ export async function ensureBucket(): Promise<void> {
     await s3().send(new HeadBucketCommand({ Bucket: bucket() }));
   } catch (err) {
     if (!isMissing(err)) throw err;
-    await s3().send(new CreateBucketCommand({ Bucket: bucket() }));
+    try {
+      await s3().send(new CreateBucketCommand({ Bucket: bucket() }));
+    } catch (createErr) {
+      // Several app processes starting together race to create it: the loser finds it made.
+      const name = (createErr as Error).name;
+      if (name !== 'BucketAlreadyOwnedByYou' && name !== 'BucketAlreadyExists') throw createErr;
+    }
   }
 }
 

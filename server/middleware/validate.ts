@@ -1,6 +1,50 @@
 import type { Request, RequestHandler, Response } from 'express';
 import type { z } from 'zod';
-import { validationFailed, type FieldErrors } from '../errors.js';
+import { badRequest, validationFailed, type FieldErrors } from '../errors.js';
+
+export const NUL_MESSAGE = 'Contains a character that is not allowed (NUL).';
+
+/**
+ * The fields of a parsed query or body whose name or text holds a NUL character, which no
+ * PostgreSQL text value can store (OWASP ASVS 5.0 2.2.1: input matches its expected structure).
+ */
+export function nulFields(value: unknown, prefix = '', found: FieldErrors = {}, depth = 0): FieldErrors {
+  if (typeof value === 'string') {
+    if (value.includes('\0')) found[prefix || '_'] = NUL_MESSAGE;
+  } else if (value && typeof value === 'object' && depth < 32) {
+    for (const [k, v] of Object.entries(value)) {
+      const key = prefix ? `${prefix}.${k}` : k;
+      if (k.includes('\0')) found[key.replace(/\0/g, '\\0')] = NUL_MESSAGE;
+      else nulFields(v, key, found, depth + 1);
+    }
+  }
+  return found;
+}
+
+/**
+ * Refuses, for every API request and before any route runs, a NUL character anywhere in the
+ * path, the query string or a parsed body: one place, whichever schema the route uses.
+ */
+export const refuseNul: RequestHandler = (req, _res, next) => {
+  const fields: FieldErrors = {};
+  if (/%00/i.test(req.originalUrl.split('?')[0])) fields.path = NUL_MESSAGE;
+  nulFields(req.query, '', fields);
+  if (typeof req.body === 'string') nulFields(req.body, 'body', fields);
+  else nulFields(req.body, '', fields);
+  next(Object.keys(fields).length ? validationFailed(fields) : undefined);
+};
+
+/** An update that names no field: 400 `nothing_to_change`, never a silent no-op. */
+const nothingToChange = () =>
+  badRequest('nothing_to_change', 'Nothing to change: send at least one field to update.', { _: 'Nothing to change.' });
+
+const namesNothing = (body: unknown) =>
+  body === undefined || (!!body && typeof body === 'object' && !Array.isArray(body) && Object.values(body).every((v) => v === undefined));
+
+/** A PATCH whose body (as sent, or once unknown keys are dropped) names no field. */
+function isEmptyUpdate(req: Request, parsed: unknown) {
+  return req.method === 'PATCH' && (namesNothing(req.body) || namesNothing(parsed));
+}
 
 /** Turns a zod error into `{ "field.path": "message" }`, the shape of the 400's `fields`. */
 export function fieldErrors(error: z.ZodError): FieldErrors {
@@ -36,7 +80,10 @@ export type ValidatedHandler<S extends Schemas> = (input: Parsed<S>, req: Reques
  * `{}`) and collects every failing field, so one 400 names them all.
  */
 function parseParts<S extends Schemas>(schemas: S, req: Request): { input: Parsed<S> } | { fields: FieldErrors } {
-  const fields: FieldErrors = {};
+  // Again here, for what a route's own parser read after refuseNul ran (a CSV body) and for path parameters.
+  const fields: FieldErrors = nulFields(req.params);
+  if (typeof req.body === 'string') nulFields(req.body, 'body', fields);
+  if (Object.keys(fields).length) return { fields };
   const input: { body?: unknown; query?: unknown; params?: unknown } = {};
   for (const part of ['params', 'query', 'body'] as const) {
     const schema = schemas[part];
@@ -46,6 +93,7 @@ function parseParts<S extends Schemas>(schemas: S, req: Request): { input: Parse
     else Object.assign(fields, fieldErrors(result.error));
   }
   if (Object.keys(fields).length) return { fields };
+  if (schemas.body && isEmptyUpdate(req, input.body)) throw nothingToChange();
   // Each part present in S was parsed by its own schema above, so input holds exactly Parsed<S>.
   return { input: input as Parsed<S> };
 }

@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type Request, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { idParams } from '../../shared/schemas/common.js';
 import { officeRoles, staffRoles } from '../../shared/schemas/enums.js';
@@ -8,6 +8,20 @@ import { validated } from '../middleware/validate.js';
 import * as files from '../services/attachments.js';
 import { visibleWall } from '../services/walls.js';
 import { db } from '../db/client.js';
+
+/**
+ * The caller's right to the record a file is uploaded to, checked before the multipart body is
+ * read: a file for a record the caller may not see is refused (404) without a byte of it held
+ * in memory or sent to the object store. A malformed id is left to `validated`, which answers
+ * the 400 naming it. The handler checks again (cheaply) inside its own work.
+ */
+export function mayUploadTo(check: (req: Request, id: string) => Promise<unknown>): RequestHandler {
+  return async (req, _res, next) => {
+    const parsed = idParams.safeParse(req.params);
+    if (parsed.success) await check(req, parsed.data.id);
+    next();
+  };
+}
 
 export const attachmentsRouter = Router();
 attachmentsRouter.use(requireAuth);
@@ -46,12 +60,13 @@ wallDocumentsRouter.get(
   validated({ params: idParams }, async ({ params }, req, res) => {
     const actor = actorOf(req);
     await visibleWall(db(), actor, params.id);
-    res.json({ items: await files.listAttachments(actor, { wallId: params.id }) });
+    res.json(await files.listAttachments(actor, { wallId: params.id }));
   }),
 );
 wallDocumentsRouter.post(
   '/',
   requireRole(...staffRoles),
+  mayUploadTo((req, id) => visibleWall(db(), actorOf(req), id)),
   validated({ params: idParams }, singleFile(), async ({ params }, req, res) => {
     const actor = actorOf(req);
     const wallId = params.id;

@@ -1,16 +1,28 @@
 import { Router, type Request, type Response } from 'express';
 import { z } from 'zod';
 import { changePasswordInput, forgotPasswordInput, loginInput, redeemTokenInput, type SessionAnswer } from '../../shared/schemas/auth.js';
+import { config } from '../config.js';
 import { actorOf, requireAuth, sessionCookieName, sessionCookieOptions } from '../middleware/auth.js';
 import { validated } from '../middleware/validate.js';
 import * as auth from '../services/auth.js';
 
 export const authRouter = Router();
 
-const meta = (req: Request) => ({ ip: req.ip ?? '', userAgent: req.get('user-agent') ?? '' });
+/** The known-device cookie (OWASP device cookies): lets this browser's own person in while others are throttled. */
+const deviceCookieName = () => (config().COOKIE_SECURE ? '__Host-gridkeep_device' : 'gridkeep_device');
+
+const meta = (req: Request): auth.AttemptMeta => {
+  const deviceToken: unknown = req.cookies?.[deviceCookieName()];
+  return {
+    ip: req.ip ?? '',
+    userAgent: req.get('user-agent') ?? '',
+    deviceToken: typeof deviceToken === 'string' ? deviceToken : undefined,
+  };
+};
 
 function sendSession(res: Response, session: auth.IssuedSession) {
   res.cookie(sessionCookieName(), session.token, sessionCookieOptions(session.maxAgeMs));
+  if (session.deviceToken) res.cookie(deviceCookieName(), session.deviceToken, sessionCookieOptions(auth.DEVICE_COOKIE_MAX_AGE_MS));
   res.json({ user: session.user });
 }
 
@@ -51,9 +63,11 @@ authRouter.post(
 
 authRouter.post(
   '/forgot',
-  validated({ body: forgotPasswordInput }, async ({ body }, _req, res) => {
-    await auth.requestPasswordReset(body.email);
+  validated({ body: forgotPasswordInput }, async ({ body }, req, res) => {
+    await auth.admitResetRequest(body.email, meta(req).ip);
+    // Answer first: whether the address has an account decides the work, never the answer's time.
     res.status(202).json({ message: 'If that address belongs to an account, a reset link is on its way.' });
+    auth.afterAnswer('password reset', () => auth.requestPasswordReset(body.email));
   }),
 );
 

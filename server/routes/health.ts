@@ -3,7 +3,10 @@ import { getPool } from '../db/client.js';
 
 export const healthRouter = Router();
 
-/** 200 when the app and its database answer; 503 naming what is down otherwise. */
+/**
+ * 200 when the app and its database answer; 503 with Retry-After naming what is down otherwise.
+ * Mounted before the session check (server/app.ts), so a signed-in caller gets the same answer.
+ */
 healthRouter.get('/', async (_req, res) => {
   let database: 'ok' | 'down' = 'ok';
   try {
@@ -17,5 +20,6 @@ healthRouter.get('/', async (_req, res) => {
     database = 'down';
   }
   res.setHeader('Cache-Control', 'no-store');
+  if (database === 'down') res.setHeader('Retry-After', '5');
   res.status(database === 'ok' ? 200 : 503).json({ status: database === 'ok' ? 'ok' : 'degraded', database });
 });

@@ -10,9 +10,9 @@ import {
 import type { Router } from 'express';
 import { attachmentsRouter, wallDocumentsRouter } from './attachments.js';
 import { authRouter } from './auth.js';
+import { boardRouter } from './board.js';
 import { calcRouter } from './calc.js';
 import { devRouter } from './dev.js';
-import { healthRouter } from './health.js';
 import {
   cabinetModelsRouter,
   cabinetsRouter,
@@ -33,7 +33,6 @@ import { wallFromPlanRouter, wallPlanRouter } from './wall-plan.js';
 
 /** Mounts every API router under /api. Keep one line per domain. */
 export function apiRoutes(api: Router) {
-  api.use('/health', healthRouter);
   api.use('/dev', devRouter);
   api.use('/auth', authRouter);
   api.use('/calc', calcRouter);
@@ -64,4 +63,5 @@ export function apiRoutes(api: Router) {
   api.use('/reorder-points', reorderPointsRouter);
   api.use('/repairs', repairsRouter);
   api.use('/visits', visitsRouter);
+  api.use('/board', boardRouter);
 }

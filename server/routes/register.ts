@@ -1,4 +1,6 @@
-import express, { Router } from 'express';
+import { promisify } from 'node:util';
+import { gzip } from 'node:zlib';
+import express, { Router, type Request, type Response } from 'express';
 import { idParams } from '../../shared/schemas/common.js';
 import { officeRoles, staffRoles } from '../../shared/schemas/enums.js';
 import { cabinetModelInput, cabinetModelPatch } from '../../shared/schemas/cabinet-models.js';
@@ -16,10 +18,31 @@ import * as clients from '../services/clients.js';
 import { search, serialsEndingIn } from '../services/search.js';
 import * as sites from '../services/sites.js';
 import * as walls from '../services/walls.js';
+import { db } from '../db/client.js';
+import { mayUploadTo } from './attachments.js';
 
 // Thin routes: who may call → validated → service. Reads are open to every signed-in user and
 // scoped by the services (client users see only their organisation); writes are the office's.
 const office = requireRole(...officeRoles);
+
+const gzipped = promisify(gzip);
+
+/**
+ * A large JSON answer, gzipped when the caller accepts it: the wall map of a full 500 × 500
+ * wall (250,000 cabinets) is about 48 MB as JSON and a tenth of that gzipped. Small answers go
+ * as they are.
+ */
+async function sendJsonCompressed(req: Request, res: Response, value: unknown) {
+  const body = Buffer.from(JSON.stringify(value));
+  res.vary('Accept-Encoding');
+  res.type('json');
+  if (body.length < 64 * 1024 || !req.acceptsEncodings('gzip')) {
+    res.send(body);
+    return;
+  }
+  res.setHeader('Content-Encoding', 'gzip');
+  res.send(await gzipped(body, { level: 1 }));
+}
 const staff = requireRole(...staffRoles);
 
 export const clientsRouter = Router();
@@ -124,7 +147,7 @@ wallsRouter.get(
 wallsRouter.get(
   '/:id/cabinets',
   validated({ params: idParams }, async ({ params }, req, res) => {
-    res.json(await walls.wallCabinets(actorOf(req), params.id));
+    await sendJsonCompressed(req, res, await walls.wallCabinets(actorOf(req), params.id));
   }),
 );
 wallsRouter.post(
@@ -151,6 +174,8 @@ wallsRouter.post(
 wallsRouter.post(
   '/:id/cabinets/import',
   office,
+  // The wall first: a file for a wall that is not there is refused before it is read.
+  mayUploadTo((req, id) => walls.visibleWall(db(), actorOf(req), id)),
   express.text({ type: ['text/csv', 'text/plain', 'application/csv'], limit: '8mb' }),
   validated({ params: idParams }, async ({ params }, req, res) => {
     const csv = typeof req.body === 'string' ? req.body : '';

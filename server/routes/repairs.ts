@@ -4,6 +4,7 @@ import { staffRoles } from '../../shared/schemas/enums.js';
 import { createRepairInput, listRepairsQuery } from '../../shared/schemas/repairs.js';
 import { actorOf, requireAuth, requireRole } from '../middleware/auth.js';
 import { singleFile } from '../middleware/upload.js';
+import { mayUploadTo } from './attachments.js';
 import { validated } from '../middleware/validate.js';
 import * as files from '../services/attachments.js';
 import { IDEMPOTENCY_HEADER, parseIdempotencyKey } from '../services/idempotency.js';
@@ -34,13 +35,14 @@ repairsRouter.get(
   validated({ params: idParams }, async ({ params }, req, res) => {
     const actor = actorOf(req);
     await repairs.repairForPhotos(actor, params.id);
-    res.json({ items: await files.listAttachments(actor, { repairId: params.id }) });
+    res.json(await files.listAttachments(actor, { repairId: params.id }));
   }),
 );
 /** A photo of the work from the phone's camera (multipart field `file`). */
 repairsRouter.post(
   '/:id/photos',
   staff,
+  mayUploadTo((req, id) => repairs.repairForPhotos(actorOf(req), id)),
   validated({ params: idParams }, singleFile(), async ({ params }, req, res) => {
     const actor = actorOf(req);
     const repair = await repairs.repairForPhotos(actor, params.id);

@@ -7,6 +7,7 @@ import { singleFile } from '../middleware/upload.js';
 import { validated } from '../middleware/validate.js';
 import * as files from '../services/attachments.js';
 import * as tickets from '../services/tickets.js';
+import { mayUploadTo } from './attachments.js';
 
 export const ticketsRouter = Router();
 ticketsRouter.use(requireAuth);
@@ -63,12 +64,13 @@ ticketsRouter.get(
   validated({ params: idParams }, async ({ params }, req, res) => {
     const actor = actorOf(req);
     await tickets.ticketForUpload(actor, params.id);
-    res.json({ items: await files.listAttachments(actor, { ticketId: params.id }) });
+    res.json(await files.listAttachments(actor, { ticketId: params.id }));
   }),
 );
 /** Photos or a short video of the fault, from the phone (multipart field `file`). */
 ticketsRouter.post(
   '/:id/attachments',
+  mayUploadTo((req, id) => tickets.ticketForUpload(actorOf(req), id)),
   validated({ params: idParams }, singleFile(), async ({ params }, req, res) => {
     const actor = actorOf(req);
     const ticket = await tickets.ticketForUpload(actor, params.id);

@@ -9,7 +9,9 @@ import { AppError } from '../errors.js';
 import { deleteObject, getObjectStream, newStorageKey, putObject } from '../integrations/s3.js';
 import { logger } from '../logger.js';
 import type { Actor } from '../middleware/auth.js';
+import type { CappedList } from '../../shared/schemas/common.js';
 import { recordAudit } from './audit.js';
+import { capped } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 
 /** What each purpose accepts, by the type found in the content (OWASP File Upload Cheat Sheet). */
@@ -161,7 +163,10 @@ function visible(actor: Actor): SQL | undefined {
   return and(tenantWhere(actor, attachments.clientId), eq(attachments.internal, false));
 }
 
-export async function listAttachments(actor: Actor, owner: Owner): Promise<Attachment[]> {
+/** A record's files, newest first, up to this many (a ticket's photos, a wall's documents). */
+export const ATTACHMENTS_CAP = 500;
+
+export async function listAttachments(actor: Actor, owner: Owner): Promise<CappedList<Attachment>> {
   const conditions = Object.entries(owner)
     .filter(([, v]) => v)
     .map(([k, v]) => eq(attachments[k as keyof Owner], v as string));
@@ -170,8 +175,12 @@ export async function listAttachments(actor: Actor, owner: Owner): Promise<Attac
     .from(attachments)
     .leftJoin(users, eq(users.id, attachments.uploadedById))
     .where(and(or(...conditions), visible(actor)))
-    .orderBy(desc(attachments.createdAt));
-  return rows.map((r) => presentAttachment({ ...r.a, uploadedByName: r.uploadedByName }));
+    .orderBy(desc(attachments.createdAt), desc(attachments.id))
+    .limit(ATTACHMENTS_CAP + 1);
+  return capped(
+    rows.map((r) => presentAttachment({ ...r.a, uploadedByName: r.uploadedByName })),
+    ATTACHMENTS_CAP,
+  );
 }
 
 export async function openAttachment(actor: Actor, id: string) {

@@ -208,9 +208,12 @@ const resolvers: Record<Kind, Resolver> = {
       },
     ]),
   ticket: async (ids) =>
-    (await db().select({ id: tickets.id, number: tickets.number, title: tickets.title }).from(tickets).where(inArray(tickets.id, ids))).map(
-      (r) => [r.id, { name: ticketRef(r.number), context: r.title, page: { kind: 'ticket', id: r.id } }],
-    ),
+    (
+      await db()
+        .select({ id: tickets.id, number: tickets.number, createdAt: tickets.createdAt, title: tickets.title })
+        .from(tickets)
+        .where(inArray(tickets.id, ids))
+    ).map((r) => [r.id, { name: ticketRef(r.number, r.createdAt), context: r.title, page: { kind: 'ticket', id: r.id } }]),
   visit: async (ids) =>
     (
       await db()
@@ -334,11 +337,20 @@ const resolvers: Record<Kind, Resolver> = {
   comment: async (ids) =>
     (
       await db()
-        .select({ id: ticketComments.id, body: ticketComments.body, ticketId: tickets.id, number: tickets.number })
+        .select({
+          id: ticketComments.id,
+          body: ticketComments.body,
+          ticketId: tickets.id,
+          number: tickets.number,
+          createdAt: tickets.createdAt,
+        })
         .from(ticketComments)
         .innerJoin(tickets, eq(tickets.id, ticketComments.ticketId))
         .where(inArray(ticketComments.id, ids))
-    ).map((r) => [r.id, { name: `“${snippet(r.body)}”`, context: ticketRef(r.number), page: { kind: 'ticket', id: r.ticketId } }]),
+    ).map((r) => [
+      r.id,
+      { name: `“${snippet(r.body)}”`, context: ticketRef(r.number, r.createdAt), page: { kind: 'ticket', id: r.ticketId } },
+    ]),
   service_plan: async (ids) =>
     (await db().select({ id: servicePlans.id, name: servicePlans.name }).from(servicePlans).where(inArray(servicePlans.id, ids))).map(
       (r) => [r.id, { name: r.name, context: null, page: null }],
@@ -367,13 +379,19 @@ function add(into: Map<Kind, Set<string>>, kind: Kind, id: string) {
   into.set(kind, ids);
 }
 
+/** A ticket's snapshot names it by its reference; a partial one without its opening time, by its number. */
+function ticketNameIn(s: Record<string, unknown>): string | null {
+  if (typeof s.number !== 'number') return null;
+  return typeof s.createdAt === 'string' && !Number.isNaN(Date.parse(s.createdAt))
+    ? ticketRef(s.number, s.createdAt)
+    : `Ticket ${s.number}`;
+}
+
 /** What a removed record's last snapshot still says it was called. */
 function nameFromSnapshot(snapshot: unknown): AuditRecordRef | null {
   if (!snapshot || typeof snapshot !== 'object') return null;
   const s = snapshot as Record<string, unknown>;
-  const name = [s.name, s.serial, s.fileName, typeof s.number === 'number' ? ticketRef(s.number) : null].find(
-    (v): v is string => typeof v === 'string' && v.length > 0,
-  );
+  const name = [s.name, s.serial, s.fileName, ticketNameIn(s)].find((v): v is string => typeof v === 'string' && v.length > 0);
   return name ? { name, context: null, page: null } : null;
 }
 

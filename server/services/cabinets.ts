@@ -2,7 +2,7 @@ import type { CabinetDetail, CabinetEvent, CabinetSummary } from '../../shared/s
 import type { CabinetStatus } from '../../shared/schemas/enums.js';
 import type { Page } from '../../shared/schemas/common.js';
 import Papa from 'papaparse';
-import { aliasedTable, and, desc, eq, inArray, like, sql } from 'drizzle-orm';
+import { aliasedTable, and, desc, eq, inArray, like, or, sql } from 'drizzle-orm';
 import type { PgSelect } from 'drizzle-orm/pg-core';
 import {
   importRow,
@@ -193,16 +193,27 @@ export async function getCabinet(actor: Actor, by: { id: string } | { serial: st
       fromStatus: cabinetEvents.fromStatus,
       toStatus: cabinetEvents.toStatus,
       note: cabinetEvents.note,
+      noteForClient: cabinetEvents.noteForClient,
       actorName: users.name,
       createdAt: cabinetEvents.createdAt,
+      fromOwn: ownWall(actor, fromWall.clientId),
+      toOwn: ownWall(actor, toWall.clientId),
     })
     .from(cabinetEvents)
     .leftJoin(fromWall, eq(fromWall.id, cabinetEvents.fromWallId))
     .leftJoin(toWall, eq(toWall.id, cabinetEvents.toWallId))
     .leftJoin(other, eq(other.id, cabinetEvents.otherCabinetId))
     .leftJoin(users, eq(users.id, cabinetEvents.actorId))
-    .where(eq(cabinetEvents.cabinetId, r.cabinet.id))
-    .orderBy(desc(cabinetEvents.createdAt));
+    .where(
+      and(
+        eq(cabinetEvents.cabinetId, r.cabinet.id),
+        // A client user sees what happened on its own walls only: a cabinet moved or swapped in
+        // from another organisation brings none of that organisation's history with it.
+        actor.role === 'client' ? or(tenantWhere(actor, fromWall.clientId), tenantWhere(actor, toWall.clientId)) : undefined,
+      ),
+    )
+    .orderBy(desc(cabinetEvents.createdAt), desc(cabinetEvents.id))
+    .limit(HISTORY_CAP + 1);
   const c = r.cabinet;
   return {
     id: c.id,
@@ -228,28 +239,49 @@ export async function getCabinet(actor: Actor, by: { id: string } | { serial: st
     position: c.column && c.row ? cellLabel({ column: c.column, row: c.row }) : null,
     stockLocation: isStaff(actor) && c.stockLocationId ? { id: c.stockLocationId, name: r.locationName ?? '' } : null,
     // Client users see what happened, not who on the staff did it.
-    history: events.map((e) => presentEvent(e, isStaff(actor))),
+    history: events.slice(0, HISTORY_CAP).map((e) => presentEvent(e, isStaff(actor))),
+    historyTruncated: events.length > HISTORY_CAP,
   } satisfies CabinetDetail;
 }
 
-/** One event of a cabinet's history; the actor's name for staff only. */
-function presentEvent(e: Omit<CabinetEvent, 'createdAt'> & { createdAt: Date }, staff: boolean): CabinetEvent {
+/** The newest events a cabinet card shows; older ones stay in the database (and the audit log). */
+export const HISTORY_CAP = 200;
+
+/** Whether a wall of an event is the client user's own (always true for staff). */
+function ownWall(actor: Actor, clientId: typeof walls.clientId) {
+  const own = tenantWhere(actor, clientId);
+  return own ? sql<boolean>`coalesce(${own}, false)` : sql<boolean>`true`;
+}
+
+type EventRow = Omit<CabinetEvent, 'createdAt'> & { createdAt: Date; fromOwn: boolean; toOwn: boolean };
+
+/**
+ * One event of a cabinet's history. Staff get it whole. A client user gets the actor's name
+ * never, the note only when staff chose to show it, and of a move or swap across organisations
+ * only its own side: the other organisation's wall, position and cabinet are left out.
+ */
+function presentEvent(e: EventRow, staff: boolean): CabinetEvent {
+  const from = staff || e.fromOwn;
+  const to = staff || e.toOwn;
   return {
     id: e.id,
     kind: e.kind,
-    fromWallId: e.fromWallId,
-    fromWallName: e.fromWallName,
-    fromColumn: e.fromColumn,
-    fromRow: e.fromRow,
-    toWallId: e.toWallId,
-    toWallName: e.toWallName,
-    toColumn: e.toColumn,
-    toRow: e.toRow,
-    otherSerial: e.otherSerial,
+    fromWallId: from ? e.fromWallId : null,
+    fromWallName: from ? e.fromWallName : null,
+    fromColumn: from ? e.fromColumn : null,
+    fromRow: from ? e.fromRow : null,
+    toWallId: to ? e.toWallId : null,
+    toWallName: to ? e.toWallName : null,
+    toColumn: to ? e.toColumn : null,
+    toRow: to ? e.toRow : null,
+    // The other cabinet of a swap came from (and went to) the other side: named only when every
+    // wall the event names is the reader's (a spare placed from stock names one wall only).
+    otherSerial: staff || ((e.fromWallId === null || e.fromOwn) && (e.toWallId === null || e.toOwn)) ? e.otherSerial : null,
     repairId: e.repairId,
     fromStatus: e.fromStatus,
     toStatus: e.toStatus,
-    note: e.note,
+    note: staff || e.noteForClient ? e.note : '',
+    noteForClient: e.noteForClient,
     actorName: staff ? e.actorName : null,
     createdAt: e.createdAt.toISOString(),
   };
@@ -350,6 +382,7 @@ export async function moveCabinet(actor: Actor, id: string, input: MoveCabinetIn
       fromStatus: before.status,
       toStatus: 'installed',
       note: input.note ?? '',
+      noteForClient: input.noteForClient ?? false,
       actorId: actor.userId,
     });
     await recordAudit(tx, { actor, entity: 'cabinet', entityId: id, action: 'moved', before, after });
@@ -375,6 +408,7 @@ export async function swapCabinets(actor: Actor, id: string, input: SwapCabinetI
     await tx.update(cabinets).set({ wallId: a.wallId, column: a.column, row: a.row }).where(eq(cabinets.id, b.id));
     await tx.update(cabinets).set({ wallId: b.wallId, column: b.column, row: b.row, status: 'installed' }).where(eq(cabinets.id, a.id));
     const note = input.note ?? '';
+    const noteForClient = input.noteForClient ?? false;
     await tx.insert(cabinetEvents).values([
       {
         cabinetId: a.id,
@@ -387,6 +421,7 @@ export async function swapCabinets(actor: Actor, id: string, input: SwapCabinetI
         toRow: b.row,
         otherCabinetId: b.id,
         note,
+        noteForClient,
         actorId: actor.userId,
       },
       {
@@ -400,6 +435,7 @@ export async function swapCabinets(actor: Actor, id: string, input: SwapCabinetI
         toRow: a.row,
         otherCabinetId: a.id,
         note,
+        noteForClient,
         actorId: actor.userId,
       },
     ]);
@@ -458,6 +494,7 @@ export async function updateCabinet(actor: Actor, id: string, input: CabinetPatc
         fromStatus: before.status,
         toStatus: status,
         note: input.note ?? '',
+        noteForClient: input.noteForClient ?? false,
         actorId: actor.userId,
       });
     }

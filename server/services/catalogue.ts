@@ -3,6 +3,7 @@ import type { CabinetModelInput, CabinetModelPatch } from '../../shared/schemas/
 import type { ControllerInput, ControllerPatch } from '../../shared/schemas/controllers.js';
 import type { CabinetModel } from '../../shared/schemas/cabinet-models.js';
 import type { Controller } from '../../shared/schemas/controllers.js';
+import type { CappedList } from '../../shared/schemas/common.js';
 import { vaBelowWatts } from '../../shared/schemas/cabinet-models.js';
 import { db } from '../db/client.js';
 import { cabinetModels } from '../db/schema/catalogue.js';
@@ -10,7 +11,8 @@ import { controllers, walls } from '../db/schema/walls.js';
 import { badRequest, validationFailed } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
-import { found, tenantWhere } from './scope.js';
+import { capped } from './pagination.js';
+import { found, isStaff, tenantWhere } from './scope.js';
 
 export function presentModel(m: typeof cabinetModels.$inferSelect): CabinetModel {
   return {
@@ -38,13 +40,21 @@ export function presentModel(m: typeof cabinetModels.$inferSelect): CabinetModel
   };
 }
 
-export async function listCabinetModels(includeArchived = false) {
+/**
+ * Read whole by the pickers and the catalogue page, so capped rather than paged: a company keeps
+ * tens of models and controllers, and the cap says "more" long before an answer grows large.
+ */
+export const CABINET_MODELS_CAP = 1000;
+export const CONTROLLERS_CAP = 2000;
+
+export async function listCabinetModels(includeArchived = false, cap = CABINET_MODELS_CAP): Promise<CappedList<CabinetModel>> {
   const rows = await db()
     .select()
     .from(cabinetModels)
     .where(includeArchived ? undefined : isNull(cabinetModels.archivedAt))
-    .orderBy(asc(cabinetModels.name));
-  return { items: rows.map(presentModel), nextCursor: null };
+    .orderBy(asc(cabinetModels.name), asc(cabinetModels.id))
+    .limit(cap + 1);
+  return capped(rows.map(presentModel), cap);
 }
 
 export async function getCabinetModel(id: string) {
@@ -81,7 +91,8 @@ export async function updateCabinetModel(actor: Actor, id: string, input: Cabine
 }
 
 // ---- controllers ----
-function presentController(c: typeof controllers.$inferSelect, wallName: string | null): Controller {
+/** A controller; its notes (spare locations, passwords written down, staff remarks) to staff only. */
+function presentController(c: typeof controllers.$inferSelect, wallName: string | null, staff: boolean): Controller {
   return {
     id: c.id,
     wallId: c.wallId,
@@ -92,12 +103,12 @@ function presentController(c: typeof controllers.$inferSelect, wallName: string 
     outputs: c.outputs,
     outputsInUse: c.outputsInUse,
     pixelsPerOutput: c.pixelsPerOutput,
-    notes: c.notes,
+    ...(staff ? { notes: c.notes } : {}),
     archived: c.archivedAt !== null,
   };
 }
 
-export async function listControllers(actor: Actor, wallId?: string) {
+export async function listControllers(actor: Actor, wallId?: string): Promise<CappedList<Controller>> {
   const rows = await db()
     .select({ c: controllers, wallName: walls.name })
     .from(controllers)
@@ -110,8 +121,12 @@ export async function listControllers(actor: Actor, wallId?: string) {
         actor.role === 'client' ? tenantWhere(actor, walls.clientId) : undefined,
       ),
     )
-    .orderBy(asc(controllers.serial));
-  return { items: rows.map((r) => presentController(r.c, r.wallName)), nextCursor: null };
+    .orderBy(asc(controllers.serial))
+    .limit(CONTROLLERS_CAP + 1);
+  return capped(
+    rows.map((r) => presentController(r.c, r.wallName, isStaff(actor))),
+    CONTROLLERS_CAP,
+  );
 }
 
 export async function getController(actor: Actor, id: string) {
@@ -121,7 +136,7 @@ export async function getController(actor: Actor, id: string) {
     .leftJoin(walls, eq(walls.id, controllers.wallId))
     .where(and(eq(controllers.id, id), actor.role === 'client' ? tenantWhere(actor, walls.clientId) : undefined));
   const r = found(row, 'Controller');
-  return presentController(r.c, r.wallName);
+  return presentController(r.c, r.wallName, isStaff(actor));
 }
 
 async function assertWall(wallId: string | null | undefined) {

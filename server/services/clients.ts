@@ -1,9 +1,10 @@
-import type { ClientDetail, ClientSummary, Contact, ServicePlan } from '../../shared/schemas/clients.js';
+import type { ClientDetail, ClientSummary, ClientUserOption, Contact, ServicePlan } from '../../shared/schemas/clients.js';
 import type { Page } from '../../shared/schemas/common.js';
 import { and, asc, desc, eq, ilike, isNotNull, isNull, notInArray, sql } from 'drizzle-orm';
 import type { AnyPgColumn } from 'drizzle-orm/pg-core';
 import type { ClientInput, ClientPatch, ContactInput, ContactPatch, ListClientsQuery } from '../../shared/schemas/clients.js';
 import { db, type DbOrTx } from '../db/client.js';
+import { users } from '../db/schema/accounts.js';
 import { clients, contacts, servicePlans, sites } from '../db/schema/clients.js';
 import { badRequest } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
@@ -98,7 +99,17 @@ function presentContact(c: typeof contacts.$inferSelect): Contact {
     email: c.email,
     phone: c.phone,
     receivesUpdates: c.receivesUpdates,
+    userId: c.userId,
   };
+}
+
+/** The organisation's accounts a contact can sign in as (disabled ones left out). */
+async function clientUserOptions(clientId: string): Promise<ClientUserOption[]> {
+  return db()
+    .select({ id: users.id, name: users.name, email: users.email })
+    .from(users)
+    .where(and(eq(users.clientId, clientId), eq(users.role, 'client'), isNull(users.disabledAt)))
+    .orderBy(asc(users.name));
 }
 
 export async function getClient(actor: Actor, id: string): Promise<ClientDetail> {
@@ -128,6 +139,7 @@ export async function getClient(actor: Actor, id: string): Promise<ClientDetail>
     ...(isStaff(actor) ? { notes: client.notes } : {}),
     archived: client.archivedAt !== null,
     contacts: contactRows.map(presentContact),
+    ...(isStaff(actor) ? { users: await clientUserOptions(id) } : {}),
     sites: siteRows.map((r) => ({ id: r.id, name: r.name, city: r.city, region: r.region, timeZone: r.timeZone, wallCount: r.wallCount })),
     createdAt: client.createdAt.toISOString(),
   } satisfies ClientDetail;
@@ -183,14 +195,25 @@ async function assertSiteOfClient(tx: DbOrTx, siteId: string | null | undefined,
   if (!site) throw badRequest('validation_failed', 'That site does not belong to this client.', { siteId: 'Not a site of this client.' });
 }
 
+/** A contact signs in only as a user of its own organisation. */
+async function assertUserOfClient(tx: DbOrTx, userId: string | null | undefined, clientId: string) {
+  if (!userId) return;
+  const [user] = await tx
+    .select({ id: users.id })
+    .from(users)
+    .where(and(eq(users.id, userId), eq(users.clientId, clientId), eq(users.role, 'client')));
+  if (!user) throw badRequest('validation_failed', 'That person is not a user of this client.', { userId: 'Not a user of this client.' });
+}
+
 export async function createContact(actor: Actor, input: ContactInput) {
   return db().transaction(async (tx) => {
     const [client] = await tx.select({ id: clients.id }).from(clients).where(eq(clients.id, input.clientId));
     if (!client) throw badRequest('validation_failed', 'That client does not exist.', { clientId: 'Unknown client.' });
     await assertSiteOfClient(tx, input.siteId, input.clientId);
+    await assertUserOfClient(tx, input.userId, input.clientId);
     const [row] = await tx
       .insert(contacts)
-      .values({ ...input, siteId: input.siteId ?? null, email: input.email ?? null })
+      .values({ ...input, siteId: input.siteId ?? null, email: input.email ?? null, userId: input.userId ?? null })
       .returning();
     await recordAudit(tx, { actor, entity: 'contact', entityId: row.id, action: 'created', after: row });
     return presentContact(row);
@@ -202,6 +225,7 @@ export async function updateContact(actor: Actor, id: string, input: ContactPatc
     const [before] = await tx.select().from(contacts).where(eq(contacts.id, id)).for('update');
     found(before, 'Contact');
     await assertSiteOfClient(tx, input.siteId, before.clientId);
+    await assertUserOfClient(tx, input.userId, before.clientId);
     const [after] = await tx.update(contacts).set(input).where(eq(contacts.id, id)).returning();
     await recordAudit(tx, { actor, entity: 'contact', entityId: id, action: 'updated', before, after });
     return presentContact(after);
@@ -231,4 +255,17 @@ export async function updateRecipients(tx: DbOrTx, clientId: string, siteId: str
       ),
     );
   return [...new Set(rows.map((r) => r.email!))];
+}
+
+/**
+ * The addresses of the client's contacts linked to the account that signs in as `signInEmail`:
+ * the same person listed under another address (a reply's author is mailed under none of them).
+ */
+export async function linkedContactAddresses(tx: DbOrTx, clientId: string, signInEmail: string) {
+  const rows = await tx
+    .select({ email: contacts.email })
+    .from(contacts)
+    .innerJoin(users, eq(users.id, contacts.userId))
+    .where(and(eq(contacts.clientId, clientId), eq(users.email, signInEmail.trim().toLowerCase()), isNotNull(contacts.email)));
+  return rows.map((r) => r.email!);
 }

@@ -134,6 +134,7 @@ export async function search(actor: Actor, q: string): Promise<SearchResults> {
       .select({
         id: tickets.id,
         number: tickets.number,
+        createdAt: tickets.createdAt,
         title: tickets.title,
         status: tickets.status,
         priority: tickets.priority,
@@ -190,7 +191,7 @@ export async function search(actor: Actor, q: string): Promise<SearchResults> {
   return {
     tickets: ticketRows.map((t) => ({
       id: t.id,
-      ref: ticketRef(t.number),
+      ref: ticketRef(t.number, t.createdAt),
       title: t.title,
       status: t.status,
       priority: t.priority,

@@ -37,7 +37,7 @@ import type { z } from 'zod';
 import type { partInput, partPatch, reorderPointInput, stockLocationInput, stockLocationPatch } from '../../shared/schemas/stock.js';
 import { recordAudit } from './audit.js';
 import { likePattern } from './clients.js';
-import { decodeCursor, encodeCursor } from './pagination.js';
+import { checkCursor, decodeCursor, encodeCursor } from './pagination.js';
 import { found } from './scope.js';
 
 export type Tx = Parameters<Parameters<ReturnType<typeof db>['transaction']>[0]>[0];
@@ -65,7 +65,7 @@ function presentPart(p: typeof parts.$inferSelect, modelName: string | null): Pa
 }
 
 export async function listParts(query: ListPartsQuery): Promise<Page<Part>> {
-  const cursor = decodeCursor(query.cursor, 2) as [string, string] | null;
+  const cursor = decodeCursor(query.cursor, 2, ['text', 'uuid']) as [string, string] | null;
   const rows = await db()
     .select({ part: parts, modelName: cabinetModels.name })
     .from(parts)
@@ -164,6 +164,7 @@ export async function listStock(actor: Actor, query: ListStockQuery): Promise<Pa
   }[query.sort];
   const columns = [...keyColumns, stockBalances.partId, stockBalances.locationId];
   const cursor = decodeCursor(query.cursor, columns.length);
+  if (cursor) checkCursor(columns, cursor);
   const tuple = sql.join(columns, sql`, `);
   const after = cursor
     ? sql`(${tuple}) ${sql.raw(query.dir === 'desc' ? '<' : '>')} (${sql.join(
@@ -273,7 +274,7 @@ async function movementRows(where: SQL | undefined, limit: number) {
 }
 
 export async function listMovements(query: ListStockMovementsQuery): Promise<Page<StockMovement>> {
-  const cursor = decodeCursor(query.cursor, 1) as [number] | null;
+  const cursor = decodeCursor(query.cursor, 1, ['bigint']) as [number] | null;
   const rows = await movementRows(
     and(
       query.partId ? eq(stockMovements.partId, query.partId) : undefined,

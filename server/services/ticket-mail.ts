@@ -9,11 +9,13 @@ import type { DbOrTx } from '../db/client.js';
 import { users } from '../db/schema/accounts.js';
 import { queueMail } from '../integrations/mail.js';
 import { renderMail, type MailFact, type MailMessage } from './mail-layout.js';
-import { updateRecipients } from './clients.js';
+import { linkedContactAddresses, updateRecipients } from './clients.js';
 
 export interface TicketForMail {
   id: string;
   number: number;
+  /** When the ticket was opened: the year in its reference. */
+  createdAt: Date;
   clientId: string;
   siteId: string;
   title: string;
@@ -35,7 +37,7 @@ const statusLabel = (status: string) => statusLabels[status as keyof typeof stat
 /** What every ticket mail shows: its reference, state, place and the cells reported. */
 function ticketFacts(t: TicketForMail): MailFact[] {
   const facts: MailFact[] = [
-    { label: 'Ticket', value: `${ticketRef(t.number)} — ${t.title}` },
+    { label: 'Ticket', value: `${ticketRef(t.number, t.createdAt)} — ${t.title}` },
     { label: 'State', value: statusLabel(t.status) },
     { label: 'Priority', value: priorityGuidance[t.priority as keyof typeof priorityGuidance]?.label ?? t.priority },
     { label: 'Where', value: [t.clientName, t.siteName, t.wallName].filter(Boolean).join(' · ') },
@@ -49,7 +51,8 @@ const sameAddress = (a: string, b: string) => a.trim().toLowerCase() === b.trim(
 /**
  * The client people who hear about a ticket: its reporter (if a client user) and the site's
  * contacts, each address once. `excludeEmail` (a comment's author) is left out however a contact
- * spells it: nobody is mailed their own words.
+ * spells it, and so is every contact linked to the author's account under another address:
+ * nobody is mailed their own words.
  */
 async function clientRecipients(tx: DbOrTx, t: TicketForMail, excludeEmail?: string) {
   const list = await updateRecipients(tx, t.clientId, t.siteId);
@@ -61,11 +64,13 @@ async function clientRecipients(tx: DbOrTx, t: TicketForMail, excludeEmail?: str
     if (reporter && reporter.role === 'client' && !reporter.disabledAt) list.unshift(reporter.email);
   }
   const unique = list.filter((e, i) => list.findIndex((other) => sameAddress(other, e)) === i);
-  return excludeEmail ? unique.filter((e) => !sameAddress(e, excludeEmail)) : unique;
+  if (!excludeEmail) return unique;
+  const authors = [excludeEmail, ...(await linkedContactAddresses(tx, t.clientId, excludeEmail))];
+  return unique.filter((e) => !authors.some((a) => sameAddress(e, a)));
 }
 
 export async function mailOfficeNewTicket(tx: DbOrTx, t: TicketForMail, reporterName: string) {
-  const ref = ticketRef(t.number);
+  const ref = ticketRef(t.number, t.createdAt);
   await queueMail(tx, {
     to: [config().OFFICE_EMAIL],
     subject: `New ${t.priority} ticket ${ref}: ${t.title}`,
@@ -92,7 +97,7 @@ export type ClientUpdate =
 export async function mailClientUpdate(tx: DbOrTx, t: TicketForMail, update: ClientUpdate) {
   const to = await clientRecipients(tx, t, update.kind === 'comment' ? update.excludeEmail : undefined);
   if (to.length === 0) return;
-  const ref = ticketRef(t.number);
+  const ref = ticketRef(t.number, t.createdAt);
   let subject: string;
   let heading: string;
   let paragraphs: string[] = [];

@@ -1,6 +1,7 @@
-import { aliasedTable, and, asc, eq, ilike, inArray, isNull, or, sql } from 'drizzle-orm';
-import type { Page } from '../../shared/schemas/common.js';
+import { aliasedTable, and, asc, desc, eq, ilike, inArray, isNull, or, sql } from 'drizzle-orm';
+import type { CappedList, Page } from '../../shared/schemas/common.js';
 import type { Role, TicketPriority, TicketStatus } from '../../shared/schemas/enums.js';
+import { ticketNumberIn } from '../../shared/schemas/search.js';
 import {
   allowedNextStatuses,
   openStatuses,
@@ -31,7 +32,7 @@ import { badRequest, conflict, forbidden } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
 import { cursorValue, likePattern, orderFor } from './clients.js';
-import { afterCursor, decodeCursor, pageOf } from './pagination.js';
+import { afterCursor, capped, decodeCursor, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 import { clockStateOf, pausedClockMs, planClock, ticketDueTimes, worstState } from './ticket-clock.js';
 import { mailClientUpdate, mailOfficeNewTicket, type TicketForMail } from './ticket-mail.js';
@@ -44,7 +45,7 @@ const reporter = aliasedTable(users, 'reporter');
  * The state of a ticket's running clocks, in SQL so lists can filter on it. The same rules as
  * clockStateOf/worstState in ticket-clock.ts (tests hold the two together).
  */
-const clockStateSql = sql<TicketClockState | null>`case
+export const clockStateSql = sql<TicketClockState | null>`case
   when ${tickets.resolutionDueAt} is null then null
   when ${tickets.resolvedAt} is not null then case when ${tickets.resolvedAt} <= ${tickets.resolutionDueAt} then 'met' else 'missed' end
   when (${tickets.pausedAt} is null and ${tickets.resolutionDueAt} < now()) or (${tickets.acknowledgedAt} is null and ${tickets.responseDueAt} < now()) then 'breached'
@@ -95,7 +96,7 @@ function presentListRow(r: ListRow): TicketListItem {
   return {
     id: r.id,
     number: r.number,
-    ref: ticketRef(r.number),
+    ref: ticketRef(r.number, r.createdAt),
     title: r.title,
     status: r.status,
     priority: r.priority,
@@ -118,7 +119,8 @@ export async function listTickets(actor: Actor, query: ListTicketsQuery): Promis
   const sortColumn =
     query.sort === 'resolutionDueAt' ? tickets.resolutionDueAt : query.sort === 'updatedAt' ? tickets.updatedAt : tickets.createdAt;
   const pattern = query.q ? likePattern(query.q) : undefined;
-  const number = query.q?.match(/^(?:gk-?)?(\d{1,9})$/i)?.[1];
+  // The same reading of a ticket number as the search box: `1041/26`, `1041`, `#1041`, the old `GK-1041`.
+  const number = query.q ? ticketNumberIn(query.q) : null;
   const assigneeFilter =
     query.assigneeId === 'none'
       ? isNull(tickets.assigneeId)
@@ -144,7 +146,7 @@ export async function listTickets(actor: Actor, query: ListTicketsQuery): Promis
         query.wallId ? eq(tickets.wallId, query.wallId) : undefined,
         isStaff(actor) ? assigneeFilter : undefined,
         pattern
-          ? or(ilike(tickets.title, pattern), ilike(tickets.description, pattern), number ? eq(tickets.number, Number(number)) : undefined)
+          ? or(ilike(tickets.title, pattern), ilike(tickets.description, pattern), number !== null ? eq(tickets.number, number) : undefined)
           : undefined,
         afterCursor(sortColumn, tickets.id, decodeCursor(query.cursor, 2), query.dir),
       ),
@@ -232,7 +234,7 @@ interface TicketParts {
   ticket: typeof tickets.$inferSelect;
   wall: { id: string; name: string; columns: number; rows: number } | null;
   siteTimeZone: string;
-  merged: { id: string; number: number } | null;
+  merged: { id: string; number: number; createdAt: Date } | null;
   visits: TicketVisit[];
   repairs: TicketRepair[];
 }
@@ -257,7 +259,7 @@ function presentTicket(
     /** Due times and visit windows are shown in the site's own time zone. */
     siteTimeZone,
     wall,
-    mergedInto: merged ? { id: merged.id, ref: ticketRef(merged.number) } : null,
+    mergedInto: merged ? { id: merged.id, ref: ticketRef(merged.number, merged.createdAt) } : null,
     acknowledgedAt: iso(t.acknowledgedAt),
     resolvedAt: iso(t.resolvedAt),
     closedAt: iso(t.closedAt),
@@ -289,7 +291,12 @@ export async function getTicket(actor: Actor, id: string): Promise<TicketDetail>
   const ticketRepairs = await repairsOf(id);
   const [site] = await db().select({ timeZone: sites.timeZone }).from(sites).where(eq(sites.id, t.siteId));
   const merged = t.mergedIntoId
-    ? (await db().select({ id: tickets.id, number: tickets.number }).from(tickets).where(eq(tickets.id, t.mergedIntoId)))[0]
+    ? (
+        await db()
+          .select({ id: tickets.id, number: tickets.number, createdAt: tickets.createdAt })
+          .from(tickets)
+          .where(eq(tickets.id, t.mergedIntoId))
+      )[0]
     : null;
   return presentTicket(actor, {
     row,
@@ -519,9 +526,14 @@ export async function mergeTicket(actor: Actor, id: string, intoId: string): Pro
         ticketId: dup.id,
         authorId: actor.userId,
         visibility: 'public',
-        body: `Merged into ${ticketRef(into.number)}: the same fault is followed there.`,
+        body: `Merged into ${ticketRef(into.number, into.createdAt)}: the same fault is followed there.`,
       },
-      { ticketId: into.id, authorId: actor.userId, visibility: 'internal', body: `${ticketRef(dup.number)} was merged into this ticket.` },
+      {
+        ticketId: into.id,
+        authorId: actor.userId,
+        visibility: 'internal',
+        body: `${ticketRef(dup.number, dup.createdAt)} was merged into this ticket.`,
+      },
     ]);
     await recordAudit(tx, { actor, entity: 'ticket', entityId: dup.id, action: 'merged', before: dup, after });
   });
@@ -539,15 +551,20 @@ function presentComment(r: { c: typeof ticketComments.$inferSelect; authorName: 
   };
 }
 
-export async function listComments(actor: Actor, ticketId: string): Promise<{ items: TicketComment[] }> {
+/** The newest comments of a conversation, shown oldest first; older ones are counted as `truncated`. */
+export const COMMENTS_CAP = 1000;
+
+export async function listComments(actor: Actor, ticketId: string): Promise<CappedList<TicketComment>> {
   await visibleTicket(db(), actor, ticketId);
   const rows = await db()
     .select({ c: ticketComments, authorName: users.name, authorRole: users.role })
     .from(ticketComments)
     .leftJoin(users, eq(users.id, ticketComments.authorId))
     .where(and(eq(ticketComments.ticketId, ticketId), isStaff(actor) ? undefined : eq(ticketComments.visibility, 'public')))
-    .orderBy(asc(ticketComments.createdAt));
-  return { items: rows.map(presentComment) };
+    .orderBy(desc(ticketComments.createdAt), desc(ticketComments.id))
+    .limit(COMMENTS_CAP + 1);
+  const newest = capped(rows, COMMENTS_CAP);
+  return { items: newest.items.reverse().map(presentComment), truncated: newest.truncated };
 }
 
 export async function addComment(actor: Actor, ticketId: string, input: CommentInput): Promise<TicketComment> {
@@ -594,9 +611,17 @@ function presentView(v: typeof savedViews.$inferSelect): SavedTicketView {
   return { id: v.id, name: v.name, filters: Object.fromEntries(filters) };
 }
 
-export async function listViews(actor: Actor): Promise<{ items: SavedTicketView[] }> {
-  const rows = await db().select().from(savedViews).where(eq(savedViews.userId, actor.userId)).orderBy(asc(savedViews.name));
-  return { items: rows.map(presentView) };
+/** A person's saved views, by name, up to this many. */
+export const SAVED_VIEWS_CAP = 200;
+
+export async function listViews(actor: Actor): Promise<CappedList<SavedTicketView>> {
+  const rows = await db()
+    .select()
+    .from(savedViews)
+    .where(eq(savedViews.userId, actor.userId))
+    .orderBy(asc(savedViews.name))
+    .limit(SAVED_VIEWS_CAP + 1);
+  return capped(rows.map(presentView), SAVED_VIEWS_CAP);
 }
 
 export async function saveView(actor: Actor, input: SavedViewInput): Promise<SavedTicketView> {

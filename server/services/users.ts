@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, ilike, inArray, isNull, or, sql } from 'drizzle-orm';
 import { staffRoles } from '../../shared/schemas/enums.js';
 import type { InviteUserInput, UpdateUserInput } from '../../shared/schemas/auth.js';
-import type { Page } from '../../shared/schemas/common.js';
+import type { CappedList, Page } from '../../shared/schemas/common.js';
 import type { AuditEventView, ListAuditQuery, ListUsersQuery, StaffMember, UserSummary } from '../../shared/schemas/users.js';
 import { db, type DbOrTx } from '../db/client.js';
 import { auditEvents, authTokens, users } from '../db/schema/accounts.js';
@@ -10,7 +10,7 @@ import { badRequest, conflict } from '../errors.js';
 import type { Actor } from '../middleware/auth.js';
 import { nameAuditEvents, recordAudit, type NamedAuditEvent } from './audit.js';
 import { queueInviteMail, revokeSessions } from './auth.js';
-import { afterCursor, decodeCursor, pageOf } from './pagination.js';
+import { afterCursor, capped, decodeCursor, pageOf } from './pagination.js';
 import { found } from './scope.js';
 
 const summaryColumns = {
@@ -220,11 +220,14 @@ function presentStaffMember(u: Pick<typeof users.$inferSelect, 'id' | 'name' | '
  * The team, for pickers (assignee, technicians of a visit): active staff by name, with only
  * what a picker needs. The full user list stays the admin's.
  */
-export async function listStaff(): Promise<{ items: StaffMember[] }> {
+export const STAFF_CAP = 2000;
+
+export async function listStaff(cap = STAFF_CAP): Promise<CappedList<StaffMember>> {
   const rows = await db()
     .select({ id: users.id, name: users.name, role: users.role })
     .from(users)
     .where(and(inArray(users.role, [...staffRoles]), isNull(users.disabledAt)))
-    .orderBy(asc(users.name), asc(users.id));
-  return { items: rows.map(presentStaffMember) };
+    .orderBy(asc(users.name), asc(users.id))
+    .limit(cap + 1);
+  return capped(rows.map(presentStaffMember), cap);
 }

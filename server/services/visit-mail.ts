@@ -31,7 +31,15 @@ export interface VisitForMail {
   accessNotes: string;
   timeZone: string;
   wallName: string | null;
-  ticket: { id: string; number: number; title: string; reporterId: string | null; cells: { column: number; row: number }[] } | null;
+  ticket: {
+    id: string;
+    number: number;
+    /** When the ticket was opened: the year in its reference. */
+    createdAt: Date;
+    title: string;
+    reporterId: string | null;
+    cells: { column: number; row: number }[];
+  } | null;
   technicians: { id: string; name: string; email: string }[];
   internalNotes: string;
   cancelReason: string;
@@ -81,7 +89,7 @@ async function clientInvitees(tx: DbOrTx, v: Pick<VisitForMail, 'clientId' | 'si
 
 function title(v: VisitForMail) {
   const what = v.kind === 'maintenance' ? 'Planned maintenance' : 'Service visit';
-  const ref = v.ticket ? ` (${ticketRef(v.ticket.number)})` : '';
+  const ref = v.ticket ? ` (${ticketRef(v.ticket.number, v.ticket.createdAt)})` : '';
   return `${what}: ${v.wallName ?? v.siteName}${ref}`;
 }
 
@@ -89,7 +97,7 @@ function title(v: VisitForMail) {
 function about(v: VisitForMail, audience: 'technicians' | 'client') {
   const lines = [
     [v.clientName, v.siteName, v.wallName].filter(Boolean).join(' · '),
-    v.ticket ? `Ticket ${ticketRef(v.ticket.number)} — ${v.ticket.title}` : 'Planned maintenance',
+    v.ticket ? `Ticket ${ticketRef(v.ticket.number, v.ticket.createdAt)} — ${v.ticket.title}` : 'Planned maintenance',
   ];
   if (v.ticket?.cells.length) lines.push(`Cells: ${v.ticket.cells.map(cellLabel).join(', ')}`);
   lines.push(`When: ${formatWindow(v.windowStart, v.windowEnd, v.timeZone)}`);
@@ -158,7 +166,9 @@ export function visitInvitation(
 }
 
 function subjectFor(v: VisitForMail, change: VisitChange, audience: 'technicians' | 'client' | 'removed') {
-  const ref = v.ticket ? `${ticketRef(v.ticket.number)}: ${v.ticket.title}` : `maintenance of ${v.wallName ?? v.siteName}`;
+  const ref = v.ticket
+    ? `${ticketRef(v.ticket.number, v.ticket.createdAt)}: ${v.ticket.title}`
+    : `maintenance of ${v.wallName ?? v.siteName}`;
   if (audience === 'removed') return `Taken off a visit: ${v.siteName}, ${ref}`;
   if (audience === 'technicians') {
     const verb = change === 'booked' ? 'New visit' : change === 'moved' ? 'Visit changed' : 'Visit cancelled';
@@ -195,7 +205,10 @@ function visitFacts(v: VisitForMail, audience: 'technicians' | 'client'): MailFa
     },
     { label: 'Client', value: v.clientName },
     ...(v.wallName ? [{ label: 'Wall', value: v.wallName }] : []),
-    { label: 'For', value: v.ticket ? `Ticket ${ticketRef(v.ticket.number)} — ${v.ticket.title}` : 'Planned maintenance' },
+    {
+      label: 'For',
+      value: v.ticket ? `Ticket ${ticketRef(v.ticket.number, v.ticket.createdAt)} — ${v.ticket.title}` : 'Planned maintenance',
+    },
   ];
   if (v.ticket?.cells.length)
     facts.push({ label: v.ticket.cells.length === 1 ? 'Cell' : 'Cells', value: v.ticket.cells.map(cellLabel).join(', ') });
@@ -275,7 +288,7 @@ export async function mailVisitChange(
 export async function mailVisitReport(tx: DbOrTx, v: VisitForMail, report: { storageKey: string; fileName: string }) {
   const to = await visitClientRecipients(tx, v);
   if (to.length === 0) return false;
-  const ref = v.ticket ? ` (${ticketRef(v.ticket.number)})` : '';
+  const ref = v.ticket ? ` (${ticketRef(v.ticket.number, v.ticket.createdAt)})` : '';
   await queueMail(tx, {
     to,
     subject: `Visit report: ${v.siteName}${ref}`,

@@ -39,7 +39,10 @@ export interface ReportData {
   signature: Buffer | null;
 }
 
-/** "Visit report 2026-12-10 Atrium GK-0042.pdf": the day (at the site), the site, the ticket. */
+/**
+ * "Visit report 2026-12-10 Atrium 1042-26.pdf": the day (at the site), the site, the ticket's
+ * reference with a dash for its slash, which no file name may hold (search reads it back).
+ */
 export function reportFileName(d: {
   siteName: string;
   ticket: { ref: string } | null;
@@ -48,7 +51,7 @@ export function reportFileName(d: {
 }) {
   const day = localDay(d.visit.completedAt ?? d.visit.windowStart, d.timeZone);
   const site = d.siteName.replace(/[^\p{L}\p{N} .,&()-]+/gu, ' ').trim();
-  return ['Visit report', day, site, d.ticket?.ref].filter(Boolean).join(' ') + '.pdf';
+  return ['Visit report', day, site, d.ticket?.ref.replace('/', '-')].filter(Boolean).join(' ') + '.pdf';
 }
 
 const localDay = (at: Date, timeZone: string) =>

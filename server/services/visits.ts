@@ -84,6 +84,7 @@ const listColumns = {
   wallColumns: walls.columns,
   wallRows: walls.rows,
   ticketNumber: tickets.number,
+  ticketCreatedAt: tickets.createdAt,
   ticketTitle: tickets.title,
   ticketPriority: tickets.priority,
   ticketStatus: tickets.status,
@@ -182,7 +183,12 @@ function presentListItem(r: ListRow, technicians: Technician[], conflicts: Visit
     wall: v.wallId ? { id: v.wallId, name: r.wallName ?? '' } : null,
     ticket:
       v.ticketId && r.ticketNumber !== null
-        ? { id: v.ticketId, ref: ticketRef(r.ticketNumber), title: r.ticketTitle ?? '', priority: r.ticketPriority ?? 'normal' }
+        ? {
+            id: v.ticketId,
+            ref: ticketRef(r.ticketNumber, r.ticketCreatedAt!),
+            title: r.ticketTitle ?? '',
+            priority: r.ticketPriority ?? 'normal',
+          }
         : null,
     technicians: technicians.map((t) => ({ id: t.id, name: t.name })),
     conflicts: staff ? conflicts : [],
@@ -331,6 +337,7 @@ async function forMail(tx: DbOrTx, id: string): Promise<VisitForMail> {
         ? {
             id: r.v.ticketId,
             number: r.ticketNumber,
+            createdAt: r.ticketCreatedAt!,
             title: r.ticketTitle ?? '',
             reporterId: r.ticketReporterId,
             cells: r.ticketCells ?? [],
@@ -570,7 +577,8 @@ async function reportData(tx: DbOrTx, id: string, overlay: Partial<VisitRow> = {
     address: addressLine(r.site),
     timeZone: r.site.timeZone,
     wallName: r.wallName,
-    ticket: v.ticketId && r.ticketNumber !== null ? { ref: ticketRef(r.ticketNumber), title: r.ticketTitle ?? '' } : null,
+    ticket:
+      v.ticketId && r.ticketNumber !== null ? { ref: ticketRef(r.ticketNumber, r.ticketCreatedAt!), title: r.ticketTitle ?? '' } : null,
     technicians: (techs.get(id) ?? []).map((t) => t.name),
     repairs: repairList,
     photos: photos.map((p) => ({ fileName: p.fileName, contentType: p.contentType, repairId: p.repairId, storageKey: keyOf.get(p.id)! })),
@@ -676,7 +684,7 @@ export async function visitReport(actor: Actor, id: string): Promise<{ fileName:
   if (r.v.status !== 'completed') throw notFound('Report');
   const fileName = reportFileName({
     siteName: r.site.name,
-    ticket: r.ticketNumber !== null ? { ref: ticketRef(r.ticketNumber) } : null,
+    ticket: r.ticketNumber !== null ? { ref: ticketRef(r.ticketNumber, r.ticketCreatedAt!) } : null,
     visit: r.v,
     timeZone: r.site.timeZone,
   });

@@ -1,5 +1,5 @@
 import { and, asc, eq, ilike, inArray, isNull, notInArray, or, sql } from 'drizzle-orm';
-import type { Page } from '../../shared/schemas/common.js';
+import type { CappedList, Page } from '../../shared/schemas/common.js';
 import type { ListWallsQuery, WallInput, WallPatch } from '../../shared/schemas/walls.js';
 import type { WallCabinet, WallController, WallDetail, WallSummary } from '../../shared/schemas/walls.js';
 import { ticketRef } from '../../shared/schemas/tickets.js';
@@ -14,7 +14,7 @@ import { recordAudit } from './audit.js';
 import { wallOpenTicketCount } from './counts.js';
 import { presentModel } from './catalogue.js';
 import { cursorValue, likePattern, orderFor } from './clients.js';
-import { afterCursor, decodeCursor, pageOf } from './pagination.js';
+import { afterCursor, capped, decodeCursor, pageOf } from './pagination.js';
 import { found, isStaff, tenantWhere } from './scope.js';
 
 export async function listWalls(actor: Actor, query: ListWallsQuery): Promise<Page<WallSummary>> {
@@ -205,8 +205,14 @@ export async function updateWall(actor: Actor, id: string, input: WallPatch) {
   return getWall(actor, id);
 }
 
+/**
+ * The most cabinets one wall map answer carries: a whole 500 × 500 grid, the largest wall
+ * (walls_grid_positive). A wall never holds more, so `truncated` is a guard, not a page.
+ */
+export const WALL_CABINETS_CAP = 500 * 500;
+
 /** Every cabinet on the wall, for the wall map, with how many open tickets name its cell. */
-export async function wallCabinets(actor: Actor, id: string): Promise<{ items: WallCabinet[] }> {
+export async function wallCabinets(actor: Actor, id: string, cap = WALL_CABINETS_CAP): Promise<CappedList<WallCabinet>> {
   await visibleWall(db(), actor, id);
   const [rows, open] = await Promise.all([
     db()
@@ -221,9 +227,10 @@ export async function wallCabinets(actor: Actor, id: string): Promise<{ items: W
       })
       .from(cabinets)
       .where(eq(cabinets.wallId, id))
-      .orderBy(asc(cabinets.row), asc(cabinets.column)),
+      .orderBy(asc(cabinets.row), asc(cabinets.column))
+      .limit(cap + 1),
     db()
-      .select({ id: tickets.id, number: tickets.number, cells: tickets.cells })
+      .select({ id: tickets.id, number: tickets.number, createdAt: tickets.createdAt, cells: tickets.cells })
       .from(tickets)
       .where(and(eq(tickets.wallId, id), notInArray(tickets.status, ['resolved', 'closed'])))
       .orderBy(asc(tickets.number)),
@@ -233,11 +240,13 @@ export async function wallCabinets(actor: Actor, id: string): Promise<{ items: W
   for (const t of open) {
     for (const c of t.cells) {
       const key = `${c.column}:${c.row}`;
-      perCell.set(key, [...(perCell.get(key) ?? []), { id: t.id, ref: ticketRef(t.number) }]);
+      perCell.set(key, [...(perCell.get(key) ?? []), { id: t.id, ref: ticketRef(t.number, t.createdAt) }]);
     }
   }
+  const kept = capped(rows, cap);
   return {
-    items: rows.map((r): WallCabinet => ({
+    truncated: kept.truncated,
+    items: kept.items.map((r): WallCabinet => ({
       id: r.id,
       serial: r.serial,
       column: r.column!,

@@ -7,7 +7,13 @@ export const csrfHeader = { name: 'X-Requested-With', value: 'gridkeep' } as con
 
 export const passwordMinLength = 8;
 export const passwordMaxLength = 128;
-/** Length rules only; the server also refuses common passwords (OWASP ASVS 5.0 6.2.4). */
+/** What the set-password and change-password forms say under the new password. */
+export const newPasswordHint = `At least ${passwordMinLength} characters, not built from your name, e-mail address, organisation or “Gridkeep”. A few unrelated words are strong and easy to type on a phone.`;
+/**
+ * Length rules only. The server also refuses passwords that are easy to guess: common ones and
+ * ones built from the account's own words (OWASP ASVS 5.0 6.2.4, 6.2.11), answering 400
+ * `weak_password` with the reason on the field.
+ */
 export const newPassword = z
   .string()
   .min(passwordMinLength, `Use at least ${passwordMinLength} characters.`)

@@ -2,7 +2,7 @@
 // the list query and the responses (a wall's cabinets are in walls.ts).
 import type { CabinetEventKind, CabinetStatus } from './enums.js';
 import { z } from 'zod';
-import { nullableDate, optionalId, pageQuery, sortDir, text } from './common.js';
+import { nullableDate, optionalId, pageQuery, PG_INT_MAX, sortDir, text } from './common.js';
 import { cabinetStatuses } from './enums.js';
 
 // ---- requests ----
@@ -15,8 +15,8 @@ export const serial = z
   .regex(/^[A-Za-z0-9][A-Za-z0-9._\-/]*$/, 'Letters, digits and . _ - / only.')
   .transform((s) => s.toUpperCase());
 export const position = z.object({
-  column: z.number().int('Whole positions only.').min(1, 'Columns count from 1.'),
-  row: z.number().int('Whole positions only.').min(1, 'Rows count from 1.'),
+  column: z.number().int('Whole positions only.').min(1, 'Columns count from 1.').max(PG_INT_MAX, 'Too large.'),
+  row: z.number().int('Whole positions only.').min(1, 'Rows count from 1.').max(PG_INT_MAX, 'Too large.'),
 });
 export type Position = z.infer<typeof position>;
 
@@ -29,15 +29,21 @@ export const placeCabinetInput = position.extend({
 });
 export type PlaceCabinetInput = z.infer<typeof placeCabinetInput>;
 
+/**
+ * The note of a move, swap or status change is the staff's own unless they choose to show it to
+ * the client's users (who see the history of their own walls).
+ */
+const historyNote = { note: text(500).optional(), noteForClient: z.boolean().optional() };
+
 export const moveCabinetInput = z.object({
   wallId: z.uuid(),
   column: position.shape.column,
   row: position.shape.row,
-  note: text(500).optional(),
+  ...historyNote,
 });
 export type MoveCabinetInput = z.infer<typeof moveCabinetInput>;
 
-export const swapCabinetInput = z.object({ otherCabinetId: z.uuid(), note: text(500).optional() });
+export const swapCabinetInput = z.object({ otherCabinetId: z.uuid(), ...historyNote });
 export type SwapCabinetInput = z.infer<typeof swapCabinetInput>;
 
 export const cabinetPatch = z.object({
@@ -46,7 +52,7 @@ export const cabinetPatch = z.object({
   /** Taking a cabinet off its wall (to the bench, back to the maker, retired) frees its position. */
   status: z.enum(cabinetStatuses).optional(),
   stockLocationId: z.uuid().nullable().optional(),
-  note: text(500).optional(),
+  ...historyNote,
 });
 export type CabinetPatch = z.infer<typeof cabinetPatch>;
 
@@ -70,8 +76,16 @@ export type ListCabinetsQuery = z.infer<typeof listCabinetsQuery>;
 /** One CSV row of a cabinet import; line numbers count the header as line 1. */
 export const importRow = z.object({
   serial,
-  column: z.coerce.number({ error: 'column must be a whole number' }).int('column must be a whole number').min(1, 'column counts from 1'),
-  row: z.coerce.number({ error: 'row must be a whole number' }).int('row must be a whole number').min(1, 'row counts from 1'),
+  column: z.coerce
+    .number({ error: 'column must be a whole number' })
+    .int('column must be a whole number')
+    .min(1, 'column counts from 1')
+    .max(PG_INT_MAX, 'column is too large'),
+  row: z.coerce
+    .number({ error: 'row must be a whole number' })
+    .int('row must be a whole number')
+    .min(1, 'row counts from 1')
+    .max(PG_INT_MAX, 'row is too large'),
   batch: z.string().trim().max(40).default(''),
 });
 export interface ImportRowError {
@@ -108,6 +122,10 @@ export interface CabinetSummary {
   locationName: string | null;
 }
 
+/**
+ * One event of a cabinet's history. Client users get only the events on their own walls, with
+ * the other side of a move or swap (another organisation's wall, position, cabinet) left out.
+ */
 export interface CabinetEvent {
   id: string;
   kind: CabinetEventKind;
@@ -124,7 +142,9 @@ export interface CabinetEvent {
   repairId: string | null;
   fromStatus: CabinetStatus | null;
   toStatus: CabinetStatus | null;
+  /** Empty for client users unless staff chose to show it (`noteForClient`). */
   note: string;
+  noteForClient: boolean;
   /** null for client users (they see what happened, not who did it). */
   actorName: string | null;
   createdAt: string;
@@ -145,6 +165,8 @@ export interface CabinetDetail {
   /** `C{col}·R{row}`, or null off a wall. */
   position: string | null;
   stockLocation: { id: string; name: string } | null;
-  /** Newest first. */
+  /** Newest first, at most the newest 200 (client users: those on their own walls). */
   history: CabinetEvent[];
+  /** Older events exist beyond `history`. */
+  historyTruncated: boolean;
 }

@@ -35,6 +35,8 @@ export const contactInput = z.object({
     .or(z.literal('').transform(() => null)),
   phone: text(40).optional(),
   receivesUpdates: z.boolean().optional(),
+  /** The client user this contact signs in as (a user of the same organisation), or null. */
+  userId: z.uuid().nullable().optional(),
 });
 export type ContactInput = z.infer<typeof contactInput>;
 export const contactPatch = contactInput.omit({ clientId: true }).partial();
@@ -73,6 +75,15 @@ export interface Contact {
   email: string | null;
   phone: string;
   receivesUpdates: boolean;
+  /** The client user this contact signs in as; their sign-in address may differ from `email`. */
+  userId: string | null;
+}
+
+/** A client user a contact can be linked to (staff only). */
+export interface ClientUserOption {
+  id: string;
+  name: string;
+  email: string;
 }
 
 export interface ClientSite {
@@ -92,6 +103,8 @@ export interface ClientDetail {
   notes?: string;
   archived: boolean;
   contacts: Contact[];
+  /** Staff only: the organisation's user accounts, for a contact's "Signs in as". */
+  users?: ClientUserOption[];
   sites: ClientSite[];
   createdAt: string;
 }

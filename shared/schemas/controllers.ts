@@ -1,6 +1,6 @@
 // The controllers resource: request schemas and the response.
 import { z } from 'zod';
-import { positiveInt, requiredText, text } from './common.js';
+import { PG_INT_MAX, positiveInt, requiredText, text } from './common.js';
 
 // ---- requests ----
 export const controllerInput = z
@@ -10,7 +10,7 @@ export const controllerInput = z
     serial: requiredText(80).transform((s) => s.toUpperCase()),
     firmware: text(80).optional(),
     outputs: positiveInt('Outputs'),
-    outputsInUse: z.number().int().min(0).default(0),
+    outputsInUse: z.number().int().min(0).max(PG_INT_MAX).default(0),
     pixelsPerOutput: positiveInt('Pixels per output').default(650000),
     notes: text(5000).optional(),
   })
@@ -19,7 +19,7 @@ export type ControllerInput = z.infer<typeof controllerInput>;
 export const controllerPatch = z.object({
   wallId: z.uuid().nullable().optional(),
   firmware: text(80).optional(),
-  outputsInUse: z.number().int().min(0).optional(),
+  outputsInUse: z.number().int().min(0).max(PG_INT_MAX).optional(),
   notes: text(5000).optional(),
   archived: z.boolean().optional(),
 });
@@ -38,6 +38,7 @@ export interface Controller {
   outputs: number;
   outputsInUse: number;
   pixelsPerOutput: number;
-  notes: string;
+  /** Staff only: client users never receive it. */
+  notes?: string;
   archived: boolean;
 }

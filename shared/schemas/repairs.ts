@@ -3,7 +3,7 @@
 // the cabinet's history event and the ticket's activity in one transaction, and takes an
 // `Idempotency-Key` header so a retry or a double tap writes nothing twice.
 import { z } from 'zod';
-import { pageQuery, text } from './common.js';
+import { pageQuery, PG_INT_MAX, text } from './common.js';
 import { batchCode } from './stock.js';
 import {
   removedPartFates,
@@ -47,7 +47,9 @@ export const createRepairInput = z
      * Where the phone saw the cabinet when the repair was logged (a queued repair may arrive
      * later): if it has moved since, the repair is refused with `cabinet_moved`.
      */
-    seenAt: z.object({ wallId: z.uuid(), column: z.number().int().min(1), row: z.number().int().min(1) }).optional(),
+    seenAt: z
+      .object({ wallId: z.uuid(), column: z.number().int().min(1).max(PG_INT_MAX), row: z.number().int().min(1).max(PG_INT_MAX) })
+      .optional(),
     /** When the work was done, if earlier than now (a repair queued without signal). */
     performedAt: z.iso.datetime({ offset: true }).optional(),
   })

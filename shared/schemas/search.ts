@@ -19,12 +19,28 @@ export const partMinLength = 3;
 /** Counts stop here: "1000+" says enough, and counting a million cabinets would not. */
 export const searchCountCap = 1000;
 
+/** `1041`, `#1041`, `0042`, and the old `GK-1041` / `gk1041` / `GK 1041`; never 0. */
+const bareTicketNumber = /^(?:gk[\s-]?|#)?0*([1-9]\d{0,8})$/i;
+/** `1041/26`, `1041 / 26`, `1041/2026`, `1041-26`, `#1041/26`. */
+const ticketNumberWithYear = /^#?([1-9]\d{0,8})\s*[/-]\s*(?:\d{2}|20\d{2})$/;
+
 /**
- * The ticket number a query names, or null: "GK-1041", "gk1041", "GK 1041", "#1041" and a bare
- * "1041" all name ticket 1041.
+ * The ticket number a query names, or null. A ticket is found by its number alone: numbers are
+ * unique on their own, the year of a reference is there for people. Each of these names ticket 1041:
+ * - its reference `1041/26` (ticketRef in tickets.ts), also `1041 / 26`, with the whole year
+ *   `1041/2026`, or with a dash for the slash as in a visit report's file name (`1041-26`);
+ * - the bare number `1041` or `#1041`;
+ * - the references written before the year was part of them, `GK-1041`, `gk1041` or `GK 1041`:
+ *   e-mails sent then still find their ticket.
+ * With a year part, the number has no leading zero and the year is two digits or 20xx, so a
+ * year-first spelling (`26/1041`), a one-digit part (`12/5`), a zero-padded day (`05/12`) and a full
+ * date (`12/05/2026`) are not numbers. `12/05` does read as ticket 12 of 2005, since a new
+ * database numbers tickets from 1 and `12/26` must find ticket 12; search matches the words as well
+ * as the number, so a date typed in the box still finds the tickets that mention it.
  */
 export function ticketNumberIn(q: string): number | null {
-  const digits = /^(?:gk[\s-]?|#)?0*(\d{1,9})$/i.exec(q.trim())?.[1];
+  const s = q.trim();
+  const digits = bareTicketNumber.exec(s)?.[1] ?? ticketNumberWithYear.exec(s)?.[1];
   return digits ? Number(digits) : null;
 }
 
@@ -50,7 +66,7 @@ export interface SearchResults {
   /** The ticket the number names, then tickets with every word in their title or description. */
   tickets: {
     id: string;
-    /** `GK-1042`. */
+    /** `1042/26` (ticketRef). */
     ref: string;
     title: string;
     status: TicketStatus;

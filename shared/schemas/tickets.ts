@@ -128,8 +128,19 @@ export const savedViewInput = z.object({
 });
 export type SavedViewInput = z.infer<typeof savedViewInput>;
 
-/** GK-1042: the number people say on the phone. */
-export const ticketRef = (n: number) => `GK-${n}`;
+/**
+ * The ticket's reference, `1042/26`: its number, a slash and the two-digit year it was opened
+ * (UTC), said "ten forty-two of twenty-six". The number alone is unique (the `tickets.number`
+ * serial); the year is there for people, who see at a glance how old a case is. Search finds a
+ * ticket by the number in it (`ticketNumberIn` in search.ts). docs/look.md, "The ticket reference".
+ */
+export function ticketRef(number: number, openedAt: Date | string): string {
+  const year = new Date(openedAt).getUTCFullYear();
+  if (!Number.isInteger(number) || number < 1 || !Number.isFinite(year)) {
+    throw new RangeError(`No ticket reference for number ${number} opened at ${String(openedAt)}.`);
+  }
+  return `${number}/${String(year % 100).padStart(2, '0')}`;
+}
 
 // ---- responses (server/services/tickets.ts presenters) ----
 
@@ -143,7 +154,7 @@ export interface NamedRef {
 export interface TicketListItem {
   id: string;
   number: number;
-  /** `GK-1042`. */
+  /** `1042/26` (ticketRef). */
   ref: string;
   title: string;
   status: TicketStatus;

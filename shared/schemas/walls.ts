@@ -102,6 +102,6 @@ export interface WallCabinet {
   installedOn: string | null;
   /** Open tickets that name this cell. */
   openTickets: number;
-  /** Those tickets, the oldest first (`GK-1041`). */
+  /** Those tickets, the oldest first (`1041/26`). */
   openTicketRefs: { id: string; ref: string }[];
 }

@@ -24,6 +24,18 @@ const words: Record<string, { text: string; useServerMessage?: boolean }> = {
   payload_too_large: { text: 'That is more than can be sent at once.' },
   file_too_large: { text: 'The file is larger than the upload limit.' },
   internal_error: { text: 'Something went wrong on our side. Try again in a moment.' },
+  nothing_to_change: { text: 'Nothing was changed, so there was nothing to save.' },
+  unsupported_charset: { text: 'The request could not be read. Reload the page and try again.' },
+  unsupported_encoding: { text: 'The request could not be read. Reload the page and try again.' },
+  malformed_body: { text: 'The request could not be read. Reload the page and try again.' },
+  malformed_upload: { text: 'The file did not arrive whole. Choose it again and retry.' },
+  too_many_files: { text: 'Send one file at a time.' },
+  unexpected_file_field: { text: 'The file could not be attached. Reload the page and try again.' },
+  too_many_fields: { text: 'The upload has more parts than it may have. Reload the page and try again.' },
+  field_too_large: { text: 'A field of the upload is too long.' },
+  // Outages: a service Gridkeep depends on is down; nothing was saved, and trying again later is safe.
+  database_unavailable: { text: 'Gridkeep cannot reach its database right now, so nothing was saved. Try again in a minute.' },
+  storage_unavailable: { text: 'File storage is not answering, so the file was not saved. Try again in a minute.' },
   // Field work: the server's message names the cabinet, the position, the visit or the stock.
   cabinet_moved: {
     text: 'The cabinet has moved since the repair was logged. Check the wall map and log it again.',

@@ -3,6 +3,7 @@
 // query per list, and one request per write; uploads report their progress.
 import { queryOptions } from '@tanstack/react-query';
 import type { Attachment } from '@shared/schemas/attachments';
+import type { CappedList } from '@shared/schemas/common';
 import { api } from '@/lib/api-client';
 import { uploadWithProgress, type UploadProgressOptions } from '@/lib/upload-with-progress';
 
@@ -17,13 +18,13 @@ export const attachmentQueries = {
   ofTicket: (ticketId: string) =>
     queryOptions({
       queryKey: attachmentKeys.ofTicket(ticketId),
-      queryFn: ({ signal }) => api.get<{ items: Attachment[] }>(`/api/tickets/${encodeURIComponent(ticketId)}/attachments`, { signal }),
+      queryFn: ({ signal }) => api.get<CappedList<Attachment>>(`/api/tickets/${encodeURIComponent(ticketId)}/attachments`, { signal }),
     }),
   /** A wall's documents, newest first. */
   ofWall: (wallId: string) =>
     queryOptions({
       queryKey: attachmentKeys.ofWall(wallId),
-      queryFn: ({ signal }) => api.get<{ items: Attachment[] }>(`/api/walls/${encodeURIComponent(wallId)}/documents`, { signal }),
+      queryFn: ({ signal }) => api.get<CappedList<Attachment>>(`/api/walls/${encodeURIComponent(wallId)}/documents`, { signal }),
     }),
 };
 

@@ -3,7 +3,7 @@
 // the same cache entry, so an edit anywhere shows everywhere.
 import { queryOptions } from '@tanstack/react-query';
 import type { CabinetModel, CabinetModelInput, CabinetModelPatch } from '@shared/schemas/cabinet-models';
-import type { Page } from '@shared/schemas/common';
+import type { CappedList } from '@shared/schemas/common';
 import { api } from '@/lib/api-client';
 
 export const cabinetModelKeys = {
@@ -16,7 +16,7 @@ export const cabinetModelQueries = {
   list: () =>
     queryOptions({
       queryKey: cabinetModelKeys.list(),
-      queryFn: ({ signal }) => api.get<Page<CabinetModel>>('/api/cabinet-models', { signal }),
+      queryFn: ({ signal }) => api.get<CappedList<CabinetModel>>('/api/cabinet-models', { signal }),
       staleTime: 5 * 60_000,
     }),
 };

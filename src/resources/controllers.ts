@@ -1,5 +1,6 @@
 // The controllers resource: query keys, the list query and the write requests.
 import { queryOptions } from '@tanstack/react-query';
+import type { CappedList } from '@shared/schemas/common';
 import type { Controller, ControllerInput, ControllerPatch } from '@shared/schemas/controllers';
 import { api } from '@/lib/api-client';
 
@@ -13,7 +14,7 @@ export const controllerQueries = {
   list: (wallId?: string) =>
     queryOptions({
       queryKey: controllerKeys.list(wallId),
-      queryFn: ({ signal }) => api.get<{ items: Controller[] }>('/api/controllers', { query: { wallId }, signal }),
+      queryFn: ({ signal }) => api.get<CappedList<Controller>>('/api/controllers', { query: { wallId }, signal }),
     }),
 };
 

@@ -3,13 +3,12 @@
 // Everything about tickets is filed under ['tickets'], the today board included, so any ticket
 // write that invalidates the root refreshes every list, page and count.
 import { queryOptions } from '@tanstack/react-query';
-import type { Page } from '@shared/schemas/common';
+import type { CappedList, Page } from '@shared/schemas/common';
 import type {
   CommentInput,
   CreateTicketInput,
   SavedTicketView,
   SavedViewInput,
-  TicketClockCounts,
   TicketComment,
   TicketDetail,
   TicketListItem,
@@ -46,7 +45,6 @@ export const ticketKeys = {
   detail: (id: string) => [...ticketKeys.details(), id] as const,
   comments: (id: string) => [...ticketKeys.detail(id), 'comments'] as const,
   views: () => [...ticketKeys.all, 'views'] as const,
-  clockCounts: () => [...ticketKeys.all, 'clock-counts'] as const,
 };
 
 const getTickets = (filters: TicketFilters & { cursor?: string; limit?: number }, signal?: AbortSignal) =>
@@ -67,22 +65,9 @@ export const ticketQueries = {
     pagedQueryOptions(ticketKeys.list(filters), (cursor, signal) => getTickets({ ...filters, cursor }, signal)),
   /** One page of at most `limit` tickets. */
   page: ticketsPage,
-  /** The today board: open tickets at risk or breached, the soonest due first. */
-  attention: () =>
-    queryOptions({
-      ...ticketsPage({ clock: 'at_risk,breached', open: 'true', sort: 'resolutionDueAt', dir: 'asc' }, boardListLimit),
-      refetchInterval: boardRefresh,
-    }),
   /** The today board: new tickets nobody has acknowledged yet, the oldest first (their response clock runs). */
   waiting: () =>
     queryOptions({ ...ticketsPage({ status: 'new', sort: 'createdAt', dir: 'asc' }, boardListLimit), refetchInterval: boardRefresh }),
-  /** Open tickets counted by clock state (counted by the database). */
-  clockCounts: () =>
-    queryOptions({
-      queryKey: ticketKeys.clockCounts(),
-      queryFn: ({ signal }) => api.get<TicketClockCounts>('/api/tickets/clock-counts', { signal }),
-      refetchInterval: boardRefresh,
-    }),
   /** A ticket with its clocks, visits and repairs. */
   detail: (id: string) =>
     queryOptions({
@@ -91,18 +76,18 @@ export const ticketQueries = {
       // The clock moves on by itself: look again every minute while the page is open.
       refetchInterval: 60_000,
     }),
-  /** The conversation, oldest first; client users get only the public comments. */
+  /** The conversation, oldest first (its newest 1,000: `truncated` says older ones exist); client users get only the public comments. */
   comments: (id: string) =>
     queryOptions({
       queryKey: ticketKeys.comments(id),
-      queryFn: ({ signal }) => api.get<{ items: TicketComment[] }>(`/api/tickets/${encodeURIComponent(id)}/comments`, { signal }),
+      queryFn: ({ signal }) => api.get<CappedList<TicketComment>>(`/api/tickets/${encodeURIComponent(id)}/comments`, { signal }),
       refetchInterval: 60_000,
     }),
   /** The signed-in person's saved list filters, by name. */
   views: () =>
     queryOptions({
       queryKey: ticketKeys.views(),
-      queryFn: ({ signal }) => api.get<{ items: SavedTicketView[] }>('/api/ticket-views', { signal }),
+      queryFn: ({ signal }) => api.get<CappedList<SavedTicketView>>('/api/ticket-views', { signal }),
       staleTime: 5 * 60_000,
     }),
 };

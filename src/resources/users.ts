@@ -3,7 +3,7 @@
 // someone refreshes the assignee and technician pickers too.
 import { queryOptions } from '@tanstack/react-query';
 import type { InviteUserInput, UpdateUserInput } from '@shared/schemas/auth';
-import type { Page } from '@shared/schemas/common';
+import type { CappedList, Page } from '@shared/schemas/common';
 import type { Role } from '@shared/schemas/enums';
 import type { StaffMember, UserSummary } from '@shared/schemas/users';
 import { api } from '@/lib/api-client';
@@ -34,7 +34,7 @@ export const userQueries = {
   staff: () =>
     queryOptions({
       queryKey: userKeys.staff(),
-      queryFn: ({ signal }) => api.get<{ items: StaffMember[] }>('/api/staff', { signal }),
+      queryFn: ({ signal }) => api.get<CappedList<StaffMember>>('/api/staff', { signal }),
       staleTime: 5 * 60_000,
     }),
 };

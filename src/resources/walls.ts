@@ -2,7 +2,7 @@
 // views and pickers, a wall, its cabinets as the wall map draws them) and one request per write.
 import { queryOptions } from '@tanstack/react-query';
 import type { z } from 'zod';
-import type { Page } from '@shared/schemas/common';
+import type { CappedList, Page } from '@shared/schemas/common';
 import type { listWallsQuery, WallCabinet, WallDetail, WallInput, WallPatch, WallSummary } from '@shared/schemas/walls';
 import type { CreateWallFromPlanRequest, SaveWallPlanRequest } from '@shared/schemas/wall-plan';
 import { api } from '@/lib/api-client';
@@ -43,7 +43,7 @@ export const wallQueries = {
   cabinets: (id: string) =>
     queryOptions({
       queryKey: wallKeys.cabinets(id),
-      queryFn: ({ signal }) => api.get<{ items: WallCabinet[] }>(`/api/walls/${encodeURIComponent(id)}/cabinets`, { signal }),
+      queryFn: ({ signal }) => api.get<CappedList<WallCabinet>>(`/api/walls/${encodeURIComponent(id)}/cabinets`, { signal }),
     }),
 };
 

@@ -37,16 +37,15 @@ async function signOutFromUserMenu(page: Page, me: Me) {
   expect((await page.request.get('/api/auth/me')).status()).toBe(401);
 }
 
-const firstName = (name: string) => name.trim().split(/\s+/)[0];
-
 test.describe('office staff', () => {
   test('an admin signs in to the office shell with the administration links, and signs out', async ({ page }) => {
     await signIn(page, 'admin@gridkeep.test');
     await expect(page).toHaveURL(/\/$/);
     const me = await whoAmI(page);
-    expect(me.role).toBe('admin');
+    expect(me).toMatchObject({ role: 'admin', email: 'admin@gridkeep.test', name: 'Marisol Vantreece' });
 
-    await expect(page.getByRole('heading', { level: 1, name: new RegExp(`${firstName(me.name)}$`) })).toBeVisible();
+    // The greeting changes with the hour; the first name is the demo admin's.
+    await expect(page.getByRole('heading', { level: 1, name: /^Good (morning|afternoon|evening), Marisol$/ })).toBeVisible();
     const nav = page.getByRole('navigation', { name: 'Main' });
     for (const label of ['Today', 'Clients', 'Walls', 'Tickets', 'Planner', 'Users', 'Audit log', 'Mailbox']) {
       await expect(nav.getByRole('link', { name: label, exact: true })).toBeVisible();
@@ -65,7 +64,7 @@ test.describe('office staff', () => {
     await signIn(page, 'office@gridkeep.test');
     await expect(page).toHaveURL(/\/$/);
     const me = await whoAmI(page);
-    expect(me.role).toBe('coordinator');
+    expect(me).toMatchObject({ role: 'coordinator', email: 'office@gridkeep.test', name: 'Priya Halloway' });
 
     const nav = page.getByRole('navigation', { name: 'Main' });
     await expect(nav.getByRole('link', { name: 'Tickets', exact: true })).toBeVisible();
@@ -88,9 +87,9 @@ test.describe('technician on a phone', () => {
     await signIn(page, 'tech@gridkeep.test');
     await expect(page).toHaveURL(/\/$/);
     const me = await whoAmI(page);
-    expect(me.role).toBe('technician');
+    expect(me).toMatchObject({ role: 'technician', email: 'tech@gridkeep.test', name: 'Jonah Ellery' });
 
-    await expect(page.getByRole('heading', { level: 1, name: new RegExp(`${firstName(me.name)}$`) })).toBeVisible();
+    await expect(page.getByRole('heading', { level: 1, name: /^Good (morning|afternoon|evening), Jonah$/ })).toBeVisible();
     const nav = page.getByRole('navigation', { name: 'Main' });
     const viewport = page.viewportSize()!;
     for (const label of ['Today', 'Tickets', 'Walls', 'Scan', 'Me']) {
@@ -109,7 +108,7 @@ test.describe('technician on a phone', () => {
     // "Me" is the account page.
     await nav.getByRole('link', { name: 'Me', exact: true }).click();
     await expect(page.getByRole('heading', { level: 1, name: 'Your account' })).toBeVisible();
-    await expect(page.getByText(me.email)).toBeVisible();
+    await expect(page.getByText('tech@gridkeep.test')).toBeVisible();
 
     await signOutFromUserMenu(page, me);
   });
@@ -117,26 +116,16 @@ test.describe('technician on a phone', () => {
 
 test.describe('client portal', () => {
   test("a client contact sees their organisation's portal, and signs out", async ({ page }) => {
-    // The demo has one client contact per organisation: take the first from the admin's list.
-    const login = await page.request.post('/api/auth/login', {
-      data: { email: 'admin@gridkeep.test', password: demoPassword },
-      headers: csrf,
-    });
-    expect(login.status()).toBe(200);
-    const list = await page.request.get('/api/users?role=client&limit=1');
-    expect(list.status()).toBe(200);
-    const [contact] = ((await list.json()) as { items: { email: string; clientName: string | null }[] }).items;
-    expect(contact?.clientName).toBeTruthy();
-    expect((await page.request.post('/api/auth/logout', { headers: csrf })).status()).toBe(204);
-    await page.context().clearCookies();
+    // The demo's Cedar Hollow Fellowship contact (server/db/seed/register.ts).
+    const contact = { email: 'av@cedarhollow.test', name: 'Tobias Wrenfield', clientName: 'Cedar Hollow Fellowship' };
 
     await signIn(page, contact.email);
     await expect(page).toHaveURL(/\/$/);
     const me = await whoAmI(page);
-    expect(me.role).toBe('client');
-    expect(me.clientName).toBe(contact.clientName);
+    expect(me).toMatchObject({ role: 'client', ...contact });
 
-    await expect(page.getByRole('banner').getByText(contact.clientName!, { exact: true })).toBeVisible();
+    await expect(page.getByRole('banner').getByText(contact.clientName, { exact: true })).toBeVisible();
+    await expect(page.getByRole('heading', { level: 1, name: 'Welcome, Tobias' })).toBeVisible();
     const nav = page.getByRole('navigation', { name: 'Main' });
     for (const label of ['Overview', 'Walls', 'Tickets']) {
       await expect(nav.getByRole('link', { name: label, exact: true })).toBeVisible();
@@ -162,8 +151,8 @@ test.describe('signing in', () => {
     await expect(page).toHaveURL(/\/sign-in\?next=%2Fc%2FGK-0042-TEST$/);
     await signIn(page, 'tech@gridkeep.test');
     await expect(page).toHaveURL(/\/c\/GK-0042-TEST$/);
-    // The cabinet screen for that serial (whether or not such a cabinet is registered).
-    await expect(page.getByRole('main')).toContainText('GK-0042-TEST');
+    // The cabinet screen for that serial: no demo cabinet carries it.
+    await expect(page.getByRole('main')).toContainText('No cabinet has the serial “GK-0042-TEST”');
   });
 
   test('a session that ends while the app is open sends the person to sign-in and back', async ({ page }) => {
@@ -179,5 +168,31 @@ test.describe('signing in', () => {
     await signIn(page, 'admin@gridkeep.test');
     await expect(page).toHaveURL(/\/admin\/audit$/);
     await expect(page.getByRole('heading', { level: 1, name: 'Audit log' })).toBeVisible();
+  });
+});
+
+test.describe('choosing a password', () => {
+  test.use({ viewport: { width: 390, height: 844 } });
+
+  // OWASP ASVS 5.0 6.2.11: a password built from the product's or the person's own words is
+  // refused, and the form says why on the field, keeping what was typed.
+  test('the account page refuses a password built from “Gridkeep” and says why on the field', async ({ page }) => {
+    await signIn(page, 'tech@gridkeep.test');
+    await expect(page).not.toHaveURL(/sign-in/);
+    await page.goto('/account');
+    const form = page.getByRole('form', { name: 'Change password' });
+    await form.getByLabel('Current password', { exact: true }).fill(demoPassword);
+    const next = form.getByLabel('New password', { exact: true });
+    await next.fill('Gridkeep2026!');
+    await form.getByRole('button', { name: 'Change password' }).click();
+    await expect(next).toHaveAttribute('aria-invalid', 'true');
+    await expect(form).toContainText('Too easy to guess: it is built from your name, e-mail address, organisation or “Gridkeep”.');
+    await expect(next).toHaveValue('Gridkeep2026!');
+    // Nothing changed: the demo password still signs in.
+    const again = await page.request.post('/api/auth/login', {
+      headers: csrf,
+      data: { email: 'tech@gridkeep.test', password: demoPassword },
+    });
+    expect(again.status()).toBe(200);
   });
 });

@@ -305,7 +305,7 @@ test('a technician does not see dispatch; a client sees their visits with the re
       // A visit's ticket is a link to the ticket, not a dead end.
       const ref = page
         .getByRole('article')
-        .getByRole('link', { name: /^GK-\d+$/ })
+        .getByRole('link', { name: /^\d+\/\d{2}$/ })
         .first();
       const name = (await ref.textContent())!;
       await ref.click();

@@ -162,6 +162,9 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
   // ---- log a module replaced with the van's spare (the repair screen's steps) ----
   await startButton.click();
   await expect(page).toHaveURL(new RegExp(`/repairs/new\\?visitId=${visit.id}`));
+  // The map starts zoomed to fingertip-sized cabinets on a phone: the whole wall is one tap away.
+  const whole = page.getByRole('button', { name: 'Show the whole wall' });
+  if (await whole.isEnabled()) await whole.click();
   await page.getByRole('gridcell', { name: new RegExp(`^C${cabinet.column}·R${cabinet.row},`) }).click();
   await expect(page.getByTestId('repair-cabinet')).toContainText(cabinet.serial);
   await page.getByRole('button', { name: 'Next' }).click();
@@ -287,4 +290,84 @@ test('a technician on a phone opens today’s visit, logs a module from the van,
   await shot(testInfo, client, 'visit-client');
 
   await Promise.all([office.close(), admin.close(), page.context().close(), client.context().close()]);
+});
+
+test('on a ticket visit a reported cell starts its repair and any other cell opens its cabinet card, on this visit', async ({
+  browser,
+}, testInfo) => {
+  test.setTimeout(120_000);
+  // ---- the office: a ticket on one cabinet of a wall, and a visit for it today ----
+  const office = await signInToApi(browser, 'office@gridkeep.test');
+  const staff = await getJson<{ items: { id: string; name: string; role: string }[] }>(office.request, '/api/staff');
+  const technician = staff.items.find((s) => s.role === 'technician' && s.name === 'Jonah Ellery')!;
+  const walls = await getJson<{ items: { id: string; name: string; siteId: string }[] }>(office.request, '/api/walls?limit=100');
+  let picked: { wall: (typeof walls.items)[number]; reported: Cabinet; other: Cabinet } | undefined;
+  for (const wall of walls.items) {
+    const installed = (await getJson<{ items: Cabinet[] }>(office.request, `/api/walls/${wall.id}/cabinets`)).items.filter(
+      (c) => c.status === 'installed',
+    );
+    // Two cabinets side by side: the map, centred on the reported one, shows its neighbour too.
+    const reported = installed.find((c) => installed.some((o) => o.row === c.row && o.column === c.column + 1));
+    if (reported) {
+      picked = { wall, reported, other: installed.find((o) => o.row === reported.row && o.column === reported.column + 1)! };
+      break;
+    }
+  }
+  expect(picked, 'a demo wall with two installed cabinets side by side').toBeDefined();
+  const { wall, reported, other } = picked!;
+  const opened = await office.request.post('/api/tickets', {
+    headers: csrf,
+    data: {
+      siteId: wall.siteId,
+      wallId: wall.id,
+      cells: [{ column: reported.column, row: reported.row }],
+      title: 'Cabinet dark after a power cut',
+      priority: 'normal',
+    },
+  });
+  expect(opened.status(), await opened.text()).toBe(201);
+  const ticket = (await opened.json()) as { id: string };
+  const booked = await office.request.post('/api/visits', {
+    headers: csrf,
+    data: {
+      kind: 'ticket',
+      ticketId: ticket.id,
+      windowStart: new Date(Date.now() - 30 * 60_000).toISOString(),
+      windowEnd: new Date(Date.now() + 120 * 60_000).toISOString(),
+      technicianIds: [technician.id],
+    },
+  });
+  expect(booked.status(), await booked.text()).toBe(201);
+  const visit = (await booked.json()) as { id: string };
+
+  // ---- the technician's phone: the visit shows the wall from behind, the reported cell marked ----
+  const { page } = await signIn(browser, 'tech@gridkeep.test', phone);
+  await page.goto(`/visits/${visit.id}`);
+  const map = page.getByTestId('visit-wall-map');
+  await expect(map.getByRole('button', { name: /^Rear/ })).toHaveAttribute('aria-pressed', 'true');
+  const cell = (c: Cabinet) => map.getByRole('gridcell', { name: new RegExp(`^C${c.column}·R${c.row},`) });
+  await expect(cell(reported)).toHaveAttribute('aria-selected', 'true');
+  await expect(cell(other)).not.toHaveAttribute('aria-selected', 'true');
+  await shot(testInfo, page, 'visit-map');
+
+  // Another cell: its cabinet card, whose "Log repair" records the repair on this visit.
+  await cell(other).click();
+  const dialog = page.getByRole('dialog', { name: `Cabinet at C${other.column}·R${other.row}` });
+  await expect(dialog).toBeVisible();
+  await expect(dialog).toContainText(other.serial);
+  const logRepair = dialog.getByRole('link', { name: /Log (a )?repair/ });
+  await expect(logRepair).toHaveAttribute('href', new RegExp(`visitId=${visit.id}`));
+  await expect(logRepair).toHaveAttribute('href', new RegExp(`col=${other.column}&row=${other.row}`));
+  await attachShot(testInfo, page, 'visit-cabinet-card');
+  await dialog.getByRole('button', { name: 'Close', exact: true }).last().click();
+  await expect(dialog).toBeHidden();
+
+  // The reported cell: straight to its repair, on this visit.
+  await cell(reported).click();
+  await expect(page).toHaveURL(new RegExp(`/repairs/new\\?visitId=${visit.id}.*col=${reported.column}&row=${reported.row}`));
+  await expect(page.getByTestId('repair-cabinet')).toContainText(reported.serial);
+
+  // Cancel the visit so that the demo's day stays as it was for other tests.
+  await office.request.patch(`/api/visits/${visit.id}`, { headers: csrf, data: { status: 'cancelled', cancelReason: 'Test visit' } });
+  await Promise.all([office.close(), page.context().close()]);
 });

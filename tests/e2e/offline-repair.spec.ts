@@ -84,9 +84,16 @@ const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR
 const cell = (page: Page, c: { column: number; row: number }) =>
   page.getByRole('gridcell', { name: new RegExp(`^C${c.column}·R${c.row},`) });
 
+/** On a phone the map starts zoomed to fingertip-sized cabinets: a cabinet anywhere is tapped from the whole wall. */
+async function tapCell(page: Page, c: { column: number; row: number }) {
+  const whole = page.getByRole('button', { name: 'Show the whole wall' });
+  if (await whole.isEnabled()) await whole.click();
+  await cell(page, c).click();
+}
+
 /** Map → cabinet → receiving card → no signal → reseated (no spare) → notes. */
 async function logReseatedCard(page: Page, cabinet: Cabinet, notes: string, shot?: (name: string) => Promise<void>) {
-  await cell(page, cabinet).click();
+  await tapCell(page, cabinet);
   await expect(page.getByTestId('repair-cabinet')).toContainText(cabinet.serial);
   await shot?.('02-cabinet');
   await page.getByRole('button', { name: 'Next' }).click();
@@ -245,7 +252,7 @@ test('a repair refused on arrival (the cabinet moved meanwhile) waits for the te
     .getByRole('navigation', { name: 'Repair steps' })
     .getByRole('button', { name: /^Position/ })
     .click();
-  await cell(page, other).click(); // the cabinet now sits at its neighbour's old position
+  await tapCell(page, other); // the cabinet now sits at its neighbour's old position
   await expect(page.getByTestId('repair-cabinet')).toContainText(cabinet.serial);
   for (let i = 0; i < 4; i++) await page.getByRole('button', { name: 'Next' }).click();
   await expect(page.getByRole('textbox', { name: 'Notes' })).toHaveValue(`Reseated; ${marker}`);

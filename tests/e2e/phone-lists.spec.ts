@@ -2,7 +2,7 @@ import { expect, test, type Locator, type Page } from '@playwright/test';
 import { attachShot, csrf, desktop, escapeRegExp, getJson, phone, signIn } from './support.js';
 
 // Lists on a phone are cards with targets a thumb can hit, the walls list says how full each
-// wall is, the client's map of a wide wall zooms to fingertip-sized cells, and the office's
+// wall is, the client's map of a wide wall starts zoomed to fingertip-sized cells, and the office's
 // tickets list opens on the open tickets with its last column in reach at 1366 px.
 // Target size: WCAG 2.2 SC 2.5.5 (Target Size, Enhanced) asks at least 44 × 44 CSS px.
 
@@ -104,7 +104,9 @@ test('on a phone the walls and cabinets lists are cards with large targets, and 
   await context.close();
 });
 
-test('a client on a phone zooms a 12-column wall until its cells are 44 px, with a hint saying so', async ({ browser }, testInfo) => {
+test('a client on a phone sees a 12-column wall start zoomed to 44 px cells, the whole wall one tap away', async ({
+  browser,
+}, testInfo) => {
   test.setTimeout(120_000);
   // A client user whose organisation has a wall of at least 12 columns (25 px cells at 390 px).
   const adminSession = await signIn(browser, admin);
@@ -137,10 +139,25 @@ test('a client on a phone zooms a 12-column wall until its cells are 44 px, with
     const box = (await cell.boundingBox())!;
     return Math.min(box.width, box.height);
   };
-  expect(await size(), 'the whole wall leaves small cells').toBeLessThan(MIN_TARGET);
-  await expect(page.getByTestId('small-cells-hint')).toContainText('Zoom in');
+  // Whole, the wall's cells would be about 25 px: the map starts zoomed so they are a fingertip.
+  await expect.poll(size, { message: 'a cell at the start' }).toBeGreaterThanOrEqual(MIN_TARGET);
+  const map = page.getByRole('grid');
+  const lastColumn = page.getByRole('gridcell', { name: new RegExp(`^C${wall.columns}·R1,`) });
+  const inside = async (target: Locator) => {
+    const [frame, box] = [(await map.boundingBox())!, (await target.boundingBox())!];
+    return box.x >= frame.x - 0.5 && box.x + box.width <= frame.x + frame.width + 0.5;
+  };
+  expect(await inside(cell), 'C1 in view at the start (top-left)').toBe(true);
+  expect(await inside(lastColumn), 'the last column is off screen at the start').toBe(false);
+  await attachShot(testInfo, page, 'new-ticket-map-start-phone');
 
-  // The hint's way: the map's own zoom, until a cell is a fingertip, then tap.
+  // The whole wall is one tap away, and shows every column; the zoom brings the cells back.
+  const whole = page.getByRole('button', { name: 'Show the whole wall' });
+  expect((await whole.boundingBox())!.height).toBeGreaterThanOrEqual(MIN_TARGET - 0.5);
+  await whole.click();
+  await expect.poll(() => inside(lastColumn), { message: 'every column after "whole wall"' }).toBe(true);
+  expect(await inside(cell)).toBe(true);
+  expect(await size()).toBeLessThan(MIN_TARGET);
   const zoomIn = page.getByRole('button', { name: 'Zoom in' });
   expect((await zoomIn.boundingBox())!.height).toBeGreaterThanOrEqual(MIN_TARGET - 0.5);
   for (let i = 0; i < 6 && (await size()) < MIN_TARGET; i++) await zoomIn.click();
@@ -202,5 +219,62 @@ test('the office tickets list opens on the open tickets, and its last column sta
   expect(reach.lastRight).toBeLessThanOrEqual(reach.boxRight + 0.5);
   expect(reach.boxHeight, 'the table box fits the screen').toBeLessThan(reach.screen);
   await attachShot(testInfo, page, 'tickets-1366');
+  await context.close();
+});
+
+test('on a phone the filters fold behind a Filters button that counts them; the search and the first card stay on screen', async ({
+  browser,
+}, testInfo) => {
+  test.setTimeout(120_000);
+  const { context, page } = await signIn(browser, office, phone);
+  const filtersButton = page.getByRole('button', { name: /^Filters/ });
+
+  // Every list with filters: the first card on the first screen, the search (if any) in sight.
+  for (const [path, name, search] of [
+    ['/tickets', 'Service tickets', 'Search'],
+    ['/walls', 'Walls', 'Search'],
+    ['/cabinets', 'Cabinets', 'Serial'],
+    ['/visits', 'Visits', null],
+  ] as const) {
+    await page.goto(path);
+    const first = page.getByRole('list', { name, exact: true }).getByRole('listitem').first();
+    await expect(first).toBeVisible();
+    await expect(first.getByRole('link').first(), `the first card of ${path} without scrolling`).toBeInViewport({ ratio: 1 });
+    if (search) await expect(page.getByLabel(search, { exact: true })).toBeInViewport();
+    await expect(filtersButton).toHaveAttribute('aria-expanded', 'false');
+    expect((await filtersButton.boundingBox())!.height).toBeGreaterThanOrEqual(MIN_TARGET - 0.5);
+  }
+
+  // The tickets list: its status filter (open tickets) counts; opening shows the filters; a second one adds to the count.
+  await page.goto('/tickets');
+  const priority = page.getByLabel('Priority', { exact: true });
+  await expect(filtersButton).toHaveAttribute('aria-expanded', 'false');
+  await expect(priority).toBeHidden();
+  await expect(filtersButton.getByTestId('active-filter-count')).toHaveText(/^1\b/);
+  await filtersButton.click();
+  await expect(filtersButton).toHaveAttribute('aria-expanded', 'true');
+  await expect(priority).toBeVisible();
+  await priority.selectOption('high');
+  await expect(page).toHaveURL(/[?&]priority=high/);
+  await expect(filtersButton.getByTestId('active-filter-count')).toHaveText(/^2\b/);
+  await attachShot(testInfo, page, 'tickets-filters-open-phone');
+  // Folded again, the count still says what is applied.
+  await filtersButton.click();
+  await expect(priority).toBeHidden();
+  await expect(filtersButton).toHaveAccessibleName(/Filters\s*2 applied/);
+
+  // A list with nothing applied shows no count until a filter is chosen.
+  await page.goto('/walls');
+  await expect(filtersButton.getByTestId('active-filter-count')).toHaveCount(0);
+  await filtersButton.click();
+  const client = page.getByLabel('Client', { exact: true });
+  const clientId = await client.locator('option').nth(1).getAttribute('value');
+  await client.selectOption(clientId!);
+  await expect(filtersButton.getByTestId('active-filter-count')).toHaveText(/^1\b/);
+
+  // On a desk the filters stand in a row, with no Filters button.
+  await page.setViewportSize(desktop.viewport!);
+  await expect(filtersButton).toHaveCount(0);
+  await expect(page.getByLabel('Client', { exact: true })).toBeVisible();
   await context.close();
 });

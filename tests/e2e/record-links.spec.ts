@@ -51,7 +51,7 @@ test('from a ticket: the client page lists its tickets and visits; a map cell op
 
   // ---- the ticket names its client, site and wall as links ----
   await page.goto(`/tickets/${ticket.id}`);
-  const details = page.getByRole('complementary', { name: 'Ticket details' });
+  const details = page.getByRole('navigation', { name: 'Installation' });
   await expect(details.getByRole('link', { name: ticket.site.name, exact: true })).toHaveAttribute('href', `/sites/${ticket.site.id}`);
   await expect(details.getByRole('link', { name: ticket.wall!.name, exact: true })).toHaveAttribute('href', `/walls/${ticket.wall!.id}`);
 
@@ -120,16 +120,16 @@ test('a visit on a ticket opens its page, and for the office its edit dialog in 
   const visitsCard = page.getByRole('list', { name: 'Visits for this ticket' });
   await expect(visitsCard.locator(`a[href="/visits/${visit.id}"]`)).toBeVisible();
 
-  // ---- a toast: bottom left, clear of the details panel on the right ----
-  const triage = page.getByRole('form', { name: 'Triage' });
+  // ---- a toast: bottom left, clear of the handling strip under the title ----
+  const triage = page.getByRole('form', { name: 'Handling' });
   const priority = triage.getByLabel('Priority');
   await priority.selectOption(ticket!.priority === 'low' ? 'normal' : 'low');
   await triage.getByRole('button', { name: /^Save/ }).click();
   const toast = page.getByText(`${ticket!.ref} is updated.`);
   await expect(toast).toBeVisible();
-  const aside = await boxOf(page.getByRole('complementary', { name: 'Ticket details' }));
+  const aside = await boxOf(triage);
   const toastBox = await boxOf(toast.locator('xpath=..'));
-  expect(overlaps(toastBox, aside), 'the toast covers the ticket details').toBe(false);
+  expect(overlaps(toastBox, aside), 'the toast covers the handling strip').toBe(false);
   await attachShot(testInfo, page, 'ticket-toast');
   expect(toastBox.x + toastBox.width, 'the toast sits on the left').toBeLessThan(page.viewportSize()!.width / 2);
 

@@ -1,5 +1,5 @@
 import { expect, test, type BrowserContext, type Page } from '@playwright/test';
-import { escapeRegExp, phone, signIn } from './support.js';
+import { escapeRegExp, getJson, phone, signIn } from './support.js';
 
 // The ticket journey across the three audiences, against the real app with the seeded demo
 // data: a client reports a fault from a phone (two tapped cabinets and a photo), the office
@@ -86,7 +86,7 @@ test('a client opens a ticket with a photo and tapped cells; the office replies;
   await expect(page).toHaveURL(/\/tickets\/[0-9a-f-]{36}$/, { timeout: 20_000 });
   const ticketUrl = page.url();
   await expect(page.getByRole('heading', { level: 1 })).toContainText(title);
-  const ref = ((await page.getByRole('heading', { level: 1 }).textContent()) ?? '').match(/GK-\d+/)?.[0];
+  const ref = ((await page.getByRole('heading', { level: 1 }).textContent()) ?? '').match(/\d+\/\d{2}/)?.[0];
   expect(ref).toBeTruthy();
   await expect(page.getByText('Reported cabinets (2):')).toBeVisible();
   await expect(page.getByText('C1·R1, C2·R1')).toBeVisible();
@@ -114,12 +114,11 @@ test('a client opens a ticket with a photo and tapped cells; the office replies;
   await expect(desk.page.getByRole('heading', { level: 1 })).toContainText(ref!);
 
   const reply = `We will bring two cabinets from the site kit tomorrow (${ref}).`;
-  await expect(desk.page.getByRole('radio', { name: 'Public reply' })).toBeChecked();
-  await desk.page.getByLabel('Reply to the client').fill(reply);
-  await desk.page.getByRole('button', { name: 'Send public reply' }).click();
+  await desk.page.getByLabel('Message to the client, or a note for staff').fill(reply);
+  await desk.page.getByRole('button', { name: 'Send to client' }).click();
   const comment = desk.page.getByRole('article').filter({ hasText: reply });
   await expect(comment).toBeVisible();
-  await expect(comment).not.toContainText('Internal — not visible to the client');
+  await expect(comment).not.toContainText('Staff note — not shown to the client');
   await shot(desk.page, 'office-ticket-desktop', false);
 
   // The client sees the reply on their ticket.
@@ -137,4 +136,82 @@ test('a client opens a ticket with a photo and tapped cells; the office replies;
   await expect(adminSession.page.getByText(new RegExp(`/tickets/${ticketId}`))).toBeVisible();
 
   await Promise.all([client!.context.close(), desk.context.close(), adminSession.context.close()]);
+});
+
+test('the office writes a staff note and a message to the client: the client reads the message, never the note', async ({
+  browser,
+}, testInfo) => {
+  test.setTimeout(120_000);
+  const clientEmail = 'av@cedarhollow.test';
+  const client = await signIn(browser, clientEmail, phone);
+  const open = await getJson<{ items: { id: string; ref: string }[] }>(client.page.request, '/api/tickets?open=true&limit=100');
+  expect(open.items.length, 'an open ticket of the Cedar Hollow demo client').toBeGreaterThan(0);
+  const ticket = open.items[0];
+  const stamp = Date.now().toString(36);
+  const note = `The spare for this wall is at the bench, not in the van (${stamp}).`;
+  const message = `We come on Tuesday morning with a replacement cabinet (${stamp}).`;
+
+  const desk = await signIn(browser, office);
+  const page = desk.page;
+  await page.goto(`/tickets/${ticket.id}`);
+  const box = page.getByLabel('Message to the client, or a note for staff');
+  // There is no public/internal switch: one box, two different buttons.
+  await expect(page.getByRole('radio')).toHaveCount(0);
+  await expect(page.getByRole('button', { name: 'Send to client' })).toHaveAccessibleDescription(/get an e-mail/);
+  await expect(page.getByRole('button', { name: 'Save as staff note' })).toHaveAccessibleDescription(/the client never sees it/);
+
+  // A failed send keeps what was typed.
+  await page.route('**/api/tickets/*/comments', (route) => (route.request().method() === 'POST' ? route.abort() : route.fallback()));
+  await box.fill(note);
+  await page.getByRole('button', { name: 'Save as staff note' }).click();
+  await expect(page.getByRole('form', { name: 'Write in the logbook' }).getByRole('alert')).toBeVisible();
+  await expect(box).toHaveValue(note);
+  await page.unroute('**/api/tickets/*/comments');
+
+  await page.getByRole('button', { name: 'Save as staff note' }).click();
+  const noteEntry = page.getByRole('article', { name: /^Staff note by / }).filter({ hasText: note });
+  await expect(noteEntry).toBeVisible();
+  await expect(box).toHaveValue('');
+  await box.fill(message);
+  await page.getByRole('button', { name: 'Send to client' }).click();
+  const messageEntry = page.getByRole('article', { name: /^Message by / }).filter({ hasText: message });
+  await expect(messageEntry).toBeVisible();
+
+  // The note says what it is with a lock and words, on the same white as every entry: no amber or yellow tint.
+  await expect(noteEntry).toContainText('Staff note — not shown to the client');
+  await expect(noteEntry.locator('svg.lucide-lock')).toBeVisible();
+  await expect(messageEntry).not.toContainText('Staff note');
+  const look = async (entry: typeof noteEntry) =>
+    entry.evaluate((el) => {
+      const style = getComputedStyle(el);
+      return { background: style.backgroundColor, borderStyle: style.borderTopStyle };
+    });
+  const noteLook = await look(noteEntry);
+  expect(noteLook.background).toBe('rgb(255, 255, 255)');
+  expect(noteLook.background).toBe((await look(messageEntry)).background);
+  expect(noteLook.borderStyle).toBe('dashed');
+  // Nothing around the note is tinted either (the list, the logbook).
+  const tints = await noteEntry.evaluate((el) => {
+    const found: string[] = [];
+    for (let node: Element | null = el; node; node = node.parentElement) {
+      const m = getComputedStyle(node).backgroundColor.match(/\d+/g)?.map(Number);
+      // A warm tint: red and green well above blue (amber 50 is 255, 248, 234; amber 100 is 254, 237, 198).
+      if (m && (m[3] ?? 1) > 0 && m[0] - m[2] > 15 && m[1] - m[2] > 10)
+        found.push(`${node.tagName} ${getComputedStyle(node).backgroundColor}`);
+    }
+    return found;
+  });
+  expect(tints).toEqual([]);
+  await testInfo.attach('office-logbook', { body: await page.screenshot({ fullPage: true }), contentType: 'image/png' });
+
+  // The client reads the message and never the note.
+  await client.page.goto(`/tickets/${ticket.id}`);
+  await expect(client.page.getByRole('article').filter({ hasText: message })).toBeVisible();
+  await expect(client.page.getByText(note)).toHaveCount(0);
+  await expect(client.page.getByText('Staff note')).toHaveCount(0);
+  await expect(client.page.getByRole('button', { name: 'Save as staff note' })).toHaveCount(0);
+  await expect(client.page.getByRole('button', { name: 'Send', exact: true })).toBeVisible();
+  await testInfo.attach('client-logbook-phone', { body: await client.page.screenshot({ fullPage: true }), contentType: 'image/png' });
+
+  await Promise.all([client.context.close(), desk.context.close()]);
 });

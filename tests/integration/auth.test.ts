@@ -4,7 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { db } from '../../server/db/client.js';
 import { authTokens, auditEvents, sessions, signInAttempts, users } from '../../server/db/schema/accounts.js';
 import { outboundMail } from '../../server/db/schema/mail.js';
-import { retryAfterSeconds, signIn as signInService, throttleDelaySeconds, throttlePolicy } from '../../server/services/auth.js';
+import { throttleDelaySeconds, throttlePolicy, workAfterAnswers } from '../../server/services/auth.js';
 import { hashOptions } from '../../server/services/passwords.js';
 import { anonymous, createOrganisation, createUser, signIn, signedIn, TEST_PASSWORD, unique } from '../factories/index.js';
 
@@ -138,10 +138,10 @@ describe('session tokens (RFC 8725)', () => {
       ?.value;
     expect((await session.post('/api/auth/logout')).status).toBe(204);
     expect((await session.get('/api/auth/me')).status).toBe(401);
-    if (stolen) {
-      const replay = await anonymous().get('/api/auth/me').set('Cookie', `gridkeep_session=${stolen}`);
-      expect(replay.status).toBe(401);
-    }
+    // The cookie a thief copied before sign-out (a JWT: header.payload.signature), replayed.
+    expect(stolen).toMatch(/^[\w-]+\.[\w-]+\.[\w-]+$/);
+    const replay = await anonymous().get('/api/auth/me').set('Cookie', `gridkeep_session=${stolen}`);
+    expect(replay.status).toBe(401);
   });
 
   it('stops working when the user is disabled', async () => {
@@ -208,7 +208,7 @@ describe('session tokens (RFC 8725)', () => {
 describe('throttling', () => {
   it('slows an account down after repeated failures, with a Retry-After', async () => {
     const user = await createUser({ role: 'technician' });
-    for (let i = 0; i < throttlePolicy.account.freeFailures; i++) {
+    for (let i = 0; i < throttlePolicy.accountAddress.freeFailures; i++) {
       const res = await anonymous()
         .post('/api/auth/login')
         .set(csrf)
@@ -220,12 +220,12 @@ describe('throttling', () => {
     expect(res.status).toBe(429);
     expect(res.body.error.code).toBe('too_many_requests');
     expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
-    expect(Number(res.headers['retry-after'])).toBeLessThanOrEqual(throttlePolicy.account.firstDelayS);
+    expect(Number(res.headers['retry-after'])).toBeLessThanOrEqual(throttlePolicy.accountAddress.firstDelayS);
   });
 
   it('lets the account in again once the delay has passed', async () => {
     const user = await createUser({ role: 'technician' });
-    for (let i = 0; i < throttlePolicy.account.freeFailures; i++) {
+    for (let i = 0; i < throttlePolicy.accountAddress.freeFailures; i++) {
       await anonymous()
         .post('/api/auth/login')
         .set(csrf)
@@ -246,23 +246,6 @@ describe('throttling', () => {
     expect(throttleDelaySeconds(p.freeFailures, p)).toBe(p.firstDelayS);
     expect(throttleDelaySeconds(p.freeFailures + 1, p)).toBe(p.firstDelayS * 2);
     expect(throttleDelaySeconds(p.freeFailures + 100, p)).toBe(15 * 60);
-  });
-
-  it('slows down one address trying many accounts', async () => {
-    // 203.0.113.0/24 is reserved for documentation (RFC 5737): no real caller has it.
-    const ip = `203.0.113.${Math.floor(Math.random() * 250) + 1}`;
-    await db().delete(signInAttempts).where(eq(signInAttempts.ip, ip));
-    await db()
-      .insert(signInAttempts)
-      .values(
-        Array.from({ length: throttlePolicy.address.freeFailures }, (_, i) => ({ email: `spray${i}@example.test`, ip, succeeded: false })),
-      );
-    expect(await retryAfterSeconds(`${unique('fresh')}@example.test`, ip)).toBeGreaterThan(0);
-    const user = await createUser({ role: 'coordinator' });
-    await expect(signInService({ email: user.email, password: TEST_PASSWORD }, { ip, userAgent: 'test' })).rejects.toMatchObject({
-      status: 429,
-    });
-    await db().delete(signInAttempts).where(eq(signInAttempts.ip, ip));
   });
 });
 
@@ -312,6 +295,7 @@ describe('invite and reset links', () => {
     expect(known.status).toBe(202);
     expect(unknown.status).toBe(202);
     expect(known.body).toEqual(unknown.body);
+    await workAfterAnswers();
     const token = await linkFromLatestMail(user.email);
     const first = await anonymous().post('/api/auth/redeem').set(csrf).send({ token, password: 'brand new passphrase' });
     expect(first.status).toBe(200);
@@ -323,8 +307,10 @@ describe('invite and reset links', () => {
   it('a second reset link replaces the first', async () => {
     const user = await createUser({ role: 'technician' });
     await anonymous().post('/api/auth/forgot').set(csrf).send({ email: user.email });
+    await workAfterAnswers();
     const first = await linkFromLatestMail(user.email);
     await anonymous().post('/api/auth/forgot').set(csrf).send({ email: user.email });
+    await workAfterAnswers();
     const second = await linkFromLatestMail(user.email);
     expect(second).not.toBe(first);
     expect((await anonymous().get(`/api/auth/tokens/${first}`)).status).toBe(404);

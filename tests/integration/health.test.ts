@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app.js';
+import { signedIn } from '../factories/index.js';
 
 describe('GET /api/health', () => {
   it('answers ok when the database answers', async () => {
@@ -8,6 +9,14 @@ describe('GET /api/health', () => {
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ status: 'ok', database: 'ok' });
     expect(res.headers['cache-control']).toBe('no-store');
+  });
+
+  it('answers a signed-in caller the same, without a Retry-After while all is up', async () => {
+    const office = await signedIn('coordinator');
+    const res = await office.get('/api/health');
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ status: 'ok', database: 'ok' });
+    expect(res.headers['retry-after']).toBeUndefined();
   });
 
   it('answers unknown API paths with the error shape', async () => {
@@ -30,5 +39,6 @@ describe('GET /api/health', () => {
       .send('{"broken":');
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('malformed_json');
+    expect(res.body.error.fields).toEqual({ body: 'Not valid JSON.' });
   });
 });

@@ -187,6 +187,67 @@ describe('comments', () => {
     expect(recipients(replies[0])).toContain('site.manager@client.test');
   });
 
+  it('never mails a client their own reply through a contact linked to their account under another address', async () => {
+    const author = await createUser({ role: 'client', clientId: org.client.id, name: 'Hollis Linked' });
+    // Listed under a personal address; signs in under the team's portal address.
+    const personal = `${unique('h.linked')}@client.test`;
+    const linked = await office.post('/api/contacts', {
+      clientId: org.client.id,
+      siteId: org.site.id,
+      name: 'Hollis Linked',
+      email: personal,
+      userId: author.id,
+    });
+    expect(linked.status, JSON.stringify(linked.body)).toBe(201);
+    expect(linked.body.userId).toBe(author.id);
+    const detail = await office.get(`/api/clients/${org.client.id}`);
+    expect(detail.body.contacts.find((c: { id: string }) => c.id === linked.body.id)?.userId).toBe(author.id);
+    expect(detail.body.users.map((u: { id: string }) => u.id)).toContain(author.id);
+
+    const session = await signIn(author);
+    const t = await openTicket(session, 'Linked contact check');
+    const res = await session.post(`/api/tickets/${t.id}/comments`, { body: 'Still dark.', visibility: 'public' });
+    expect(res.status).toBe(201);
+
+    const replies = await delivered(new RegExp(`^New reply on ${t.ref}:`));
+    expect(replies).toHaveLength(1);
+    expect(recipients(replies[0])).not.toContain(personal);
+    expect(recipients(replies[0])).not.toContain(author.email);
+    expect(recipients(replies[0])).toContain('site.manager@client.test');
+
+    // When the office replies, the linked contact hears about it like anyone else.
+    await office.post(`/api/tickets/${t.id}/comments`, { body: 'On our way.', visibility: 'public' });
+    const officeReplies = (await delivered(new RegExp(`^New reply on ${t.ref}:`))).filter((m) => textOf(m.mail).includes('On our way.'));
+    expect(officeReplies).toHaveLength(1);
+    expect(recipients(officeReplies[0])).toContain(personal);
+  });
+
+  it('links a contact only to a user of the same organisation, and to one contact of it', async () => {
+    const other = await createOrganisation();
+    const stranger = await createUser({ role: 'client', clientId: other.client.id });
+    const refused = await office.post('/api/contacts', { clientId: org.client.id, name: 'Wrong link', userId: stranger.id });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields.userId).toBe('Not a user of this client.');
+    const staffUser = await signedIn('technician');
+    const staffLink = await office.post('/api/contacts', { clientId: org.client.id, name: 'Staff link', userId: staffUser.user.id });
+    expect(staffLink.status).toBe(400);
+
+    const mine = await createUser({ role: 'client', clientId: org.client.id });
+    const first = await office.post('/api/contacts', { clientId: org.client.id, name: 'First link', userId: mine.id });
+    expect(first.status).toBe(201);
+    const second = await office.post('/api/contacts', { clientId: org.client.id, name: 'Second link' });
+    const taken = await office.patch(`/api/contacts/${second.body.id}`, { userId: mine.id });
+    expect(taken.status).toBe(409);
+    expect(taken.body.error.code).toBe('user_linked');
+    const cleared = await office.patch(`/api/contacts/${first.body.id}`, { userId: null });
+    expect(cleared.status).toBe(200);
+    expect(cleared.body.userId).toBeNull();
+
+    const clientView = await (await signIn(mine)).get(`/api/clients/${org.client.id}`);
+    expect(clientView.status).toBe(200);
+    expect(clientView.body.users).toBeUndefined();
+  });
+
   it('mails each client address once, however its contact entry is spelt', async () => {
     const reporter = await createUser({ role: 'client', clientId: org.client.id });
     await db()

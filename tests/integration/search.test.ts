@@ -1,6 +1,8 @@
 import { randomInt } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { db } from '../../server/db/client.js';
+import { eq } from 'drizzle-orm';
+import { tickets } from '../../server/db/schema/tickets.js';
 import { cabinets } from '../../server/db/schema/walls.js';
 import { anonymous, createOrganisation, signedIn, unique, type Session } from '../factories/index.js';
 
@@ -36,8 +38,11 @@ async function openTicket(org: typeof mine, title: string, description = '') {
     description,
   });
   expect(res.status).toBe(201);
-  return res.body as { id: string; number: number; ref: string };
+  return res.body as { id: string; number: number; ref: string; createdAt: string };
 }
+
+/** The year a ticket was opened, in UTC: its two last digits are in the reference. */
+const openedIn = (t: { createdAt: string }) => String(new Date(t.createdAt).getUTCFullYear());
 
 async function place(org: typeof mine, serial: string, column: number, batch = '') {
   const res = await office.post(`/api/walls/${org.wall!.id}/cabinets`, { serial, column, row: 1, batch });
@@ -55,7 +60,12 @@ describe('the search box', () => {
 
   it('finds a ticket by its number, written as it is said or typed', async () => {
     const ticket = await openTicket(mine, unique('Dark cabinet'));
-    for (const q of [ticket.ref, ticket.ref.toLowerCase(), ticket.ref.replace('-', ''), `${ticket.number}`, `#${ticket.number}`]) {
+    const [n, year] = [ticket.number, openedIn(ticket)];
+    expect(ticket.ref).toBe(`${n}/${year.slice(2)}`);
+    const forms = [ticket.ref, `${n} / ${year.slice(2)}`, `${n}/${year}`, `${n}-${year.slice(2)}`, `${n}`, `#${n}`];
+    // References written before the year was part of them, as e-mails sent then still show them.
+    const before = [`GK-${n}`, `gk${n}`, `GK ${n}`];
+    for (const q of [...forms, ...before]) {
       const res = await office.get(`/api/search?q=${encodeURIComponent(q)}`);
       expect(res.status).toBe(200);
       expect(res.body.tickets[0], q).toMatchObject({
@@ -129,7 +139,7 @@ describe('the search box', () => {
     const client = await me.get(`/api/search?q=${word}`);
     expect(idsOf(client.body.tickets)).toEqual([own.id]);
     expect(client.body.counts.tickets).toBe(1);
-    const byNumber = await me.get(`/api/search?q=${other.ref}`);
+    const byNumber = await me.get(`/api/search?q=${encodeURIComponent(other.ref)}`);
     expect(byNumber.body.tickets).toEqual([]);
     expect(byNumber.body.counts.tickets).toBe(0);
   });
@@ -142,6 +152,44 @@ describe('the search box', () => {
     expect(res.body.batches).toEqual([]);
     expect(res.body.counts).toMatchObject({ cabinets: 0, batches: 0 });
     expect((await me.get(`/api/search/serials?tail=${tail}`)).body).toEqual({ items: [], total: 0 });
+  });
+});
+
+describe('the tickets list and the merge dialog, searched by number', () => {
+  it('read a ticket number the same way as the search box', async () => {
+    const ticket = await openTicket(mine, unique('Flicker'));
+    const [n, year] = [ticket.number, openedIn(ticket)];
+    for (const q of [ticket.ref, `${n} / ${year.slice(2)}`, `${n}/${year}`, `${n}`, `#${n}`, `GK-${n}`, `gk${n}`]) {
+      // Other tickets may hold these digits in their words; this one holds none of the forms.
+      const list = await office.get(`/api/tickets?q=${encodeURIComponent(q)}`);
+      expect(list.status).toBe(200);
+      expect(list.body.items, q).toContainEqual(expect.objectContaining({ id: ticket.id, ref: ticket.ref }));
+      // The merge dialog asks for the client's open tickets with the same `q`.
+      const candidates = await office.get(`/api/tickets?clientId=${mine.client.id}&open=true&sort=updatedAt&q=${encodeURIComponent(q)}`);
+      expect(idsOf(candidates.body.items), q).toContain(ticket.id);
+    }
+  });
+
+  it('writes the year the ticket was opened, not the year it is read in', async () => {
+    const ticket = await openTicket(mine, unique('Old case'));
+    // Opened half an hour before midnight UTC on New Year's Eve: a ticket of the old year.
+    await db()
+      .update(tickets)
+      .set({ createdAt: new Date('2025-12-31T23:30:00Z') })
+      .where(eq(tickets.id, ticket.id));
+    const ref = `${ticket.number}/25`;
+    expect((await office.get(`/api/tickets/${ticket.id}`)).body.ref).toBe(ref);
+    const list = await office.get(`/api/tickets?q=${encodeURIComponent(ref)}`);
+    expect(list.body.items).toContainEqual(expect.objectContaining({ id: ticket.id, ref }));
+    const found = await office.get(`/api/search?q=${encodeURIComponent(ref)}`);
+    expect(found.body.tickets[0]).toMatchObject({ id: ticket.id, ref });
+  });
+
+  it('does not take a number with a year no ticket was opened in for a reference', async () => {
+    const ticket = await openTicket(mine, unique('Dim row'));
+    const res = await office.get(`/api/tickets?q=${encodeURIComponent(`${ticket.number}/1999`)}`);
+    expect(res.status).toBe(200);
+    expect(idsOf(res.body.items)).not.toContain(ticket.id);
   });
 });
 

@@ -1,37 +1,38 @@
 // The most important security property of the product: a client user never sees or changes
 // another organisation's record, by any route, id, filter or search. Every answer about
 // another organisation's record is 404, exactly as for a record that does not exist.
+import { eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { db } from '../../server/db/client.js';
 import { contacts } from '../../server/db/schema/clients.js';
-import { cabinets, controllers } from '../../server/db/schema/walls.js';
-import { repairs, visits } from '../../server/db/schema/visits.js';
+import { attachments } from '../../server/db/schema/files.js';
+import { savedViews, ticketComments, tickets } from '../../server/db/schema/tickets.js';
+import { cabinets } from '../../server/db/schema/walls.js';
 import { createOrganisation, signedIn, unique, type Session } from '../factories/index.js';
+import { createTheirRecords, tinyPng, type TheirRecords } from './route-table.js';
 
 let mine: Awaited<ReturnType<typeof createOrganisation>>;
-let theirs: Awaited<ReturnType<typeof createOrganisation>>;
+let theirs: TheirRecords['org'];
+let their: TheirRecords;
 let me: Session;
-let theirCabinet: typeof cabinets.$inferSelect;
-let theirController: typeof controllers.$inferSelect;
-let theirContact: typeof contacts.$inferSelect;
-let theirVisit: typeof visits.$inferSelect;
-let theirRepair: typeof repairs.$inferSelect;
+let theirCabinet: TheirRecords['cabinet'];
+let theirController: TheirRecords['controller'];
+let theirContact: TheirRecords['contact'];
+let theirVisit: TheirRecords['visit'];
+let theirRepair: TheirRecords['repair'];
 
 beforeAll(async () => {
   mine = await createOrganisation({ withWall: true });
-  theirs = await createOrganisation({ withWall: true });
+  their = await createTheirRecords();
+  ({
+    org: theirs,
+    cabinet: theirCabinet,
+    controller: theirController,
+    contact: theirContact,
+    visit: theirVisit,
+    repair: theirRepair,
+  } = their);
   me = await signedIn('client', mine.client.id);
-  [theirCabinet] = await db()
-    .insert(cabinets)
-    .values({
-      serial: unique('THEIRS').toUpperCase(),
-      cabinetModelId: theirs.wall!.cabinetModelId,
-      wallId: theirs.wall!.id,
-      column: 1,
-      row: 1,
-      batch: 'X',
-    })
-    .returning();
   await db()
     .insert(cabinets)
     .values({
@@ -42,43 +43,6 @@ beforeAll(async () => {
       row: 1,
       batch: 'Y',
     });
-  [theirController] = await db()
-    .insert(controllers)
-    .values({ wallId: theirs.wall!.id, model: 'Processor', serial: unique('CTL').toUpperCase(), outputs: 4 })
-    .returning();
-  [theirContact] = await db()
-    .insert(contacts)
-    .values({ clientId: theirs.client.id, name: 'Their contact', email: 'them@example.test' })
-    .returning();
-  const start = new Date(Date.now() - 3 * 3600_000);
-  [theirVisit] = await db()
-    .insert(visits)
-    .values({
-      clientId: theirs.client.id,
-      siteId: theirs.site.id,
-      wallId: theirs.wall!.id,
-      kind: 'maintenance',
-      status: 'completed',
-      windowStart: start,
-      windowEnd: new Date(start.getTime() + 2 * 3600_000),
-      summary: 'Their visit',
-      completedAt: new Date(),
-    })
-    .returning();
-  [theirRepair] = await db()
-    .insert(repairs)
-    .values({
-      clientId: theirs.client.id,
-      wallId: theirs.wall!.id,
-      visitId: theirVisit.id,
-      cabinetId: theirCabinet.id,
-      column: 1,
-      row: 1,
-      component: 'fan',
-      fault: 'other',
-      action: 'cleaned',
-    })
-    .returning();
 });
 
 const json = { 'X-Requested-With': 'gridkeep' };
@@ -102,6 +66,9 @@ describe('a client user and another organisation’s records', () => {
     expect(res.body.error.code).toBe('not_found');
   });
 
+  // Staff-only writes: a client user stops at the role gate (404, as for a route that is not
+  // there) before any organisation filter is reached. They keep the gate honest; the writes a
+  // client user may make are tried across organisations below.
   it.each([
     ['edit their client', 'patch', () => `/api/clients/${theirs.client.id}`, { name: 'Mine now' }],
     ['edit their site', 'patch', () => `/api/sites/${theirs.site.id}`, { name: 'Mine now' }],
@@ -113,9 +80,10 @@ describe('a client user and another organisation’s records', () => {
     ['edit their contact', 'patch', () => `/api/contacts/${theirContact.id}`, { name: 'x' }],
     ['change their visit', 'patch', () => `/api/visits/${theirVisit.id}`, { summary: 'Mine now' }],
     ['close their visit', 'post', () => `/api/visits/${theirVisit.id}/close`, { summary: 'x', checklist: [], unsignedReason: 'x' }],
-  ] as const)('trying to %s is 404', async (_what, method, path, body) => {
+  ] as const)('trying to %s stops at the role gate (404)', async (_what, method, path, body) => {
     const res = await me[method](path(), typeof body === 'function' ? body() : body);
     expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('not_found');
   });
 
   it('importing into their wall is 404', async () => {
@@ -182,5 +150,84 @@ describe('a client user and another organisation’s records', () => {
     expect(wall.body).not.toHaveProperty('internalNotes');
     const map = await me.get(`/api/walls/${mine.wall!.id}/cabinets`);
     expect(map.body.items).toHaveLength(1);
+  });
+});
+
+// The writes a client user may make, each aimed at another organisation's record. Only the
+// organisation filter (server/services/scope.ts tenantWhere) keeps them out: each is named
+// "[tenant filter]", and scripts/check-tenant-tests.ts removes that filter and expects every one
+// of them to fail. OWASP ASVS 5.0 V8.2.2 (data-specific access) and V8.4.1 (tenant isolation) —
+// from memory.
+describe('a client user writing to another organisation’s records [tenant filter]', () => {
+  it('closing their resolved ticket is 404, and the ticket stays resolved [tenant filter]', async () => {
+    const res = await me.patch(`/api/tickets/${their.ticket.id}`, { status: 'closed' });
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('not_found');
+    const [row] = await db().select().from(tickets).where(eq(tickets.id, their.ticket.id));
+    expect(row.status).toBe('resolved');
+  });
+
+  it('commenting on their ticket is 404, and no comment is stored [tenant filter]', async () => {
+    const res = await me.post(`/api/tickets/${their.ticket.id}/comments`, { body: 'Not my ticket' });
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('not_found');
+    const rows = await db().select().from(ticketComments).where(eq(ticketComments.ticketId, their.ticket.id));
+    expect(rows.map((r) => r.body)).toEqual(['Their comment']);
+  });
+
+  it('attaching a photo to their ticket is 404, and nothing is stored [tenant filter]', async () => {
+    const res = await me.agent
+      .post(`/api/tickets/${their.ticket.id}/attachments`)
+      .set(json)
+      .attach('file', tinyPng, { filename: 'photo.png', contentType: 'image/png' });
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('not_found');
+    const rows = await db().select().from(attachments).where(eq(attachments.ticketId, their.ticket.id));
+    expect(rows.map((r) => r.id)).toEqual([their.attachment.id]);
+  });
+
+  it('opening a ticket at their site is refused, naming the site, and no ticket is stored [tenant filter]', async () => {
+    const res = await me.post('/api/tickets', { siteId: theirs.site.id, title: 'Opened on their site', priority: 'low' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toHaveProperty('siteId');
+    const rows = await db().select().from(tickets).where(eq(tickets.siteId, theirs.site.id));
+    expect(rows.map((r) => r.id)).toEqual([their.ticket.id]);
+  });
+
+  it('reading their ticket, its comments and its attachments is 404 [tenant filter]', async () => {
+    for (const path of [
+      `/api/tickets/${their.ticket.id}`,
+      `/api/tickets/${their.ticket.id}/comments`,
+      `/api/tickets/${their.ticket.id}/attachments`,
+      `/api/attachments/${their.attachment.id}`,
+    ]) {
+      const res = await me.get(path);
+      expect(res.status, path).toBe(404);
+    }
+  });
+});
+
+describe('deleting another organisation’s records', () => {
+  it('their saved ticket view: 404, and it is still there', async () => {
+    const res = await me.delete(`/api/ticket-views/${their.view.id}`);
+    expect(res.status).toBe(404);
+    expect(await db().select().from(savedViews).where(eq(savedViews.id, their.view.id))).toHaveLength(1);
+  });
+
+  it('their contact: 404, and it is still there', async () => {
+    const res = await me.delete(`/api/contacts/${theirContact.id}`);
+    expect(res.status).toBe(404);
+    expect(await db().select().from(contacts).where(eq(contacts.id, theirContact.id))).toHaveLength(1);
+  });
+
+  it('their ticket photo: 404, and it is still there', async () => {
+    const res = await me.delete(`/api/attachments/${their.attachment.id}`);
+    expect(res.status).toBe(404);
+    expect(await db().select().from(attachments).where(eq(attachments.id, their.attachment.id))).toHaveLength(1);
+  });
+
+  it('a reorder point: 404 (stock is the office’s)', async () => {
+    const res = await me.delete(`/api/reorder-points?partId=${crypto.randomUUID()}&locationId=${crypto.randomUUID()}`);
+    expect(res.status).toBe(404);
   });
 });

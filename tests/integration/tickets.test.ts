@@ -1,7 +1,6 @@
 import { eq, sql } from 'drizzle-orm';
 import ICAL from 'ical.js';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { dueAt } from '../../shared/calc/service-clock.js';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { closeDb, db } from '../../server/db/client.js';
 import { contacts } from '../../server/db/schema/clients.js';
 import { outboundMail } from '../../server/db/schema/mail.js';
@@ -82,7 +81,8 @@ describe('opening a ticket', () => {
       cellLabels: ['C4·R2', 'C5·R2'],
       wall: { id: org.wall!.id },
     });
-    expect(t.ref).toMatch(/^GK-\d+$/);
+    // The reference: the number and the two-digit UTC year the ticket was opened (ticketRef).
+    expect(t.ref).toBe(`${t.number}/${String(new Date(t.createdAt).getUTCFullYear()).slice(-2)}`);
     // Factory plan, high priority: respond in 4 h, resolve in 24 h, round the clock.
     const created = new Date(t.createdAt).getTime();
     expect(created).toBeGreaterThanOrEqual(before - 1000);
@@ -114,16 +114,25 @@ describe('opening a ticket', () => {
     const bOrg = await createOrganisation({ timeZone: 'America/New_York' });
     const plan = await createServicePlan({ clockMode: 'business', businessDays: [1, 2, 3, 4, 5], dayStart: '08:00', dayEnd: '18:00' });
     await db().execute(sql`update clients set service_plan_id = ${plan.id} where id = ${bOrg.client.id}`);
-    const res = await office.post('/api/tickets', { siteId: bOrg.site.id, title: 'Controller fan noise', priority: 'normal' });
-    const calendar = { days: [1, 2, 3, 4, 5], start: '08:00', end: '18:00' };
-    const created = new Date(res.body.createdAt);
-    // The clock itself is checked against hand-worked examples in shared/calc/service-clock.test.ts.
-    expect(res.body.responseDueAt).toBe(
-      dueAt({ start: created, hours: 8, mode: 'business', timeZone: 'America/New_York', calendar }).toISOString(),
-    );
-    expect(res.body.resolutionDueAt).toBe(
-      dueAt({ start: created, hours: 72, mode: 'business', timeZone: 'America/New_York', calendar }).toISOString(),
-    );
+    // Opened on Friday 6 March 2026 at 16:30 in New York (EST, UTC−5), the weekend before US
+    // daylight saving time starts (Sunday 8 March 2026, second Sunday of March: 15 U.S.C. 260a).
+    vi.useFakeTimers({ toFake: ['Date'], now: new Date('2026-03-06T21:30:00Z') });
+    let res;
+    try {
+      res = await office.post('/api/tickets', { siteId: bOrg.site.id, title: 'Controller fan noise', priority: 'normal' });
+    } finally {
+      vi.useRealTimers();
+    }
+    expect(res.status).toBe(201);
+    expect(res.body.createdAt).toBe('2026-03-06T21:30:00.000Z');
+    // Due times worked by hand (factory plan, normal: respond in 8 h, resolve in 72 h, business
+    // hours Monday–Friday 08:00–18:00):
+    // response: Friday 16:30–18:00 is 1.5 h; the other 6.5 h from Monday 9 March 08:00 (now EDT,
+    // UTC−4) → 14:30 EDT = 18:30 UTC.
+    expect(res.body.responseDueAt).toBe('2026-03-09T18:30:00.000Z');
+    // resolution: 1.5 h on Friday leaves 70.5 h; Monday 9 to Tuesday 17 March is seven working
+    // days of 10 h (70 h), leaving 0.5 h on Wednesday 18 March → 08:30 EDT = 12:30 UTC.
+    expect(res.body.resolutionDueAt).toBe('2026-03-18T12:30:00.000Z');
   });
 });
 
@@ -296,7 +305,7 @@ describe('triage and the clock', () => {
     const b = await open(clientUser, { cells: [{ column: 2, row: 1 }] });
     const res = await office.post(`/api/tickets/${b.id}/merge`, { intoTicketId: a.id });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ status: 'closed', mergedInto: { id: a.id } });
+    expect(res.body).toMatchObject({ status: 'closed', mergedInto: { id: a.id, ref: a.ref } });
     const into = await office.get(`/api/tickets/${a.id}`);
     expect(into.body.cellLabels).toEqual(['C1·R1', 'C2·R1']);
     expect((await clientUser.post(`/api/tickets/${b.id}/merge`, { intoTicketId: a.id })).status).toBe(404);

@@ -515,7 +515,11 @@ describe('working a visit', () => {
       });
     expect(pdf.status).toBe(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
-    expect(pdf.headers['content-disposition']).toMatch(/^attachment; filename="Visit report \d{4}-\d{2}-\d{2} .+ GK-\d+\.pdf"/);
+    // The ticket's reference with a dash for its slash, which a file name cannot hold: "… 12-26.pdf" for 12/26.
+    expect(pdf.headers['content-disposition']).toMatch(
+      new RegExp(`^attachment; filename="Visit report \\d{4}-\\d{2}-\\d{2} .+ ${t.ref.replace('/', '-')}\\.pdf"`),
+    );
+    expect(t.ref).toMatch(/^\d+\/\d{2}$/);
     // ISO 32000-1 §7.5.2: a PDF file begins with "%PDF-".
     const body = pdf.body as Buffer;
     expect(body.subarray(0, 5).toString('latin1')).toBe('%PDF-');

@@ -74,9 +74,17 @@ export const signInAttempts = pgTable(
     ip: text().notNull(),
     succeeded: boolean().notNull(),
     userId: uuid().references(() => users.id, { onDelete: 'set null' }),
+    /** What was tried: signing in, the current password on a change, or asking for a reset link. */
+    purpose: text().notNull().default('sign_in'),
+    /** The known-device cookie's id when the browser presented a valid one (OWASP device cookies). */
+    deviceId: text(),
     createdAt: createdAt(),
   },
-  (t) => [index('sign_in_attempts_email_idx').on(t.email, t.createdAt), index('sign_in_attempts_ip_idx').on(t.ip, t.createdAt)],
+  (t) => [
+    index('sign_in_attempts_email_idx').on(t.email, t.createdAt),
+    index('sign_in_attempts_ip_idx').on(t.ip, t.createdAt),
+    check('sign_in_attempts_purpose', sql`${t.purpose} in ('sign_in', 'password_check', 'reset')`),
+  ],
 );
 
 /** Who changed what, when, with the record before and after. Append-only. */

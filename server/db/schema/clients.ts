@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm';
-import { boolean, check, index, integer, jsonb, pgTable, text, unique, uuid } from 'drizzle-orm/pg-core';
+import { boolean, check, index, integer, jsonb, pgTable, text, unique, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core';
 import type { TicketPriority } from '../../../shared/schemas/enums.js';
+import { users } from './accounts.js';
 import { at, createdAt, updatedAt } from './columns.js';
 import { clockModeEnum } from './enums.js';
 
@@ -93,8 +94,15 @@ export const contacts = pgTable(
     phone: text().notNull().default(''),
     /** Receives ticket updates and visit reports by e-mail. */
     receivesUpdates: boolean().notNull().default(true),
+    /** The client user this contact signs in as (their sign-in address may differ from `email`). */
+    userId: uuid().references((): AnyPgColumn => users.id, { onDelete: 'set null' }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index('contacts_client_idx').on(t.clientId), index('contacts_site_idx').on(t.siteId)],
+  (t) => [
+    index('contacts_client_idx').on(t.clientId),
+    index('contacts_site_idx').on(t.siteId),
+    index('contacts_user_idx').on(t.userId),
+    unique('contacts_client_user_key').on(t.clientId, t.userId),
+  ],
 );

@@ -10,7 +10,7 @@ export const tickets = pgTable(
   'tickets',
   {
     id: uuid().primaryKey().defaultRandom(),
-    /** The number people say on the phone: GK-1042. */
+    /** Unique on its own; people say it with the year it was opened: 1042/26 (ticketRef). */
     number: serial().notNull(),
     clientId: uuid().notNull(),
     siteId: uuid().notNull(),

@@ -154,6 +154,8 @@ export const cabinetEvents = pgTable(
     fromStatus: cabinetStatusEnum(),
     toStatus: cabinetStatusEnum(),
     note: text().notNull().default(''),
+    /** Whether the client's own users may read the note; staff only unless staff chose to show it. */
+    noteForClient: boolean().notNull().default(false),
     actorId: uuid().references(() => users.id, { onDelete: 'set null' }),
     createdAt: createdAt(),
   },

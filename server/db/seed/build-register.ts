@@ -117,6 +117,9 @@ export function addAccounts({ rows, rand, clock, id, ids }: Demo, passwordHash: 
       createdAt: joined,
       updatedAt: joined,
     });
+    // The contact of the same name signs in under the portal address (e.g. av@…, not their own).
+    const contact = rows.contacts.find((c) => c.clientId === ids.client[u.client] && c.name === u.name && !c.userId);
+    if (contact) contact.userId = ids.user[k];
   }
 }
 

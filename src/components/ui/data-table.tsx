@@ -17,6 +17,7 @@ import { ColumnChooser } from '@/components/ui/data-table-column-chooser';
 import { useColumnVisibility, withExpander } from '@/components/ui/data-table-columns';
 import { CsvExportButton, type CsvValue } from '@/components/ui/data-table-csv';
 import { DataTableHead } from '@/components/ui/data-table-head';
+import { FilterBar } from '@/components/ui/filters';
 import { Pager } from '@/components/ui/data-table-pager';
 import { useMediaQuery } from '@/lib/use-media-query';
 
@@ -171,8 +172,10 @@ export function DataTable<T>({
     <div className="space-y-3">
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div className="flex w-full min-w-0 flex-wrap items-end gap-3 sm:w-auto sm:flex-1">
-          {toolbar}
-          {onPhone && onSortingChange ? <CardSort table={table} /> : null}
+          <FilterBar>
+            {toolbar}
+            {onPhone && onSortingChange ? <CardSort table={table} /> : null}
+          </FilterBar>
         </div>
         {onPhone ? null : (
           <div className="flex items-center gap-2">

@@ -220,3 +220,41 @@ export function rulerStep(cellPx: number, minPx = 28): number {
   for (const step of [2, 5, 10, 20, 50, 100]) if (cellPx * step >= minPx) return step;
   return 100;
 }
+
+/** The smallest cell a finger can tap on a phone, in CSS px (the product's 44 px target rule). */
+export const MIN_TAP_PX = 44;
+
+/**
+ * Where the map starts, given its size on screen in CSS px. The whole wall when its cells are
+ * big enough to tap; otherwise zoomed in just enough that a cell is at least `minCellPx` (as far
+ * as `maxScale` allows), centred on `focus` (the reported or selected cells) or, without one, at
+ * the top-left corner with the column and row numbers in view. "Show the whole wall" undoes it.
+ */
+export function startViewBox(
+  layout: WallLayout,
+  size: { width: number; height: number },
+  maxScale: number,
+  focus: readonly GridPosition[] = [],
+  minCellPx = MIN_TAP_PX,
+): Rect {
+  const { content } = layout;
+  if (size.width <= 0 || size.height <= 0) return content;
+  // The SVG shows the whole drawing with "meet": the tighter of the two fits sets the scale.
+  const pxPerUnit = Math.min(size.width / content.width, size.height / content.height);
+  const cellPx = Math.min(layout.cellWidth, layout.cellHeight) * pxPerUnit;
+  if (cellPx >= minCellPx) return content;
+  // A hair over the minimum, so rounding on screen never leaves a cell at 43.99 px.
+  const scale = Math.min(maxScale, (minCellPx / cellPx) * 1.02);
+  const width = content.width / scale;
+  const height = content.height / scale;
+  const inGrid = focus.filter((p) => p.column >= 1 && p.column <= layout.columns && p.row >= 1 && p.row <= layout.rows);
+  if (inGrid.length === 0) return clampViewBox({ x: content.x, y: content.y, width, height }, content, maxScale);
+  const rects = inGrid.map(layout.cellRect);
+  const left = Math.min(...rects.map((r) => r.x));
+  const right = Math.max(...rects.map((r) => r.x + r.width));
+  const top = Math.min(...rects.map((r) => r.y));
+  const bottom = Math.max(...rects.map((r) => r.y + r.height));
+  const cx = (left + right) / 2;
+  const cy = (top + bottom) / 2;
+  return clampViewBox({ x: cx - width / 2, y: cy - height / 2, width, height }, content, maxScale);
+}

@@ -13,11 +13,15 @@ import { maxScaleFor, wallLayout, type GridPosition, type Rect, type WallView } 
 import { Legend } from '@/components/wall-map/wall-map-legend';
 import { Rulers } from '@/components/wall-map/wall-map-rulers';
 import { viewCaptions, WallMapToolbar } from '@/components/wall-map/wall-map-toolbar';
+import { useMediaQuery } from '@/lib/use-media-query';
 
 export type { GridPosition } from '@/components/wall-map/wall-map-geometry';
 export type { CellTone } from '@/components/wall-map/wall-map-tones';
 export { cellName, type WallMapCell } from '@/components/wall-map/wall-map-cell-model';
 export { WallViewToggle } from '@/components/wall-map/wall-view-toggle';
+
+/** A phone's width (Tailwind's `sm` break, as the lists use) or a finger as the pointer: the map starts at tappable cells. */
+const touchFirstQuery = '(max-width: 639.98px), (pointer: coarse)';
 
 export interface WallMapGeometry {
   /** In SVG user units, already mirrored for the rear view. */
@@ -51,6 +55,7 @@ export interface WallMapProps {
 /**
  * The wall's grid of cabinets as an SVG: front or rear view, zoom (wheel with Ctrl or when
  * zoomed in, pinch, + − buttons) and pan (drag), one tab stop with arrow keys between cells.
+ * On a phone it starts zoomed so a cabinet is at least 44 px (see `startViewBox`).
  * Pure presentation: the caller passes the cells and handles activation.
  */
 export function WallMap({
@@ -70,8 +75,9 @@ export function WallMap({
   const cellLayerRef = useRef<SVGGElement>(null);
   const layout = useMemo(() => wallLayout(columns, rows, view, cellAspect), [columns, rows, view, cellAspect]);
   const maxScale = maxScaleFor(columns, rows);
-  const { vb, vbRef, setVb } = useWallViewBox(layout, `${columns}x${rows}x${cellAspect}`, view, maxScale);
   const size = useWallMapSize(svgRef);
+  const touchFirst = useMediaQuery(touchFirstQuery);
+  const { vb, vbRef, setVb } = useWallViewBox(layout, `${columns}x${rows}x${cellAspect}`, view, maxScale, size, selected, touchFirst);
   const { textLevel, step, rulerFont, scale } = drawingScale(size, vb, layout);
   const { cellRows, legend } = useCellModels(cells, columns, rows);
   const { anySelected, selectedByRow } = useSelection(selected);

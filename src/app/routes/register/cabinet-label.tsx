@@ -111,7 +111,7 @@ export function Component() {
         <CabinetFacts cabinet={cabinet} />
       </Card>
       <Card title="History">
-        <CabinetHistory events={cabinet.history} />
+        <CabinetHistory events={cabinet.history} truncated={cabinet.historyTruncated} />
       </Card>
     </div>
   );

@@ -106,7 +106,7 @@ export function Component() {
               </ul>
             )}
           </Card>
-          <ContactsCard clientId={client.id} contacts={client.contacts} sites={client.sites} canEdit={canEdit} />
+          <ContactsCard clientId={client.id} contacts={client.contacts} sites={client.sites} users={client.users} canEdit={canEdit} />
         </div>
         <div className="space-y-5">
           <ServicePlanCard plan={client.servicePlan} />

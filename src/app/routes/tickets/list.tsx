@@ -140,7 +140,7 @@ function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
         </div>
         <FilterSearch
           label="Search"
-          placeholder="Title or GK-number"
+          placeholder="Title or number (1041/26)"
           value={params.get('q') ?? ''}
           onChange={(q) => update('q', q || undefined)}
         />
@@ -152,7 +152,7 @@ function PortalTickets({ audience }: { audience: 'client' | 'technician' }) {
         {...pagedQueryProps(query)}
         empty={
           filters.q
-            ? { title: 'No tickets match this search', description: 'Try another word or the GK-number.' }
+            ? { title: 'No tickets match this search', description: 'Try another word or the ticket number.' }
             : isClient
               ? show === 'open'
                 ? { title: 'No open tickets', description: 'If something is wrong with a wall, tell us here.', action: newTicketButton }

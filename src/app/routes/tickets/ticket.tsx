@@ -1,7 +1,7 @@
 import type { Position } from '@shared/schemas/cabinets';
 import type { TicketDetail } from '@shared/schemas/tickets';
 import { useQuery } from '@tanstack/react-query';
-import { ArrowLeft, CircleCheck, GitMerge, Wrench } from 'lucide-react';
+import { ArrowLeft, CircleCheck, Grid3x3, Wrench } from 'lucide-react';
 import { useState } from 'react';
 import { data, Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
@@ -13,13 +13,12 @@ import { paths } from '@/config/paths';
 import { CabinetCellDialog } from '@/features/cabinets/components/cabinet-card';
 import { useUpdateTicket } from '@/features/tickets/api/mutations';
 import { AttachmentsPanel } from '@/features/tickets/components/attachments-panel';
-import { Conversation } from '@/features/tickets/components/conversation';
-import { TicketClocks } from '@/features/tickets/components/ticket-clocks';
-import { TicketFacts, TicketVisits } from '@/features/tickets/components/ticket-facts';
+import { HandlingStrip } from '@/features/tickets/components/handling-strip';
+import { Logbook } from '@/features/tickets/components/logbook';
+import { TicketStateLine } from '@/features/tickets/components/ticket-clocks';
+import { InstallationLine, TicketVisits } from '@/features/tickets/components/ticket-facts';
 import { TicketRepairs } from '@/features/tickets/components/ticket-repairs';
-import { ClockBadge, PriorityBadge, TicketStatusBadge } from '@/features/tickets/components/ticket-status';
-import { TicketSummary } from '@/features/tickets/components/ticket-summary';
-import { TriagePanel } from '@/features/tickets/components/triage-panel';
+import { TicketWall } from '@/features/tickets/components/ticket-summary';
 import { requireUser } from '@/app/auth-guard';
 import { errorMessage } from '@/lib/errors';
 import { queryClient } from '@/lib/query-client';
@@ -66,15 +65,35 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
   const office = isOffice(user);
   const timeZone = ticket.siteTimeZone;
   const closed = ticket.status === 'closed' || Boolean(ticket.mergedInto);
-  // Beside the ticket on a wide screen; on a phone right at the top, where the thumb is.
+  // Two columns from 1024 px: the wall on the left, the logbook on the right. On a phone the
+  // logbook comes first (what happened and the box to answer in), then the wall. The order is the
+  // DOM's, so it is also the reading order; keyed, the columns move without losing a draft.
   const wide = useMediaQuery('(min-width: 1024px)');
-  const triage = forClient ? null : <TriagePanel ticket={ticket} office={office} timeZone={timeZone} />;
   // A cell of the map opens its cabinet: the same card as on the wall page.
   const [openCell, setOpenCell] = useState<Position | null>(null);
+
+  const wallColumn = (
+    <section key="wall" aria-labelledby="ticket-wall-heading" className="min-w-0 space-y-4">
+      <h2 id="ticket-wall-heading" className="flex items-center gap-2 text-lg font-semibold text-ink-950">
+        <Grid3x3 className="h-5 w-5 text-ink-600" aria-hidden="true" />
+        The wall
+      </h2>
+      <TicketWall ticket={ticket} onOpenCell={setOpenCell} />
+      <AttachmentsPanel ticketId={ticket.id} canUpload={!closed} />
+      <TicketVisits visits={ticket.visits} timeZone={timeZone} office={office} />
+      <TicketRepairs repairs={ticket.repairs} timeZone={timeZone} />
+    </section>
+  );
+  const logColumn = (
+    <div key="log" className="min-w-0">
+      <Logbook ticket={ticket} staff={!forClient} closed={closed} />
+    </div>
+  );
 
   return (
     <>
       <PageHeader
+        className="!mb-4"
         eyebrow={
           <Link to={paths.tickets.getHref()} className="inline-flex items-center gap-1 hover:underline">
             <ArrowLeft className="h-4 w-4" aria-hidden="true" /> {audience === 'technician' ? 'My tickets' : 'Tickets'}
@@ -86,15 +105,7 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
             {ticket.title}
           </>
         }
-        description={
-          <span className="mt-1 flex flex-wrap items-center gap-2">
-            <TicketStatusBadge status={ticket.status} forClient={forClient} size="md" />
-            <PriorityBadge priority={ticket.priority} size="md" />
-            {ticket.clockState && !closed ? (
-              <ClockBadge state={ticket.clockState} what="Service-plan clock" className="px-2.5 py-1 text-sm" />
-            ) : null}
-          </span>
-        }
+        description={<TicketStateLine ticket={ticket} forClient={forClient} />}
         actions={
           !forClient && !closed ? (
             <ButtonLink
@@ -109,6 +120,8 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
         }
       />
 
+      <InstallationLine ticket={ticket} forClient={forClient} />
+
       {ticket.mergedInto ? (
         <Alert tone="info" title={`Merged into ${ticket.mergedInto.ref}`} className="mb-4">
           <p>
@@ -116,31 +129,15 @@ function TicketPage({ ticket }: { ticket: TicketDetail }) {
             <Link to={paths.ticket.getHref(ticket.mergedInto.id)} className="link">
               {ticket.mergedInto.ref}
             </Link>
-            .
+            . Merged tickets take no more changes.
           </p>
         </Alert>
       ) : null}
       {forClient && ticket.nextStatuses.includes('closed') ? <CloseTicketBanner ticket={ticket} /> : null}
+      {forClient ? null : <HandlingStrip ticket={ticket} office={office} timeZone={timeZone} />}
 
-      <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_20rem]">
-        <div className="min-w-0 space-y-5">
-          {triage && !wide ? triage : null}
-          <TicketClocks ticket={ticket} timeZone={timeZone} />
-          <TicketSummary ticket={ticket} onOpenCell={setOpenCell} />
-          <AttachmentsPanel ticketId={ticket.id} canUpload={!closed} />
-          <Conversation ticketId={ticket.id} staff={!forClient} closed={closed} />
-        </div>
-        <aside className="min-w-0 space-y-5" aria-label="Ticket details">
-          {triage && wide ? triage : null}
-          <TicketFacts ticket={ticket} forClient={forClient} />
-          <TicketVisits visits={ticket.visits} timeZone={timeZone} office={office} />
-          <TicketRepairs repairs={ticket.repairs} timeZone={timeZone} />
-          {ticket.mergedInto ? (
-            <p className="flex items-center gap-2 text-sm text-stone-600">
-              <GitMerge className="h-4 w-4" aria-hidden="true" /> Merged tickets take no more changes.
-            </p>
-          ) : null}
-        </aside>
+      <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)] lg:items-start">
+        {wide ? [wallColumn, logColumn] : [logColumn, wallColumn]}
       </div>
       {ticket.wall ? (
         <CabinetCellDialog wall={ticket.wall} position={openCell} onClose={() => setOpenCell(null)} canOperate={!forClient} />

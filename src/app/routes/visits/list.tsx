@@ -6,7 +6,7 @@ import { useMemo } from 'react';
 import type { LoaderFunctionArgs, ShouldRevalidateFunctionArgs } from 'react-router-dom';
 import { ButtonLink } from '@/components/ui/button';
 import { pagedQueryProps } from '@/components/ui/data-table';
-import { FilterSelect } from '@/components/ui/filters';
+import { FilterBar, FilterSelect } from '@/components/ui/filters';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { VisitCardList, VisitTable } from '@/features/visits/components/visit-list';
@@ -101,7 +101,9 @@ export function Component() {
         <VisitTable {...list} toolbar={toolbar} empty={empty} />
       ) : (
         <div className="space-y-4">
-          <div className="flex flex-wrap items-end gap-3">{toolbar}</div>
+          <div className="flex flex-wrap items-end gap-3">
+            <FilterBar>{toolbar}</FilterBar>
+          </div>
           <VisitCardList {...list} linkToVisit showClient empty={empty} />
         </div>
       )}

@@ -1,13 +1,16 @@
 import { TZDate } from '@date-fns/tz';
+import type { Position } from '@shared/schemas/cabinets';
 import type { VisitDetail } from '@shared/schemas/visits';
 import { format, parseISO } from 'date-fns';
 import { ArrowLeft, CalendarCog, Lock } from 'lucide-react';
+import { useState } from 'react';
 import { Link, useLocation, useParams } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
+import { CabinetCellDialog } from '@/features/cabinets/components/cabinet-card';
 import { ServiceCaution } from '@/features/walls/components/service-caution';
 import { VisitActions } from '@/features/visits/components/visit-actions';
 import { VisitChecklist } from '@/features/visits/components/visit-checklist';
@@ -52,6 +55,8 @@ function VisitPage({ visit }: { visit: VisitDetail }) {
   const working = visit.can.work && open;
   // Arrived here from the close form: say the report went out (the mail itself is queued with the close).
   const justClosed = (useLocation().state as { closed?: boolean } | null)?.closed === true && visit.status === 'completed';
+  // A cell tapped on the wall map: its cabinet card, with "Log repair" on this visit while it is worked.
+  const [openCell, setOpenCell] = useState<Position | null>(null);
   return (
     <>
       <PageHeader
@@ -93,7 +98,7 @@ function VisitPage({ visit }: { visit: VisitDetail }) {
         {working ? <ServiceCaution /> : null}
         <VisitPlace visit={visit} />
         <VisitContacts contacts={visit.contacts} />
-        <VisitWork visit={visit} />
+        <VisitWork visit={visit} onOpenCell={setOpenCell} />
         <VisitChecklist
           items={checklist.items}
           onToggle={working ? checklist.toggle : undefined}
@@ -116,6 +121,15 @@ function VisitPage({ visit }: { visit: VisitDetail }) {
           </Card>
         ) : null}
       </div>
+      {visit.wall ? (
+        <CabinetCellDialog
+          wall={visit.wall}
+          position={openCell}
+          onClose={() => setOpenCell(null)}
+          canOperate={audience !== 'client'}
+          visitId={working ? visit.id : undefined}
+        />
+      ) : null}
     </>
   );
 }

@@ -1,4 +1,4 @@
-import { changePasswordInput, passwordMinLength } from '@shared/schemas/auth';
+import { changePasswordInput, newPasswordHint } from '@shared/schemas/auth';
 import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
@@ -27,14 +27,7 @@ export function ChangePasswordForm({ email }: { email: string }) {
       ) : null}
       <input type="email" name="username" autoComplete="username" value={email} readOnly hidden />
       <TextField name="currentPassword" label="Current password" type="password" autoComplete="current-password" revealable />
-      <TextField
-        name="newPassword"
-        label="New password"
-        type="password"
-        autoComplete="new-password"
-        revealable
-        hint={`At least ${passwordMinLength} characters; common passwords are refused.`}
-      />
+      <TextField name="newPassword" label="New password" type="password" autoComplete="new-password" revealable hint={newPasswordHint} />
       <SubmitButton>Change password</SubmitButton>
     </Form>
   );

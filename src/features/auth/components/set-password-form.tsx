@@ -1,4 +1,4 @@
-import { passwordMinLength, redeemTokenInput, type LinkToken } from '@shared/schemas/auth';
+import { newPasswordHint, redeemTokenInput, type LinkToken } from '@shared/schemas/auth';
 import { useNavigate } from 'react-router-dom';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
 import { TextField } from '@/components/ui/text-field';
@@ -28,7 +28,7 @@ export function SetPasswordForm({ token, link }: { token: string; link: LinkToke
         autoComplete="new-password"
         revealable
         autoFocus
-        hint={`At least ${passwordMinLength} characters. A few unrelated words make a strong password that is easy to type on a phone.`}
+        hint={newPasswordHint}
       />
       <SubmitButton className="w-full" size="lg">
         {link.kind === 'invite' ? 'Set password and sign in' : 'Save new password and sign in'}

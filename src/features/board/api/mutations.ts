@@ -1,5 +1,5 @@
-// The today board's write. The board's lists and counts live under the tickets' root key, so
-// this refreshes them and every ticket list.
+// The today board's write. The board's walls, counts and lists live under the tickets' root key
+// (src/resources/board.ts files its key there), so this refreshes them and every ticket list.
 import { ticketKeys, ticketRequests } from '@/resources/tickets';
 import { useWrite } from '@/lib/mutation';
 

@@ -20,7 +20,10 @@ export function LowStockList() {
           {items.map((i) => (
             <li key={`${i.partId}:${i.locationId}`} className="flex items-baseline justify-between gap-3 px-4 py-2.5 sm:px-5">
               <span className="min-w-0">
-                <Link to={paths.stock.getHref({ locationId: i.locationId })} className="font-medium text-ink-800 hover:underline">
+                <Link
+                  to={paths.stock.getHref({ locationId: i.locationId })}
+                  className="inline-flex min-h-touch items-center font-medium text-ink-800 hover:underline md:min-h-0"
+                >
                   {i.partName}
                 </Link>
                 <span className="block text-sm text-stone-600">{i.locationName}</span>

@@ -1,8 +1,8 @@
 import { visitStatusLabels, type VisitListItem } from '@shared/schemas/visits';
 import { useQuery } from '@tanstack/react-query';
+import clsx from 'clsx';
 import { ArrowRight, CalendarCheck, TriangleAlert } from 'lucide-react';
 import { Link } from 'react-router-dom';
-import { Badge } from '@/components/ui/badge';
 import { Card } from '@/components/ui/card';
 import { LoadError } from '@/components/ui/load-error';
 import { paths } from '@/config/paths';
@@ -15,7 +15,15 @@ export function todaysVisits(now = new Date()) {
   return visitQueries.range({ from: day(0), to: day(1), status: 'planned,in_progress,completed' });
 }
 
-/** Today's visits, the soonest first: who is where, and who is booked twice. */
+/** The mark on the time line: filled while someone is on site, hollow when planned, ticked off when done. */
+const marks: Record<VisitListItem['status'], string> = {
+  planned: 'border-ink-500 bg-white',
+  in_progress: 'border-amber-500 bg-amber-400',
+  completed: 'border-ink-600 bg-ink-600',
+  cancelled: 'border-stone-400 bg-stone-200',
+};
+
+/** Today's visits as a time line, the soonest first: when (at the site), where, who, and how far along; who is booked twice. */
 export function VisitsToday() {
   const query = useQuery(todaysVisits());
   const items = query.data?.items ?? [];
@@ -24,52 +32,56 @@ export function VisitsToday() {
       title="Visits today"
       description="Times at each site."
       actions={
-        <Link to={paths.dispatch.getHref()} className="inline-flex items-center gap-1 text-sm font-medium text-ink-700 hover:underline">
+        <Link
+          to={paths.dispatch.getHref()}
+          className="inline-flex min-h-touch items-center gap-1 text-sm font-medium text-ink-700 hover:underline md:min-h-0"
+        >
           Dispatch <ArrowRight className="h-4 w-4" aria-hidden="true" />
         </Link>
       }
-      flush
     >
       {query.isError ? (
-        <div className="p-4">
-          <LoadError title="Today’s visits could not be loaded." error={query.error} onRetry={() => void query.refetch()} />
-        </div>
+        <LoadError title="Today’s visits could not be loaded." error={query.error} onRetry={() => void query.refetch()} />
       ) : query.isPending ? null : items.length === 0 ? (
-        <p className="flex items-center gap-2 px-4 py-3 text-stone-700 sm:px-5">
+        <p className="flex items-center gap-2 text-stone-700">
           <CalendarCheck className="h-4 w-4 text-stone-500" aria-hidden="true" /> No visits booked today.
         </p>
       ) : (
-        <ul className="divide-y divide-stone-100" aria-label="Visits today">
+        <ol className="relative ml-1.5 border-l-2 border-stone-200" aria-label="Visits today">
           {items.map((v) => (
-            <VisitLine key={v.id} visit={v} />
+            <VisitStop key={v.id} visit={v} />
           ))}
-        </ul>
+        </ol>
       )}
     </Card>
   );
 }
 
-function VisitLine({ visit: v }: { visit: VisitListItem }) {
+function VisitStop({ visit: v }: { visit: VisitListItem }) {
+  const crew = v.technicians.map((t) => t.name).join(', ') || 'No technician';
   return (
-    <li className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1 px-4 py-2.5 sm:px-5">
-      <span className="min-w-0">
-        <Link to={paths.visit.getHref(v.id)} className="font-medium text-ink-800 hover:underline">
-          {formatSiteWindow(v.windowStart, v.windowEnd, v.site.timeZone, { withDay: false })} · {v.site.name}
-        </Link>
-        <span className="block text-sm text-stone-600">
-          {v.ticket ? `${v.ticket.ref} ${v.ticket.title}` : 'Planned maintenance'} ·{' '}
-          {v.technicians.map((t) => t.name).join(', ') || 'No technician'}
-        </span>
-        {v.conflicts.length ? (
-          <span className="flex items-center gap-1 text-sm font-medium text-danger-700">
-            <TriangleAlert className="h-4 w-4" aria-hidden="true" /> Booked twice:{' '}
-            {[...new Set(v.conflicts.map((c) => c.technician.name))].join(', ')}
+    <li className="relative pb-4 pl-5 last:pb-0">
+      <span className={clsx('absolute -left-[7px] top-1.5 h-3 w-3 rounded-full border-2', marks[v.status])} aria-hidden="true" />
+      <Link to={paths.visit.getHref(v.id)} className="group block min-h-touch md:min-h-0">
+        <span className="flex flex-wrap items-baseline gap-x-2">
+          <span className="font-semibold tabular-nums text-ink-950">
+            {formatSiteWindow(v.windowStart, v.windowEnd, v.site.timeZone, { withDay: false })}
           </span>
-        ) : null}
-      </span>
-      <Badge tone={v.status === 'in_progress' ? 'amber' : v.status === 'completed' ? 'ink' : 'neutral'}>
-        {visitStatusLabels[v.status]}
-      </Badge>
+          <span className={clsx('text-sm', v.status === 'in_progress' ? 'font-medium text-amber-800' : 'text-stone-600')}>
+            {visitStatusLabels[v.status]}
+          </span>
+        </span>
+        <span className="block font-medium text-ink-800 group-hover:underline">{v.site.name}</span>
+      </Link>
+      <p className="text-sm text-stone-600">
+        {crew} · {v.ticket ? `${v.ticket.ref} ${v.ticket.title}` : 'Planned maintenance'}
+      </p>
+      {v.conflicts.length ? (
+        <p className="flex items-center gap-1 text-sm font-medium text-danger-700">
+          <TriangleAlert className="h-4 w-4" aria-hidden="true" /> Booked twice:{' '}
+          {[...new Set(v.conflicts.map((c) => c.technician.name))].join(', ')}
+        </p>
+      ) : null}
     </li>
   );
 }

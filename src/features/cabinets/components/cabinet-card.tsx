@@ -5,6 +5,7 @@ import { useState, type ReactNode } from 'react';
 import { Link, useLocation } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button, ButtonLink } from '@/components/ui/button';
+import { Checkbox } from '@/components/ui/checkbox';
 import { paths } from '@/config/paths';
 import { Dialog, DialogActions } from '@/components/ui/dialog';
 import { Form, SubmitButton, useZodForm } from '@/components/ui/form';
@@ -95,10 +96,12 @@ interface CabinetCardProps {
   onClose?: () => void;
   /** Leave out the "Cabinet at C3·R2" line when the dialog's title already says it. */
   titled?: boolean;
+  /** Opened from a visit: a repair logged from the card belongs to that visit. */
+  visitId?: string;
 }
 
 /** The card of a cabinet opened from the wall map: serial, position, status, facts and whole history. */
-export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, onClose, titled = false }: CabinetCardProps) {
+export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, onClose, titled = false, visitId }: CabinetCardProps) {
   const query = useQuery({ ...cabinetQueries.detail(cabinetId ?? ''), enabled: Boolean(cabinetId) });
   const cabinet = query.data;
   const [editing, setEditing] = useState(false);
@@ -149,7 +152,7 @@ export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, on
           {cabinet.wall && cabinet.column && cabinet.row ? (
             <ButtonLink
               variant="primary"
-              to={paths.logRepair.getHref({ wallId: cabinet.wall.id, col: cabinet.column, row: cabinet.row })}
+              to={paths.logRepair.getHref({ visitId, wallId: cabinet.wall.id, col: cabinet.column, row: cabinet.row })}
               icon={<Wrench className="h-4 w-4" aria-hidden="true" />}
             >
               Log repair
@@ -173,7 +176,7 @@ export function CabinetCard({ cabinetId, summary, canOperate, onMove, onSwap, on
             <h3 id={`cabinet-${cabinetId}-history`} className="text-base font-semibold">
               History
             </h3>
-            <CabinetHistory events={cabinet.history} />
+            <CabinetHistory events={cabinet.history} truncated={cabinet.historyTruncated} />
           </section>
           <UpdateCabinetDialog cabinet={cabinet} open={editing} onClose={() => setEditing(false)} />
         </>
@@ -188,13 +191,15 @@ interface CabinetCellDialogProps {
   position: Position | null;
   onClose: () => void;
   canOperate: boolean;
+  /** Opened from a visit: "Log repair" records the repair on that visit. */
+  visitId?: string;
 }
 
 /**
  * The cabinet card of one cell, opened from a map outside the wall page (a ticket's map): the
  * same card, in a dialog, with the way to the wall page, where the cabinet is moved or swapped.
  */
-export function CabinetCellDialog({ wall, position, onClose, canOperate }: CabinetCellDialogProps) {
+export function CabinetCellDialog({ wall, position, onClose, canOperate, visitId }: CabinetCellDialogProps) {
   const cabinets = useQuery({ ...wallQueries.cabinets(wall.id), enabled: position !== null });
   const occupant = position ? cabinets.data?.items.find((c) => c.column === position.column && c.row === position.row) : undefined;
   const label = position ? cellLabel(position) : '';
@@ -207,7 +212,7 @@ export function CabinetCellDialog({ wall, position, onClose, canOperate }: Cabin
       ) : cabinets.isError ? (
         <LoadError title="The cabinets could not be loaded." error={cabinets.error} onRetry={() => void cabinets.refetch()} />
       ) : occupant ? (
-        <CabinetCard key={occupant.id} cabinetId={occupant.id} summary={occupant} canOperate={canOperate} titled />
+        <CabinetCard key={occupant.id} cabinetId={occupant.id} summary={occupant} canOperate={canOperate} titled visitId={visitId} />
       ) : (
         <EmptyCellCard wallId={wall.id} position={position} canRegister={false} titled />
       )}
@@ -238,9 +243,10 @@ function UpdateCabinetForm({ cabinet, onDone }: { cabinet: CabinetDetail; onDone
   const update = useUpdateCabinet();
   const toast = useToast();
   const form = useZodForm(cabinetPatch, {
-    defaultValues: { status: cabinet.status, batch: cabinet.batch, notes: cabinet.notes ?? '', note: '' },
+    defaultValues: { status: cabinet.status, batch: cabinet.batch, notes: cabinet.notes ?? '', note: '', noteForClient: false },
   });
   const status = form.watch('status');
+  const forClient = form.watch('noteForClient');
   const leaves = Boolean(cabinet.wall) && status !== 'installed';
   // A cabinet goes onto a wall by being moved there, not by a status.
   const options = cabinetStatusOptions.filter((o) => o.value !== 'installed' || cabinet.wall);
@@ -269,7 +275,16 @@ function UpdateCabinetForm({ cabinet, onDone }: { cabinet: CabinetDetail; onDone
         name="note"
         label="Reason (kept in the history)"
         autoComplete="off"
-        hint="Optional, e.g. sent to the bench for a dead receiving card."
+        hint={
+          forClient
+            ? 'Optional. The client’s users will read it in the cabinet’s history.'
+            : 'Optional. Staff only, e.g. sent to the bench for a dead receiving card.'
+        }
+      />
+      <Checkbox
+        name="noteForClient"
+        label="Show this reason to the client"
+        hint="Leave it off for anything internal: stock, costs, other sites."
       />
       <DialogActions>
         <Button onClick={onDone}>Cancel</Button>

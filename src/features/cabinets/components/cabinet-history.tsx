@@ -21,10 +21,20 @@ function WallName({ id, name }: { id: string | null; name: string }) {
   );
 }
 
-/** Where on which wall, naming (and linking) the wall only when the move crossed walls. */
-function place(wallId: string | null, wallName: string | null, column: number | null, row: number | null, showWall: boolean): ReactNode {
+/**
+ * Where on which wall, naming (and linking) the wall only when the move crossed walls. A side
+ * left out of the history (another organisation's wall, as a client user reads it) is "elsewhere".
+ */
+function place(
+  wallId: string | null,
+  wallName: string | null,
+  column: number | null,
+  row: number | null,
+  showWall: boolean,
+  none = 'stock',
+): ReactNode {
   const p = pos(column, row);
-  if (!p) return wallName ? <WallName id={wallId} name={wallName} /> : 'stock';
+  if (!p) return wallName ? <WallName id={wallId} name={wallName} /> : none;
   return showWall && wallName ? (
     <>
       {p} on <WallName id={wallId} name={wallName} />
@@ -47,8 +57,10 @@ function OtherCabinet({ serial }: { serial: string | null }) {
 /** One line that says what happened, positions written C{col}·R{row}, the records it names linked. */
 export function EventText({ event: e }: { event: CabinetEvent }): ReactNode {
   const crossWalls = Boolean(e.fromWallId && e.toWallId && e.fromWallId !== e.toWallId);
-  const from = place(e.fromWallId, e.fromWallName, e.fromColumn, e.fromRow, crossWalls);
-  const to = place(e.toWallId, e.toWallName, e.toColumn, e.toRow, crossWalls || !e.fromWallId);
+  // A move or a swap always has a wall on both sides: one left out is another organisation's.
+  const none = e.kind === 'moved' || e.kind === 'swapped' ? 'elsewhere' : 'stock';
+  const from = place(e.fromWallId, e.fromWallName, e.fromColumn, e.fromRow, crossWalls, none);
+  const to = place(e.toWallId, e.toWallName, e.toColumn, e.toRow, crossWalls || !e.fromWallId, none);
   switch (e.kind) {
     case 'placed':
       return e.fromStatus && e.fromStatus !== 'installed' ? (
@@ -100,8 +112,11 @@ const icons = {
   status_changed: RefreshCw,
 } as const;
 
-/** The cabinet's whole life, newest first: placed, moved, swapped, repaired, removed. */
-export function CabinetHistory({ events }: { events: CabinetEvent[] }) {
+/**
+ * The cabinet's life, newest first: placed, moved, swapped, repaired, removed. Staff see which
+ * notes the client reads too; `truncated` says older events are not shown.
+ */
+export function CabinetHistory({ events, truncated = false }: { events: CabinetEvent[]; truncated?: boolean }) {
   if (events.length === 0) return <p className="text-sm text-stone-600">No history recorded.</p>;
   return (
     <ol className="relative space-y-3 border-l border-stone-200 pl-5" aria-label="History, newest first">
@@ -119,10 +134,17 @@ export function CabinetHistory({ events }: { events: CabinetEvent[] }) {
               <time dateTime={e.createdAt}>{formatDateTime(e.createdAt)}</time>
               {e.actorName ? ` · ${e.actorName}` : ''}
             </p>
-            {e.note ? <p className="mt-0.5 text-sm italic text-stone-700">“{e.note}”</p> : null}
+            {e.note ? (
+              <p className="mt-0.5 text-sm text-stone-700">
+                <span className="italic">“{e.note}”</span>
+                {/* Only staff ever read a staff-only note; the actor's name is theirs alone too. */}
+                <span className="text-stone-600">{!e.noteForClient ? ' · staff only' : e.actorName ? ' · shown to the client' : ''}</span>
+              </p>
+            ) : null}
           </li>
         );
       })}
+      {truncated ? <li className="text-sm text-stone-600">Older events are not shown here; the audit log keeps them all.</li> : null}
     </ol>
   );
 }

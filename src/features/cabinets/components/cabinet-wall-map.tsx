@@ -3,6 +3,7 @@ import { cellLabel } from '@shared/calc/grid';
 import { MousePointerClick } from 'lucide-react';
 import { useMemo, useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
+import { Checkbox } from '@/components/ui/checkbox';
 import { Card } from '@/components/ui/card';
 import { Dialog } from '@/components/ui/dialog';
 import { LoadError } from '@/components/ui/load-error';
@@ -169,6 +170,12 @@ export function CabinetWallMap({
       >
         <div className="space-y-3">
           {notice}
+          {query.data?.truncated ? (
+            <p role="status" className="rounded-md border border-amber-300 bg-amber-50 px-3.5 py-2.5 text-base text-amber-900">
+              This wall holds more cabinets than the map draws ({cabinets.length.toLocaleString('en')}). Find the others in the cabinet list
+              by serial.
+            </p>
+          ) : null}
           {mode ? (
             <div
               role="status"
@@ -240,7 +247,7 @@ export function CabinetWallMap({
   );
 }
 
-const noteSchema = z.object({ note: moveCabinetInput.shape.note });
+const noteSchema = z.object({ note: moveCabinetInput.shape.note, noteForClient: z.boolean() });
 
 /** Confirms a move or a swap, with an optional reason kept in the history. */
 function ConfirmMoveDialog({
@@ -284,19 +291,27 @@ function ConfirmMoveForm({
   const move = useMoveCabinet();
   const swap = useSwapCabinets();
   const toast = useToast();
-  const form = useZodForm(noteSchema, { defaultValues: { note: '' } });
+  const form = useZodForm(noteSchema, { defaultValues: { note: '', noteForClient: false } });
   const { cabinet } = pending;
+  const forClient = form.watch('noteForClient');
   return (
     <Form
       form={form}
       aria-label={pending.kind === 'swap' ? 'Confirm the swap' : 'Confirm the move'}
-      onSubmit={async ({ note }) => {
+      onSubmit={async ({ note, noteForClient }) => {
         if (pending.kind === 'move') {
-          const moved = await move.mutateAsync({ id: cabinet.id, wallId, column: pending.to.column, row: pending.to.row, note });
+          const moved = await move.mutateAsync({
+            id: cabinet.id,
+            wallId,
+            column: pending.to.column,
+            row: pending.to.row,
+            note,
+            noteForClient,
+          });
           toast(`${moved.serial} moved to ${moved.position}.`);
           onDone(pending.to);
         } else {
-          const swapped = await swap.mutateAsync({ id: cabinet.id, otherCabinetId: pending.other.id, note });
+          const swapped = await swap.mutateAsync({ id: cabinet.id, otherCabinetId: pending.other.id, note, noteForClient });
           toast(`${swapped.serial} and ${pending.other.serial} swapped places.`);
           onDone({ column: pending.other.column, row: pending.other.row });
         }
@@ -316,7 +331,21 @@ function ConfirmMoveForm({
           </>
         )}
       </p>
-      <TextField name="note" label="Reason" autoComplete="off" hint="Optional, e.g. moved to match the module batch of its neighbours." />
+      <TextField
+        name="note"
+        label="Reason"
+        autoComplete="off"
+        hint={
+          forClient
+            ? 'Optional. The client’s users will read it in the cabinet’s history.'
+            : 'Optional. Staff only, e.g. moved to match the module batch of its neighbours.'
+        }
+      />
+      <Checkbox
+        name="noteForClient"
+        label="Show this note to the client"
+        hint="Leave it off for anything internal: stock, costs, other sites."
+      />
       <div className="flex justify-end gap-2">
         <Button onClick={onCancel}>Cancel</Button>
         <SubmitButton>{pending.kind === 'move' ? `Move to ${cellLabel(pending.to)}` : 'Swap them'}</SubmitButton>

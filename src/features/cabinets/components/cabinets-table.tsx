@@ -162,6 +162,7 @@ export function CabinetsTable({ filters, onFiltersChange, staff, filterOptions }
           <FilterSearch
             label="Batch"
             placeholder="Code or start of it"
+            foldable
             className="w-full sm:w-48"
             value={filters.batch ?? ''}
             onChange={(batch) => onFiltersChange({ ...filters, batch: batch.trim() || undefined })}

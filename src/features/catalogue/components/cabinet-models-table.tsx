@@ -8,6 +8,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { EditCabinetModelDialog } from '@/features/catalogue/components/cabinet-model-form-dialog';
 import { useQuery } from '@tanstack/react-query';
 import { cabinetModelQueries } from '@/resources/cabinet-models';
+import { TruncatedNote } from '@/components/ui/truncated-note';
 
 const column = createColumnHelper<CabinetModel>();
 const n = (v: number) => v.toLocaleString('en');
@@ -71,6 +72,9 @@ export function CabinetModelsTable({ canEdit }: { canEdit: boolean }) {
 
   return (
     <>
+      <TruncatedNote truncated={query.data?.truncated} className="mb-3">
+        The first {rows.length} models by name are shown. Archive the ones no longer installed.
+      </TruncatedNote>
       <DataTable
         tableId="cabinet-models"
         label="Cabinet models"

@@ -10,6 +10,7 @@ import { paths } from '@/config/paths';
 import { EditControllerDialog } from '@/features/catalogue/components/controller-form-dialog';
 import { useQuery } from '@tanstack/react-query';
 import { controllerQueries } from '@/resources/controllers';
+import { TruncatedNote } from '@/components/ui/truncated-note';
 
 const column = createColumnHelper<Controller>();
 
@@ -54,6 +55,9 @@ export function ControllersTable({ canEdit, wallOptions }: { canEdit: boolean; w
 
   return (
     <>
+      <TruncatedNote truncated={query.data?.truncated} className="mb-3">
+        The first {rows.length} controllers by serial are shown. Archive the ones no longer in service.
+      </TruncatedNote>
       <DataTable
         tableId="controllers"
         label="Controllers"

@@ -14,10 +14,11 @@ import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { useCreateContact } from '@/features/clients/api/mutations';
 import { useDeleteContact } from '@/features/clients/api/mutations';
-import type { Contact } from '@shared/schemas/clients';
+import type { ClientUserOption, Contact } from '@shared/schemas/clients';
 import { useUpdateContact } from '@/features/clients/api/mutations';
 
-export type ContactRow = Omit<Contact, 'clientId'>;
+/** A contact as a list shows it; a site's page does not know whom a contact signs in as. */
+export type ContactRow = Omit<Contact, 'clientId' | 'userId'> & { userId?: string | null };
 
 interface ContactsCardProps {
   clientId: string;
@@ -26,18 +27,21 @@ interface ContactsCardProps {
   siteId?: string;
   /** On the client's page: the sites a contact can belong to (or the whole organisation). */
   sites?: { id: string; name: string }[];
+  /** On the client's page (staff): the organisation's accounts a contact can sign in as. */
+  users?: ClientUserOption[];
   canEdit: boolean;
   title?: string;
   description?: string;
 }
 
 /** The people to call and to keep informed, with add, edit and remove for the office. */
-export function ContactsCard({ clientId, contacts, siteId, sites, canEdit, title = 'Contacts', description }: ContactsCardProps) {
+export function ContactsCard({ clientId, contacts, siteId, sites, users, canEdit, title = 'Contacts', description }: ContactsCardProps) {
   const [editing, setEditing] = useState<ContactRow | 'new' | null>(null);
   const [removing, setRemoving] = useState<ContactRow | null>(null);
   const remove = useDeleteContact();
   const toast = useToast();
   const siteName = (id: string | null) => (id ? (sites?.find((s) => s.id === id)?.name ?? 'This site') : null);
+  const userName = (id: string | null | undefined) => (id ? users?.find((u) => u.id === id)?.name : undefined);
 
   return (
     <Card
@@ -85,6 +89,7 @@ export function ContactsCard({ clientId, contacts, siteId, sites, canEdit, title
                 <div className="flex flex-wrap gap-1.5 pt-0.5">
                   {c.siteId ? <Badge tone="ink">{siteName(c.siteId)}</Badge> : sites || siteId ? <Badge>Whole organisation</Badge> : null}
                   {c.receivesUpdates ? <Badge tone="neutral">Gets e-mail updates</Badge> : null}
+                  {userName(c.userId) ? <Badge tone="neutral">Signs in as {userName(c.userId)}</Badge> : null}
                 </div>
               </div>
               {canEdit ? (
@@ -119,9 +124,9 @@ export function ContactsCard({ clientId, contacts, siteId, sites, canEdit, title
         title={editing === 'new' ? 'Add a contact' : editing ? `Edit ${editing.name}` : 'Contact'}
       >
         {editing === 'new' ? (
-          <CreateContactForm clientId={clientId} siteId={siteId} sites={sites} onDone={() => setEditing(null)} />
+          <CreateContactForm clientId={clientId} siteId={siteId} sites={sites} users={users} onDone={() => setEditing(null)} />
         ) : editing ? (
-          <EditContactForm key={editing.id} contact={editing} sites={sites} onDone={() => setEditing(null)} />
+          <EditContactForm key={editing.id} contact={editing} sites={sites} users={users} onDone={() => setEditing(null)} />
         ) : null}
       </Dialog>
       <ConfirmDialog
@@ -158,7 +163,22 @@ function SiteChoice({ sites }: { sites?: { id: string; name: string }[] }) {
   );
 }
 
-function ContactFields({ sites }: { sites?: { id: string; name: string }[] }) {
+/** Which of the client's accounts this contact signs in as: their replies are then never mailed back to them. */
+function UserChoice({ users }: { users?: ClientUserOption[] }) {
+  if (!users) return null;
+  return (
+    <SelectField
+      name="userId"
+      label="Signs in as"
+      placeholder="Nobody"
+      options={users.map((u) => ({ value: u.id, label: `${u.name} (${u.email})` }))}
+      hint="The portal account of this person, if they have one. Their own replies are never e-mailed back to them."
+      registerOptions={nullIfEmpty}
+    />
+  );
+}
+
+function ContactFields({ sites, users }: { sites?: { id: string; name: string }[]; users?: ClientUserOption[] }) {
   return (
     <>
       <TextField name="name" label="Name" autoComplete="off" />
@@ -166,6 +186,7 @@ function ContactFields({ sites }: { sites?: { id: string; name: string }[] }) {
       <TextField name="email" label="E-mail" type="email" inputMode="email" autoComplete="off" hint="Optional." />
       <TextField name="phone" label="Phone" type="tel" autoComplete="off" hint="Optional." />
       <SiteChoice sites={sites} />
+      <UserChoice users={users} />
       <Checkbox name="receivesUpdates" label="Send ticket and visit updates by e-mail" hint="Needs an e-mail address." />
     </>
   );
@@ -175,17 +196,28 @@ function CreateContactForm({
   clientId,
   siteId,
   sites,
+  users,
   onDone,
 }: {
   clientId: string;
   siteId?: string;
   sites?: { id: string; name: string }[];
+  users?: ClientUserOption[];
   onDone: () => void;
 }) {
   const create = useCreateContact();
   const toast = useToast();
   const form = useZodForm(contactInput, {
-    defaultValues: { clientId, siteId: siteId ?? null, name: '', title: '', email: '', phone: '', receivesUpdates: true },
+    defaultValues: {
+      clientId,
+      siteId: siteId ?? null,
+      name: '',
+      title: '',
+      email: '',
+      phone: '',
+      receivesUpdates: true,
+      ...(users ? { userId: null } : {}),
+    },
   });
   return (
     <Form
@@ -197,7 +229,7 @@ function CreateContactForm({
         onDone();
       }}
     >
-      <ContactFields sites={sites} />
+      <ContactFields sites={sites} users={users} />
       <DialogActions>
         <Button onClick={onDone}>Cancel</Button>
         <SubmitButton>Add contact</SubmitButton>
@@ -206,7 +238,17 @@ function CreateContactForm({
   );
 }
 
-function EditContactForm({ contact, sites, onDone }: { contact: ContactRow; sites?: { id: string; name: string }[]; onDone: () => void }) {
+function EditContactForm({
+  contact,
+  sites,
+  users,
+  onDone,
+}: {
+  contact: ContactRow;
+  sites?: { id: string; name: string }[];
+  users?: ClientUserOption[];
+  onDone: () => void;
+}) {
   const update = useUpdateContact();
   const toast = useToast();
   const form = useZodForm(contactPatch, {
@@ -217,6 +259,7 @@ function EditContactForm({ contact, sites, onDone }: { contact: ContactRow; site
       email: contact.email ?? '',
       phone: contact.phone,
       receivesUpdates: contact.receivesUpdates,
+      ...(users ? { userId: contact.userId ?? null } : {}),
     },
   });
   return (
@@ -229,7 +272,7 @@ function EditContactForm({ contact, sites, onDone }: { contact: ContactRow; site
         onDone();
       }}
     >
-      <ContactFields sites={sites} />
+      <ContactFields sites={sites} users={users} />
       <DialogActions>
         <Button onClick={onDone}>Cancel</Button>
         <SubmitButton>Save changes</SubmitButton>

@@ -14,6 +14,7 @@ import { useDeleteDocument, useUploadWallDocument } from '@/features/documents/a
 import { errorMessage } from '@/lib/errors';
 import { formatDateTime } from '@/lib/format';
 import { attachmentQueries } from '@/resources/attachments';
+import { TruncatedNote } from '@/components/ui/truncated-note';
 
 export function fileSize(bytes: number) {
   if (bytes < 1024) return `${bytes} B`;
@@ -43,6 +44,9 @@ export function WallDocuments({ wallId, canUpload, canMarkInternal, canDelete }:
     <div className="space-y-5">
       {canUpload ? <UploadForm wallId={wallId} canMarkInternal={canMarkInternal} /> : null}
       <Card title="Documents" description="As-built drawings, controller configuration files, calibration reports." flush>
+        <TruncatedNote truncated={query.data?.truncated} className="m-4">
+          The newest {files.length} documents are shown; older ones are kept.
+        </TruncatedNote>
         {query.isPending ? (
           <p className="px-5 py-8 text-center text-stone-600">
             <Spinner className="mr-2" label="" /> Loading…

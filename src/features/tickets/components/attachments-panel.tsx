@@ -4,14 +4,15 @@ import { Download, FileText, Lock, Paperclip, PlayCircle } from 'lucide-react';
 import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { buttonClasses } from '@/components/ui/button';
-import { Card } from '@/components/ui/card';
 import { Dialog } from '@/components/ui/dialog';
 import { Spinner } from '@/components/ui/spinner';
+import { TicketPanel } from '@/features/tickets/components/ticket-panel';
 import { MediaPicker, UploadList } from '@/features/tickets/components/upload-list';
 import { useUploadQueue } from '@/features/tickets/components/use-upload-queue';
 import { errorMessage } from '@/lib/errors';
 import { formatDateTime } from '@/lib/format';
 import { attachmentQueries, downloadUrl, inlineUrl } from '@/resources/attachments';
+import { TruncatedNote } from '@/components/ui/truncated-note';
 
 const sizeText = (bytes: number) =>
   bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`;
@@ -29,14 +30,7 @@ export function AttachmentsPanel({ ticketId, canUpload }: { ticketId: string; ca
   };
 
   return (
-    <Card
-      title={
-        <span className="inline-flex items-center gap-2">
-          <Paperclip className="h-4 w-4 text-ink-600" aria-hidden="true" />
-          Photos and files
-        </span>
-      }
-    >
+    <TicketPanel title="Photos and files" icon={Paperclip}>
       <div className="space-y-4">
         {attachments.isPending ? (
           <p className="flex items-center gap-2 text-sm text-stone-600">
@@ -53,6 +47,9 @@ export function AttachmentsPanel({ ticketId, canUpload }: { ticketId: string; ca
             ))}
           </ul>
         )}
+        <TruncatedNote truncated={attachments.data?.truncated}>
+          The newest {items.length} files are shown; older ones are kept.
+        </TruncatedNote>
 
         {canUpload ? (
           <div className="space-y-3 border-t border-stone-100 pt-4">
@@ -67,7 +64,7 @@ export function AttachmentsPanel({ ticketId, canUpload }: { ticketId: string; ca
       </div>
 
       <AttachmentViewer attachment={viewing} onClose={() => setViewing(null)} />
-    </Card>
+    </TicketPanel>
   );
 }
 
@@ -105,8 +102,8 @@ function AttachmentTile({ attachment: a, onView }: { attachment: Attachment; onV
             {a.uploadedByName ? ` · ${a.uploadedByName}` : ''}
           </p>
           {a.internal ? (
-            <p className="mt-0.5 inline-flex items-center gap-1 text-xs font-medium text-amber-800">
-              <Lock className="h-3 w-3" aria-hidden="true" /> Internal
+            <p className="mt-0.5 inline-flex items-center gap-1 text-xs font-medium text-stone-700">
+              <Lock className="h-3 w-3" aria-hidden="true" /> Staff only
             </p>
           ) : null}
         </div>

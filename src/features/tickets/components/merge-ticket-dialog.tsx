@@ -54,7 +54,7 @@ function MergeForm({ ticket, onDone }: { ticket: TicketDetail; onDone: () => voi
       {error ? <Alert tone="danger">{errorMessage(error)}</Alert> : null}
       <FilterSearch
         label={`Open tickets of ${ticket.client.name}`}
-        placeholder="Title or GK-number"
+        placeholder="Title or number (1041/26)"
         value={q}
         onChange={setQ}
         className="w-full"

@@ -19,6 +19,14 @@ interface SavedViewsProps {
 }
 
 const chip = 'inline-flex min-h-touch items-center rounded-full border px-3 text-sm font-medium transition-colors md:min-h-8';
+const chipTone = (active: boolean) =>
+  active ? 'border-ink-700 bg-ink-700 text-white' : 'border-stone-300 bg-white text-ink-800 hover:border-stone-400';
+
+/** What the list shows when its address says nothing: the open tickets. */
+const defaultFilters = filtersFromParams(new URLSearchParams());
+
+/** The list shows the default (the open tickets, in whatever order it is sorted). */
+export const isDefaultView = (filters: TicketFilters) => sameFilters({ ...defaultFilters, sort: filters.sort, dir: filters.dir }, filters);
 
 /** One-tap filter sets a person saved for themselves ("My breached", "Arena this week"). */
 export function SavedViews({ filters, onApply }: SavedViewsProps) {
@@ -29,17 +37,23 @@ export function SavedViews({ filters, onApply }: SavedViewsProps) {
   const toast = useToast();
   const items = views.data?.items ?? [];
   const current = items.find((v) => sameFilters(filtersFromParams(new URLSearchParams(v.filters)), filters));
+  const onDefault = isDefaultView(filters);
 
   return (
     <div className="mb-4 flex flex-wrap items-center gap-2" role="group" aria-label="Saved views">
       <button
         type="button"
+        aria-pressed={onDefault}
+        onClick={() => onApply({ ...defaultFilters, sort: filters.sort, dir: filters.dir })}
+        className={clsx(chip, chipTone(onDefault))}
+      >
+        Open tickets
+      </button>
+      <button
+        type="button"
         aria-pressed={!hasAnyFilter(filters)}
         onClick={() => onApply({ sort: filters.sort, dir: filters.dir })}
-        className={clsx(
-          chip,
-          !hasAnyFilter(filters) ? 'border-ink-700 bg-ink-700 text-white' : 'border-stone-300 bg-white text-ink-800 hover:border-stone-400',
-        )}
+        className={clsx(chip, chipTone(!hasAnyFilter(filters)))}
       >
         All tickets
       </button>
@@ -72,7 +86,7 @@ export function SavedViews({ filters, onApply }: SavedViewsProps) {
           </span>
         );
       })}
-      {hasAnyFilter(filters) && !current ? (
+      {hasAnyFilter(filters) && !onDefault && !current ? (
         <Button size="sm" variant="ghost" onClick={() => setSaving(true)} icon={<BookmarkPlus className="h-4 w-4" aria-hidden="true" />}>
           Save view
         </Button>

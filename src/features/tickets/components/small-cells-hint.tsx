@@ -15,8 +15,9 @@ interface SmallCellsHintProps {
 const AROUND_MAP_PX = 96;
 
 /**
- * Above a map to tap: when the whole wall leaves each cabinet smaller than a fingertip (a
- * 12-column wall on a phone draws 25 px cells), says how to zoom in and move around first. It
+ * Beside a map to tap: when the whole wall leaves each cabinet smaller than a fingertip (a
+ * 12-column wall on a phone draws 25 px cells), the map starts zoomed in; this says so and how to
+ * move around or see the whole wall. It
  * follows the screen's width (a media query), not the map's measured size: a hint that changes
  * the layout must not be decided by that layout.
  */
@@ -33,8 +34,8 @@ export function SmallCellsHint({ columns, rows, cellAspect }: SmallCellsHintProp
     >
       <ZoomIn className="mt-0.5 h-4 w-4 shrink-0" aria-hidden="true" />
       <span>
-        <strong className="font-semibold">The cabinets are small on this screen.</strong> Zoom in with <strong>+</strong> (or pinch) until a
-        cabinet is big enough to tap, then drag to move along the wall.
+        <strong className="font-semibold">The map starts zoomed in</strong> so a cabinet is big enough to tap: drag to move along the wall,
+        or show the whole wall with the button above it.
       </span>
     </p>
   );

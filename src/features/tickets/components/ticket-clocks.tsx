@@ -1,66 +1,114 @@
-import type { TicketClockState } from '@shared/schemas/tickets';
-import { Clock } from 'lucide-react';
-import type { TicketDetail } from '@shared/schemas/tickets';
-import { ClockBadge } from '@/features/tickets/components/ticket-status';
+import { TZDate } from '@date-fns/tz';
+import type { TicketClockState, TicketDetail } from '@shared/schemas/tickets';
+import { priorityGuidance } from '@shared/schemas/tickets';
+import clsx from 'clsx';
+import { format, isValid, parseISO } from 'date-fns';
+import { AlertTriangle, Clock } from 'lucide-react';
+import { Fragment } from 'react';
+import { statusText } from '@/features/tickets/components/ticket-status';
 import { formatSiteTime, relativeTime } from '@/lib/site-time';
 
-interface ClockLineProps {
-  title: string;
-  state: TicketClockState | null;
-  dueAt: string | null;
-  doneAt: string | null;
-  doneWord: string;
-  pausedAt?: string | null;
-  timeZone?: string;
+type Tone = 'plain' | 'strong' | 'at-risk' | 'breached';
+
+/** One phrase of the ticket's state line; `title` holds the exact moment at the site. */
+export interface StatePart {
+  text: string;
+  tone: Tone;
+  title?: string;
 }
 
-function ClockLine({ title, state, dueAt, doneAt, doneWord, pausedAt, timeZone }: ClockLineProps) {
-  let text: string;
-  if (!state || !dueAt) text = 'No target in the service plan.';
-  else if (state === 'met' || state === 'missed')
-    text = `${doneWord} ${formatSiteTime(doneAt, timeZone)} · target was ${formatSiteTime(dueAt, timeZone)}`;
-  else if (state === 'paused')
-    text = `Paused since ${formatSiteTime(pausedAt, timeZone)} while we wait for the client. Due ${formatSiteTime(dueAt, timeZone)} before the pause.`;
-  else if (state === 'breached') text = `Was due ${formatSiteTime(dueAt, timeZone)} (${relativeTime(dueAt)})`;
-  else text = `Due ${formatSiteTime(dueAt, timeZone)} (${relativeTime(dueAt)})`;
-  return (
-    <div className="flex flex-col gap-1 py-2.5 first:pt-0 last:pb-0 sm:flex-row sm:items-baseline sm:gap-3">
-      <dt className="w-36 shrink-0 text-sm font-medium text-stone-700">{title}</dt>
-      <dd className="flex min-w-0 flex-wrap items-baseline gap-x-2 gap-y-1 text-sm text-stone-800">
-        <ClockBadge state={state} what={title} />
-        <span>{text}</span>
-      </dd>
-    </div>
-  );
+type ClockTicket = Pick<
+  TicketDetail,
+  'status' | 'priority' | 'clocks' | 'responseDueAt' | 'resolutionDueAt' | 'resolvedAt' | 'siteTimeZone' | 'mergedInto'
+>;
+
+/** "Wed 9 Dec" at the site (its own day, not the viewer's). */
+function siteDay(iso: string, timeZone: string | undefined) {
+  const d = parseISO(iso);
+  if (!isValid(d)) return '—';
+  try {
+    return format(timeZone ? new TZDate(d, timeZone) : d, 'EEE d MMM');
+  } catch {
+    return format(d, 'EEE d MMM');
+  }
 }
 
-/** The service-plan clocks: first response and resolution, in the site's local time. */
-export function TicketClocks({ ticket, timeZone }: { ticket: TicketDetail; timeZone?: string }) {
+const toneOf = (state: TicketClockState | null): Tone => (state === 'at_risk' ? 'at-risk' : state === 'breached' ? 'breached' : 'plain');
+
+function responsePart(t: ClockTicket): StatePart | null {
+  const state = t.clocks.response;
+  const due = t.responseDueAt;
+  if (!due) return null;
+  const title = `First response target: ${formatSiteTime(due, t.siteTimeZone)}`;
+  if (state === 'on_track' || state === 'at_risk') return { text: `first response due ${relativeTime(due)}`, tone: toneOf(state), title };
+  if (state === 'breached') return { text: `first response was due ${relativeTime(due)}`, tone: 'breached', title };
+  if (state === 'missed') return { text: 'first response came late', tone: 'plain', title };
+  return null; // answered in time: nothing left to say
+}
+
+function resolutionPart(t: ClockTicket): StatePart | null {
+  const state = t.clocks.resolution;
+  const due = t.resolutionDueAt;
+  if (!state || !due) return null;
+  const title = `Resolution target: ${formatSiteTime(due, t.siteTimeZone)}`;
+  const day = siteDay(due, t.siteTimeZone);
+  switch (state) {
+    case 'on_track':
+    case 'at_risk':
+      return { text: `resolution due ${day}`, tone: toneOf(state), title };
+    case 'breached':
+      return { text: `resolution was due ${day} (${relativeTime(due)})`, tone: 'breached', title };
+    case 'paused':
+      return { text: 'resolution clock paused while the client is asked', tone: 'plain', title };
+    case 'met':
+    case 'missed': {
+      const when = t.resolvedAt ? ` ${siteDay(t.resolvedAt, t.siteTimeZone)}` : '';
+      return { text: `resolved${when}, ${state === 'met' ? 'within' : 'after'} the target`, tone: 'plain', title };
+    }
+  }
+}
+
+/**
+ * The ticket's state in words, with the service-plan clock:
+ * "New · normal priority · first response was due 4 hours ago · resolution due Wed 9 Dec".
+ */
+export function stateLineParts(t: ClockTicket, forClient: boolean): StatePart[] {
+  const parts: StatePart[] = [
+    { text: statusText(t.status, forClient), tone: 'strong' },
+    { text: `${priorityGuidance[t.priority].label.toLowerCase()} priority`, tone: 'plain' },
+  ];
+  if (t.mergedInto) return parts;
+  const clock = [responsePart(t), resolutionPart(t)].filter((p): p is StatePart => p !== null);
+  if (clock.length === 0 && t.status !== 'closed' && t.status !== 'resolved') parts.push({ text: 'no service-plan target', tone: 'plain' });
+  return [...parts, ...clock];
+}
+
+const toneClass: Record<Tone, string> = {
+  plain: 'text-stone-700',
+  strong: 'font-semibold text-ink-950',
+  'at-risk': 'font-medium text-state-at-risk',
+  breached: 'font-medium text-state-breached',
+};
+
+/** The line under the ticket's title: its state and clocks, in the site's time (the exact moment on hover). */
+export function TicketStateLine({ ticket, forClient }: { ticket: ClockTicket; forClient: boolean }) {
+  const parts = stateLineParts(ticket, forClient);
   return (
-    <section aria-labelledby="ticket-clocks" className="rounded-md border border-stone-200 bg-white px-4 py-3 shadow-card sm:px-5">
-      <h2 id="ticket-clocks" className="mb-2 flex items-center gap-2 text-sm font-semibold text-stone-700">
-        <Clock className="h-4 w-4 text-ink-600" aria-hidden="true" />
-        Service-plan clock{timeZone ? <span className="font-normal text-stone-500">· times at the site</span> : null}
-      </h2>
-      <dl className="divide-y divide-stone-100">
-        <ClockLine
-          title="First response"
-          state={ticket.clocks.response}
-          dueAt={ticket.responseDueAt}
-          doneAt={ticket.acknowledgedAt}
-          doneWord="Answered"
-          timeZone={timeZone}
-        />
-        <ClockLine
-          title="Resolution"
-          state={ticket.clocks.resolution}
-          dueAt={ticket.resolutionDueAt}
-          doneAt={ticket.resolvedAt}
-          doneWord="Resolved"
-          pausedAt={ticket.pausedAt}
-          timeZone={timeZone}
-        />
-      </dl>
-    </section>
+    <p className="mt-1 flex flex-wrap items-center gap-x-1.5 gap-y-0.5 text-base" data-testid="ticket-state">
+      <Clock className="h-4 w-4 shrink-0 text-ink-600" aria-hidden="true" />
+      {parts.map((p, i) => (
+        <Fragment key={p.text}>
+          {i > 0 ? (
+            <span aria-hidden="true" className="text-stone-400">
+              ·
+            </span>
+          ) : null}
+          <span className={clsx('inline-flex items-center gap-1', toneClass[p.tone])} title={p.title}>
+            {p.tone === 'breached' || p.tone === 'at-risk' ? <AlertTriangle className="h-3.5 w-3.5" aria-hidden="true" /> : null}
+            {p.text}
+          </span>
+        </Fragment>
+      ))}
+    </p>
   );
 }

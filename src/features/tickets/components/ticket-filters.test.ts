@@ -12,7 +12,7 @@ describe('ticket list filters in the address', () => {
   it('keeps known values and drops the rest', () => {
     const f = filtersFromParams(
       new URLSearchParams(
-        'status=new,bogus,resolved&priority=urgent&clock=at_risk,breached&assigneeId=me&clientId=not-an-id&q=%20GK-12%20&sort=resolutionDueAt&dir=sideways',
+        'status=new,bogus,resolved&priority=urgent&clock=at_risk,breached&assigneeId=me&clientId=not-an-id&q=%2012%2F26%20&sort=resolutionDueAt&dir=sideways',
       ),
     );
     expect(f).toEqual({
@@ -24,7 +24,7 @@ describe('ticket list filters in the address', () => {
       siteId: undefined,
       wallId: undefined,
       assigneeId: 'me',
-      q: 'GK-12',
+      q: '12/26',
       sort: 'resolutionDueAt',
       dir: undefined,
     });
@@ -32,7 +32,7 @@ describe('ticket list filters in the address', () => {
       status: 'new,resolved',
       clock: 'at_risk,breached',
       assigneeId: 'me',
-      q: 'GK-12',
+      q: '12/26',
       sort: 'resolutionDueAt',
     });
   });

@@ -1,8 +1,8 @@
 import type { RemovedPartFate, RepairAction, RepairComponent, RepairFault } from '@shared/schemas/enums';
 import { Wrench } from 'lucide-react';
 import { Link } from 'react-router';
-import { Card } from '@/components/ui/card';
 import { paths } from '@/config/paths';
+import { TicketPanel } from '@/features/tickets/components/ticket-panel';
 import type { TicketRepair } from '@shared/schemas/tickets';
 import { formatSiteTime } from '@/lib/site-time';
 
@@ -52,14 +52,7 @@ export function repairHeadline(r: Pick<TicketRepair, 'action' | 'component' | 'm
 export function TicketRepairs({ repairs, timeZone }: { repairs: TicketRepair[]; timeZone?: string }) {
   if (repairs.length === 0) return null;
   return (
-    <Card
-      title={
-        <span className="inline-flex items-center gap-2">
-          <Wrench className="h-4 w-4 text-ink-600" aria-hidden="true" />
-          Repairs
-        </span>
-      }
-    >
+    <TicketPanel title="Repairs" icon={Wrench}>
       <ul className="space-y-3" aria-label="Repairs for this ticket">
         {repairs.map((r) => {
           const stock = [
@@ -92,6 +85,6 @@ export function TicketRepairs({ repairs, timeZone }: { repairs: TicketRepair[]; 
           );
         })}
       </ul>
-    </Card>
+    </TicketPanel>
   );
 }

@@ -161,7 +161,12 @@ function TicketFilterBar({ filters, onFiltersChange }: TicketsTableProps) {
   const set = (patch: Partial<TicketFilters>) => onFiltersChange({ ...filters, ...patch });
   return (
     <>
-      <FilterSearch label="Search" placeholder="Title or GK-number" value={filters.q ?? ''} onChange={(q) => set({ q: q || undefined })} />
+      <FilterSearch
+        label="Search"
+        placeholder="Title or number (1041/26)"
+        value={filters.q ?? ''}
+        onChange={(q) => set({ q: q || undefined })}
+      />
       <FilterSelect
         label="Status"
         anyLabel="Any status"

@@ -1,16 +1,21 @@
+import type { Position } from '@shared/schemas/cabinets';
 import type { VisitDetail } from '@shared/schemas/visits';
 import { ClipboardList, Grid3x3, Ticket } from 'lucide-react';
-import { Link } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
 import { Card } from '@/components/ui/card';
 import { paths } from '@/config/paths';
+import { VisitWallMap } from '@/features/visits/components/visit-wall-map';
 
 /**
  * What the visit is for: the wall (its map, rear view for whoever works from behind it) and the
- * ticket with its reported cells. For those working the visit a cell opens the repair form on
- * that cabinet; for anyone else it opens the cell on the wall's map.
+ * ticket with its reported cells. For those working the visit a reported cell opens the repair
+ * form on that cabinet; for anyone else it opens the cell on the wall's map. On the map, any
+ * other cell opens its cabinet card (`onOpenCell`; the page shows the card).
  */
-export function VisitWork({ visit }: { visit: VisitDetail }) {
+export function VisitWork({ visit, onOpenCell }: { visit: VisitDetail; onOpenCell?: (p: Position) => void }) {
   const { wall, ticket } = visit;
+  const navigate = useNavigate();
+  const working = visit.can.work && (visit.status === 'planned' || visit.status === 'in_progress');
   const cellHref = (column: number, row: number) =>
     visit.can.work && wall
       ? paths.logRepair.getHref({ visitId: visit.id, wallId: wall.id, col: column, row })
@@ -52,6 +57,14 @@ export function VisitWork({ visit }: { visit: VisitDetail }) {
               </>
             ) : null}
           </div>
+        ) : null}
+        {wall && onOpenCell ? (
+          <VisitWallMap
+            wall={wall}
+            reported={ticket?.cells ?? []}
+            onReportedCell={working ? (p) => void navigate(cellHref(p.column, p.row)) : undefined}
+            onOpenCell={onOpenCell}
+          />
         ) : null}
         {wall ? (
           <Link to={paths.wall.getHref(wall.id, { view: 'rear' })} className="flex min-h-touch items-center gap-2 py-1 hover:underline">

@@ -1,0 +1,1 @@
+ALTER TABLE "cabinet_events" ADD COLUMN "note_for_client" boolean DEFAULT false NOT NULL;
