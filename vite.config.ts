@@ -1,5 +1,7 @@
 import { fileURLToPath, URL } from 'node:url';
+import { constants as zlibConstants } from 'node:zlib';
 import react from '@vitejs/plugin-react';
+import { compression, defineAlgorithm } from 'vite-plugin-compression2';
 import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
@@ -39,6 +41,19 @@ export default defineConfig({
         sourcemap: false,
       },
     }),
+    // Every text file of the build also as .br and .gz beside it, made once here at the highest
+    // levels, so the server sends them without compressing per request
+    // (server/middleware/static-files.ts picks one by Accept-Encoding). Source maps are left out:
+    // they are never served.
+    compression({
+      include: /\.(html|js|css|svg|webmanifest)$/,
+      exclude: /\.map$/,
+      algorithms: [
+        defineAlgorithm('brotliCompress', { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: zlibConstants.BROTLI_MAX_QUALITY } }),
+        defineAlgorithm('gzip', { level: zlibConstants.Z_BEST_COMPRESSION }),
+      ],
+      logLevel: 'silent',
+    }),
   ],
   resolve: {
     alias: {
@@ -52,7 +67,37 @@ export default defineConfig({
     port: Number(process.env.PORT ?? 5173),
     proxy: { '/api': `http://127.0.0.1:${apiPort}` },
   },
-  build: { outDir: 'dist', sourcemap: true },
+  build: {
+    outDir: 'dist',
+    // dist/.vite/manifest.json: which chunks each page loads, for `npm run bench -- firstscreen`.
+    // A dot folder: never served, never precached.
+    manifest: true,
+    // Maps are written (dist/assets/*.map, for reading an error report's stack) but no script
+    // points at them, and the server answers 404 for them: the source is not published.
+    sourcemap: 'hidden',
+    rolldownOptions: {
+      output: {
+        // Fewer, larger files: a phone on a slow link pays a round trip per file (six at a time
+        // over HTTP/1.1), and left alone every icon and small helper is a file of its own.
+        codeSplitting: {
+          groups: [
+            // What every page needs before it draws: one file beside the entry.
+            { name: 'app', tags: ['$initial'], priority: 3 },
+            // The icons the signed-in screens use, one file instead of one per icon. The few the
+            // sign-in page draws stay apart, so that page does not load all of them (its budget:
+            // `npm run bench -- firstscreen`).
+            {
+              name: 'icons',
+              test: (id) =>
+                /node_modules[\\/]lucide-react[\\/]dist[\\/]esm[\\/]icons[\\/]/.test(id) &&
+                !/[\\/](circle-check|info|eye|eye-off)\.mjs$/.test(id),
+              priority: 2,
+            },
+          ],
+        },
+      },
+    },
+  },
   test: {
     projects: [
       {

@@ -4,6 +4,9 @@
 //  - API throughput of the busiest reads (autocannon; reported, no target)
 // Prints one line per measurement and exits non-zero when a target is missed.
 // `npm run bench -- map` (or `import`, `api`) runs only those parts.
+// `npm run bench -- scale` (never part of the default run: five to ten minutes) seeds a decade of
+// service history and measures the API at that scale (scripts/lib/bench-scale.ts); it writes
+// docs/benchmarks/<date>.md and .json. `-- scale --cabinets 100000` for a quick try.
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -14,19 +17,48 @@ import { buildClientIfStale } from './lib/client-build.js';
 
 const log = (line: string) => console.log(line);
 const shutdown = new Shutdown(() => {});
-const results: { name: string; value: number; unit: string; target?: number }[] = [];
+/** `target`: at most; `atLeast`: a floor (a throughput). */
+const results: { name: string; value: number; unit: string; target?: number; atLeast?: number }[] = [];
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-const parts = ['import', 'map', 'api'] as const;
-const chosen = process.argv.slice(2);
+const parts = ['import', 'map', 'api', 'firstscreen', 'scale'] as const;
+/** Parts that run only when named. */
+const onDemand: readonly string[] = ['scale'];
+const argv = process.argv.slice(2);
+/** The parts named (`--cabinets 100000` and the like are options of `scale`). */
+const chosen = argv.filter((a, i) => !a.startsWith('--') && !argv[i - 1]?.startsWith('--'));
 for (const name of chosen) {
   if (!(parts as readonly string[]).includes(name)) {
     console.error(`Unknown bench part "${name}": choose from ${parts.join(', ')} (none means all).`);
     process.exit(2);
   }
 }
-const runs = (part: (typeof parts)[number]) => chosen.length === 0 || chosen.includes(part);
+const runs = (part: (typeof parts)[number]) => (chosen.length === 0 && !onDemand.includes(part)) || chosen.includes(part);
+
+async function scale() {
+  const { parseArgs } = await import('node:util');
+  const { values } = parseArgs({
+    args: argv.filter((a) => a !== 'scale'),
+    options: { cabinets: { type: 'string' }, tickets: { type: 'string' }, events: { type: 'string' } },
+  });
+  const size = Object.fromEntries(Object.entries(values).map(([k, v]) => [k, Number(String(v).replace(/[_,]/g, ''))]));
+  const { runScaleBench } = await import('./lib/bench-scale.js');
+  const report = await runScaleBench(shutdown, { size });
+  for (const r of report.routes) {
+    if (!r.list) continue;
+    results.push({ name: `${r.name}: p99`, value: r.p99Ms, unit: 'ms', target: 50 });
+    results.push({ name: `${r.name}: share of the bare route's req/s (${r.reqPerS} req/s)`, value: r.ratio * 100, unit: '%', atLeast: 50 });
+  }
+  results.push({ name: 'session check, share of a bare request', value: report.sessionCheck.costShareOfBare * 100, unit: '%', target: 10 });
+  results.push({ name: 'serial search in the database, p99', value: report.serialSearch.totalP99Ms, unit: 'ms', target: 5 });
+  for (const p of report.pages)
+    results.push({ name: `${p.page} page JavaScript (gzip)`, value: p.gzipBytes / 1024, unit: 'KB', target: p.targetBytes / 1024 });
+}
 
 async function main() {
+  if (chosen.includes('scale')) {
+    if (chosen.length > 1) throw new Error('`scale` runs on its own: name no other part with it');
+    return scale();
+  }
   process.env.DATA_DIR = fs.mkdtempSync(path.join(os.tmpdir(), 'gridkeep-bench-'));
   shutdown.add('the bench data', () => fs.rmSync(process.env.DATA_DIR!, { recursive: true, force: true }));
   process.env.LOG_LEVEL = 'error';
@@ -56,6 +88,12 @@ async function main() {
     if (!res.ok) throw new Error(`${method} ${url}: ${res.status} ${JSON.stringify(json)}`);
     return json;
   };
+
+  // Page weights and the first screen on a slow phone (scripts/lib/bench-first-screen.ts).
+  if (runs('firstscreen')) {
+    const { firstScreenResults } = await import('./lib/bench-first-screen.js');
+    results.push(...(await firstScreenResults(base, { email: 'tech@gridkeep.test', password: 'gridkeep-demo' })));
+  }
 
   const sites = await api('GET', '/api/sites?limit=1');
   const models = await api('GET', '/api/cabinet-models');
@@ -134,10 +172,10 @@ main()
     await shutdown.run();
     let failed = 0;
     for (const r of results) {
-      const ok = r.target === undefined || r.value <= r.target;
+      const ok = (r.target === undefined || r.value <= r.target) && (r.atLeast === undefined || r.value >= r.atLeast);
       if (!ok) failed++;
       log(
-        `${ok ? 'ok  ' : 'SLOW'} ${r.name}: ${Math.round(r.value).toLocaleString('en')} ${r.unit}${r.target ? ` (target ≤ ${r.target} ${r.unit})` : ''}`,
+        `${ok ? 'ok  ' : 'SLOW'} ${r.name}: ${Math.round(r.value).toLocaleString('en')} ${r.unit}${r.target ? ` (target ≤ ${r.target} ${r.unit})` : ''}${r.atLeast ? ` (target ≥ ${r.atLeast} ${r.unit})` : ''}`,
       );
     }
     process.exit(failed ? 1 : 0);

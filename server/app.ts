@@ -8,6 +8,7 @@ import { config } from './config.js';
 import { authenticate, requireSameOriginWrites } from './middleware/auth.js';
 import { apiNotFound, errorHandler } from './middleware/error-handler.js';
 import { requestId } from './middleware/request-id.js';
+import { clientFiles } from './middleware/static-files.js';
 import { refuseNul } from './middleware/validate.js';
 import { healthRouter } from './routes/health.js';
 import { apiRoutes } from './routes/index.js';
@@ -54,10 +55,9 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   app.use('/api', api);
 
   if (options.serveClient && fs.existsSync(path.join(distDir, 'index.html'))) {
-    app.use('/assets', express.static(path.join(distDir, 'assets'), { immutable: true, maxAge: '1y' }));
-    app.use(express.static(distDir, { index: false }));
-    // Every other GET is a client route (React Router): /c/<serial> from a QR label among them.
-    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(distDir, 'index.html')));
+    // Precompressed files, /assets immutable, the page revalidated, source maps 404; every other
+    // GET is a client route (React Router): /c/<serial> from a QR label among them.
+    app.use(clientFiles(distDir));
   }
 
   app.use(errorHandler);

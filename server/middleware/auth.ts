@@ -1,4 +1,5 @@
-import { and, eq, gt, isNull } from 'drizzle-orm';
+import { createSecretKey, type KeyObject } from 'node:crypto';
+import { and, eq, gt, isNull, sql } from 'drizzle-orm';
 import type { Request, RequestHandler } from 'express';
 import jwt from 'jsonwebtoken';
 import { csrfHeader } from '../../shared/schemas/auth.js';
@@ -7,6 +8,7 @@ import { config } from '../config.js';
 import { db } from '../db/client.js';
 import { sessions, users } from '../db/schema/accounts.js';
 import { forbidden, notFound, unauthorized } from '../errors.js';
+import { sessionCache, type LiveSession } from '../services/session-cache.js';
 
 /** Who is calling: every service takes one and scopes what it reads and writes by it. */
 export interface Actor {
@@ -46,8 +48,17 @@ export function sessionCookieOptions(maxAgeMs?: number) {
   };
 }
 
+// The secret as a key object, made once: given a string, jsonwebtoken first tries (and fails) to
+// read it as a PEM public key on every call, which cost more than the rest of the session check.
+let signingKey: { secret: string; key: KeyObject } | undefined;
+function sessionKey(): KeyObject {
+  const secret = config().JWT_SECRET;
+  if (signingKey?.secret !== secret) signingKey = { secret, key: createSecretKey(Buffer.from(secret)) };
+  return signingKey.key;
+}
+
 export function signSessionToken(userId: string, sessionId: string, expiresAt: Date) {
-  return jwt.sign({ sid: sessionId }, config().JWT_SECRET, {
+  return jwt.sign({ sid: sessionId }, sessionKey(), {
     algorithm: ALGORITHM,
     issuer: ISSUER,
     audience: AUDIENCE,
@@ -56,50 +67,81 @@ export function signSessionToken(userId: string, sessionId: string, expiresAt: D
   });
 }
 
-function verifySessionToken(token: string): { userId: string; sessionId: string } | null {
+function verifySessionToken(token: string): { userId: string; sessionId: string; expiresAt: number } | null {
   try {
-    const claims = jwt.verify(token, config().JWT_SECRET, {
+    const claims = jwt.verify(token, sessionKey(), {
       algorithms: [ALGORITHM],
       issuer: ISSUER,
       audience: AUDIENCE,
     });
     if (typeof claims !== 'object' || typeof claims.sub !== 'string' || typeof claims.sid !== 'string') return null;
-    return { userId: claims.sub, sessionId: claims.sid };
+    if (typeof claims.exp !== 'number') return null;
+    return { userId: claims.sub, sessionId: claims.sid, expiresAt: claims.exp * 1000 };
   } catch {
     return null;
   }
 }
 
 /**
- * Reads the session cookie and, when its token is valid and its session row is live (not
- * signed out, not expired, user not disabled), puts the caller on `req.actor`.
+ * The live session and its user: one indexed query (sessions by primary key, users by primary
+ * key), prepared once per database handle so that neither Drizzle nor PostgreSQL plans it again.
  */
-export const authenticate: RequestHandler = async (req, _res, next) => {
-  const token = req.cookies?.[sessionCookieName()];
-  if (typeof token !== 'string' || !token) return next();
-  const claims = verifySessionToken(token);
-  if (!claims) return next();
-  const [row] = await db()
+let sessionQuery: { for: ReturnType<typeof db>; query: ReturnType<typeof prepareSessionQuery> } | undefined;
+function prepareSessionQuery(database: ReturnType<typeof db>) {
+  return database
     .select({
       userId: users.id,
       role: users.role,
       clientId: users.clientId,
       email: users.email,
       name: users.name,
+      expiresAt: sessions.expiresAt,
     })
     .from(sessions)
     .innerJoin(users, eq(users.id, sessions.userId))
     .where(
       and(
-        eq(sessions.id, claims.sessionId),
-        eq(sessions.userId, claims.userId),
+        eq(sessions.id, sql.placeholder('sessionId')),
+        eq(sessions.userId, sql.placeholder('userId')),
         isNull(sessions.revokedAt),
-        gt(sessions.expiresAt, new Date()),
+        gt(sessions.expiresAt, sql`now()`),
         isNull(users.disabledAt),
       ),
     )
-    .limit(1);
-  if (row) req.actor = { ...row, sessionId: claims.sessionId, requestId: req.id };
+    .limit(1)
+    .prepare('gridkeep_session_check');
+}
+
+async function liveSession(token: string): Promise<LiveSession | undefined> {
+  const remembered = sessionCache.get(token);
+  if (remembered) return remembered;
+  const claims = verifySessionToken(token);
+  if (!claims) return undefined;
+  const database = db();
+  if (sessionQuery?.for !== database) sessionQuery = { for: database, query: prepareSessionQuery(database) };
+  const queriedAt = Date.now();
+  const [row] = await sessionQuery.query.execute({ sessionId: claims.sessionId, userId: claims.userId });
+  if (!row) return undefined;
+  const live = { ...row, sessionId: claims.sessionId, expiresAt: Math.min(row.expiresAt.getTime(), claims.expiresAt) };
+  sessionCache.remember(token, live, queriedAt);
+  return live;
+}
+
+/**
+ * Reads the session cookie and, when its token is valid and its session row is live (not
+ * signed out, not expired, user not disabled), puts the caller on `req.actor`. A token already
+ * verified and found live may be answered from this process's short memory of sessions
+ * (server/services/session-cache.ts): a revocation is honoured at once in the process that made
+ * it and within SESSION_CACHE_TTL_MS (5 s) in others.
+ */
+export const authenticate: RequestHandler = async (req, _res, next) => {
+  const token = req.cookies?.[sessionCookieName()];
+  if (typeof token !== 'string' || !token) return next();
+  const live = await liveSession(token);
+  if (live) {
+    const { userId, sessionId, role, clientId, email, name } = live;
+    req.actor = { userId, role, clientId, email, name, sessionId, requestId: req.id };
+  }
   next();
 };
 

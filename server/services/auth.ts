@@ -12,6 +12,7 @@ import { logger } from '../logger.js';
 import type { Actor } from '../middleware/auth.js';
 import { signSessionToken } from '../middleware/auth.js';
 import { recordAudit } from './audit.js';
+import { sessionCache } from './session-cache.js';
 import { passwordWeakness, type PasswordContext } from './common-passwords.js';
 import { decoyHash, hashPassword, verifyPassword } from './passwords.js';
 
@@ -183,16 +184,18 @@ function presentSessionUser(
   return { id: u.id, email: u.email, name: u.name, role: u.role, clientId: u.clientId, clientName };
 }
 
+const sessionUserFields = {
+  id: users.id,
+  email: users.email,
+  name: users.name,
+  role: users.role,
+  clientId: users.clientId,
+  clientName: clients.name,
+};
+
 async function sessionUser(tx: DbOrTx, userId: string): Promise<SessionUser> {
   const [row] = await tx
-    .select({
-      id: users.id,
-      email: users.email,
-      name: users.name,
-      role: users.role,
-      clientId: users.clientId,
-      clientName: clients.name,
-    })
+    .select(sessionUserFields)
     .from(users)
     .leftJoin(clients, eq(clients.id, users.clientId))
     .where(eq(users.id, userId));
@@ -212,6 +215,8 @@ async function issueSession(tx: DbOrTx, userId: string, meta: { ip: string; user
 
 /** Ends every live session of a user (password change, reset, disabling), except `keep`. */
 export async function revokeSessions(tx: DbOrTx, userId: string, keep?: string) {
+  // Before the write: this process stops answering from its memory of these sessions at once.
+  sessionCache.forgetUser(userId);
   await tx
     .update(sessions)
     .set({ revokedAt: new Date() })
@@ -234,10 +239,27 @@ export async function signIn(input: { email: string; password: string }, meta: A
 }
 
 export async function signOut(actor: Actor) {
+  sessionCache.forgetSession(actor.sessionId);
   await db().update(sessions).set({ revokedAt: new Date() }).where(eq(sessions.id, actor.sessionId));
 }
 
-export const currentUser = (actor: Actor) => sessionUser(db(), actor.userId);
+// What the app asks on every first load (/me, /session): prepared once per database handle.
+const prepareCurrentUser = (database: ReturnType<typeof db>) =>
+  database
+    .select(sessionUserFields)
+    .from(users)
+    .leftJoin(clients, eq(clients.id, users.clientId))
+    .where(eq(users.id, sql.placeholder('userId')))
+    .prepare('gridkeep_current_user');
+let currentUserQuery: { for: ReturnType<typeof db>; query: ReturnType<typeof prepareCurrentUser> } | undefined;
+
+export async function currentUser(actor: Actor): Promise<SessionUser> {
+  const database = db();
+  if (currentUserQuery?.for !== database) currentUserQuery = { for: database, query: prepareCurrentUser(database) };
+  const [row] = await currentUserQuery.query.execute({ userId: actor.userId });
+  if (!row) throw notFound('User');
+  return presentSessionUser(row, row.clientName);
+}
 
 export async function changePassword(actor: Actor, input: { currentPassword: string; newPassword: string }, meta: AttemptMeta) {
   // The current password is a password like any other: its checks are throttled with sign-in's.

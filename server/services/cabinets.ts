@@ -2,7 +2,7 @@ import type { CabinetDetail, CabinetEvent, CabinetSummary } from '../../shared/s
 import type { CabinetStatus } from '../../shared/schemas/enums.js';
 import type { Page } from '../../shared/schemas/common.js';
 import Papa from 'papaparse';
-import { aliasedTable, and, desc, eq, inArray, like, or, sql } from 'drizzle-orm';
+import { aliasedTable, and, desc, eq, gte, inArray, like, or, sql } from 'drizzle-orm';
 import type { PgSelect } from 'drizzle-orm/pg-core';
 import {
   importRow,
@@ -38,6 +38,14 @@ const escapeLike = (s: string) => s.replace(/[%_\\]/g, '\\$&');
  * text_pattern_ops serves this prefix match over a million cabinets.
  */
 export const batchFamily = (prefix: string) => sql`lower(${cabinets.batch}) like ${`${escapeLike(prefix.toLowerCase())}%`}`;
+
+/**
+ * Serials starting with a prefix, for a list sorted by serial. `like 'x%'` reads the pattern
+ * index (cabinets_serial_prefix_idx); `serial >= 'x'` (true of every serial that starts with x:
+ * a string sorts no earlier than its own start) lets the sorted walk of the serial index begin
+ * at the prefix instead of at the first serial of the register, when many serials match.
+ */
+const serialPrefix = (prefix: string) => and(like(cabinets.serial, `${escapeLike(prefix)}%`), gte(cabinets.serial, prefix));
 
 /** Cabinets a caller may see: client users only those on their own walls. */
 function visibleCabinets(actor: Actor) {
@@ -75,50 +83,7 @@ function cabinetCursor(query: ListCabinetsQuery) {
  * install date (cabinets never installed come last either way), the id breaking ties.
  */
 export async function listCabinets(actor: Actor, query: ListCabinetsQuery): Promise<Page<CabinetSummary>> {
-  const cursor = cabinetCursor(query);
-  const sortColumn = query.sort === 'batch' ? cabinets.batch : query.sort === 'installedOn' ? cabinets.installedOn : cabinets.serial;
-  const rows = await withWhereabouts(
-    db()
-      .select({
-        id: cabinets.id,
-        serial: cabinets.serial,
-        status: cabinets.status,
-        batch: cabinets.batch,
-        installedOn: cabinets.installedOn,
-        column: cabinets.column,
-        row: cabinets.row,
-        wallId: cabinets.wallId,
-        wallName: walls.name,
-        siteId: walls.siteId,
-        siteName: sites.name,
-        clientId: walls.clientId,
-        clientName: clients.name,
-        modelId: cabinets.cabinetModelId,
-        modelName: cabinetModels.name,
-        locationName: stockLocations.name,
-      })
-      .from(cabinets)
-      .$dynamic(),
-  )
-    .where(
-      and(
-        visibleCabinets(actor),
-        query.serial ? like(cabinets.serial, `${escapeLike(query.serial.toUpperCase())}%`) : undefined,
-        query.wallId ? eq(cabinets.wallId, query.wallId) : undefined,
-        query.clientId ? eq(walls.clientId, query.clientId) : undefined,
-        query.siteId ? eq(walls.siteId, query.siteId) : undefined,
-        query.modelId ? eq(cabinets.cabinetModelId, query.modelId) : undefined,
-        query.status ? eq(cabinets.status, query.status) : undefined,
-        query.batch ? batchFamily(query.batch) : undefined,
-        query.sort === 'installedOn'
-          ? afterCursorNullsLast(sortColumn, cabinets.id, cursor, query.dir)
-          : afterCursor(sortColumn, cabinets.id, cursor, query.dir),
-      ),
-    )
-    .orderBy(
-      ...(query.sort === 'installedOn' ? orderNullsLast(sortColumn, cabinets.id, query.dir) : orderFor(sortColumn, cabinets.id, query.dir)),
-    )
-    .limit(query.limit + 1);
+  const rows = await cabinetListQuery(actor, query);
   const page = pageOf(rows, query.limit, (r) => [
     query.sort === 'batch' ? r.batch : query.sort === 'installedOn' ? r.installedOn : r.serial,
     r.id,
@@ -146,6 +111,54 @@ export async function listCabinets(actor: Actor, query: ListCabinetsQuery): Prom
     })),
     nextCursor: page.nextCursor,
   };
+}
+
+/** The register's query for a page, not yet run (the query-plan tests read its plan). */
+export function cabinetListQuery(actor: Actor, query: ListCabinetsQuery) {
+  const cursor = cabinetCursor(query);
+  const sortColumn = query.sort === 'batch' ? cabinets.batch : query.sort === 'installedOn' ? cabinets.installedOn : cabinets.serial;
+  return withWhereabouts(
+    db()
+      .select({
+        id: cabinets.id,
+        serial: cabinets.serial,
+        status: cabinets.status,
+        batch: cabinets.batch,
+        installedOn: cabinets.installedOn,
+        column: cabinets.column,
+        row: cabinets.row,
+        wallId: cabinets.wallId,
+        wallName: walls.name,
+        siteId: walls.siteId,
+        siteName: sites.name,
+        clientId: walls.clientId,
+        clientName: clients.name,
+        modelId: cabinets.cabinetModelId,
+        modelName: cabinetModels.name,
+        locationName: stockLocations.name,
+      })
+      .from(cabinets)
+      .$dynamic(),
+  )
+    .where(
+      and(
+        visibleCabinets(actor),
+        query.serial ? serialPrefix(query.serial.toUpperCase()) : undefined,
+        query.wallId ? eq(cabinets.wallId, query.wallId) : undefined,
+        query.clientId ? eq(walls.clientId, query.clientId) : undefined,
+        query.siteId ? eq(walls.siteId, query.siteId) : undefined,
+        query.modelId ? eq(cabinets.cabinetModelId, query.modelId) : undefined,
+        query.status ? eq(cabinets.status, query.status) : undefined,
+        query.batch ? batchFamily(query.batch) : undefined,
+        query.sort === 'installedOn'
+          ? afterCursorNullsLast(sortColumn, cabinets.id, cursor, query.dir)
+          : afterCursor(sortColumn, cabinets.id, cursor, query.dir),
+      ),
+    )
+    .orderBy(
+      ...(query.sort === 'installedOn' ? orderNullsLast(sortColumn, cabinets.id, query.dir) : orderFor(sortColumn, cabinets.id, query.dir)),
+    )
+    .limit(query.limit + 1);
 }
 
 /** A cabinet with its model, where it is, and its whole history. By id or by serial. */

@@ -1,4 +1,4 @@
-import { and, asc, desc, gt, isNull, lt, or, eq, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, gt, isNull, lt, or, sql, type SQL } from 'drizzle-orm';
 import type { AnyPgColumn } from 'drizzle-orm/pg-core';
 import { badRequest } from '../errors.js';
 
@@ -106,7 +106,12 @@ export function decodeCursor(cursor: string | undefined, length: number, kinds?:
   return values;
 }
 
-/** Rows after the cursor for `order by sortColumn <dir>, idColumn <dir>`. */
+/**
+ * Rows after the cursor for `order by sortColumn <dir>, idColumn <dir>`: the row comparison
+ * `(sort, id) > (value, id)`, which a btree index on (sort, id) reads as a range (PostgreSQL
+ * manual, 9.24.5 "Row Constructor Comparison"; 11.3 on multicolumn indexes). It keeps the same
+ * rows as `sort > value or (sort = value and id > id)`: a null sort value passes neither.
+ */
 export function afterCursor(
   sortColumn: AnyPgColumn,
   idColumn: AnyPgColumn,
@@ -116,9 +121,9 @@ export function afterCursor(
   if (!cursor) return undefined;
   checkCursor([sortColumn, idColumn], cursor);
   const [sortValue, idValue] = cursor;
-  const beyond = direction === 'asc' ? gt : lt;
   const value = sortColumn.columnType === 'PgTimestamp' && typeof sortValue === 'string' ? new Date(sortValue) : sortValue;
-  return or(beyond(sortColumn, value), and(eq(sortColumn, value), beyond(idColumn, idValue)));
+  const op = sql.raw(direction === 'asc' ? '>' : '<');
+  return sql`(${sortColumn}, ${idColumn}) ${op} (${sql.param(value, sortColumn)}, ${sql.param(idValue, idColumn)})`;
 }
 
 /**

@@ -118,7 +118,6 @@ function presentCabinet(c: Awaited<ReturnType<ReturnType<typeof cabinetsWhere>['
  */
 export async function search(actor: Actor, q: string): Promise<SearchResults> {
   const pattern = likePattern(q);
-  const upper = q.toUpperCase();
   const ticketsWhere = ticketWhere(actor, q);
   const number = ticketNumberIn(q);
   const clientsWhere = and(tenantWhere(actor, clients.id), isNull(clients.archivedAt), ilike(clients.name, pattern));
@@ -165,9 +164,7 @@ export async function search(actor: Actor, q: string): Promise<SearchResults> {
       .where(wallsWhere)
       .orderBy(asc(walls.name))
       .limit(LIMIT),
-    cabinetsWhere(serialsWhere)
-      .orderBy(...serialOrder(upper))
-      .limit(LIMIT),
+    serialMatchesQuery(actor, q),
     db()
       .select({ batch: cabinets.batch, cabinetCount: sql<number>`count(*)::int` })
       .from(cabinets)
@@ -215,21 +212,35 @@ export async function search(actor: Actor, q: string): Promise<SearchResults> {
   };
 }
 
+const serialTailWhere = (actor: Actor, tail: string) => {
+  const upper = tail.toUpperCase();
+  return and(
+    visibleCabinets(actor),
+    upper.length >= partMinLength ? like(cabinets.serial, `%${escapeLike(upper)}`) : eq(cabinets.serial, upper),
+  );
+};
+
+/** The Scan page's matches for a tail, not yet run (the query-plan tests read its plan). */
+export const serialTailQuery = (actor: Actor, tail: string) =>
+  cabinetsWhere(serialTailWhere(actor, tail))
+    .orderBy(...serialOrder(tail.toUpperCase()))
+    .limit(TAIL_LIMIT);
+
+/** The search box's cabinets for a query, not yet run (the query-plan tests read its plan). */
+export const serialMatchesQuery = (actor: Actor, q: string) =>
+  cabinetsWhere(serialWhere(actor, q))
+    .orderBy(...serialOrder(q.toUpperCase()))
+    .limit(LIMIT);
+
 /**
  * The Scan page's typed lookup: the cabinet whose serial is what was typed, or the cabinets
  * whose serial ends in it (a technician behind a wall reads the end of the label). Fewer
  * characters than a trigram match only a whole serial.
  */
 export async function serialsEndingIn(actor: Actor, tail: string): Promise<SerialTailMatches> {
-  const upper = tail.toUpperCase();
-  const where = and(
-    visibleCabinets(actor),
-    upper.length >= partMinLength ? like(cabinets.serial, `%${escapeLike(upper)}`) : eq(cabinets.serial, upper),
-  );
+  const where = serialTailWhere(actor, tail);
   const [rows, total] = await Promise.all([
-    cabinetsWhere(where)
-      .orderBy(...serialOrder(upper))
-      .limit(TAIL_LIMIT),
+    serialTailQuery(actor, tail),
     countUpTo(db().select({ id: cabinets.id }).from(cabinets).leftJoin(walls, eq(walls.id, cabinets.wallId)).where(where).$dynamic()),
   ]);
   return { items: rows.map(presentCabinet), total };

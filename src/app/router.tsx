@@ -58,6 +58,16 @@ const router = createBrowserRouter([
   },
 ]);
 
+/** Runs `fn` once, when the first screen's code and data have arrived (or at once if they have). */
+export function afterFirstScreen(fn: () => void) {
+  if (router.state.initialized) return fn();
+  const stop = router.subscribe((state) => {
+    if (!state.initialized) return;
+    stop();
+    fn();
+  });
+}
+
 export function AppRouter() {
   return <RouterProvider router={router} />;
 }

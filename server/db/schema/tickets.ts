@@ -5,6 +5,10 @@ import { commentVisibilityEnum, ticketPriorityEnum, ticketScopeEnum, ticketStatu
 import { clients, sites } from './clients.js';
 import { users } from './accounts.js';
 import { walls, type RunCell } from './walls.js';
+import { openStatuses } from '../../../shared/schemas/tickets.js';
+
+/** The open statuses (openStatuses in shared/schemas/tickets.ts) as SQL literals, for partial indexes. */
+const openStatusList = sql.raw(openStatuses.map((s) => `'${s}'`).join(', '));
 
 export const tickets = pgTable(
   'tickets',
@@ -56,6 +60,22 @@ export const tickets = pgTable(
     index('tickets_reporter_idx').on(t.reporterId),
     index('tickets_merged_into_idx').on(t.mergedIntoId),
     index('tickets_resolution_due_idx').on(t.resolutionDueAt),
+    // Keyset pages sort by one of these with the id breaking ties (services/pagination.ts).
+    index('tickets_created_idx').on(t.createdAt, t.id),
+    index('tickets_updated_idx').on(t.updatedAt, t.id),
+    // The open tickets are few among ten years of closed ones: the list's default view (open,
+    // latest change first) and the open view by due time read only these.
+    index('tickets_open_updated_idx')
+      .on(t.updatedAt, t.id)
+      .where(sql`${t.status} in (${openStatusList})`),
+    index('tickets_open_due_idx')
+      .on(t.resolutionDueAt, t.id)
+      .where(sql`${t.status} in (${openStatusList})`),
+    // A running clock (on track, at risk, breached, paused) needs a due time and no resolution:
+    // the clock filter reads these rows only (clockStateSql in services/tickets.ts).
+    index('tickets_running_clock_idx')
+      .on(t.createdAt, t.id)
+      .where(sql`${t.resolvedAt} is null and ${t.resolutionDueAt} is not null`),
     // Search by words of the title or description: one trigram index over both (pg_trgm).
     index('tickets_text_trgm_idx').using('gin', sql`(${t.title} || ' ' || ${t.description}) gin_trgm_ops`),
     check('tickets_title_present', sql`length(trim(${t.title})) > 0`),

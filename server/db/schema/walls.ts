@@ -124,6 +124,9 @@ export const cabinets = pgTable(
     index('cabinets_model_idx').on(t.cabinetModelId),
     // The batch filter of a recall matches a code's start in any case: lower(batch) like 'k7-2403%'.
     index('cabinets_batch_prefix_idx').using('btree', sql`lower(${t.batch}) text_pattern_ops`),
+    // The serial filter of the register and the Scan page match a serial's start (like 'HX26-2408%'):
+    // the unique index above follows the database's collation and cannot serve a prefix match.
+    index('cabinets_serial_prefix_idx').using('btree', sql`${t.serial} text_pattern_ops`),
     // Search by any part of a serial or batch code (LIKE '%…%'): trigram indexes (pg_trgm, migration 0007).
     index('cabinets_serial_trgm_idx').using('gin', t.serial.op('gin_trgm_ops')),
     index('cabinets_batch_trgm_idx').using('gin', t.batch.op('gin_trgm_ops')),
