@@ -83,8 +83,7 @@ function s3Client(s: StorageSettings) {
 /** A PostgreSQL client program (pg_dump, pg_restore) from the same Debian package as the server. */
 function pgProgram(name: string): string {
   const bin = findPgBin();
-  const exe = bin ? path.join(bin, name) : name;
-  return exe;
+  return bin ? path.join(bin, name) : name;
 }
 
 function run(program: string, args: string[]) {
@@ -105,19 +104,17 @@ async function withClient<T>(url: string, fn: (c: pg.Client) => Promise<T>): Pro
 
 /** Rows per table of the public and drizzle schemas. */
 export async function tableCounts(c: pg.Client): Promise<Record<string, number>> {
-  {
-    const { rows } = await c.query<{ schema: string; name: string }>(
-      `select table_schema as schema, table_name as name from information_schema.tables
-        where table_type = 'BASE TABLE' and table_schema in ('public', 'drizzle') order by 1, 2`,
-    );
-    const counts: Record<string, number> = {};
-    for (const t of rows) {
-      const ident = `"${t.schema}"."${t.name.replace(/"/g, '""')}"`;
-      const { rows: n } = await c.query<{ n: string }>(`select count(*) as n from ${ident}`);
-      counts[`${t.schema}.${t.name}`] = Number(n[0].n);
-    }
-    return counts;
+  const { rows } = await c.query<{ schema: string; name: string }>(
+    `select table_schema as schema, table_name as name from information_schema.tables
+      where table_type = 'BASE TABLE' and table_schema in ('public', 'drizzle') order by 1, 2`,
+  );
+  const counts: Record<string, number> = {};
+  for (const t of rows) {
+    const ident = `"${t.schema}"."${t.name.replace(/"/g, '""')}"`;
+    const { rows: n } = await c.query<{ n: string }>(`select count(*) as n from ${ident}`);
+    counts[`${t.schema}.${t.name}`] = Number(n[0].n);
   }
+  return counts;
 }
 
 async function newestMigration(c: pg.Client): Promise<string | null> {
